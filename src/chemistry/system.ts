@@ -1,0 +1,246 @@
+/**
+ * A metal–water system at one temperature and activity, as a set of species planes (GUIDE §2).
+ *
+ * Each species is written as formed from the metal and water (and, where it carries a ligand, from that ligand's
+ * basis species):  x M + y H2O → MxOyHz^q + (2y − z) H+ + n e−. Per metal atom, in volts (Gibbs energy / F):
+ *
+ *   g(pH, E) = [ΔG°r(T) + RT ln a] / (xF) − ((2y − z)/x)·k(T)·pH − (n/x)·E,     k = RT ln10 / F
+ *
+ * with a the activity of a dissolved species (1 for solids). The metal has g = 0. The dominant species at a point
+ * is the one with the lowest g; two species share a boundary where their g are equal.
+ *
+ * Ligands (issue: real waters) split the plane into cells in each of which one basis species of every ligand
+ * predominates; within a cell every plane is linear. Without ligands there is one cell covering everything.
+ */
+import { FARADAY, GAS_CONSTANT, kelvin, MAX_CELSIUS, MIN_CELSIUS, nernstFactor } from "./constants";
+import { Database, Species } from "./database";
+import { rational, Rational } from "./exact";
+import { HalfPlane, insideAll } from "./halfplane";
+import { balanceWith } from "./reaction";
+import { ELECTRON, gibbsAt, reactionProperties } from "./thermo";
+
+export type Regime = "immunity" | "passivation" | "corrosion";
+
+export interface SystemSpecies {
+  readonly species: Species;
+  readonly formula: string;
+  /** Metal atoms per formula unit (x). */
+  readonly metalAtoms: number;
+  readonly dissolved: boolean;
+  readonly regime: Regime;
+}
+
+/** A ligand basis species held at a fixed activity inside a cell. */
+export interface LigandBasis {
+  readonly species: Species;
+  /** Natural logarithm of its activity. */
+  readonly lnActivity: number;
+}
+
+/** A convex region of the (pH, E) plane in which every species plane is linear. */
+export interface PlaneCell {
+  /** Half-planes a + b·pH + c·E ≤ 0 bounding the cell; empty = the whole plane. */
+  readonly region: readonly HalfPlane[];
+  /** g_i = a[i] + b[i]·pH + c[i]·E, volts per metal atom; +Infinity for species absent in this cell. */
+  readonly a: Float64Array;
+  readonly b: Float64Array;
+  readonly c: Float64Array;
+  /** a[i] at unit activity of species i (used for dissolved totals). */
+  readonly aUnit: Float64Array;
+  /** The ligand basis species of this cell, for labels and captions. */
+  readonly ligands: readonly LigandBasis[];
+}
+
+export interface MetalSystem {
+  readonly element: string;
+  readonly celsius: number;
+  readonly kelvin: number;
+  /** Activity given to every dissolved metal species. */
+  readonly activity: number;
+  readonly species: readonly SystemSpecies[];
+  readonly cells: readonly PlaneCell[];
+  /** Index of the metal itself. */
+  readonly metalIndex: number;
+}
+
+export interface SystemOptions {
+  celsius: number;
+  activity: number;
+}
+
+export class SystemError extends Error {}
+
+/** Builds the planes of a metal's system at (T, activity), with optional ligand cells from `ligandCells`. */
+export function buildSystem(
+  db: Database,
+  element: string,
+  options: SystemOptions,
+  ligandCells: readonly { region: readonly HalfPlane[]; ligands: readonly LigandBasis[] }[] = [{ region: [], ligands: [] }],
+): MetalSystem {
+  const entry = db.system(element);
+  if (!entry || entry.kind !== "metal") throw new SystemError(`no data for the metal ${element}`);
+  if (!(options.celsius >= MIN_CELSIUS && options.celsius <= MAX_CELSIUS)) {
+    throw new SystemError(`temperature ${options.celsius} °C is outside ${MIN_CELSIUS}–${MAX_CELSIUS} °C`);
+  }
+  if (!(options.activity > 0)) throw new SystemError("activity must be positive");
+
+  const metal = entry.species.find((s) => s.state === "s" && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
+  if (!metal) throw new SystemError(`the ${element} file lacks the metal ${element}(s)`);
+
+  const ligandElements = new Set<string>();
+  for (const cell of ligandCells) for (const l of cell.ligands) for (const e of Object.keys(l.species.elements)) if (e !== "H" && e !== "O") ligandElements.add(e);
+
+  // Species of the metal: those in its own file, plus ligand-bearing species of it in ligand files.
+  const candidates = db.allSpecies().filter((s) => s.elements[element] !== undefined);
+  const species: SystemSpecies[] = [];
+  for (const s of candidates) {
+    const extra = Object.keys(s.elements).filter((e) => e !== element && e !== "H" && e !== "O");
+    if (extra.some((e) => !ligandElements.has(e))) continue; // ligand not present in this water
+    species.push({
+      species: s,
+      formula: s.formula,
+      metalAtoms: s.elements[element],
+      dissolved: s.state === "aq",
+      regime: s === metal ? "immunity" : s.state === "aq" ? "corrosion" : "passivation",
+    });
+  }
+  const metalIndex = species.findIndex((s) => s.species === metal);
+
+  const T = kelvin(options.celsius);
+  const k = nernstFactor(T);
+  const rtOverF = (GAS_CONSTANT * T) / FARADAY;
+  const water = db.require("H2O(l)");
+  const proton = db.require("H+");
+  const lnActivity = Math.log(options.activity);
+
+  const cells: PlaneCell[] = ligandCells.map((cell) => {
+    const n = species.length;
+    const a = new Float64Array(n);
+    const b = new Float64Array(n);
+    const c = new Float64Array(n);
+    const aUnit = new Float64Array(n);
+    const basis = [metal, water, proton, ELECTRON, ...cell.ligands.map((l) => l.species)] as const;
+    species.forEach((entrySpecies, i) => {
+      if (i === metalIndex) return; // the metal's plane is 0
+      const s = entrySpecies.species;
+      const needed = Object.keys(s.elements).filter((e) => e !== element && e !== "H" && e !== "O");
+      const available = new Set(cell.ligands.flatMap((l) => Object.keys(l.species.elements)));
+      if (needed.some((e) => !available.has(e))) {
+        a[i] = aUnit[i] = Infinity; // ligand absent in this cell
+        return;
+      }
+      let coefficients: Rational[];
+      try {
+        coefficients = balanceWith(new Map([[s, rational(1)]]), basis);
+      } catch {
+        a[i] = aUnit[i] = Infinity;
+        return;
+      }
+      const stoichiometry = new Map<Species | typeof ELECTRON, number>([[s, 1]]);
+      basis.forEach((m, j) => {
+        const v = coefficients[j].valueOf();
+        stoichiometry.set(m, (stoichiometry.get(m) ?? 0) + v);
+      });
+      const x = entrySpecies.metalAtoms;
+      const dG = gibbsAt(reactionProperties(db, stoichiometry), T);
+      const cProton = coefficients[2].valueOf();
+      const cElectron = coefficients[3].valueOf();
+      let ligandTerm = 0;
+      cell.ligands.forEach((l, j) => (ligandTerm += coefficients[4 + j].valueOf() * l.lnActivity));
+      aUnit[i] = (dG / FARADAY + rtOverF * ligandTerm) / x;
+      a[i] = aUnit[i] + (entrySpecies.dissolved ? (rtOverF * lnActivity) / x : 0);
+      b[i] = (-cProton * k) / x;
+      c[i] = -cElectron / x;
+    });
+    return { region: cell.region, a, b, c, aUnit, ligands: cell.ligands };
+  });
+
+  return { element, celsius: options.celsius, kelvin: T, activity: options.activity, species, cells, metalIndex };
+}
+
+/** The cell containing (pH, E); the first one when on a seam. */
+export function cellAt(system: MetalSystem, pH: number, E: number): PlaneCell {
+  const cells = system.cells;
+  if (cells.length === 1) return cells[0];
+  for (const cell of cells) if (insideAll(cell.region, pH, E, 1e-9)) return cell;
+  return cells[cells.length - 1];
+}
+
+/** g of species i at (pH, E), volts per metal atom. */
+export function speciesPotential(system: MetalSystem, i: number, pH: number, E: number): number {
+  const cell = cellAt(system, pH, E);
+  return cell.a[i] + cell.b[i] * pH + cell.c[i] * E;
+}
+
+/** Index of the dominant species (lowest g) at (pH, E); ties go to the lower index. */
+export function dominantSpecies(system: MetalSystem, pH: number, E: number): number {
+  const { a, b, c } = cellAt(system, pH, E);
+  let best = 0;
+  let bestG = a[0] + b[0] * pH + c[0] * E;
+  for (let i = 1, n = a.length; i < n; i++) {
+    const g = a[i] + b[i] * pH + c[i] * E;
+    if (g < bestG) {
+      bestG = g;
+      best = i;
+    }
+  }
+  return best;
+}
+
+/**
+ * Batch kernel: dominant species indices for columns of pH and E (typed arrays in, indices out). The system is
+ * built once; each row is a scan over the species planes.
+ */
+export function dominantSpeciesBatch(system: MetalSystem, pH: Float64Array, E: Float64Array, out: Int32Array): Int32Array {
+  const rows = pH.length;
+  if (system.cells.length === 1) {
+    const { a, b, c } = system.cells[0];
+    const n = a.length;
+    for (let r = 0; r < rows; r++) {
+      const p = pH[r];
+      const e = E[r];
+      let best = 0;
+      let bestG = a[0] + b[0] * p + c[0] * e;
+      for (let i = 1; i < n; i++) {
+        const g = a[i] + b[i] * p + c[i] * e;
+        if (g < bestG) {
+          bestG = g;
+          best = i;
+        }
+      }
+      out[r] = best;
+    }
+    return out;
+  }
+  for (let r = 0; r < rows; r++) out[r] = dominantSpecies(system, pH[r], E[r]);
+  return out;
+}
+
+/** Index of a species by formula, or −1. */
+export function speciesIndex(system: MetalSystem, formula: string): number {
+  return system.species.findIndex((s) => s.formula === formula);
+}
+
+export type PairBoundary =
+  | { kind: "line"; intercept: number; slope: number }
+  | { kind: "vertical"; pH: number }
+  | null;
+
+/**
+ * The line where two species have equal g (in the first cell containing both), written E = intercept + slope·pH,
+ * or pH = constant when no electrons are exchanged; null when the planes are parallel.
+ */
+export function pairBoundary(system: MetalSystem, first: string, second: string): PairBoundary {
+  const i = speciesIndex(system, first);
+  const j = speciesIndex(system, second);
+  if (i < 0 || j < 0) throw new SystemError(`${i < 0 ? first : second} is not a species of the ${system.element} system`);
+  const cell = system.cells.find((c) => Number.isFinite(c.a[i]) && Number.isFinite(c.a[j]));
+  if (!cell) return null;
+  const da = cell.a[i] - cell.a[j];
+  const db = cell.b[i] - cell.b[j];
+  const dc = cell.c[i] - cell.c[j];
+  const tiny = 1e-12;
+  if (Math.abs(dc) > tiny) return { kind: "line", intercept: -da / dc, slope: -db / dc };
+  if (Math.abs(db) > tiny) return { kind: "vertical", pH: -da / db };
+  return null;
+}

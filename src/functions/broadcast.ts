@@ -1,0 +1,212 @@
+/**
+ * The one coercion and broadcasting layer every worksheet function goes through.
+ *
+ * Each argument may be a single cell or a range (rows of cells). Ranges broadcast like arrays do: along each
+ * dimension the sizes must agree or be 1, and the result takes the common shape (so it spills). A blank cell in a
+ * required argument gives a blank result in that position; a blank or omitted optional argument takes its default.
+ * Every failure becomes an error value naming the argument; nothing here throws, and no NaN or Infinity reaches a
+ * cell.
+ */
+import { CellError, CellInput, CellOutput, CellScalar, isBlank, numError, toHostError, valueError } from "./cell-values";
+
+/** How one argument is read from a cell. */
+export interface ArgSpec<T> {
+  /** The argument's name as the function help shows it ("pH", "temperature"). */
+  readonly name: string;
+  /** Optional arguments take `defaultValue` when blank or omitted. */
+  readonly optional: boolean;
+  readonly defaultValue?: T;
+  /** Reads a non-blank cell. */
+  parse(value: Exclude<CellScalar, null | undefined>): T | CellError;
+}
+
+/** Reads a number; numeric text ("7.25") is accepted, as spreadsheets often hold numbers typed as text. */
+export function numberArg(
+  name: string,
+  options: {
+    min?: number;
+    max?: number;
+    /** Lower bound excluded (activity > 0). */
+    minExclusive?: boolean;
+    optional?: boolean;
+    defaultValue?: number;
+    /** Shown in range messages: "°C", "bar". */
+    unit?: string;
+  } = {},
+): ArgSpec<number> {
+  const { min, max, minExclusive = false, optional = false, defaultValue, unit = "" } = options;
+  const suffix = unit ? ` ${unit}` : "";
+  const rangeText = (): string => {
+    const low = min === undefined ? "" : `${minExclusive ? "above" : "at least"} ${min}${suffix}`;
+    const high = max === undefined ? "" : `at most ${max}${suffix}`;
+    return [low, high].filter(Boolean).join(" and ");
+  };
+  return {
+    name,
+    optional,
+    defaultValue,
+    parse(value) {
+      let x: number;
+      if (typeof value === "number") x = value;
+      else if (typeof value === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(value)) x = Number(value);
+      else return valueError(`${name}: expected a number, got ${describe(value)}`);
+      if (!Number.isFinite(x)) return numError(`${name}: expected a finite number`);
+      if (min !== undefined && (minExclusive ? x <= min : x < min)) return numError(`${name}: ${x} is out of range (${rangeText()})`);
+      if (max !== undefined && x > max) return numError(`${name}: ${x} is out of range (${rangeText()})`);
+      return x;
+    },
+  };
+}
+
+/** Reads a text choice through `resolve`, which returns the meaning or an error naming what was expected. */
+export function textArg<T>(
+  name: string,
+  resolve: (text: string) => T | CellError,
+  options: { optional?: boolean; defaultValue?: T } = {},
+): ArgSpec<T> {
+  return {
+    name,
+    optional: options.optional ?? false,
+    defaultValue: options.defaultValue,
+    parse(value) {
+      if (typeof value !== "string") {
+        if (typeof value === "number" && Number.isInteger(value)) return resolve(String(value));
+        return valueError(`${name}: expected text, got ${describe(value)}`);
+      }
+      return resolve(value.trim());
+    },
+  };
+}
+
+function describe(value: unknown): string {
+  if (typeof value === "string") return `the text "${value.length > 24 ? value.slice(0, 24) + "…" : value}"`;
+  if (typeof value === "boolean") return `the logical value ${value ? "TRUE" : "FALSE"}`;
+  if (typeof value === "number") return String(value);
+  return "an unreadable value";
+}
+
+/** Shape of one argument: rows × columns (a single cell is 1 × 1). */
+interface Shape {
+  rows: number;
+  cols: number;
+}
+
+const BLANK = Symbol("blank");
+type Parsed<T> = T | CellError | typeof BLANK;
+
+type SpecsOf<A extends unknown[]> = { [K in keyof A]: ArgSpec<A[K]> };
+
+/**
+ * Applies `compute` cell by cell over broadcast arguments. `compute` receives parsed values and returns a number,
+ * text, "" for blank, or a CellError. The result always has at least one cell.
+ */
+export function mapCells<A extends unknown[]>(
+  specs: SpecsOf<A>,
+  inputs: readonly CellInput[],
+  compute: (...args: A) => CellOutput,
+): CellOutput[][] {
+  const count = specs.length;
+  const shapes: Shape[] = [];
+  for (let i = 0; i < count; i++) {
+    const shape = shapeOf(inputs[i]);
+    if (shape === null) return [[toHostError(valueError(`${specs[i].name}: the range is empty or not rectangular`))]];
+    shapes.push(shape);
+  }
+  let rows = 1;
+  let cols = 1;
+  for (let i = 0; i < count; i++) {
+    const s = shapes[i];
+    if (s.rows !== 1) {
+      if (rows !== 1 && rows !== s.rows) return [[toHostError(shapeError(specs, shapes))]];
+      rows = s.rows;
+    }
+    if (s.cols !== 1) {
+      if (cols !== 1 && cols !== s.cols) return [[toHostError(shapeError(specs, shapes))]];
+      cols = s.cols;
+    }
+  }
+
+  // Arguments given as one cell are parsed once.
+  const single: (Parsed<unknown> | undefined)[] = new Array(count);
+  for (let i = 0; i < count; i++) {
+    if (shapes[i].rows === 1 && shapes[i].cols === 1) single[i] = parseCell(specs[i], cellAt(inputs[i], 0, 0));
+  }
+
+  const args = new Array<unknown>(count);
+  const result: CellOutput[][] = new Array(rows);
+  for (let r = 0; r < rows; r++) {
+    const row: CellOutput[] = new Array(cols);
+    for (let c = 0; c < cols; c++) {
+      let outcome: CellOutput | undefined;
+      for (let i = 0; i < count; i++) {
+        const s = shapes[i];
+        const parsed =
+          single[i] !== undefined || (s.rows === 1 && s.cols === 1)
+            ? single[i]
+            : parseCell(specs[i], cellAt(inputs[i], s.rows === 1 ? 0 : r, s.cols === 1 ? 0 : c));
+        if (parsed === BLANK) {
+          outcome ??= "";
+          continue;
+        }
+        if (parsed instanceof CellError) {
+          // the first error in argument order wins over blanks
+          if (outcome === undefined || outcome === "") outcome = parsed;
+          continue;
+        }
+        args[i] = parsed;
+      }
+      row[c] = finish(outcome ?? safeCompute(compute, args as A));
+    }
+    result[r] = row;
+  }
+  return result;
+}
+
+function parseCell<T>(spec: ArgSpec<T>, value: unknown): Parsed<T> {
+  if (isBlank(value)) {
+    if (spec.optional) return spec.defaultValue as T;
+    return BLANK;
+  }
+  if (typeof value !== "number" && typeof value !== "string" && typeof value !== "boolean") {
+    return valueError(`${spec.name}: the cell holds an error or an unreadable value`);
+  }
+  return spec.parse(value);
+}
+
+function safeCompute<A extends unknown[]>(compute: (...args: A) => CellOutput, args: A): CellOutput {
+  try {
+    return compute(...args);
+  } catch (error) {
+    return valueError(`unexpected failure: ${error instanceof Error ? error.message : String(error)}`);
+  }
+}
+
+function finish(value: CellOutput): CellOutput {
+  if (value instanceof CellError) return toHostError(value);
+  if (typeof value === "number" && !Number.isFinite(value)) return toHostError(numError("the result is not a finite number"));
+  return value;
+}
+
+function shapeOf(input: CellInput): Shape | null {
+  if (!Array.isArray(input)) return { rows: 1, cols: 1 };
+  const rows = input.length;
+  if (rows === 0) return null;
+  const first = input[0];
+  if (!Array.isArray(first)) return null;
+  const cols = first.length;
+  if (cols === 0) return null;
+  for (let r = 1; r < rows; r++) {
+    const row = input[r];
+    if (!Array.isArray(row) || row.length !== cols) return null;
+  }
+  return { rows, cols };
+}
+
+function cellAt(input: CellInput, r: number, c: number): unknown {
+  return Array.isArray(input) ? input[r][c] : input;
+}
+
+function shapeError(specs: readonly ArgSpec<unknown>[], shapes: Shape[]): CellError {
+  const described = specs.map((s, i) => `${s.name} ${shapes[i].rows}×${shapes[i].cols}`).join(", ");
+  return valueError(`ranges of different shapes cannot be combined (${described}); use ranges of the same size or single cells`);
+}
