@@ -4,6 +4,14 @@
 import type { DataFile } from "./database";
 import elements from "../../data/elements.json";
 import water from "../../data/species/water.json";
+import fe from "../../data/species/fe.json";
+import cu from "../../data/species/cu.json";
+import zn from "../../data/species/zn.json";
+import pb from "../../data/species/pb.json";
+import ni from "../../data/species/ni.json";
+import cr from "../../data/species/cr.json";
+import al from "../../data/species/al.json";
+import mn from "../../data/species/mn.json";
 import sn from "../../data/species/sn.json";
 import co from "../../data/species/co.json";
 import mg from "../../data/species/mg.json";
@@ -16,6 +24,14 @@ export const ELEMENTS_FILE: DataFile = { path: "data/elements.json", content: el
 
 export const DATA_FILES: readonly DataFile[] = [
   { path: "data/species/water.json", content: water },
+  { path: "data/species/fe.json", content: fe },
+  { path: "data/species/cu.json", content: cu },
+  { path: "data/species/zn.json", content: zn },
+  { path: "data/species/pb.json", content: pb },
+  { path: "data/species/ni.json", content: ni },
+  { path: "data/species/cr.json", content: cr },
+  { path: "data/species/al.json", content: al },
+  { path: "data/species/mn.json", content: mn },
   { path: "data/species/sn.json", content: sn },
   { path: "data/species/co.json", content: co },
   { path: "data/species/mg.json", content: mg },
