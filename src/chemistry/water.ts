@@ -1,0 +1,76 @@
+/**
+ * Water: the two lines that bound its stability, the ion product Kw(T) and neutral pH.
+ *
+ * Both lines and Kw come from the species records of data/species/water.json through the same reaction
+ * thermodynamics as every other couple (GUIDE §2, constant ΔCp°r):
+ *
+ *   oxygen line     O2(g) + 4 H+ + 4 e− = 2 H2O(l)   E = E°(T) − k(T)·pH + (k(T)/4)·log10 p(O2)
+ *   hydrogen line   2 H+ + 2 e− = H2(g)               E = E°(T) − k(T)·pH − (k(T)/2)·log10 p(H2)
+ *   ionisation      H2O(l) = H+ + OH−                pKw = −log10 Kw
+ *
+ * with k(T) = RT ln10 / F and E°(T) = k(T)·log10 K / n for the reduction of n electrons (log K from ΔG°r(T)).
+ * E°(H+/H2) is 0 at every temperature by the hydrogen-electrode convention that thermo.ts applies to the electron.
+ * Gas pressures in bar (ideal gas, 1 bar standard state). Temperatures in °C, as elsewhere in the engine.
+ *
+ * Limitation (constant ΔCp°r): ΔCp of water ionisation is taken at its 25 °C value. The true ΔCp becomes less
+ * negative towards 100 °C, so the model's pKw drifts above the published values as the temperature rises
+ * (tests/reference/water.test.ts prints the residuals against Bandura & Lvov 2006).
+ */
+import { kelvin, nernstFactor } from "./constants";
+import { Database, getDatabase } from "./database";
+import { reactionLogK } from "./reaction";
+
+export type WaterGas = "O2" | "H2";
+
+/** O2(g) + 4 H+ + 4 e− → 2 H2O(l) */
+const OXYGEN_REDUCTION = { "O2(g)": -1, "H+": -4, "e-": -4, "H2O(l)": 2 } as const;
+/** 2 H+ + 2 e− → H2(g) */
+const HYDROGEN_EVOLUTION = { "H+": -2, "e-": -2, "H2(g)": 1 } as const;
+/** H2O(l) → H+ + OH− */
+const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
+
+/** Standard potential (V vs SHE) of the O2/H2O (gas "O2") or H+/H2 (gas "H2") couple at `celsius`. */
+export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database = getDatabase()): number {
+  const k = nernstFactor(kelvin(celsius));
+  const e0 = gas === "O2" ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4 : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
+  return e0 + 0; // + 0 turns a negative zero into 0
+}
+
+/**
+ * Potential (V vs SHE) of a water line at pH, temperature (°C) and partial pressure of the gas (bar).
+ * Above the O2 line water is oxidised to oxygen; below the H2 line it is reduced to hydrogen.
+ */
+export function waterLine(pH: number, celsius = 25, gas: WaterGas = "O2", pressure = 1, db: Database = getDatabase()): number {
+  const k = nernstFactor(kelvin(celsius));
+  const e0 = waterStandardPotential(gas, celsius, db);
+  // Nernst: E = E° − (k/n)·log10 Q, Q = products over reactants with a(H+) = 10^−pH
+  return gas === "O2" ? e0 - k * pH + (k / 4) * Math.log10(pressure) : e0 - k * pH - (k / 2) * Math.log10(pressure);
+}
+
+/** pKw = −log10 Kw of H2O(l) = H+ + OH− at `celsius` (molal activities, 1 bar). */
+export function pKw(celsius = 25, db: Database = getDatabase()): number {
+  return -reactionLogK(db, IONISATION, celsius);
+}
+
+/** Ion product of water Kw(T). */
+export function kw(celsius = 25, db: Database = getDatabase()): number {
+  return 10 ** -pKw(celsius, db);
+}
+
+/** pH of pure water, where a(H+) = a(OH−): ½ pKw(T). */
+export function neutralPH(celsius = 25, db: Database = getDatabase()): number {
+  return pKw(celsius, db) / 2;
+}
+
+/**
+ * Signed distance (V) of a potential from the water window at pH and temperature, both gases at 1 bar.
+ * Positive inside the window: the distance to the nearer line. Negative outside: how far beyond the line crossed.
+ * `overpotential` (V, ≥ 0) widens both sides, for the kinetic window in which water decomposes only slowly
+ * (about 0.6 V beyond each line in practice).
+ */
+export function waterMargin(pH: number, potential: number, celsius = 25, overpotential = 0, db: Database = getDatabase()): number {
+  const upper = waterLine(pH, celsius, "O2", 1, db) + overpotential;
+  const lower = waterLine(pH, celsius, "H2", 1, db) - overpotential;
+  return Math.min(upper - potential, potential - lower);
+}
+
