@@ -240,7 +240,7 @@ export function pairBoundary(system: MetalSystem, first: string, second: string)
   const db = cell.b[i] - cell.b[j];
   const dc = cell.c[i] - cell.c[j];
   const tiny = 1e-12;
-  if (Math.abs(dc) > tiny) return { kind: "line", intercept: -da / dc, slope: -db / dc };
+  if (Math.abs(dc) > tiny) return { kind: "line", intercept: -da / dc, slope: db === 0 ? 0 : -db / dc };
   if (Math.abs(db) > tiny) return { kind: "vertical", pH: -da / db };
   return null;
 }

@@ -1,0 +1,61 @@
+/**
+ * Temperature dependence of the engine: isothermal temperature coefficients against Bratsch (1989), and a
+ * boundary at 60 °C computed by the engine and, independently, by hand in this test from the records'
+ * ΔG°f, S° and Cp° with the constant-ΔCp integration.
+ */
+import { describe, expect, it } from "vitest";
+import { getDatabase } from "../../src/chemistry/database";
+import { standardPotential } from "../../src/chemistry/reaction";
+import { buildSystem, pairBoundary } from "../../src/chemistry/system";
+import { nearestBoundary } from "../../src/chemistry/predominance";
+
+const db = getDatabase();
+
+/** dE°/dT by central difference, mV/K. */
+function slopeMilliVoltPerKelvin(ox: string, red: string): number {
+  return ((standardPotential(db, ox, red, 26) - standardPotential(db, ox, red, 24)) / 2) * 1000;
+}
+
+describe("isothermal temperature coefficients dE°/dT (V vs SHE)", () => {
+  const cases = [
+    { ox: "Ag+", red: "Ag(s)", value: -0.989, source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)" },
+    { ox: "Zn2+", red: "Zn(s)", value: 0.119, source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)" },
+    { ox: "Cu2+", red: "Cu(s)", value: 0.008, source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)" },
+  ];
+  for (const c of cases) {
+    it(`${c.ox}/${c.red}: ${c.value} mV/K — ${c.source}`, () => {
+      expect(Math.abs(slopeMilliVoltPerKelvin(c.ox, c.red) - c.value)).toBeLessThan(0.02);
+    });
+  }
+});
+
+describe("a boundary at 60 °C, engine against a hand calculation", () => {
+  it("Cu2+/Cu(s) at activity 1e-6: E = −ΔG°r(T)/(2F) + (RT ln10 / 2F)·log10 a", () => {
+    // Hand calculation, step by step, from the records (no engine code):
+    const R = 8.314462618; // CODATA 2018
+    const F = 96485.33212; // CODATA 2018
+    const T0 = 298.15;
+    const T = 333.15; // 60 °C
+    const cu = db.require("Cu(s)");
+    const cu2 = db.require("Cu2+");
+    const h2 = db.require("H2(g)");
+    // Cu2+ + 2e− → Cu(s): the electron carries S = ½S°(H2), Cp = ½Cp°(H2) (hydrogen-electrode convention)
+    const dG0 = cu.dGf - cu2.dGf; // J/mol
+    const dS = cu.S! - cu2.S! - 2 * 0.5 * h2.S!;
+    const cpKnown = cu.Cp !== null && cu2.Cp !== null && h2.Cp !== null;
+    const dCp = cpKnown ? cu.Cp! - cu2.Cp! - 2 * 0.5 * h2.Cp! : 0;
+    const dG = dG0 - dS * (T - T0) + dCp * (T - T0 - T * Math.log(T / T0));
+    const eStandard = -dG / (2 * F);
+    const byHand = eStandard + ((R * T * Math.LN10) / (2 * F)) * Math.log10(1e-6);
+
+    const system = buildSystem(db, "Cu", { celsius: 60, activity: 1e-6 });
+    const line = pairBoundary(system, "Cu2+", "Cu(s)");
+    expect(line?.kind).toBe("line");
+    if (line?.kind !== "line") return;
+    expect(line.slope).toBe(0); // no protons: a horizontal boundary
+    expect(Math.abs(line.intercept - byHand)).toBeLessThan(1e-9);
+    // and the engine's boundary search finds it at pH 2, where Cu2+ is the stable ion
+    const crossing = nearestBoundary(system, 2, -0.5, 1);
+    expect(crossing && Math.abs(crossing.E - byHand)).toBeLessThan(1e-9);
+  });
+});
