@@ -1,103 +1,118 @@
 /**
- * Every worksheet function of the REDOX namespace, declared for the spreadsheet. The custom-functions metadata
- * plugin reads the JSDoc here to write functions.json; each declaration delegates in one line to its
- * implementation module. Several contributors add to this file: append your declarations and their association
- * lines; do not replace the file.
+ * The worksheet functions as the spreadsheet sees them (namespace REDOX, set in manifest.xml). The metadata plugin
+ * reads the JSDoc below to write functions.json; each declaration only delegates to its implementation module.
+ * Every argument may be one cell or a range; ranges of the same shape (or single cells) broadcast and the result
+ * spills. Blank input gives a blank result; problems give #VALUE!, #NUM! or #N/A with a message naming the argument.
  *
- * Every argument accepts one cell or a range; ranges of the same shape (or single cells) broadcast and the result
- * spills. A blank input cell gives a blank result. Defaults: temperature 25 °C, activity 1e-6, potentials in volts
- * vs SHE.
+ * Structure: imports, declarations, then the association block at the end.
  */
-import { boundaryFrom, coupleAt, dissolvedAt, regimeAt, speciesAt, speciesTable } from "./stability-functions";
+/* eslint-disable @typescript-eslint/no-explicit-any */
+import { fromSHEAt, toSHEAt } from "./electrode-functions";
+import { ehAt, neutralPHAt, peAt, slopeAt, waterLineAt, waterMarginAt } from "./water-functions";
 
 /**
- * Dominant (thermodynamically stable) form of a metal at a pH and potential, e.g. Fe2O3(s), Cu2+, Zn(s).
- * @customfunction SPECIES
- * @param {any[][]} element Metal symbol or name: Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo.
- * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} potential Potential in volts vs SHE (convert meter readings with REDOX.TOSHE).
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
- * @param {any[][]} [activity] Activity of dissolved metal species, above 0 and at most 10. Default 1e-6.
- * @returns {any[][]} Formula of the dominant species.
+ * Potential of a water stability line, V vs SHE: the O2/H2O line (gas "O2", default) above which water is oxidised
+ * to oxygen, or the H+/H2 line (gas "H2") below which it is reduced to hydrogen.
+ * @customfunction WATERLINE
+ * @param {any[][]} pH pH of the solution, −2 to 16.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [gas] "O2" for the oxygen line (default) or "H2" for the hydrogen line.
+ * @param {any[][]} [pressure] Partial pressure of the gas in bar, above 0 (default 1).
+ * @returns {any[][]} Potential in V vs SHE.
  */
-export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][]): any[][] {
-  return speciesAt(element, pH, potential, temperature, activity);
+export function waterline(pH: any[][], temperature?: any[][], gas?: any[][], pressure?: any[][]): any[][] {
+  return waterLineAt(pH, temperature, gas, pressure);
 }
 
 /**
- * Corrosion regime at a pH and potential: immunity (the metal is stable), passivation (a solid compound is stable) or corrosion (a dissolved species is stable).
- * @customfunction REGIME
- * @param {any[][]} element Metal symbol or name.
- * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
- * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
- * @returns {any[][]} immunity, passivation or corrosion.
+ * Signed distance in V of a potential from the water stability window (both gases at 1 bar): positive inside the
+ * window (distance to the nearer line), negative outside (how far beyond the line crossed).
+ * @customfunction WATERMARGIN
+ * @param {any[][]} pH pH of the solution, −2 to 16.
+ * @param {any[][]} potential Potential in V vs SHE.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [overpotential] Extra width in V added beyond each line, 0 or more (default 0; about 0.6 V describes where water decomposes in practice).
+ * @returns {any[][]} Margin in V.
  */
-export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][]): any[][] {
-  return regimeAt(element, pH, potential, temperature, activity);
+export function watermargin(pH: any[][], potential: any[][], temperature?: any[][], overpotential?: any[][]): any[][] {
+  return waterMarginAt(pH, potential, temperature, overpotential);
 }
 
 /**
- * Potential (V vs SHE) of the nearest stability boundary above or below the point at its pH; #N/A when none lies between -3 and +3 V.
- * @customfunction BOUNDARY
- * @param {any[][]} element Metal symbol or name.
- * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [direction] 1 for the boundary above (default), -1 for the one below.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
- * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
- * @returns {any[][]} Potential of the boundary in volts vs SHE.
+ * Converts a reading against a reference electrode to the standard hydrogen scale (V vs SHE).
+ * @customfunction TOSHE
+ * @param {any[][]} reading Measured potential in V against the reference electrode.
+ * @param {any[][]} electrode Reference electrode: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M or RHE (case-insensitive; common spellings accepted).
+ * @param {any[][]} [temperature] Temperature of the reference electrode in °C (default 25).
+ * @param {any[][]} [pH] pH of the solution, −2 to 16; needed only for RHE.
+ * @returns {any[][]} Potential in V vs SHE.
  */
-export function boundary(element: any[][], pH: any[][], potential: any[][], direction?: any[][], temperature?: any[][], activity?: any[][]): any[][] {
-  return boundaryFrom(element, pH, potential, direction, temperature, activity);
+export function toshe(reading: any[][], electrode: any[][], temperature?: any[][], pH?: any[][]): any[][] {
+  return toSHEAt(reading, electrode, temperature, pH);
 }
 
 /**
- * Equilibrium potential (V vs SHE) of the half-reaction between two species, balanced automatically with H2O, H+ and electrons; #N/A when both have the same oxidation state.
- * @customfunction COUPLE
- * @param {any[][]} oxidized Formula of the oxidized species, e.g. Fe3+ or Fe2O3(s).
- * @param {any[][]} reduced Formula of the reduced species, e.g. Fe2+ or Fe(s).
- * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
- * @param {any[][]} [activity] Activity of the dissolved species. Default 1e-6.
- * @returns {any[][]} Equilibrium potential in volts vs SHE.
+ * Converts a potential on the standard hydrogen scale to the reading against a reference electrode.
+ * @customfunction FROMSHE
+ * @param {any[][]} potential Potential in V vs SHE.
+ * @param {any[][]} electrode Reference electrode: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M or RHE (case-insensitive; common spellings accepted).
+ * @param {any[][]} [temperature] Temperature of the reference electrode in °C (default 25).
+ * @param {any[][]} [pH] pH of the solution, −2 to 16; needed only for RHE.
+ * @returns {any[][]} Potential in V against the electrode.
  */
-export function couple(oxidized: any[][], reduced: any[][], pH: any[][], temperature?: any[][], activity?: any[][]): any[][] {
-  return coupleAt(oxidized, reduced, pH, temperature, activity);
+export function fromshe(potential: any[][], electrode: any[][], temperature?: any[][], pH?: any[][]): any[][] {
+  return fromSHEAt(potential, electrode, temperature, pH);
 }
 
 /**
- * Total dissolved metal in equilibrium with the solid that is stable at the point (ideal dilute solution); #N/A where a dissolved species is dominant.
- * @customfunction DISSOLVED
- * @param {any[][]} element Metal symbol or name.
- * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
- * @param {any[][]} [unit] mol/kg (default), mg/L or ug/L.
- * @param {any[][]} [activity] Activity threshold deciding which species is dominant. Default 1e-6.
- * @returns {any[][]} Dissolved metal in the chosen unit.
+ * Converts a potential (Eh, V vs SHE) to pe = F·Eh / (RT ln10).
+ * @customfunction PE
+ * @param {any[][]} potential Potential in V vs SHE.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @returns {any[][]} pe (dimensionless).
  */
-export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], unit?: any[][], activity?: any[][]): any[][] {
-  return dissolvedAt(element, pH, potential, temperature, unit, activity);
+export function pe(potential: any[][], temperature?: any[][]): any[][] {
+  return peAt(potential, temperature);
 }
 
 /**
- * Table of a metal's species with a header row: formula, state, name, Gibbs energy of formation at the temperature (kJ/mol) and data source.
- * @customfunction SPECIESTABLE
- * @param {any[][]} element Metal symbol or name.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
- * @returns {any[][]} The table; it spills.
+ * Converts pe to a potential (Eh, V vs SHE) = pe·RT ln10 / F.
+ * @customfunction EH
+ * @param {any[][]} pe pe (dimensionless).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @returns {any[][]} Potential in V vs SHE.
  */
-export function speciestable(element: any[][], temperature?: any[][]): any[][] {
-  return speciesTable(element, temperature);
+export function eh(pe: any[][], temperature?: any[][]): any[][] {
+  return ehAt(pe, temperature);
+}
+
+/**
+ * pH of pure water, ½ pKw, at the temperature (7.00 at 25 °C).
+ * @customfunction NEUTRALPH
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @returns {any[][]} Neutral pH.
+ */
+export function neutralph(temperature?: any[][]): any[][] {
+  return neutralPHAt(temperature);
+}
+
+/**
+ * Nernst slope RT ln10 / F in V per decade (0.05916 V at 25 °C).
+ * @customfunction SLOPE
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @returns {any[][]} Slope in V per decade.
+ */
+export function slope(temperature?: any[][]): any[][] {
+  return slopeAt(temperature);
 }
 
 if (typeof CustomFunctions !== "undefined") {
-  CustomFunctions.associate("SPECIES", species);
-  CustomFunctions.associate("REGIME", regime);
-  CustomFunctions.associate("BOUNDARY", boundary);
-  CustomFunctions.associate("COUPLE", couple);
-  CustomFunctions.associate("DISSOLVED", dissolved);
-  CustomFunctions.associate("SPECIESTABLE", speciestable);
+  CustomFunctions.associate("WATERLINE", waterline);
+  CustomFunctions.associate("WATERMARGIN", watermargin);
+  CustomFunctions.associate("TOSHE", toshe);
+  CustomFunctions.associate("FROMSHE", fromshe);
+  CustomFunctions.associate("PE", pe);
+  CustomFunctions.associate("EH", eh);
+  CustomFunctions.associate("NEUTRALPH", neutralph);
+  CustomFunctions.associate("SLOPE", slope);
 }
