@@ -1,0 +1,90 @@
+/**
+ * Diagram SVGs for the command line: keeps a bounded, reproducible sample of each metal's points while the file
+ * streams, then draws one potential–pH diagram per metal with the samples on it through the task pane's
+ * DOM-free renderer (src/taskpane/diagram-svg.ts), run in Node.
+ */
+import { getDatabase } from "../chemistry/database";
+import { SystemCache } from "../chemistry/system-cache";
+import { displayScale, plotSamples, shownRegions, shownWaterLines } from "../taskpane/diagram-model";
+import { renderDiagramSvg } from "../taskpane/diagram-svg";
+import type { SamplePoint } from "./evaluate";
+import { Reservoir } from "./reservoir";
+
+/** Points drawn per diagram at most (the pane's budget is 10 k samples, GUIDE §6). */
+export const POINTS_PER_DIAGRAM = 10_000;
+
+export class DiagramSamples {
+  private readonly bySymbol = new Map<string, Reservoir<SamplePoint>>();
+
+  add(point: SamplePoint): void {
+    const symbol = getDatabase().resolveMetal(point.symbol);
+    if (!symbol) return;
+    let reservoir = this.bySymbol.get(symbol);
+    if (!reservoir) this.bySymbol.set(symbol, (reservoir = new Reservoir<SamplePoint>(POINTS_PER_DIAGRAM, hashSeed(symbol))));
+    reservoir.add(symbol === point.symbol ? point : { ...point, symbol });
+  }
+
+  symbols(): string[] {
+    return [...this.bySymbol.keys()].sort();
+  }
+
+  points(symbol: string): SamplePoint[] {
+    return this.bySymbol.get(symbol)?.items ?? [];
+  }
+
+  /** Samples offered for a metal (before thinning). */
+  count(symbol: string): number {
+    return this.bySymbol.get(symbol)?.count ?? 0;
+  }
+}
+
+function hashSeed(text: string): number {
+  let h = 2166136261;
+  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 16777619);
+  return h >>> 0;
+}
+
+/** The temperature a diagram is drawn at: the median of its samples' temperatures, to 1 °C. */
+export function diagramCelsius(points: readonly SamplePoint[], fallback = 25): number {
+  const ts = points.map((p) => p.celsius).filter((t) => Number.isFinite(t)).sort((a, b) => a - b);
+  if (ts.length === 0) return fallback;
+  const mid = ts.length >> 1;
+  const median = ts.length % 2 ? ts[mid] : (ts[mid - 1] + ts[mid]) / 2;
+  return Math.round(median);
+}
+
+/** What the command line draws for one metal. */
+export interface DiagramRequest {
+  element: string;
+  celsius: number;
+  activity: number;
+  samples: readonly SamplePoint[];
+  /** Lines under the legend: where the samples come from and how many were drawn. */
+  caption: string[];
+}
+
+/** Diagram window: pH 0–14 and −1.5…+2 V vs SHE, which holds natural waters and both water lines. */
+export const DIAGRAM_WINDOW = { pHMin: 0, pHMax: 14, eMin: -1.5, eMax: 2 } as const;
+
+/** One potential–pH diagram as SVG text, vs SHE in volts, with the samples drawn on it (the pane's renderer). */
+export function renderDiagram(request: DiagramRequest): string {
+  const system = new SystemCache(getDatabase()).get(request.element, request.celsius, request.activity);
+  const scale = displayScale("SHE", "V", request.celsius);
+  const samples = plotSamples(
+    system,
+    request.samples.map((p) => ({ row: p.line, id: `line ${p.line}`, pH: p.pH, eSHE: p.E })),
+    scale,
+  );
+  return renderDiagramSvg({
+    system,
+    window: DIAGRAM_WINDOW,
+    regions: shownRegions(system, DIAGRAM_WINDOW, scale),
+    samples,
+    water: shownWaterLines(request.celsius, scale),
+    axisTitle: scale.axisTitle,
+    unit: "V",
+    width: 900,
+    height: 680,
+    caption: request.caption,
+  });
+}

@@ -1,0 +1,250 @@
+/**
+ * Command-line options of `redox-cells`: parsing (node:util parseArgs) and the help text. Every option the program
+ * reads is declared and documented here.
+ */
+import { parseArgs } from "node:util";
+
+export const EXIT = {
+  /** Every row was read; results written (blank input cells give blank results and do not count as errors). */
+  ok: 0,
+  /** Results written, but some rows had unreadable or out-of-range cells (their result cells hold error codes). */
+  rowErrors: 1,
+  /** The command line itself is wrong: unknown option, missing input, no pH or potential column, … */
+  usage: 2,
+  /** The input cannot be read (missing, unreadable, malformed CSV) or the output cannot be written. */
+  io: 3,
+} as const;
+
+export class UsageError extends Error {}
+
+export type PotentialUnitOption = "V" | "mV";
+export type DissolvedUnit = "ug/L" | "mg/L" | "mol/kg";
+
+export interface CliOptions {
+  input: string;
+  /** Results CSV path, or "-" for standard output. */
+  output: string;
+  /** Directory for the diagram SVGs, or null for none. */
+  svgDir: string | null;
+  /** Metals evaluated on every row (symbols or names as given). */
+  metals: string[];
+  /** Column naming the metal of each row (header text or 1-based number), "auto" or null (none). */
+  metalColumn: string | null | "auto";
+  phColumn?: string;
+  potentialColumn?: string;
+  temperatureColumn?: string | null;
+  /** Fixed temperature °C, used when there is no temperature column (and for blank cells in it). */
+  temperature?: number;
+  electrode?: string;
+  unit?: PotentialUnitOption;
+  activity: number;
+  dissolvedUnit: DissolvedUnit;
+  overpotential: number;
+  delimiter?: string;
+  keepInput: boolean;
+  progress: boolean | "auto";
+  maxMessages: number;
+  quiet: boolean;
+  batchSize: number;
+}
+
+export const HELP = `redox-cells — evaluate the REDOX worksheet functions over a CSV file
+
+Usage
+  redox-cells [options] <input.csv>
+  redox-cells --help | --version
+
+For every row the program converts the potential reading to volts against the standard hydrogen electrode
+(as REDOX.TOSHE does), measures its distance from the water-stability window (REDOX.WATERMARGIN), and for each
+metal finds the dominant species (REDOX.SPECIES), the regime — immunity, passivation or corrosion —
+(REDOX.REGIME), the nearest stability boundaries above and below (REDOX.BOUNDARY) and the dissolved metal in
+equilibrium with the stable solid (REDOX.DISSOLVED). It writes the input columns plus result columns to a CSV,
+and one potential–pH diagram SVG per metal with the samples drawn on it.
+
+Columns are found by their headers (case and punctuation ignored): pH ("pH"), the potential reading ("ORP",
+"Eh", "redox", "potential", …), temperature ("temp", "temperature", …), the metal of each row ("metal",
+"element", "pipe metal"). The unit and electrode are read from the potential header when it names them
+("ORP_mV_AgCl_sat", "Eh (V)"); otherwise give --unit and --electrode. Lines starting with # are comments.
+
+Input and output
+  -o, --output FILE          results CSV (default: <input>-results.csv next to the input; "-" = standard output)
+      --svg-dir DIR          directory for the diagram SVGs (default: the output's directory)
+      --no-svg               write no diagrams
+      --delimiter C          field separator: "," ";" "tab" (default: guessed from the header line)
+      --no-keep-input        write only the result columns (default: input columns first, then results)
+
+Columns (header text, or a 1-based column number)
+      --ph-column COL        the pH column
+      --potential-column COL the potential reading column
+      --temperature-column COL
+                             the temperature column, °C; "none" to ignore one
+      --metal-column COL     the column naming each row's metal ("Fe", "copper"); "none" to ignore one
+
+Chemistry
+  -m, --metal LIST           metals evaluated on every row, comma-separated symbols or names: Fe,Cu,Pb
+                             (at least one of --metal or a metal column is needed)
+  -e, --electrode NAME       reference electrode of the readings: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M,
+                             AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M, RHE (default: from the header)
+  -u, --unit V|mV            unit of the readings (default: from the header)
+  -t, --temperature C        temperature in °C when there is no temperature column, and for its blank cells
+                             (default 25)
+  -a, --activity A           activity of dissolved metal species, 0 < A ≤ 10 (default 1e-6)
+      --dissolved-unit U     ug/L (default), mg/L or mol/kg
+      --overpotential V      widens the water window on both sides for the margin column (default 0)
+
+Messages and progress
+      --progress             show a progress bar on standard error even when it is not a terminal
+      --no-progress          never show one (default: shown when standard error is a terminal)
+      --max-messages N       print at most N cell messages (default 50; 0 = none); the rest are counted
+  -q, --quiet                no summary
+  -h, --help                 this text
+  -V, --version              the program's version
+
+Result columns
+  E_SHE_V                    potential vs SHE, V
+  water_margin_V             distance from the water-stability window, V: positive inside, negative outside
+  <M>_species                dominant species of metal M (M = symbol, or "metal" for the per-row metal column)
+  <M>_regime                 immunity, passivation or corrosion
+  <M>_boundary_above_V       nearest stability boundary above the point at its pH (#N/A if none up to +3 V)
+  <M>_boundary_below_V       nearest stability boundary below (#N/A if none down to −3 V)
+  <M>_dissolved_<unit>       dissolved metal in equilibrium with the stable solid (#N/A where a dissolved species
+                             is dominant)
+  errors                     what was wrong with the row's cells (empty when nothing was)
+A blank input cell gives blank results in that row. An unreadable or out-of-range cell gives the spreadsheet's
+error code (#VALUE!, #NUM!) in the results that depend on it, a message on standard error naming the line and
+column, and its text in the errors column; the row is never dropped.
+
+Exit codes
+  0  all rows read (blank cells allowed)
+  1  results written, but some rows had bad cells
+  2  usage error (unknown option, no input, no pH or potential column, unknown metal or electrode)
+  3  the input cannot be read (missing file, malformed CSV) or the output cannot be written
+
+Examples
+  redox-cells data/demo/sample-log.csv -o out/results.csv
+  redox-cells lab-export.csv --metal Fe,Cu --electrode SCE --unit mV --temperature 15
+  redox-cells big.csv --metal Pb -o - --no-svg | gzip > results.csv.gz
+
+Thermodynamics tells which state is stable, not how fast a metal corrodes. For drinking water (lead, copper),
+structural corrosion or cathodic protection, confirm by laboratory analysis and defer to local codes, regulators
+and licensed corrosion professionals.
+`;
+
+const DEFAULT_MAX_MESSAGES = 50;
+
+function numberOption(name: string, text: string | undefined, check: (x: number) => boolean, expected: string): number | undefined {
+  if (text === undefined) return undefined;
+  const x = Number(text);
+  if (text.trim() === "" || !Number.isFinite(x) || !check(x)) throw new UsageError(`--${name}: expected ${expected}, got "${text}"`);
+  return x;
+}
+
+export type ParsedCommand = { kind: "help" } | { kind: "version" } | { kind: "run"; options: CliOptions };
+
+/** Parses argv (without node and script). Throws UsageError for anything wrong. */
+export function parseCommandLine(argv: readonly string[]): ParsedCommand {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...argv],
+      allowPositionals: true,
+      strict: true,
+      options: {
+        output: { type: "string", short: "o" },
+        "svg-dir": { type: "string" },
+        "no-svg": { type: "boolean" },
+        delimiter: { type: "string" },
+        "no-keep-input": { type: "boolean" },
+        "ph-column": { type: "string" },
+        "potential-column": { type: "string" },
+        "temperature-column": { type: "string" },
+        "metal-column": { type: "string" },
+        metal: { type: "string", short: "m", multiple: true },
+        electrode: { type: "string", short: "e" },
+        unit: { type: "string", short: "u" },
+        temperature: { type: "string", short: "t" },
+        activity: { type: "string", short: "a" },
+        "dissolved-unit": { type: "string" },
+        overpotential: { type: "string" },
+        progress: { type: "boolean" },
+        "no-progress": { type: "boolean" },
+        "max-messages": { type: "string" },
+        "batch-size": { type: "string" },
+        quiet: { type: "boolean", short: "q" },
+        help: { type: "boolean", short: "h" },
+        version: { type: "boolean", short: "V" },
+      },
+    });
+  } catch (error) {
+    throw new UsageError(error instanceof Error ? error.message : String(error));
+  }
+  const v = parsed.values;
+  if (v.help) return { kind: "help" };
+  if (v.version) return { kind: "version" };
+  if (parsed.positionals.length === 0) throw new UsageError("no input file given");
+  if (parsed.positionals.length > 1) throw new UsageError(`one input file at a time (got ${parsed.positionals.length}: ${parsed.positionals.join(", ")})`);
+  const input = parsed.positionals[0];
+
+  let unit: PotentialUnitOption | undefined;
+  if (v.unit !== undefined) {
+    const u = v.unit.trim().toLowerCase();
+    if (u === "v" || u === "volt" || u === "volts") unit = "V";
+    else if (u === "mv" || u === "millivolt" || u === "millivolts") unit = "mV";
+    else throw new UsageError(`--unit: expected V or mV, got "${v.unit}"`);
+  }
+
+  let dissolvedUnit: DissolvedUnit = "ug/L";
+  if (v["dissolved-unit"] !== undefined) {
+    const key = v["dissolved-unit"].trim().toLowerCase().replace(/[µμ]/g, "u");
+    const known: Record<string, DissolvedUnit> = { "ug/l": "ug/L", ppb: "ug/L", "mg/l": "mg/L", ppm: "mg/L", "mol/kg": "mol/kg" };
+    if (!(key in known)) throw new UsageError(`--dissolved-unit: expected ug/L, mg/L or mol/kg, got "${v["dissolved-unit"]}"`);
+    dissolvedUnit = known[key];
+  }
+
+  let delimiter: string | undefined;
+  if (v.delimiter !== undefined) {
+    const d = v.delimiter === "tab" || v.delimiter === "\\t" ? "\t" : v.delimiter;
+    if (d.length !== 1) throw new UsageError(`--delimiter: expected one character or "tab", got "${v.delimiter}"`);
+    delimiter = d;
+  }
+
+  const metals = (v.metal ?? []).flatMap((m) => m.split(",")).map((m) => m.trim()).filter((m) => m !== "");
+  const columnOption = (text: string | undefined): string | null | undefined =>
+    text === undefined ? undefined : text.trim().toLowerCase() === "none" ? null : text;
+  const metalColumnOption = columnOption(v["metal-column"]);
+
+  const output = v.output ?? defaultOutput(input);
+  const options: CliOptions = {
+    input,
+    output,
+    svgDir: v["no-svg"] ? null : (v["svg-dir"] ?? (output === "-" ? "." : dirnameOf(output))),
+    metals,
+    metalColumn: metalColumnOption === undefined ? "auto" : metalColumnOption,
+    phColumn: v["ph-column"],
+    potentialColumn: v["potential-column"],
+    temperatureColumn: columnOption(v["temperature-column"]),
+    temperature: numberOption("temperature", v.temperature, (x) => x >= 0 && x <= 100, "a temperature from 0 to 100 °C"),
+    electrode: v.electrode,
+    unit,
+    activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,
+    dissolvedUnit,
+    overpotential: numberOption("overpotential", v.overpotential, (x) => x >= 0 && x <= 3, "a number of volts from 0 to 3") ?? 0,
+    delimiter,
+    keepInput: !v["no-keep-input"],
+    progress: v["no-progress"] ? false : v.progress ? true : "auto",
+    maxMessages: numberOption("max-messages", v["max-messages"], (x) => Number.isInteger(x) && x >= 0, "a whole number ≥ 0") ?? DEFAULT_MAX_MESSAGES,
+    quiet: v.quiet ?? false,
+    batchSize: numberOption("batch-size", v["batch-size"], (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000, "a whole number from 1 to 1000000") ?? 4096,
+  };
+  return { kind: "run", options };
+}
+
+function defaultOutput(input: string): string {
+  const base = input.replace(/\.(csv|txt|tsv)$/i, "");
+  return `${base}-results.csv`;
+}
+
+function dirnameOf(path: string): string {
+  const i = Math.max(path.lastIndexOf("/"), path.lastIndexOf("\\"));
+  return i < 0 ? "." : i === 0 ? "/" : path.slice(0, i);
+}

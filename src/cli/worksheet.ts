@@ -1,0 +1,33 @@
+/**
+ * The worksheet functions the command line evaluates, imported from the same sources the spreadsheet bundle is
+ * built from, so a CSV row and a worksheet row give the same answers. Each takes cells or columns (n × 1 ranges)
+ * and returns a range of results, with CellError values where the spreadsheet would show an error.
+ */
+import type { CellInput, CellOutput } from "../functions/cell-values";
+import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../functions/stability-functions";
+import { toSHEAt } from "../functions/electrode-functions";
+import { waterMarginAt } from "../functions/water-functions";
+
+export interface WorksheetFunctions {
+  /** REDOX.TOSHE(reading, electrode, [temperature], [pH]) */
+  toShe(reading: CellInput, electrode: CellInput, temperature?: CellInput, pH?: CellInput): CellOutput[][];
+  /** REDOX.WATERMARGIN(pH, potential, [temperature], [overpotential]) */
+  waterMargin(pH: CellInput, potential: CellInput, temperature?: CellInput, overpotential?: CellInput): CellOutput[][];
+  /** REDOX.SPECIES(element, pH, potential, [temperature], [activity]) */
+  species(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][];
+  /** REDOX.REGIME(element, pH, potential, [temperature], [activity]) */
+  regime(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][];
+  /** REDOX.BOUNDARY(element, pH, potential, [direction], [temperature], [activity]) */
+  boundary(element: CellInput, pH: CellInput, potential: CellInput, direction?: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][];
+  /** REDOX.DISSOLVED(element, pH, potential, [temperature], [unit], [activity]) */
+  dissolved(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, unit?: CellInput, activity?: CellInput): CellOutput[][];
+}
+
+export const worksheetFunctions: WorksheetFunctions = {
+  toShe: toSHEAt,
+  waterMargin: waterMarginAt,
+  species: speciesAt,
+  regime: regimeAt,
+  boundary: boundaryFrom,
+  dissolved: dissolvedAt,
+};
