@@ -1,0 +1,254 @@
+/**
+ * The potential–pH diagram as SVG text: regions coloured and patterned by regime and labelled in place, the water
+ * window band between dashed lines, an optional fainter kinetic band (water decomposes only about 0.6 V beyond its
+ * lines in practice — common practice), the samples as outlined circles, axes, legend and caption.
+ *
+ * Pure string building — no document, no window — so the command line and the tests can use it as the pane does.
+ */
+import type { MetalSystem, Regime } from "../chemistry/system";
+import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./axes";
+import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
+import { formulaSegments, Segment } from "./formula-markup";
+import { placeLabel } from "./label-placement";
+import {
+  AXIS_TEXT,
+  LABEL_TEXT,
+  MARKER_FILLS,
+  MARKER_OUTLINE,
+  PATTERN_INK,
+  REGIME_WORDS,
+  regionFill,
+  WATER_BAND,
+  WATER_LINE,
+} from "./palette";
+
+export interface DiagramSvgOptions {
+  readonly system: MetalSystem;
+  readonly window: AxisWindow;
+  readonly regions: readonly ShownRegion[];
+  readonly samples: readonly PlottedSample[];
+  /** Water lines in shown coordinates (diagram-model.ts shownWaterLines). */
+  readonly water: { readonly oxygen: ShownLine; readonly hydrogen: ShownLine };
+  /** "E / V vs SHE". */
+  readonly axisTitle: string;
+  /** Unit of the shown potential: sets the kinetic band's width and the number format. */
+  readonly unit: "V" | "mV";
+  readonly width: number;
+  readonly height: number;
+  /** Heading; default "<element>–water". */
+  readonly title?: string;
+  /** Lines printed under the legend (sources, data origin). */
+  readonly caption?: readonly string[];
+  readonly showKineticBand?: boolean;
+  /** Overpotential of the kinetic band, V (default 0.6). */
+  readonly kineticOverpotential?: number;
+}
+
+export const KINETIC_OVERPOTENTIAL = 0.6;
+const TITLE_BAND = 46;
+const LEFT_BAND = 64;
+const RIGHT_BAND = 14;
+const CAPTION_LINE = 14;
+const LABEL_SIZES = [13, 11, 9];
+
+/** The plot rectangle inside an SVG of the given size (also used by tests to place markers). */
+export function diagramLayout(width: number, height: number, captionLines = 0): PlotArea {
+  const bottom = 22 + 20 + 26 + captionLines * CAPTION_LINE + 6;
+  return { left: LEFT_BAND, top: TITLE_BAND, width: Math.max(40, width - LEFT_BAND - RIGHT_BAND), height: Math.max(40, height - TITLE_BAND - bottom) };
+}
+
+export function escapeXml(text: string): string {
+  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&apos;");
+}
+
+const fixed = (v: number, digits = 2) => Number(v.toFixed(digits)).toString();
+
+/** Width (px) of a typeset formula at a font size — a fixed-advance estimate for sans-serif text. */
+export function formulaWidth(segments: readonly Segment[], size: number): number {
+  let w = 0;
+  for (const s of segments) for (const ch of s.text) w += (s.kind === "normal" ? size : size * 0.72) * (/[A-Z(]|[\u2212+]/.test(ch) ? 0.66 : ch === ")" ? 0.36 : 0.56);
+  return w;
+}
+
+function segmentsSvg(segments: readonly Segment[]): string {
+  return segments
+    .map((s) =>
+      s.kind === "normal"
+        ? `<tspan>${escapeXml(s.text)}</tspan>`
+        : `<tspan font-size="72%" dy="${s.kind === "sub" ? "0.3em" : "-0.45em"}">${escapeXml(s.text)}</tspan><tspan dy="${s.kind === "sub" ? "-0.3em" : "0.45em"}"></tspan>`,
+    )
+    .join("");
+}
+
+/** "10⁻⁶" for powers of ten, otherwise "2.5 × 10⁻⁵". */
+export function formatActivity(a: number): string {
+  const sup = (text: string) => text.replace(/-/g, "\u207b").replace(/[0-9]/g, (d) => "\u2070\u00b9\u00b2\u00b3\u2074\u2075\u2076\u2077\u2078\u2079"[Number(d)]);
+  const exponent = Math.floor(Math.log10(a) + 1e-9);
+  const mantissa = a / 10 ** exponent;
+  if (Math.abs(mantissa - 1) < 1e-9) return exponent === 0 ? "1" : `10${sup(String(exponent))}`;
+  return `${Number(mantissa.toPrecision(3))} \u00d7 10${sup(String(exponent))}`;
+}
+
+/** Hover and focus text of a sample. */
+export function sampleText(s: PlottedSample, unit: "V" | "mV"): string {
+  const e = unit === "mV" ? `${Math.round(s.E)} mV` : `${s.E.toFixed(3)} V`;
+  const margin = `${s.waterMargin >= 0 ? "+" : "\u2212"}${Math.abs(s.waterMargin).toFixed(2)} V ${s.waterMargin >= 0 ? "inside" : "outside"} the water window`;
+  const who = s.id ? `${s.id} (row ${s.row})` : `row ${s.row}`;
+  return `${who}: pH ${s.pH.toFixed(2)}, E ${e}; ${s.formula}, ${s.regime}; water margin ${margin}`;
+}
+
+function patternDefs(): string {
+  return [
+    `<pattern id="rc-pat-passivation" patternUnits="userSpaceOnUse" width="8" height="8" patternTransform="rotate(45)"><line x1="0" y1="0" x2="0" y2="8" stroke="${PATTERN_INK.passivation}" stroke-width="1.2" stroke-opacity="0.55"/></pattern>`,
+    `<pattern id="rc-pat-corrosion" patternUnits="userSpaceOnUse" width="9" height="9"><circle cx="4.5" cy="4.5" r="1.3" fill="${PATTERN_INK.corrosion}" fill-opacity="0.6"/></pattern>`,
+    `<pattern id="rc-pat-immunity" patternUnits="userSpaceOnUse" width="10" height="10"><path d="M0 5H10" stroke="${PATTERN_INK.immunity}" stroke-width="0.6" stroke-opacity="0.35"/></pattern>`,
+  ].join("");
+}
+
+function polygonPath(points: readonly (readonly [number, number])[]): string {
+  return points.map((p, i) => `${i === 0 ? "M" : "L"}${fixed(p[0])} ${fixed(p[1])}`).join("") + "Z";
+}
+
+/** Band between two lines E = a + b·pH (lower and upper) across the window, in pixels. */
+function bandPath(axes: Axes, w: AxisWindow, lower: ShownLine, upper: ShownLine): string {
+  const at = (l: ShownLine, pH: number) => l.intercept + l.slope * pH;
+  return polygonPath([
+    [axes.x(w.pHMin), axes.y(at(lower, w.pHMin))],
+    [axes.x(w.pHMax), axes.y(at(lower, w.pHMax))],
+    [axes.x(w.pHMax), axes.y(at(upper, w.pHMax))],
+    [axes.x(w.pHMin), axes.y(at(upper, w.pHMin))],
+  ]);
+}
+
+function linePath(axes: Axes, w: AxisWindow, l: ShownLine): string {
+  return `M${fixed(axes.x(w.pHMin))} ${fixed(axes.y(l.intercept + l.slope * w.pHMin))}L${fixed(axes.x(w.pHMax))} ${fixed(axes.y(l.intercept + l.slope * w.pHMax))}`;
+}
+
+export function renderDiagramSvg(o: DiagramSvgOptions): string {
+  const caption = o.caption ?? [];
+  const area = diagramLayout(o.width, o.height, caption.length);
+  const axes = makeAxes(o.window, area);
+  const w = o.window;
+  const out: string[] = [];
+  const title = o.title ?? `${o.system.element}\u2013water`;
+  const subtitle = `${fixed(o.system.celsius, 1)} \u00b0C \u00b7 dissolved activity ${formatActivity(o.system.activity)} \u00b7 potentials vs ${o.axisTitle.split(" vs ")[1] ?? "SHE"}`;
+  out.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${o.width}" height="${o.height}" viewBox="0 0 ${o.width} ${o.height}" role="group" aria-labelledby="rc-title rc-desc" class="rc-diagram"` +
+      ` data-plot-left="${area.left}" data-plot-top="${area.top}" data-plot-width="${area.width}" data-plot-height="${area.height}"` +
+      ` data-ph-min="${w.pHMin}" data-ph-max="${w.pHMax}" data-e-min="${w.eMin}" data-e-max="${w.eMax}" font-family="'Segoe UI', system-ui, -apple-system, sans-serif">`,
+  );
+  out.push(`<title id="rc-title">${escapeXml(`${title} potential\u2013pH diagram`)}</title>`);
+  out.push(`<desc id="rc-desc">${escapeXml(`${subtitle}. ${o.regions.length} stability regions, ${o.samples.length} samples.`)}</desc>`);
+  out.push(`<defs>${patternDefs()}<clipPath id="rc-plot"><rect x="${area.left}" y="${area.top}" width="${area.width}" height="${area.height}"/></clipPath></defs>`);
+  out.push(`<rect width="${o.width}" height="${o.height}" fill="#ffffff"/>`);
+
+  // regions: fill by regime and species, pattern by regime
+  const shadeIndex: Record<Regime, Map<number, number>> = { immunity: new Map(), passivation: new Map(), corrosion: new Map() };
+  out.push(`<g class="rc-regions" clip-path="url(#rc-plot)">`);
+  const pixelRegions = o.regions.map((r) => {
+    const shades = shadeIndex[r.regime];
+    if (!shades.has(r.species)) shades.set(r.species, shades.size);
+    const fill = regionFill(r.regime, shades.get(r.species)!);
+    const pixels = r.vertices.map(([pH, e]) => [axes.x(pH), axes.y(e)] as const);
+    const d = polygonPath(pixels);
+    out.push(
+      `<path class="rc-region" d="${d}" fill="${fill}" data-formula="${escapeXml(r.formula)}" data-regime="${r.regime}" data-fill="${fill}"><title>${escapeXml(`${r.formula}: ${REGIME_WORDS[r.regime]}`)}</title></path>` +
+        `<path d="${d}" fill="url(#rc-pat-${r.regime})" stroke="#ffffff" stroke-width="1" pointer-events="none"/>`,
+    );
+    return { region: r, pixels };
+  });
+  out.push(`</g>`);
+
+  // water window and kinetic band
+  out.push(`<g class="rc-water" clip-path="url(#rc-plot)" pointer-events="none">`);
+  if (o.showKineticBand) {
+    const dv = (o.kineticOverpotential ?? KINETIC_OVERPOTENTIAL) * (o.unit === "mV" ? 1000 : 1);
+    const up = { intercept: o.water.oxygen.intercept + dv, slope: o.water.oxygen.slope };
+    const down = { intercept: o.water.hydrogen.intercept - dv, slope: o.water.hydrogen.slope };
+    out.push(`<path class="rc-kinetic-band" d="${bandPath(axes, w, o.water.oxygen, up)}" fill="${WATER_BAND}" fill-opacity="0.07"/>`);
+    out.push(`<path class="rc-kinetic-band" d="${bandPath(axes, w, down, o.water.hydrogen)}" fill="${WATER_BAND}" fill-opacity="0.07"/>`);
+    for (const l of [up, down]) out.push(`<path d="${linePath(axes, w, l)}" stroke="${WATER_LINE}" stroke-width="0.8" stroke-opacity="0.5" stroke-dasharray="2 4" fill="none"/>`);
+  }
+  out.push(`<path class="rc-water-band" d="${bandPath(axes, w, o.water.hydrogen, o.water.oxygen)}" fill="${WATER_BAND}" fill-opacity="0.16"/>`);
+  for (const [l, name] of [
+    [o.water.oxygen, "O2/H2O"],
+    [o.water.hydrogen, "H+/H2"],
+  ] as const) {
+    out.push(`<path class="rc-water-line" data-couple="${name}" d="${linePath(axes, w, l)}" stroke="${WATER_LINE}" stroke-width="1.4" stroke-dasharray="7 4" fill="none"/>`);
+  }
+  out.push(`</g>`);
+
+  // labels in place
+  out.push(`<g class="rc-labels" fill="${LABEL_TEXT}" text-anchor="middle" pointer-events="none" paint-order="stroke" stroke="#ffffff" stroke-width="3" stroke-opacity="0.75" stroke-linejoin="round">`);
+  for (const { region, pixels } of pixelRegions) {
+    const segments = formulaSegments(region.formula, region.charge);
+    let chosen: { x: number; y: number; size: number; fits: boolean } | null = null;
+    for (const size of LABEL_SIZES) {
+      const place = placeLabel(pixels, formulaWidth(segments, size) + 4, size * 1.25 + 2);
+      if (place.fits || size === LABEL_SIZES[LABEL_SIZES.length - 1]) {
+        chosen = { x: place.x, y: place.y, size, fits: place.fits };
+        if (place.fits) break;
+      }
+    }
+    if (!chosen) continue;
+    out.push(
+      `<text class="rc-label" data-formula="${escapeXml(region.formula)}" data-fits="${chosen.fits}" x="${fixed(chosen.x, 1)}" y="${fixed(chosen.y + chosen.size * 0.35, 1)}" font-size="${chosen.size}">${segmentsSvg(segments)}</text>`,
+    );
+  }
+  out.push(`</g>`);
+
+  // frame, ticks, axis titles
+  out.push(`<g class="rc-axes" fill="${AXIS_TEXT}" font-size="11">`);
+  out.push(`<rect x="${area.left}" y="${area.top}" width="${area.width}" height="${area.height}" fill="none" stroke="${AXIS_TEXT}" stroke-width="1"/>`);
+  for (const t of niceTicks(w.pHMin, w.pHMax, Math.max(4, Math.round(area.width / 60)))) {
+    const x = fixed(axes.x(t));
+    out.push(`<path d="M${x} ${area.top + area.height}v5" stroke="${AXIS_TEXT}"/><text x="${x}" y="${area.top + area.height + 17}" text-anchor="middle">${formatTick(t)}</text>`);
+  }
+  for (const t of niceTicks(w.eMin, w.eMax, Math.max(4, Math.round(area.height / 45)))) {
+    const y = fixed(axes.y(t));
+    out.push(`<path d="M${area.left} ${y}h-5" stroke="${AXIS_TEXT}"/><text x="${area.left - 8}" y="${fixed(axes.y(t) + 4)}" text-anchor="end">${formatTick(t)}</text>`);
+  }
+  out.push(`<text class="rc-axis-title" x="${area.left + area.width / 2}" y="${area.top + area.height + 36}" text-anchor="middle" font-size="13">pH</text>`);
+  out.push(
+    `<text class="rc-axis-title" transform="translate(16 ${area.top + area.height / 2}) rotate(-90)" text-anchor="middle" font-size="13">${escapeXml(o.axisTitle)}</text>`,
+  );
+  out.push(`<text class="rc-title" x="${area.left}" y="19" font-size="15" font-weight="600">${escapeXml(title)}</text>`);
+  out.push(`<text class="rc-subtitle" x="${area.left}" y="36" font-size="11.5">${escapeXml(subtitle)}</text>`);
+  out.push(`</g>`);
+
+  // legend
+  const legendY = area.top + area.height + 50;
+  const legend: string[] = [];
+  let lx = area.left;
+  for (const regime of ["immunity", "passivation", "corrosion"] as const) {
+    legend.push(
+      `<rect x="${lx}" y="${legendY}" width="16" height="12" fill="${regionFill(regime, 0)}" stroke="${AXIS_TEXT}" stroke-width="0.5"/><rect x="${lx}" y="${legendY}" width="16" height="12" fill="url(#rc-pat-${regime})"/>` +
+        `<circle cx="${lx + 24}" cy="${legendY + 6}" r="4" fill="${MARKER_FILLS[regime]}" stroke="${MARKER_OUTLINE}"/><text x="${lx + 32}" y="${legendY + 10}">${regime}</text>`,
+    );
+    lx += 32 + regime.length * 6.2 + 14;
+  }
+  legend.push(
+    `<rect x="${lx}" y="${legendY}" width="16" height="12" fill="${WATER_BAND}" fill-opacity="0.25"/><path d="M${lx} ${legendY}h16M${lx} ${legendY + 12}h16" stroke="${WATER_LINE}" stroke-dasharray="4 2"/><text x="${lx + 22}" y="${legendY + 10}">water stable</text>`,
+  );
+  out.push(`<g class="rc-legend" font-size="11" fill="${AXIS_TEXT}">${legend.join("")}</g>`);
+  if (caption.length > 0) {
+    out.push(
+      `<g class="rc-caption" font-size="10" fill="${AXIS_TEXT}">${caption
+        .map((line, i) => `<text x="${area.left}" y="${legendY + 28 + i * CAPTION_LINE}">${escapeXml(line)}</text>`)
+        .join("")}</g>`,
+    );
+  }
+
+  // samples last, on top
+  out.push(`<g class="rc-samples" stroke="${MARKER_OUTLINE}" stroke-width="1">`);
+  for (const s of o.samples) {
+    if (!(s.pH >= w.pHMin && s.pH <= w.pHMax && s.E >= w.eMin && s.E <= w.eMax)) continue;
+    const text = escapeXml(sampleText(s, o.unit));
+    out.push(
+      `<circle class="rc-sample" tabindex="0" role="img" aria-label="${text}" cx="${fixed(axes.x(s.pH))}" cy="${fixed(axes.y(s.E))}" r="4.5" fill="${MARKER_FILLS[s.regime]}"` +
+        ` data-row="${s.row}" data-ph="${s.pH}" data-e="${s.E}" data-eshe="${s.eSHE}" data-regime="${s.regime}" data-formula="${escapeXml(s.formula)}"><title>${text}</title></circle>`,
+    );
+  }
+  out.push(`</g></svg>`);
+  return out.join("\n");
+}

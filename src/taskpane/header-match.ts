@@ -1,0 +1,170 @@
+/**
+ * Finding the columns of a sample log by their header text, the way people actually write them:
+ * "pH", "pH (field)"; "ORP", "ORP (mV)", "Eh", "E", "E vs SCE / V", "Redox potential [mV]", "ORP_mV_AgCl_sat";
+ * "Temp", "Temperature (°C)", "°C", "T (C)", "temp_C", "Water temp °F"; "Sample ID", "site"; "Fe (µg/L)",
+ * "Dissolved lead, mg/L", "Pb_ug_L"; "metal", "pipe_metal". Pure functions: no host, no DOM.
+ *
+ * Headers also hint at the potential's unit (mV or V) and reference electrode ("vs SCE", "AgCl sat", "Eh" is vs
+ * SHE by definition — common practice) and at a temperature in °F; the pane offers these as defaults.
+ */
+
+export type ColumnRole = "pH" | "potential" | "temperature" | "id" | "site" | "dissolved" | "metal";
+
+export const COLUMN_ROLES: readonly ColumnRole[] = ["pH", "potential", "temperature", "id", "site", "dissolved", "metal"];
+
+/** Column index per role, −1 when absent. */
+export type ColumnMapping = Record<ColumnRole, number>;
+
+export interface HeaderHints {
+  /** Unit of the potential column when its header says so. */
+  potentialUnit: "V" | "mV" | null;
+  /** Reference electrode named by the potential header (a name the electrode records know), or null. */
+  electrode: string | null;
+  /** Temperature in Fahrenheit? */
+  temperatureUnit: "C" | "F" | null;
+  /** Unit of the dissolved-metal column. */
+  dissolvedUnit: "ug/L" | "mg/L" | "mol/kg" | null;
+}
+
+export interface HeaderMatch {
+  readonly mapping: ColumnMapping;
+  readonly hints: HeaderHints;
+}
+
+export const EMPTY_MAPPING: ColumnMapping = { pH: -1, potential: -1, temperature: -1, id: -1, site: -1, dissolved: -1, metal: -1 };
+
+/** Lower-case word tokens of a header: "ORP (mV) vs Ag/AgCl" → orp, mv, vs, ag, agcl. */
+export function headerTokens(header: string): string[] {
+  return header
+    .toLowerCase()
+    .replace(/[µμ]/g, "u")
+    .replace(/°\s*c\b/g, " degc ")
+    .replace(/°\s*f\b/g, " degf ")
+    .replace(/℃/g, " degc ")
+    .replace(/([a-z])([0-9])/g, "$1 $2")
+    .split(/[^a-z0-9.]+/)
+    .filter((t) => t !== "");
+}
+
+const has = (tokens: readonly string[], ...words: string[]) => words.some((w) => tokens.includes(w));
+
+function isPH(tokens: readonly string[]): boolean {
+  return tokens.includes("ph") && !has(tokens, "mv", "orp", "eh", "temp", "temperature");
+}
+
+function isPotential(tokens: readonly string[]): boolean {
+  if (has(tokens, "orp", "eh", "potential", "redox", "ecorr", "e.h")) return true;
+  if (tokens[0] === "e" && !has(tokens, "coli")) return true; // "E", "E (V)", "E vs SCE"
+  if (tokens.length === 1 && tokens[0] === "mv") return true;
+  return false;
+}
+
+function isTemperature(tokens: readonly string[]): boolean {
+  if (has(tokens, "temp", "temperature", "degc", "degf", "celsius", "fahrenheit")) return true;
+  // "T", "T (C)", "t_c", "T °C"
+  return tokens[0] === "t" && tokens.length <= 3 && tokens.slice(1).every((t) => t === "c" || t === "f" || t === "degc" || t === "degf");
+}
+
+function isId(tokens: readonly string[]): boolean {
+  if (has(tokens, "id", "sampleid", "label", "code")) return true;
+  if (tokens[0] === "sample" && tokens.length <= 2 && !has(tokens, "date", "time")) return true;
+  return tokens.length === 1 && has(tokens, "name", "no", "number", "#");
+}
+
+function isSite(tokens: readonly string[]): boolean {
+  return has(tokens, "site", "location", "station", "well", "tap", "point") && !has(tokens, "id");
+}
+
+function isMetal(tokens: readonly string[]): boolean {
+  return has(tokens, "metal", "element") && !has(tokens, "ug", "mg", "ppb", "ppm", "dissolved");
+}
+
+const CONCENTRATION = ["ug", "mg", "ppb", "ppm", "mol", "mmol", "umol", "dissolved", "total", "conc", "concentration"];
+
+/** Whether a header names the dissolved concentration of `metal` (symbol) or its element `name`. */
+function isDissolved(tokens: readonly string[], metal: string, name: string): boolean {
+  const symbol = metal.toLowerCase();
+  const mentionsMetal = tokens.includes(symbol) || (name !== "" && tokens.includes(name.toLowerCase()));
+  return mentionsMetal && (has(tokens, ...CONCENTRATION) || tokens.length === 1);
+}
+
+function potentialUnit(tokens: readonly string[]): "V" | "mV" | null {
+  if (tokens.includes("mv")) return "mV";
+  if (tokens.includes("v") || tokens.includes("volt") || tokens.includes("volts")) return "V";
+  return null;
+}
+
+/** The electrode a potential header names, as an electrode-record name. */
+export function electrodeHint(tokens: readonly string[]): string | null {
+  if (has(tokens, "she", "nhe") || tokens.includes("eh")) return "SHE";
+  if (has(tokens, "sce", "calomel")) return "SCE";
+  if (has(tokens, "rhe")) return "RHE";
+  if (has(tokens, "cse", "cuso", "cuso4")) return "CSE";
+  if (has(tokens, "mse", "hg2so4")) return "MSE";
+  if (has(tokens, "agcl")) {
+    if (has(tokens, "sat", "saturated")) return "AgCl-sat";
+    if (tokens.includes("3.5") || tokens.includes("3.5m")) return "AgCl-3.5M";
+    if (tokens.includes("3") || tokens.includes("3m")) return "AgCl-3M";
+    if (tokens.includes("1") || tokens.includes("1m")) return "AgCl-1M";
+    if (has(tokens, "sea", "seawater")) return "AgCl-sea";
+    return "AgCl-sat";
+  }
+  return null;
+}
+
+function dissolvedUnit(tokens: readonly string[]): HeaderHints["dissolvedUnit"] {
+  if (has(tokens, "ug", "ppb")) return "ug/L";
+  if (has(tokens, "mg", "ppm")) return "mg/L";
+  if (has(tokens, "mol", "molal")) return "mol/kg";
+  return null;
+}
+
+/**
+ * Matches header cells to roles. Each column serves at most one role; roles are tried in the order pH,
+ * potential, temperature, dissolved, metal, id, site, and the first matching column (left to right) wins.
+ */
+export function matchHeaders(headers: readonly unknown[], metal = "", metalName = ""): HeaderMatch {
+  const tokens = headers.map((h) => headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)));
+  const mapping: ColumnMapping = { ...EMPTY_MAPPING };
+  const taken = new Set<number>();
+  const claim = (role: ColumnRole, test: (t: string[]) => boolean) => {
+    const index = tokens.findIndex((t, i) => !taken.has(i) && t.length > 0 && test(t));
+    if (index >= 0) {
+      mapping[role] = index;
+      taken.add(index);
+    }
+  };
+  claim("pH", isPH);
+  claim("potential", isPotential);
+  claim("temperature", isTemperature);
+  if (metal) claim("dissolved", (t) => isDissolved(t, metal, metalName));
+  claim("metal", isMetal);
+  claim("id", isId);
+  claim("site", isSite);
+  const potentialTokens = mapping.potential >= 0 ? tokens[mapping.potential] : [];
+  const temperatureTokens = mapping.temperature >= 0 ? tokens[mapping.temperature] : [];
+  return {
+    mapping,
+    hints: {
+      potentialUnit: potentialUnit(potentialTokens),
+      electrode: mapping.potential >= 0 ? electrodeHint(potentialTokens) : null,
+      temperatureUnit: mapping.temperature < 0 ? null : has(temperatureTokens, "degf", "fahrenheit", "f") ? "F" : "C",
+      dissolvedUnit: mapping.dissolved >= 0 ? dissolvedUnit(tokens[mapping.dissolved]) : null,
+    },
+  };
+}
+
+/**
+ * The header row among the first rows of a block: the first row that names both a pH and a potential column
+ * and is mostly text. −1 when none does (the block then has no header; see the adapters).
+ */
+export function findHeaderRow(rows: readonly (readonly unknown[])[], maxRows = 10): number {
+  for (let r = 0; r < Math.min(rows.length, maxRows); r++) {
+    const row = rows[r];
+    const texts = row.filter((c) => typeof c === "string" && c.trim() !== "" && !Number.isFinite(Number(c)));
+    if (texts.length < 2) continue;
+    const { mapping } = matchHeaders(row);
+    if (mapping.pH >= 0 && mapping.potential >= 0) return r;
+  }
+  return -1;
+}

@@ -1,0 +1,132 @@
+/**
+ * Rows of a sample log → samples for the diagram, with every row that cannot be drawn listed with its reason
+ * (blank or unreadable pH or potential, values out of range). Readings are converted to volts vs SHE with the
+ * chosen electrode at the row's own temperature when it has one (the reference electrode sits in that water),
+ * otherwise at the diagram's temperature. Pure: no host, no DOM.
+ */
+import { getElectrodes } from "../chemistry/electrodes";
+import type { ColumnMapping } from "./header-match";
+import type { PotentialUnit, SampleInput } from "./diagram-model";
+
+/** A block of cells as a host hands it over: header texts, data rows, and the row number of each data row. */
+export interface SampleTable {
+  readonly headers: readonly string[];
+  readonly rows: readonly (readonly unknown[])[];
+  /** Sheet row (1-based) or file line of each data row, for messages and for selecting the row again. */
+  readonly rowNumbers: readonly number[];
+  /** Where the rows came from: "Sheet1!A1:P288", "pasted text", "sample-log.csv". */
+  readonly source: string;
+}
+
+export interface ReadOptions {
+  readonly mapping: ColumnMapping;
+  readonly electrode: string;
+  readonly unit: PotentialUnit;
+  readonly temperatureUnit: "C" | "F";
+  /** Diagram temperature, °C: used for rows without a temperature. */
+  readonly celsius: number;
+  /** When set and a metal column is mapped, only rows of this metal are read. */
+  readonly onlyMetal?: string;
+}
+
+export interface SkippedRow {
+  readonly row: number;
+  readonly reason: string;
+}
+
+export interface ReadResult {
+  readonly samples: SampleInput[];
+  /** Temperatures of the drawn rows, °C (rows with a temperature only). */
+  readonly temperatures: number[];
+  readonly skipped: SkippedRow[];
+  /** Rows left out because the metal column names another metal. */
+  readonly otherMetal: number;
+}
+
+const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+type Parsed = { value: number } | { blank: true } | { error: string };
+
+/** A cell as a number: numbers as they are, text only when it is a plain decimal number. */
+export function readNumber(cell: unknown): Parsed {
+  if (cell === null || cell === undefined) return { blank: true };
+  if (typeof cell === "number") return Number.isFinite(cell) ? { value: cell } : { error: "is not a finite number" };
+  if (typeof cell === "boolean") return { error: `"${cell}" is not a number` };
+  const text = String(cell).trim();
+  if (text === "") return { blank: true };
+  if (NUMBER.test(text)) return { value: Number(text) };
+  if (/^[+-]?\d+,\d+$/.test(text)) return { error: `"${text}" has a decimal comma; write ${text.replace(",", ".")}` };
+  return { error: `"${text.length > 20 ? text.slice(0, 20) + "…" : text}" is not a number` };
+}
+
+/** Median of a list (0 items → NaN). */
+export function median(values: readonly number[]): number {
+  if (values.length === 0) return NaN;
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+}
+
+const PH_RANGE = [-2, 16] as const; // GUIDE §3
+const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (GUIDE §3)
+
+export function readSamples(table: SampleTable, options: ReadOptions): ReadResult {
+  const { mapping } = options;
+  const electrodes = getElectrodes();
+  const found = electrodes.lookup(options.electrode);
+  if ("error" in found) throw new Error(found.error);
+  const electrode = found.electrode;
+  const factor = options.unit === "mV" ? 1e-3 : 1;
+  const samples: SampleInput[] = [];
+  const temperatures: number[] = [];
+  const skipped: SkippedRow[] = [];
+  let otherMetal = 0;
+  const cell = (row: readonly unknown[], index: number) => (index >= 0 ? row[index] : undefined);
+
+  table.rows.forEach((row, i) => {
+    const rowNumber = table.rowNumbers[i] ?? i + 1;
+    if (row.every((c) => c === null || c === undefined || String(c).trim() === "")) return; // an empty line is not a sample
+    if (options.onlyMetal && mapping.metal >= 0) {
+      const metal = String(cell(row, mapping.metal) ?? "").trim();
+      if (metal.toLowerCase() !== options.onlyMetal.toLowerCase()) {
+        otherMetal++;
+        return;
+      }
+    }
+    const reasons: string[] = [];
+    const pH = readNumber(cell(row, mapping.pH));
+    const reading = readNumber(cell(row, mapping.potential));
+    const temperature = mapping.temperature >= 0 ? readNumber(cell(row, mapping.temperature)) : ({ blank: true } as Parsed);
+    if ("blank" in pH) reasons.push("pH is blank");
+    else if ("error" in pH) reasons.push(`pH ${pH.error}`);
+    else if (pH.value < PH_RANGE[0] || pH.value > PH_RANGE[1]) reasons.push(`pH ${pH.value} is outside −2…16`);
+    if ("blank" in reading) reasons.push("potential is blank");
+    else if ("error" in reading) reasons.push(`potential ${reading.error}`);
+    let celsius = options.celsius;
+    let hasTemperature = false;
+    if ("error" in temperature) reasons.push(`temperature ${temperature.error}`);
+    else if ("value" in temperature) {
+      celsius = options.temperatureUnit === "F" ? ((temperature.value - 32) * 5) / 9 : temperature.value;
+      if (celsius < 0 || celsius > 100) reasons.push(`temperature ${temperature.value} °${options.temperatureUnit} is outside 0…100 °C`);
+      else hasTemperature = true;
+    }
+    let eSHE = NaN;
+    if ("value" in reading && "value" in pH && reasons.length === 0) {
+      eSHE = reading.value * factor + electrodes.potential(electrode, celsius, pH.value);
+      if (eSHE < E_RANGE[0] || eSHE > E_RANGE[1]) {
+        reasons.push(`potential ${reading.value} ${options.unit} is ${eSHE.toFixed(2)} V vs SHE, outside −3…+3 V (is the unit right?)`);
+      }
+    }
+    if (reasons.length > 0 || !("value" in pH)) {
+      skipped.push({ row: rowNumber, reason: reasons.join("; ") });
+      return;
+    }
+    const idCell = cell(row, mapping.id);
+    const siteCell = cell(row, mapping.site);
+    const id = [idCell, siteCell].filter((c) => c !== undefined && c !== null && String(c).trim() !== "").map((c) => String(c).trim())[0] ?? "";
+    const dissolved = readNumber(cell(row, mapping.dissolved));
+    samples.push({ row: rowNumber, id, pH: pH.value, eSHE, dissolved: "value" in dissolved ? dissolved.value : undefined });
+    if (hasTemperature) temperatures.push(celsius);
+  });
+  return { samples, temperatures, skipped, otherMetal };
+}
