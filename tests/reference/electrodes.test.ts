@@ -1,0 +1,216 @@
+// Reference electrode potentials vs SHE at 25 °C and at one other temperature, each against a named source, plus
+// the name look-up, the conversions and the load-time validation. No internet was available: every published
+// value here is recalled ("from memory"). `independent: false` marks checks whose reference value comes from the
+// same published formula as the record (they prove the record and the code reproduce that formula, not the formula).
+import { describe, expect, it } from "vitest";
+import electrodesJson from "../../data/electrodes.json";
+import { ElectrodeError, ElectrodeTable, fromSHE, getElectrodes, toSHE } from "../../src/chemistry/electrodes";
+import { CellError } from "../../src/functions/cell-values";
+import { fromSHEAt, toSHEAt } from "../../src/functions/electrode-functions";
+
+const table = getElectrodes();
+const byId = (id: string) => {
+  const found = table.lookup(id);
+  if ("error" in found) throw new Error(found.error);
+  return found.electrode;
+};
+
+// E°(AgCl/Ag) of Bates & Bower 1954 (from memory), written out here so the cross-checks do not read the data file
+const agclStandard = (t: number) => 0.23659 - 4.8564e-4 * t - 3.4205e-6 * t * t + 5.869e-9 * t ** 3;
+// E°(Hg2Cl2/Hg) = 0.26808 V at 25 °C (Bard, Parsons & Jordan 1985, from memory) with dE°/dT = −0.30 mV/K from the
+// NBS 1982 entropies of Hg(l), Cl−, Hg2Cl2(s) and H2(g) (Wagman et al. 1982, from memory)
+const calomelStandard = (t: number) => 0.26808 - 0.30e-3 * (t - 25);
+// SCE polynomial of Sawyer, Sobkowiak & Roberts 1995 (from memory)
+const sceSawyer = (t: number) => 0.2412 - 6.61e-4 * (t - 25) - 1.75e-6 * (t - 25) ** 2 - 9.0e-10 * (t - 25) ** 3;
+const nernst = (celsius: number) => (8.314462618 * (celsius + 273.15) * Math.LN10) / 96485.33212;
+
+interface Case {
+  id: string;
+  celsius: number;
+  pH?: number;
+  value: number;
+  tolerance: number;
+  source: string;
+  independent: boolean;
+}
+
+const at25: Case[] = [
+  { id: "SHE", celsius: 25, value: 0, tolerance: 0.003, source: "IUPAC convention (common practice)", independent: true },
+  { id: "SCE", celsius: 25, value: 0.2412, tolerance: 0.003, source: "Bard & Faulkner 2001, Electrochemical Methods, reference electrode table (from memory)", independent: false },
+  { id: "SCE", celsius: 25, value: 0.2415, tolerance: 0.003, source: "Ives & Janz 1961, Reference Electrodes, saturated calomel at 25 °C (from memory)", independent: true },
+  { id: "AgCl-sat", celsius: 25, value: 0.197, tolerance: 0.003, source: "Bard & Faulkner 2001, Ag/AgCl saturated KCl (from memory)", independent: false },
+  {
+    id: "AgCl-sat",
+    celsius: 25,
+    value: agclStandard(25) + sceSawyer(25) - calomelStandard(25),
+    tolerance: 0.003,
+    source: "derived: the saturated-KCl chloride term is the same for SCE and Ag/AgCl, so E = E°(AgCl/Ag) [Bates & Bower 1954] + E(SCE) [Sawyer et al. 1995] − E°(Hg2Cl2/Hg) [Bard, Parsons & Jordan 1985] (all from memory)",
+    independent: true,
+  },
+  { id: "AgCl-3.5M", celsius: 25, value: 0.205, tolerance: 0.003, source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 3.5 M KCl (from memory)", independent: false },
+  { id: "AgCl-3M", celsius: 25, value: 0.209, tolerance: 0.003, source: "manufacturers' tables for Ag/AgCl 3 mol/L KCl, 0.207–0.210 V (from memory)", independent: true },
+  { id: "AgCl-1M", celsius: 25, value: 0.235, tolerance: 0.003, source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 1 M KCl (from memory)", independent: false },
+  {
+    id: "AgCl-1M",
+    celsius: 25,
+    value: agclStandard(25) - nernst(25) * Math.log10(1.033 * 0.604),
+    tolerance: 0.003,
+    source: "derived: E°(AgCl/Ag) of Bates & Bower 1954 with a(Cl−) = m·γ±, 1 mol/L KCl = 1.033 mol/kg, γ± = 0.604 (Robinson & Stokes, Electrolyte Solutions 1959) (from memory)",
+    independent: true,
+  },
+  { id: "AgCl-sea", celsius: 25, value: 0.25, tolerance: 0.003, source: "DNV-RP-B401 / NACE SP0176, Ag/AgCl/seawater +0.25 V vs SHE (from memory)", independent: false },
+  { id: "CSE", celsius: 25, value: 0.316, tolerance: 0.003, source: "Peabody, Control of Pipeline Corrosion 2001; NACE practice, Cu/CuSO4 +0.316 V vs SHE (from memory)", independent: false },
+  { id: "MSE", celsius: 25, value: 0.64, tolerance: 0.003, source: "Bard & Faulkner 2001, Hg/Hg2SO4 saturated K2SO4 (from memory)", independent: false },
+  { id: "HgO-1M", celsius: 25, value: 0.098, tolerance: 0.003, source: "Hg/HgO in 1 M KOH, value used throughout the alkaline-electrolysis literature (from memory)", independent: false },
+  { id: "RHE", celsius: 25, pH: 7, value: -0.414, tolerance: 0.003, source: "common practice: RHE at pH 7 lies 0.414 V below SHE", independent: true },
+];
+
+const otherTemperature: Case[] = [
+  { id: "SHE", celsius: 80, value: 0, tolerance: 0.005, source: "IUPAC convention: zero at every temperature (common practice)", independent: true },
+  { id: "RHE", celsius: 60, pH: 7, value: -7 * 0.066104, tolerance: 0.005, source: "Nernst equation, k(60 °C) = 0.066104 V (common practice)", independent: true },
+  { id: "SCE", celsius: 40, value: 0.2309, tolerance: 0.005, source: "Sawyer et al. 1995 polynomial evaluated by hand at 40 °C (from memory)", independent: false },
+  {
+    id: "AgCl-sat",
+    celsius: 40,
+    value: agclStandard(40) + sceSawyer(40) - calomelStandard(40),
+    tolerance: 0.005,
+    source: "derived as at 25 °C from Bates & Bower 1954, Sawyer et al. 1995 and Bard, Parsons & Jordan 1985 (from memory)",
+    independent: true,
+  },
+  {
+    id: "AgCl-1M",
+    celsius: 50,
+    value: agclStandard(50) - nernst(50) * Math.log10(1.033 * 0.6),
+    tolerance: 0.005,
+    source: "derived: Bates & Bower 1954 E° at 50 °C with γ±(KCl, 1 mol/kg, 50 °C) = 0.600 (Harned & Owen, The Physical Chemistry of Electrolytic Solutions 1958) (from memory)",
+    independent: true,
+  },
+  { id: "CSE", celsius: 5, value: 0.298, tolerance: 0.005, source: "pipeline practice: E = 0.316 + 0.0009 (t − 25) V vs SHE, NACE / Peabody 2001 (from memory)", independent: false },
+  { id: "HgO-1M", celsius: 50, value: 0.098 - 25 * 1.12e-3, tolerance: 0.005, source: "Bratsch 1989, dE°/dT of HgO/Hg −1.12 mV/K, applied to the 1 M KOH value (from memory)", independent: false },
+  { id: "MSE", celsius: 40, value: 0.64 - 15 * 0.83e-3, tolerance: 0.005, source: "Bratsch 1989, dE°/dT of Hg2SO4/Hg −0.83 mV/K, applied to the saturated K2SO4 value (from memory)", independent: false },
+];
+
+describe("reference electrodes vs SHE", () => {
+  for (const c of [...at25, ...otherTemperature]) {
+    it(`${c.id} at ${c.celsius} °C${c.pH === undefined ? "" : `, pH ${c.pH}`} is ${c.value.toFixed(4)} V within ${c.tolerance * 1000} mV (${c.source})`, () => {
+      const e = byId(c.id);
+      const got = table.potential(e, c.celsius, c.pH);
+      expect(Math.abs(got - c.value)).toBeLessThanOrEqual(c.tolerance);
+    });
+  }
+
+  // No published value at a second temperature was at hand for these; their temperature dependence is derived
+  // (see the records' notes) and is not checked against an outside source.
+  it.todo("AgCl-3.5M at a second temperature against a published table");
+  it.todo("AgCl-3M at a second temperature against a published table");
+  it.todo("AgCl-sea at a second temperature against cathodic-protection practice");
+
+  it("prints the residuals", () => {
+    const lines = [...at25, ...otherTemperature].map((c) => {
+      const r = table.potential(byId(c.id), c.celsius, c.pH) - c.value;
+      return `${c.id}@${c.celsius}°C: ${(r * 1000).toFixed(1)} mV${c.independent ? "" : " (same formula)"}`;
+    });
+    console.log(lines.join("\n"));
+    expect(lines.length).toBe(at25.length + otherTemperature.length);
+  });
+
+  it("every electrode of GUIDE §3 is in the data, each citing its sources", () => {
+    const ids = ["SHE", "SCE", "AgCl-sat", "AgCl-3.5M", "AgCl-3M", "AgCl-1M", "AgCl-sea", "CSE", "MSE", "HgO-1M", "RHE"];
+    expect(table.all().map((e) => e.id).sort()).toEqual([...ids].sort());
+    for (const e of table.all()) {
+      expect(e.citation.length).toBeGreaterThan(10);
+      expect(e.temperatureCitation.length).toBeGreaterThan(10);
+    }
+  });
+});
+
+describe("names", () => {
+  it.each([
+    ["sce", "SCE"],
+    ["Calomel", "SCE"],
+    ["Ag/AgCl sat", "AgCl-sat"],
+    ["ag/agcl SAT KCl", "AgCl-sat"],
+    ["SSC", "AgCl-sat"],
+    ["Ag/AgCl 3 M", "AgCl-3M"],
+    ["agcl-3.5m", "AgCl-3.5M"],
+    ["Ag/AgCl seawater", "AgCl-sea"],
+    ["copper sulfate", "CSE"],
+    ["Cu/CuSO4", "CSE"],
+    ["Hg/Hg2SO4", "MSE"],
+    ["Hg/HgO", "HgO-1M"],
+    ["nhe", "SHE"],
+    ["rhe", "RHE"],
+  ])("%s → %s", (name, id) => {
+    const found = table.lookup(name);
+    expect("electrode" in found && found.electrode.id).toBe(id);
+  });
+
+  it("a bare Ag/AgCl is ambiguous and the message lists the fillings", () => {
+    const found = table.lookup("Ag/AgCl");
+    expect("error" in found && found.error).toContain("AgCl-3M");
+  });
+});
+
+describe("conversions", () => {
+  it("toSHE and fromSHE are inverse and use the electrode offset", () => {
+    expect(toSHE(-0.5, "SCE", 25)).toBeCloseTo(-0.5 + 0.2412, 12);
+    expect(fromSHE(toSHE(-0.72, "CSE", 12), "CSE", 12)).toBeCloseTo(-0.72, 12);
+    expect(fromSHE(0, "RHE", 25, 14)).toBeCloseTo(14 * 0.059159, 5);
+  });
+
+  it("−0.85 V vs CSE is about −0.53 V vs SHE and −0.78 V vs Ag/AgCl/seawater", () => {
+    // source: common practice in cathodic protection: −0.85 V CSE ≈ −0.80 V Ag/AgCl(seawater) within a few tens of mV
+    const she = toSHE(-0.85, "CSE");
+    expect(she).toBeCloseTo(-0.534, 3);
+    expect(Math.abs(fromSHE(she, "AgCl-sea") - -0.8)).toBeLessThan(0.03);
+  });
+
+  it("REDOX.TOSHE / FROMSHE: RHE without pH is #VALUE! naming pH", () => {
+    const out = toSHEAt(0.1, "RHE")[0][0] as CellError;
+    expect(out.code).toBe("#VALUE!");
+    expect(out.message).toMatch(/^pH:/);
+    expect(toSHEAt(0.1, "RHE", 25, 7)[0][0] as number).toBeCloseTo(0.1 - 0.414, 3);
+  });
+
+  it("REDOX.TOSHE: temperature outside an electrode's range is #NUM! naming temperature", () => {
+    const out = toSHEAt(0.1, "SCE", 90)[0][0] as CellError;
+    expect(out.code).toBe("#NUM!");
+    expect(out.message).toMatch(/^temperature:.*SCE/);
+  });
+
+  it("REDOX.FROMSHE: unknown electrode is #VALUE! naming electrode; ranges broadcast", () => {
+    const bad = fromSHEAt(0.1, "XYZ")[0][0] as CellError;
+    expect(bad.code).toBe("#VALUE!");
+    expect(bad.message).toMatch(/^electrode:/);
+    const grid = fromSHEAt([[0.5], [0.6]], [["SCE", "AgCl-3M", "CSE"]]);
+    expect(grid.length).toBe(2);
+    expect(grid[1].length).toBe(3);
+    expect(grid[1][2] as number).toBeCloseTo(0.6 - 0.316, 12);
+  });
+});
+
+describe("validation at load", () => {
+  const clone = () => JSON.parse(JSON.stringify(electrodesJson));
+
+  it("accepts the shipped file", () => {
+    expect(() => new ElectrodeTable(clone())).not.toThrow();
+  });
+
+  it("rejects a record without its 25 °C potential, naming the field", () => {
+    const bad = clone();
+    delete bad.electrodes[1].e25;
+    expect(() => new ElectrodeTable(bad)).toThrow(/electrodes\.1\.e25/);
+  });
+
+  it("rejects a name shared by two electrodes", () => {
+    const bad = clone();
+    bad.electrodes[2].aliases.push("calomel");
+    expect(() => new ElectrodeTable(bad)).toThrow(ElectrodeError);
+  });
+
+  it("rejects a source key missing from references", () => {
+    const bad = clone();
+    bad.electrodes[0].source = "nowhere";
+    expect(() => new ElectrodeTable(bad)).toThrow(/nowhere/);
+  });
+});
