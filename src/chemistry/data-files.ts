@@ -19,6 +19,9 @@ import ti from "../../data/species/ti.json";
 import ag from "../../data/species/ag.json";
 import cd from "../../data/species/cd.json";
 import mo from "../../data/species/mo.json";
+import carbonate from "../../data/species/carbonate.json";
+import sulfur from "../../data/species/sulfur.json";
+import chloride from "../../data/species/chloride.json";
 
 export const ELEMENTS_FILE: DataFile = { path: "data/elements.json", content: elements };
 
@@ -39,4 +42,7 @@ export const DATA_FILES: readonly DataFile[] = [
   { path: "data/species/ag.json", content: ag },
   { path: "data/species/cd.json", content: cd },
   { path: "data/species/mo.json", content: mo },
+  { path: "data/species/carbonate.json", content: carbonate },
+  { path: "data/species/sulfur.json", content: sulfur },
+  { path: "data/species/chloride.json", content: chloride },
 ];
