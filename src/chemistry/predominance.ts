@@ -3,7 +3,8 @@
  * polygons (the cells of the lower envelope of the planes), and the dissolved metal in equilibrium with a solid.
  */
 import { FARADAY, GAS_CONSTANT } from "./constants";
-import { clipPolygon, HalfPlane, intervalOnVertical, Point, polygonArea, rectangle } from "./halfplane";
+import { envelopeRegions } from "./envelope";
+import { clipPolygon, intervalOnVertical, Point, polygonArea, rectangle } from "./halfplane";
 import { cellAt, dominantSpecies, MetalSystem, PlaneCell } from "./system";
 
 /** Potentials searched for boundaries, V vs SHE (GUIDE §3: #N/A when none in −3…+3 V). */
@@ -124,23 +125,8 @@ export function diagramRegions(system: MetalSystem, window: DiagramWindow): Regi
     let cellPolygon: Point[] = box;
     for (const h of cell.region) cellPolygon = clipPolygon(cellPolygon, h);
     if (Math.abs(polygonArea(cellPolygon)) <= scale * 1e-15) continue;
-    const n = cell.a.length;
-    for (let i = 0; i < n; i++) {
-      if (!Number.isFinite(cell.a[i])) continue;
-      let polygon: Point[] = cellPolygon;
-      for (let j = 0; j < n && polygon.length > 2; j++) {
-        if (j === i || !Number.isFinite(cell.a[j])) continue;
-        const h: HalfPlane = { a: cell.a[i] - cell.a[j], b: cell.b[i] - cell.b[j], c: cell.c[i] - cell.c[j] };
-        if (h.b === 0 && h.c === 0) {
-          // identical planes in E and pH: the lower index keeps the region (as dominantSpecies does)
-          if (h.a > 0 || (h.a === 0 && j < i)) polygon = [];
-          continue;
-        }
-        polygon = clipPolygon(polygon, h);
-      }
-      if (polygon.length > 2 && Math.abs(polygonArea(polygon)) > scale * 1e-15) {
-        regions.push({ species: i, formula: system.species[i].formula, vertices: polygon });
-      }
+    for (const piece of envelopeRegions(cell, cellPolygon, scale * 1e-15)) {
+      regions.push({ species: piece.species, formula: system.species[piece.species].formula, vertices: piece.vertices });
     }
   }
   return regions;

@@ -15,7 +15,8 @@
 import { FARADAY, GAS_CONSTANT, kelvin, MAX_CELSIUS, MIN_CELSIUS, nernstFactor } from "./constants";
 import { Database, Species } from "./database";
 import { rational, Rational } from "./exact";
-import { HalfPlane, insideAll } from "./halfplane";
+import { envelopeRegions } from "./envelope";
+import { clipPolygon, HalfPlane, insideAll, Point, rectangle } from "./halfplane";
 import { balanceWith } from "./reaction";
 import { ELECTRON, gibbsAt, reactionProperties } from "./thermo";
 
@@ -49,7 +50,17 @@ export interface PlaneCell {
   readonly aUnit: Float64Array;
   /** The ligand basis species of this cell, for labels and captions. */
   readonly ligands: readonly LigandBasis[];
+  /**
+   * Species that are dominant somewhere in this cell for pH within PRUNE_PH_MIN…PRUNE_PH_MAX (any potential in
+   * ±PRUNE_E_LIMIT V): the only candidates a point there needs to compare.
+   */
+  readonly active: Int32Array;
 }
+
+/** The pH domain the worksheet functions accept (GUIDE §3), and a potential span far beyond any use. */
+export const PRUNE_PH_MIN = -2;
+export const PRUNE_PH_MAX = 16;
+export const PRUNE_E_LIMIT = 1000;
 
 export interface MetalSystem {
   readonly element: string;
@@ -152,10 +163,19 @@ export function buildSystem(
       b[i] = (-cProton * k) / x;
       c[i] = -cElectron / x;
     });
-    return { region: cell.region, a, b, c, aUnit, ligands: cell.ligands };
+    return { region: cell.region, a, b, c, aUnit, ligands: cell.ligands, active: activeSpecies(cell.region, a, b, c, aUnit) };
   });
 
   return { element, celsius: options.celsius, kelvin: T, activity: options.activity, species, cells, metalIndex };
+}
+
+/** Indices of the species with a region of positive area in the pruning window of a cell. */
+function activeSpecies(region: readonly HalfPlane[], a: Float64Array, b: Float64Array, c: Float64Array, aUnit: Float64Array): Int32Array {
+  let area: Point[] = rectangle(PRUNE_PH_MIN, PRUNE_PH_MAX, -PRUNE_E_LIMIT, PRUNE_E_LIMIT);
+  for (const h of region) area = clipPolygon(area, h);
+  const all = { region, a, b, c, aUnit, ligands: [], active: new Int32Array(0) };
+  const pieces = area.length > 2 ? envelopeRegions(all, area, 0) : [];
+  return Int32Array.from(new Set(pieces.map((p) => p.species))).sort();
 }
 
 /** The cell containing (pH, E); the first one when on a seam. */
@@ -172,9 +192,26 @@ export function speciesPotential(system: MetalSystem, i: number, pH: number, E: 
   return cell.a[i] + cell.b[i] * pH + cell.c[i] * E;
 }
 
-/** Index of the dominant species (lowest g) at (pH, E); ties go to the lower index. */
+/**
+ * Index of the dominant species (lowest g) at (pH, E); ties go to the lower index. Inside the pruning window only
+ * the cell's active species are compared (the others are never lowest there).
+ */
 export function dominantSpecies(system: MetalSystem, pH: number, E: number): number {
-  const { a, b, c } = cellAt(system, pH, E);
+  const cell = cellAt(system, pH, E);
+  const { a, b, c, active } = cell;
+  if (pH >= PRUNE_PH_MIN && pH <= PRUNE_PH_MAX && E >= -PRUNE_E_LIMIT && E <= PRUNE_E_LIMIT && active.length > 0) {
+    let best = active[0];
+    let bestG = a[best] + b[best] * pH + c[best] * E;
+    for (let k = 1, n = active.length; k < n; k++) {
+      const i = active[k];
+      const g = a[i] + b[i] * pH + c[i] * E;
+      if (g < bestG) {
+        bestG = g;
+        best = i;
+      }
+    }
+    return best;
+  }
   let best = 0;
   let bestG = a[0] + b[0] * pH + c[0] * E;
   for (let i = 1, n = a.length; i < n; i++) {
@@ -194,21 +231,34 @@ export function dominantSpecies(system: MetalSystem, pH: number, E: number): num
 export function dominantSpeciesBatch(system: MetalSystem, pH: Float64Array, E: Float64Array, out: Int32Array): Int32Array {
   const rows = pH.length;
   if (system.cells.length === 1) {
-    const { a, b, c } = system.cells[0];
-    const n = a.length;
+    const { a, b, c, active } = system.cells[0];
+    // the active species' planes, packed contiguously
+    const m = active.length;
+    const pa = new Float64Array(m);
+    const pb = new Float64Array(m);
+    const pc = new Float64Array(m);
+    for (let k = 0; k < m; k++) {
+      pa[k] = a[active[k]];
+      pb[k] = b[active[k]];
+      pc[k] = c[active[k]];
+    }
     for (let r = 0; r < rows; r++) {
       const p = pH[r];
       const e = E[r];
+      if (!(p >= PRUNE_PH_MIN && p <= PRUNE_PH_MAX && e >= -PRUNE_E_LIMIT && e <= PRUNE_E_LIMIT) || m === 0) {
+        out[r] = dominantSpecies(system, p, e);
+        continue;
+      }
       let best = 0;
-      let bestG = a[0] + b[0] * p + c[0] * e;
-      for (let i = 1; i < n; i++) {
-        const g = a[i] + b[i] * p + c[i] * e;
+      let bestG = pa[0] + pb[0] * p + pc[0] * e;
+      for (let k = 1; k < m; k++) {
+        const g = pa[k] + pb[k] * p + pc[k] * e;
         if (g < bestG) {
           bestG = g;
-          best = i;
+          best = k;
         }
       }
-      out[r] = best;
+      out[r] = active[best];
     }
     return out;
   }

@@ -126,36 +126,28 @@ export function mapCells<A extends unknown[]>(
     }
   }
 
-  // Arguments given as one cell are parsed once.
-  const single: (Parsed<unknown> | undefined)[] = new Array(count);
-  for (let i = 0; i < count; i++) {
-    if (shapes[i].rows === 1 && shapes[i].cols === 1) single[i] = parseCell(specs[i], cellAt(inputs[i], 0, 0));
-  }
+  // Arguments given as one cell are parsed once; ranges are read cell by cell.
+  const constant: boolean[] = shapes.map((s) => s.rows === 1 && s.cols === 1);
+  const constantValue: Parsed<unknown>[] = specs.map((spec, i) => (constant[i] ? parseCell(spec, cellAt(inputs[i], 0, 0)) : undefined));
+  const rowStep: number[] = shapes.map((s) => (s.rows === 1 ? 0 : 1));
+  const colStep: number[] = shapes.map((s) => (s.cols === 1 ? 0 : 1));
 
-  const args = new Array<unknown>(count);
+  const args: unknown[] = specs.map(() => undefined);
   const result: CellOutput[][] = new Array(rows);
   for (let r = 0; r < rows; r++) {
     const row: CellOutput[] = new Array(cols);
     for (let c = 0; c < cols; c++) {
-      let outcome: CellOutput | undefined;
+      let blank = false;
+      let error: CellError | undefined;
       for (let i = 0; i < count; i++) {
-        const s = shapes[i];
-        const parsed =
-          single[i] !== undefined || (s.rows === 1 && s.cols === 1)
-            ? single[i]
-            : parseCell(specs[i], cellAt(inputs[i], s.rows === 1 ? 0 : r, s.cols === 1 ? 0 : c));
-        if (parsed === BLANK) {
-          outcome ??= "";
-          continue;
-        }
-        if (parsed instanceof CellError) {
-          // the first error in argument order wins over blanks
-          if (outcome === undefined || outcome === "") outcome = parsed;
-          continue;
-        }
-        args[i] = parsed;
+        const parsed = constant[i]
+          ? constantValue[i]
+          : parseCell(specs[i], (inputs[i] as CellScalar[][])[r * rowStep[i]][c * colStep[i]]);
+        if (parsed === BLANK) blank = true;
+        else if (parsed instanceof CellError) error ??= parsed; // the first error in argument order wins over blanks
+        else args[i] = parsed;
       }
-      row[c] = finish(outcome ?? safeCompute(compute, args as A));
+      row[c] = error ? toHostError(error) : blank ? "" : finish(safeCompute(compute, args as A));
     }
     result[r] = row;
   }

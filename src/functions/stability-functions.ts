@@ -14,14 +14,26 @@ import { CellInput, CellOutput, notAvailable, numError, toHostError, valueError 
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 
 let cache: SystemCache | undefined;
-let last: { element: string; celsius: number; activity: number; system: MetalSystem } | undefined;
+/** Systems by element → temperature → activity, in front of the bounded cache: no key strings per row. */
+let recent = new Map<string, Map<number, Map<number, MetalSystem>>>();
+let recentCount = 0;
 
-/** The system for (element, T, activity); consecutive rows with the same conditions skip the cache lookup. */
+/** The system for (element, T, activity); rows with conditions seen recently skip the cache's key building. */
 function systemFor(element: string, celsius: number, activity: number): MetalSystem {
-  if (last && last.element === element && last.celsius === celsius && last.activity === activity) return last.system;
+  const found = recent.get(element)?.get(celsius)?.get(activity);
+  if (found) return found;
   cache ??= new SystemCache(getDatabase());
   const system = cache.get(element, celsius, activity);
-  last = { element, celsius, activity, system };
+  if (recentCount >= 64) {
+    recent = new Map();
+    recentCount = 0;
+  }
+  let byCelsius = recent.get(element);
+  if (!byCelsius) recent.set(element, (byCelsius = new Map()));
+  let byActivity = byCelsius.get(celsius);
+  if (!byActivity) byCelsius.set(celsius, (byActivity = new Map()));
+  byActivity.set(activity, system);
+  recentCount++;
   return system;
 }
 
