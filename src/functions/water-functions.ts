@@ -7,7 +7,7 @@ import { kelvin, nernstFactor } from "../chemistry/constants";
 import { ehFromPe, peFromEh } from "../chemistry/pe";
 import { neutralPH, WaterGas, waterLine, waterMargin } from "../chemistry/water";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellInput, CellOutput, valueError } from "./cell-values";
+import { CellInput, CellOutput, numError, valueError } from "./cell-values";
 import { pHArg, potentialArg, temperatureArg } from "./common-args";
 
 const GAS_NAMES: Readonly<Record<string, WaterGas>> = { o2: "O2", oxygen: "O2", h2: "H2", hydrogen: "H2" };
@@ -38,12 +38,18 @@ export function waterMarginAt(pH: CellInput, potential: CellInput, temperature?:
 
 /** REDOX.PE(potential, [temperature]) → pe. */
 export function peAt(potential: CellInput, temperature?: CellInput): CellOutput[][] {
-  return mapCells([potentialArg(), temperatureArg], [potential, temperature], (e, t) => peFromEh(e, t));
+  return mapCells([potentialArg(), temperatureArg], [potential, temperature], (e, t) => {
+    const x = peFromEh(e, t);
+    return Number.isFinite(x) ? x : numError(`potential: ${e} V is too large to express as pe`);
+  });
 }
 
 /** REDOX.EH(pe, [temperature]) → V vs SHE. */
 export function ehAt(pe: CellInput, temperature?: CellInput): CellOutput[][] {
-  return mapCells([peArg, temperatureArg], [pe, temperature], (x, t) => ehFromPe(x, t));
+  return mapCells([peArg, temperatureArg], [pe, temperature], (x, t) => {
+    const e = ehFromPe(x, t);
+    return Number.isFinite(e) ? e : numError(`pe: ${x} is too large to express as a potential`);
+  });
 }
 
 /** REDOX.NEUTRALPH([temperature]) → ½ pKw(T). */
