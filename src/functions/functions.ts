@@ -9,6 +9,8 @@
 /* eslint-disable @typescript-eslint/no-explicit-any */
 import { fromSHEAt, toSHEAt } from "./electrode-functions";
 import { ehAt, neutralPHAt, peAt, slopeAt, waterLineAt, waterMarginAt } from "./water-functions";
+import { boundaryFrom, coupleAt, dissolvedAt, regimeAt, speciesAt, speciesTable } from "./stability-functions";
+import { dicAt } from "./carbonate-functions";
 
 /**
  * Potential of a water stability line, V vs SHE: the O2/H2O line (gas "O2", default) above which water is oxidised
@@ -106,6 +108,113 @@ export function slope(temperature?: any[][]): any[][] {
   return slopeAt(temperature);
 }
 
+/**
+ * Dominant (thermodynamically stable) form of a metal at a pH and potential, e.g. Fe2O3(s), Cu2+, Zn(s), and with ligands PbCO3(s), Cu2S(s). Thermodynamics only: what can form, not how fast.
+ * @customfunction SPECIES
+ * @param {any[][]} element Metal symbol or name: Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo.
+ * @param {any[][]} pH pH, from -2 to 16.
+ * @param {any[][]} potential Potential in volts vs SHE (convert meter readings with REDOX.TOSHE).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [activity] Activity of dissolved metal species, above 0 and at most 10. Default 1e-6.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals by predominance: in each region the ligand's predominant form carries its whole total (an approximation, off by up to 0.3 log units next to a ligand boundary).
+ * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
+ * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @returns {any[][]} Formula of the dominant species.
+ */
+export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][]): any[][] {
+  return speciesAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur);
+}
+
+/**
+ * Corrosion regime at a pH and potential: immunity (the metal is stable), passivation (a solid compound is stable) or corrosion (a dissolved species is stable).
+ * @customfunction REGIME
+ * @param {any[][]} element Metal symbol or name.
+ * @param {any[][]} pH pH, from -2 to 16.
+ * @param {any[][]} potential Potential in volts vs SHE.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals by predominance: in each region the ligand's predominant form carries its whole total (an approximation, off by up to 0.3 log units next to a ligand boundary).
+ * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
+ * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @returns {any[][]} immunity, passivation or corrosion.
+ */
+export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][]): any[][] {
+  return regimeAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur);
+}
+
+/**
+ * Potential (V vs SHE) of the nearest stability boundary above or below the point at its pH; #N/A when none lies between -3 and +3 V.
+ * @customfunction BOUNDARY
+ * @param {any[][]} element Metal symbol or name.
+ * @param {any[][]} pH pH, from -2 to 16.
+ * @param {any[][]} potential Potential in volts vs SHE.
+ * @param {any[][]} [direction] 1 for the boundary above (default), -1 for the one below.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals by predominance: in each region the ligand's predominant form carries its whole total (an approximation, off by up to 0.3 log units next to a ligand boundary).
+ * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
+ * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @returns {any[][]} Potential of the boundary in volts vs SHE.
+ */
+export function boundary(element: any[][], pH: any[][], potential: any[][], direction?: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][]): any[][] {
+  return boundaryFrom(element, pH, potential, direction, temperature, activity, carbonate, chloride, sulfur);
+}
+
+/**
+ * Equilibrium potential (V vs SHE) of the half-reaction between two species, balanced automatically with H2O, H+ and electrons; #N/A when both have the same oxidation state.
+ * @customfunction COUPLE
+ * @param {any[][]} oxidized Formula of the oxidized species, e.g. Fe3+ or Fe2O3(s).
+ * @param {any[][]} reduced Formula of the reduced species, e.g. Fe2+ or Fe(s).
+ * @param {any[][]} pH pH, from -2 to 16.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [activity] Activity of the dissolved species. Default 1e-6.
+ * @returns {any[][]} Equilibrium potential in volts vs SHE.
+ */
+export function couple(oxidized: any[][], reduced: any[][], pH: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return coupleAt(oxidized, reduced, pH, temperature, activity);
+}
+
+/**
+ * Total dissolved metal (free ion, hydroxo, carbonato and chloro complexes) in equilibrium with the solid that is stable at the point (ideal dilute solution); #N/A where a dissolved species is dominant. A thermodynamic estimate, not a substitute for laboratory analysis of lead or copper in drinking water.
+ * @customfunction DISSOLVED
+ * @param {any[][]} element Metal symbol or name.
+ * @param {any[][]} pH pH, from -2 to 16.
+ * @param {any[][]} potential Potential in volts vs SHE.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [unit] mol/kg (default), mg/L or ug/L.
+ * @param {any[][]} [activity] Activity threshold deciding which species is dominant. Default 1e-6.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals by predominance: in each region the ligand's predominant form carries its whole total (an approximation, off by up to 0.3 log units next to a ligand boundary).
+ * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
+ * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @returns {any[][]} Dissolved metal in the chosen unit.
+ */
+export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], unit?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][]): any[][] {
+  return dissolvedAt(element, pH, potential, temperature, unit, activity, carbonate, chloride, sulfur);
+}
+
+/**
+ * Table of a metal's species with a header row: formula, state, name, Gibbs energy of formation at the temperature (kJ/mol) and data source.
+ * @customfunction SPECIESTABLE
+ * @param {any[][]} element Metal symbol or name.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @returns {any[][]} The table; it spills.
+ */
+export function speciestable(element: any[][], temperature?: any[][]): any[][] {
+  return speciesTable(element, temperature);
+}
+
+/**
+ * Total dissolved inorganic carbon (mol/kg) from total alkalinity and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. Meaningful above the alkalinity end point, pH about 4.5.
+ * @customfunction DIC
+ * @param {any[][]} alkalinity Total alkalinity in mg/L as CaCO3, 0 or more.
+ * @param {any[][]} pH pH, from -2 to 16.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @returns {any[][]} Dissolved inorganic carbon in mol/kg.
+ */
+export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): any[][] {
+  return dicAt(alkalinity, pH, temperature);
+}
+
 if (typeof CustomFunctions !== "undefined") {
   CustomFunctions.associate("WATERLINE", waterline);
   CustomFunctions.associate("WATERMARGIN", watermargin);
@@ -115,4 +224,11 @@ if (typeof CustomFunctions !== "undefined") {
   CustomFunctions.associate("EH", eh);
   CustomFunctions.associate("NEUTRALPH", neutralph);
   CustomFunctions.associate("SLOPE", slope);
+  CustomFunctions.associate("SPECIES", species);
+  CustomFunctions.associate("REGIME", regime);
+  CustomFunctions.associate("BOUNDARY", boundary);
+  CustomFunctions.associate("COUPLE", couple);
+  CustomFunctions.associate("DISSOLVED", dissolved);
+  CustomFunctions.associate("SPECIESTABLE", speciestable);
+  CustomFunctions.associate("DIC", dic);
 }

@@ -12,6 +12,9 @@ import { dominantSpecies, MetalSystem } from "../chemistry/system";
 import { mapCells, numberArg, textArg } from "./broadcast";
 import { CellInput, CellOutput, notAvailable, numError, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
+import { ligandKey, LigandTotals } from "../chemistry/ligand-cells";
+import { buildLigandSystem } from "../chemistry/ligand-system";
+import { carbonateArg, chlorideArg, sulfurArg } from "./ligand-args";
 
 let cache: SystemCache | undefined;
 /** Systems by element → temperature → activity, in front of the bounded cache: no key strings per row. */
@@ -39,18 +42,55 @@ function systemFor(element: string, celsius: number, activity: number): MetalSys
 
 const directionArg = numberArg("direction", { optional: true, defaultValue: 1 });
 
-export function speciesAt(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][] {
-  return mapCells([elementArg, pHArg, potentialArg(), temperatureArg, activityArg], [element, pH, potential, temperature, activity], (el, p, e, t, a) => {
-    const system = systemFor(el, t, a);
-    return system.species[dominantSpecies(system, p, e)].formula;
-  });
+/**
+ * The system for a water with ligand totals (mol/kg, 0 = absent). With none present this is systemFor itself (the
+ * ligand-free path); otherwise the ligand cells are built once per condition through the same cache.
+ */
+function systemInWater(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number): MetalSystem {
+  if (carbonate === 0 && chloride === 0 && sulfur === 0) return systemFor(element, celsius, activity);
+  const totals: LigandTotals = { carbonate, chloride, sulfur };
+  cache ??= new SystemCache(getDatabase());
+  return cache.get(element, celsius, activity, ligandKey(totals), () => buildLigandSystem(getDatabase(), element, { celsius, activity }, totals));
 }
 
-export function regimeAt(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][] {
-  return mapCells([elementArg, pHArg, potentialArg(), temperatureArg, activityArg], [element, pH, potential, temperature, activity], (el, p, e, t, a) => {
-    const system = systemFor(el, t, a);
-    return system.species[dominantSpecies(system, p, e)].regime;
-  });
+export function speciesAt(
+  element: CellInput,
+  pH: CellInput,
+  potential: CellInput,
+  temperature?: CellInput,
+  activity?: CellInput,
+  carbonate?: CellInput,
+  chloride?: CellInput,
+  sulfur?: CellInput,
+): CellOutput[][] {
+  return mapCells(
+    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
+    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur],
+    (el, p, e, t, a, co3, cl, s) => {
+      const system = systemInWater(el, t, a, co3, cl, s);
+      return system.species[dominantSpecies(system, p, e)].formula;
+    },
+  );
+}
+
+export function regimeAt(
+  element: CellInput,
+  pH: CellInput,
+  potential: CellInput,
+  temperature?: CellInput,
+  activity?: CellInput,
+  carbonate?: CellInput,
+  chloride?: CellInput,
+  sulfur?: CellInput,
+): CellOutput[][] {
+  return mapCells(
+    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
+    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur],
+    (el, p, e, t, a, co3, cl, s) => {
+      const system = systemInWater(el, t, a, co3, cl, s);
+      return system.species[dominantSpecies(system, p, e)].regime;
+    },
+  );
 }
 
 export function boundaryFrom(
@@ -60,13 +100,16 @@ export function boundaryFrom(
   direction?: CellInput,
   temperature?: CellInput,
   activity?: CellInput,
+  carbonate?: CellInput,
+  chloride?: CellInput,
+  sulfur?: CellInput,
 ): CellOutput[][] {
   return mapCells(
-    [elementArg, pHArg, potentialArg(), directionArg, temperatureArg, activityArg],
-    [element, pH, potential, direction, temperature, activity],
-    (el, p, e, d, t, a) => {
+    [elementArg, pHArg, potentialArg(), directionArg, temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
+    [element, pH, potential, direction, temperature, activity, carbonate, chloride, sulfur],
+    (el, p, e, d, t, a, co3, cl, s) => {
       if (d !== 1 && d !== -1) return numError("direction: expected 1 (above) or -1 (below)");
-      const crossing = nearestBoundary(systemFor(el, t, a), p, e, d);
+      const crossing = nearestBoundary(systemInWater(el, t, a, co3, cl, s), p, e, d);
       return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
     },
   );
@@ -121,12 +164,15 @@ export function dissolvedAt(
   temperature?: CellInput,
   unit?: CellInput,
   activity?: CellInput,
+  carbonate?: CellInput,
+  chloride?: CellInput,
+  sulfur?: CellInput,
 ): CellOutput[][] {
   return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, unitArg, activityArg],
-    [element, pH, potential, temperature, unit, activity],
-    (el, p, e, t, u, a) => {
-      const system = systemFor(el, t, a);
+    [elementArg, pHArg, potentialArg(), temperatureArg, unitArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
+    [element, pH, potential, temperature, unit, activity, carbonate, chloride, sulfur],
+    (el, p, e, t, u, a, co3, cl, s) => {
+      const system = systemInWater(el, t, a, co3, cl, s);
       const result = dissolvedAtPoint(system, p, e);
       if (!result) return notAvailable("a dissolved species is dominant here: no solid is stable");
       const weight = getDatabase().element(el)?.atomicWeight ?? NaN;

@@ -1,0 +1,48 @@
+/**
+ * Dissolved inorganic carbon from total alkalinity and pH (the numbers a water laboratory reports).
+ *
+ * Total alkalinity, charge balance of the proton acceptors (e.g. Stumm & Morgan, Aquatic Chemistry, 3rd ed. 1996,
+ * §4.5):   Alk = [HCO3−] + 2[CO3²−] + [OH−] − [H+]
+ * With the fractions of the carbonate species α1 = K1·h / D, α2 = K1·K2 / D, D = h² + K1·h + K1·K2 (h = 10^−pH):
+ *
+ *   DIC = (Alk − Kw/h + h) / (α1 + 2·α2)
+ *
+ * Approximations, stated: ideal dilute solution (activity coefficients 1, so mol/L ≈ mol/kg and the measured pH is
+ * taken as −log [H+]); other proton acceptors (borate, silicate, phosphate, organic acids) counted as carbonate.
+ * Alkalinity in mg/L as CaCO3 (the utility unit): 1 meq/L = 50.04 mg/L as CaCO3 (half the molar mass of CaCO3,
+ * 100.087 g/mol). K1, K2 from Plummer & Busenberg (1982) (carbonic-acid.ts); Kw from the water records (water.ts).
+ */
+import { carbonicPK1, carbonicPK2 } from "./carbonic-acid";
+import { Database, getDatabase } from "./database";
+import { pKw } from "./water";
+
+/** Grams of CaCO3 per equivalent: ½ × 100.087 g/mol (IUPAC atomic weights; common practice for "as CaCO3"). */
+export const CACO3_GRAMS_PER_EQUIVALENT = 100.087 / 2;
+
+export class AlkalinityError extends Error {}
+
+/** Total alkalinity (mg/L as CaCO3) → equivalents per kg (dilute water, 1 L ≈ 1 kg). */
+export function alkalinityEquivalents(mgPerLitreAsCaCO3: number): number {
+  return mgPerLitreAsCaCO3 / (CACO3_GRAMS_PER_EQUIVALENT * 1000);
+}
+
+/**
+ * Total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3), pH and temperature (°C).
+ * Throws AlkalinityError when the carbonate alkalinity Alk − [OH−] + [H+] is not positive (hydroxide alone exceeds
+ * the total alkalinity): no carbonate water matches that pair of numbers. Meaningful above the titration end point
+ * (pH ≈ 4.5); below it the result grows without bound as α1 + 2α2 → 0.
+ */
+export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, db: Database = getDatabase()): number {
+  const h = 10 ** -pH;
+  const k1 = 10 ** -carbonicPK1(celsius);
+  const k2 = 10 ** -carbonicPK2(celsius);
+  const oh = 10 ** -pKw(celsius, db) / h;
+  const carbonateAlkalinity = alkalinityEquivalents(alkalinityMgL) - oh + h;
+  if (!(carbonateAlkalinity > 0)) {
+    throw new AlkalinityError(`the carbonate alkalinity is not positive at pH ${pH} (hydroxide exceeds the total alkalinity)`);
+  }
+  const d = h * h + k1 * h + k1 * k2;
+  const alpha1 = (k1 * h) / d;
+  const alpha2 = (k1 * k2) / d;
+  return carbonateAlkalinity / (alpha1 + 2 * alpha2);
+}

@@ -1,0 +1,22 @@
+/**
+ * REDOX.DIC: total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3), pH and temperature —
+ * the number to give the [carbonate] argument of the stability functions. Chemistry in src/chemistry/alkalinity.ts.
+ */
+import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
+import { mapCells, numberArg } from "./broadcast";
+import { CellInput, CellOutput, numError } from "./cell-values";
+import { pHArg, temperatureArg } from "./common-args";
+
+/** Total alkalinity, mg/L as CaCO3: ≥ 0; 100 000 mg/L (2 eq/L) is far beyond any natural or process water. */
+const alkalinityArg = numberArg("alkalinity", { min: 0, max: 100000, unit: "mg/L as CaCO3" });
+
+export function dicAt(alkalinity: CellInput, pH: CellInput, temperature?: CellInput): CellOutput[][] {
+  return mapCells([alkalinityArg, pHArg, temperatureArg], [alkalinity, pH, temperature], (alk, p, t) => {
+    try {
+      return dicFromAlkalinity(alk, p, t);
+    } catch (error) {
+      if (error instanceof AlkalinityError) return numError(`alkalinity, pH: ${error.message}`);
+      throw error;
+    }
+  });
+}
