@@ -1,0 +1,135 @@
+// Writes data/demo/demo-workbook.xlsx: the INVENTED demo log (data/demo/sample-log.csv) on a sheet, with REDOX
+// formulas filled down in result columns — potential vs SHE (REDOX.TOSHE), water margin, and for the pipe metal of
+// each site the dominant species, regime, nearest boundaries above and below, and dissolved metal. A second sheet
+// says what the workbook is. Open it in Excel with the Redox Cells add-in loaded; formulas recalculate on load.
+//
+// Usage: npx tsx scripts/generate-demo-workbook.ts [input.csv] [output.xlsx]
+
+import { readFileSync } from "node:fs";
+import { resolve } from "node:path";
+import ExcelJS from "exceljs";
+import { parse } from "csv-parse/sync";
+
+const input = resolve(process.argv[2] ?? "data/demo/sample-log.csv");
+const output = resolve(process.argv[3] ?? "data/demo/demo-workbook.xlsx");
+
+/** First data row on the sheet: row 1 says the data are invented, row 2 is the header. */
+export const FIRST_ROW = 3;
+
+const NUMBER = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/;
+
+/** A CSV cell as a worksheet cell: numbers as numbers, blanks empty, anything else (typos included) as text. */
+function cellValue(text: string, header: string): ExcelJS.CellValue {
+  if (text.trim() === "") return null;
+  if (header === "date" && /^\d{4}-\d{2}-\d{2}$/.test(text)) return new Date(`${text}T00:00:00Z`);
+  if (NUMBER.test(text) && !["sample_id", "site", "pipe_metal", "pipe_material", "note"].includes(header)) return Number(text);
+  return text;
+}
+
+/** Column letter of a 1-based column number. */
+function letter(n: number): string {
+  let s = "";
+  for (let x = n; x > 0; x = Math.floor((x - 1) / 26)) s = String.fromCharCode(65 + ((x - 1) % 26)) + s;
+  return s;
+}
+
+async function main(): Promise<void> {
+  const records = parse(readFileSync(input, "utf8"), { comment: "#", comment_no_infix: true, skip_empty_lines: true, relax_column_count: true }) as string[][];
+  const [header, ...rows] = records;
+  const col = (name: string): string => {
+    const i = header.indexOf(name);
+    if (i < 0) throw new Error(`${input}: no column "${name}"`);
+    return letter(i + 1);
+  };
+  const metal = col("pipe_metal");
+  const pH = col("pH");
+  const orp = col("ORP_mV_AgCl_sat");
+  const temp = col("temp_C");
+  const first = header.length + 1;
+  const E = letter(first);
+
+  /** Result columns: header and formula for sheet row r (formulas without the leading "="). */
+  const results: Array<[string, (r: number) => string]> = [
+    // readings are in mV against a saturated Ag/AgCl electrode; TOSHE takes volts
+    ["E_SHE_V", (r) => `IF(${orp}${r}="","",REDOX.TOSHE(${orp}${r}/1000,"AgCl-sat",${temp}${r}))`],
+    ["water_margin_V", (r) => `REDOX.WATERMARGIN(${pH}${r},${E}${r},${temp}${r})`],
+    ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r})`],
+    ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r})`],
+    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},1,${temp}${r})`],
+    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},-1,${temp}${r})`],
+    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},"ug/L")`],
+  ];
+
+  const workbook = new ExcelJS.Workbook();
+  workbook.creator = "Redox Cells demo generator";
+  // fixed dates so that regenerating gives the same workbook contents
+  workbook.created = new Date("2026-01-01T00:00:00Z");
+  workbook.modified = new Date("2026-01-01T00:00:00Z");
+  workbook.calcProperties.fullCalcOnLoad = true;
+
+  const sheet = workbook.addWorksheet("Sample log", { views: [{ state: "frozen", xSplit: 4, ySplit: 2 }] });
+  sheet.getCell("A1").value =
+    "INVENTED DEMO DATA — the Brackenholm Water Cooperative and every value here are fictional (scripts/generate-demo-log.ts). Result columns hold REDOX formulas.";
+  sheet.getCell("A1").font = { bold: true, color: { argb: "FF8A3B12" } };
+  const headerRow = sheet.getRow(2);
+  [...header, ...results.map(([h]) => h)].forEach((h, i) => {
+    const cell = headerRow.getCell(i + 1);
+    cell.value = h;
+    cell.font = { bold: true };
+    if (i >= header.length) cell.fill = { type: "pattern", pattern: "solid", fgColor: { argb: "FFE3EEEA" } };
+  });
+
+  rows.forEach((fields, k) => {
+    const r = FIRST_ROW + k;
+    const row = sheet.getRow(r);
+    header.forEach((h, i) => {
+      const value = cellValue(fields[i] ?? "", h);
+      if (value !== null) row.getCell(i + 1).value = value;
+    });
+    results.forEach(([, formula], j) => {
+      row.getCell(first + j).value = { formula: formula(r) } as ExcelJS.CellFormulaValue;
+    });
+  });
+  sheet.getColumn(col("date")).numFmt = "yyyy-mm-dd";
+  header.forEach((h, i) => {
+    sheet.getColumn(i + 1).width = Math.max(9, Math.min(28, h.length + 2));
+  });
+  results.forEach(([h], j) => {
+    sheet.getColumn(first + j).width = Math.max(12, h.length + 2);
+  });
+
+  const about = workbook.addWorksheet("About");
+  const lines = [
+    "Redox Cells demo workbook",
+    "",
+    "INVENTED DATA: the Brackenholm Water Cooperative, its sites and samples are fictional, made up to show the functions at work.",
+    "",
+    "Sheet 'Sample log': one row per sample. ORP is in mV against a saturated Ag/AgCl electrode; the result columns convert it",
+    `to volts vs SHE with REDOX.TOSHE and evaluate the pipe metal named in column ${metal} (pipe_metal) at the sample's pH and temperature:`,
+    "  water_margin_V       REDOX.WATERMARGIN — distance from the water-stability window (positive inside)",
+    "  pipe_species         REDOX.SPECIES — dominant species of the pipe metal",
+    "  pipe_regime          REDOX.REGIME — immunity, passivation or corrosion",
+    "  boundary_above_V     REDOX.BOUNDARY(…, 1, …) — nearest stability boundary above the sample",
+    "  boundary_below_V     REDOX.BOUNDARY(…, -1, …) — nearest stability boundary below",
+    "  pipe_dissolved_ug_L  REDOX.DISSOLVED — dissolved metal in equilibrium with the stable solid, µg/L (#N/A where none is stable)",
+    "",
+    "Some cells are blank or mistyped on purpose (a decimal comma, '7.4.1', 'n/a', '1O.4', '612 mV', pH 17.2): their rows show",
+    "blank results or #VALUE! / #NUM!, as a real log would.",
+    "",
+    "Thermodynamics says which state is stable, not how fast a metal corrodes. For lead and copper in drinking water, confirm",
+    "by laboratory analysis and defer to local codes, regulators and licensed corrosion professionals.",
+  ];
+  lines.forEach((text, i) => {
+    about.getCell(`A${i + 1}`).value = text;
+  });
+  about.getCell("A1").font = { bold: true, size: 14 };
+  about.getColumn(1).width = 120;
+
+  await workbook.xlsx.writeFile(output);
+  console.log(`wrote ${rows.length} rows × ${results.length} formula columns to ${output}`);
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exitCode = 1;
+});

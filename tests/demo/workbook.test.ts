@@ -1,0 +1,180 @@
+// The demo workbook (data/demo/demo-workbook.xlsx, scripts/generate-demo-workbook.ts): every formula parses, calls
+// only functions the built add-in declares (dist/functions.json, namespace REDOX) with an argument count the
+// declaration allows, and — evaluated through the BUILT bundle (tests/bundle/harness.ts) with its cell references
+// resolved to the row's values — gives the values the command line writes for the same rows of the demo log.
+// Needs a build: `npm test` builds first; alone, build to a temporary directory and set REDOX_DIST.
+
+import { mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { PassThrough } from "node:stream";
+import ExcelJS from "exceljs";
+import { parse } from "csv-parse/sync";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { runCommand } from "../../src/cli/run";
+import { callFunction, loadBundle, REPO_ROOT, StandInError, type LoadedBundle, type MetadataFunction } from "../bundle/harness";
+import { calls, evaluate, isError, parseFormula, type Node, type Value } from "./formula";
+
+const WORKBOOK = join(REPO_ROOT, "data/demo/demo-workbook.xlsx");
+const LOG = join(REPO_ROOT, "data/demo/sample-log.csv");
+const NAMESPACE = "REDOX.";
+
+interface FormulaCell {
+  address: string;
+  row: number;
+  column: string;
+  formula: string;
+  ast: Node;
+}
+
+let bundle: LoadedBundle;
+let sheet: ExcelJS.Worksheet;
+const formulas: FormulaCell[] = [];
+let cliRows: Record<string, string>[] = [];
+let tmp: string;
+
+function declared(name: string): MetadataFunction | undefined {
+  if (!name.startsWith(NAMESPACE)) return undefined;
+  const id = name.slice(NAMESPACE.length);
+  return bundle.metadata.functions.find((f) => f.id.toUpperCase() === id || f.name.toUpperCase() === id);
+}
+
+beforeAll(async () => {
+  bundle = loadBundle();
+  const workbook = new ExcelJS.Workbook();
+  await workbook.xlsx.readFile(WORKBOOK);
+  sheet = workbook.getWorksheet("Sample log")!;
+  workbook.eachSheet((ws) => {
+    ws.eachRow((row) => {
+      row.eachCell((cell) => {
+        const value = cell.value as { formula?: string; sharedFormula?: string } | null;
+        if (value && typeof value === "object" && ("formula" in value || "sharedFormula" in value)) {
+          const formula = cell.formula;
+          formulas.push({ address: `${ws.name}!${cell.address}`, row: Number(cell.row), column: cell.address.replace(/\d+$/, ""), formula, ast: parseFormula(formula) });
+        }
+      });
+    });
+  });
+
+  tmp = mkdtempSync(join(tmpdir(), "redox-workbook-"));
+  const out = join(tmp, "results.csv");
+  const sink = new PassThrough();
+  sink.resume();
+  const { code } = await runCommand([LOG, "-o", out, "--no-svg", "--quiet", "--max-messages", "0"], { stdout: sink, stderr: sink });
+  expect([0, 1]).toContain(code);
+  cliRows = parse(readFileSync(out, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
+});
+
+afterAll(() => {
+  if (tmp) rmSync(tmp, { recursive: true, force: true });
+});
+
+describe("demo workbook formulas", () => {
+  it("has formulas in every result column of every data row", () => {
+    expect(formulas.length).toBe(cliRows.length * 7);
+  });
+
+  it("calls only declared REDOX functions (and IF) with argument counts the declarations allow", () => {
+    const problems: string[] = [];
+    const used = new Set<string>();
+    for (const f of formulas) {
+      for (const call of calls(f.ast)) {
+        if (call.name === "IF") {
+          if (call.argCount < 2 || call.argCount > 3) problems.push(`${f.address}: IF with ${call.argCount} arguments`);
+          continue;
+        }
+        const fn = declared(call.name);
+        if (!fn) {
+          problems.push(`${f.address}: ${call.name} is not declared in functions.json`);
+          continue;
+        }
+        used.add(fn.id);
+        const required = fn.parameters.filter((p) => !p.optional).length;
+        if (call.argCount < required || call.argCount > fn.parameters.length) {
+          problems.push(`${f.address}: ${call.name} takes ${required}–${fn.parameters.length} arguments, got ${call.argCount}`);
+        }
+      }
+    }
+    expect(problems).toEqual([]);
+    expect([...used].sort()).toEqual(["BOUNDARY", "DISSOLVED", "REGIME", "SPECIES", "TOSHE", "WATERMARGIN"]);
+  });
+
+  it("evaluated through the built bundle, gives the values the command line writes", async () => {
+    // header row 2 names the columns; the command line's output has the same input columns plus its own
+    const header = new Map<string, string>();
+    sheet.getRow(2).eachCell((cell) => header.set(cell.address.replace(/\d+$/, ""), String(cell.value)));
+    const byAddress = new Map(formulas.map((f) => [f.address.split("!")[1], f]));
+    const memo = new Map<string, Value>();
+
+    const cellValue = (column: string, row: number): Value => {
+      const address = `${column}${row}`;
+      if (memo.has(address)) return memo.get(address)!;
+      const formula = byAddress.get(address);
+      let value: Value;
+      if (formula) value = evaluate(formula.ast, context);
+      else {
+        const raw = sheet.getCell(address).value;
+        value = raw === null || raw === undefined ? null : raw instanceof Date ? raw.getTime() : (raw as number | string);
+      }
+      memo.set(address, value);
+      return value;
+    };
+    const context = {
+      cell: cellValue,
+      callAddin(name: string, args: Value[]): Value {
+        const fn = declared(name)!;
+        const fnImpl = bundle.functions.get(fn.id)!;
+        // the spreadsheet passes every declared parameter, a single cell as a 1×1 range, an omitted one as null
+        const passed = fn.parameters.map((p, i) => (i < args.length ? (p.dimensionality === "matrix" ? [[args[i]]] : args[i]) : null));
+        const out = fnImpl(...passed) as unknown;
+        const cell = Array.isArray(out) ? (out as unknown[][])[0][0] : out;
+        return cell as Value;
+      },
+    };
+
+    // the command line's result column for each workbook result column
+    const counterpart: Record<string, string> = {
+      E_SHE_V: "E_SHE_V",
+      water_margin_V: "water_margin_V",
+      pipe_species: "metal_species",
+      pipe_regime: "metal_regime",
+      boundary_above_V: "metal_boundary_above_V",
+      boundary_below_V: "metal_boundary_below_V",
+      pipe_dissolved_ug_L: "metal_dissolved_ug_L",
+    };
+    const idColumn = [...header].find(([, h]) => h === "sample_id")![0];
+    const cliById = new Map(cliRows.map((r) => [r.sample_id, r]));
+    const mismatches: string[] = [];
+    let compared = 0;
+    let numbers = 0;
+    let errorsSeen = 0;
+    for (const f of formulas) {
+      const columnName = header.get(f.column)!;
+      const sampleId = String(sheet.getCell(`${idColumn}${f.row}`).value);
+      const cli = cliById.get(sampleId);
+      if (!cli) {
+        mismatches.push(`${f.address}: sample ${sampleId} not in the command line's output`);
+        continue;
+      }
+      const expected = cli[counterpart[columnName]];
+      const got = cellValue(f.column, f.row);
+      compared++;
+      if (isError(got)) {
+        errorsSeen++;
+        if (got.code !== expected) mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook ${got.code}, command line ${expected}`);
+      } else if (typeof got === "number") {
+        numbers++;
+        const want = Number(expected);
+        if (!(Math.abs(got - want) <= 1e-9 * Math.max(1, Math.abs(got)))) mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook ${got}, command line ${expected}`);
+      } else if ((got ?? "") !== expected) {
+        mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook "${String(got)}", command line "${expected}"`);
+      }
+    }
+    expect(mismatches.slice(0, 20)).toEqual([]);
+    expect(compared).toBe(formulas.length);
+    // the comparison is not vacuous: most cells are numbers, and the mistyped rows give error values
+    expect(numbers).toBeGreaterThan(cliRows.length * 3);
+    expect(errorsSeen).toBeGreaterThan(0);
+    expect(await callFunction(bundle.functions.get("TOSHE")!, [[[0.5]], [["AgCl-sat"]], null, null])).not.toBeInstanceOf(StandInError);
+  });
+});
