@@ -107,8 +107,8 @@ describe("errors", () => {
   });
 
   it("a failure inside the computation becomes #VALUE!, never a throw", () => {
-    const out = mapCells([x], [1], () => {
-      throw new Error("boom");
+    const out = mapCells([x], [1], (v: number) => {
+      throw new Error(`boom at ${v}`);
     });
     expect(err(out[0][0]).message).toContain("boom");
   });
