@@ -1,0 +1,128 @@
+/**
+ * Properties of the engine with ligands (GUIDE §4): diagram polygons still tile the rectangle; the dominant species
+ * is still the argmin of the planes; a boundary reported changes the species 1 mV either side; hostile ligand
+ * input gives error values, never a throw, NaN or Infinity.
+ */
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { getDatabase } from "../../src/chemistry/database";
+import { Point, polygonArea } from "../../src/chemistry/halfplane";
+import { buildLigandSystem } from "../../src/chemistry/ligand-system";
+import { diagramRegions, nearestBoundary } from "../../src/chemistry/predominance";
+import { dominantSpecies, speciesPotential } from "../../src/chemistry/system";
+import { CellError } from "../../src/functions/cell-values";
+import { boundary, dissolved, regime, species } from "../../src/functions/functions";
+
+const db = getDatabase();
+const metals = db.metals();
+const total = fc.oneof(fc.constant(0), fc.double({ min: -6, max: 0, noNaN: true }).map((l) => 10 ** l));
+const conditions = fc.record({
+  metal: fc.constantFrom(...metals),
+  celsius: fc.double({ min: 0, max: 100, noNaN: true }),
+  logActivity: fc.double({ min: -9, max: 0, noNaN: true }),
+  carbonate: total,
+  chloride: total,
+  sulfur: total,
+});
+const point = fc.record({ pH: fc.double({ min: -2, max: 16, noNaN: true }), E: fc.double({ min: -2.5, max: 2.5, noNaN: true }) });
+type Conditions = { metal: string; celsius: number; logActivity: number; carbonate: number; chloride: number; sulfur: number };
+const build = (c: Conditions) =>
+  buildLigandSystem(db, c.metal, { celsius: c.celsius, activity: 10 ** c.logActivity }, { carbonate: c.carbonate, chloride: c.chloride, sulfur: c.sulfur });
+
+function insideConvex(polygon: readonly Point[], p: Point): boolean {
+  for (let i = 0; i < polygon.length; i++) {
+    const a = polygon[i];
+    const b = polygon[(i + 1) % polygon.length];
+    if ((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0]) < -1e-9) return false;
+  }
+  return true;
+}
+
+describe("engine properties with ligands", () => {
+  it("the dominant species has the lowest g of all species", () => {
+    fc.assert(
+      fc.property(conditions, point, (c, { pH, E }) => {
+        const system = build(c);
+        const winner = dominantSpecies(system, pH, E);
+        const g = speciesPotential(system, winner, pH, E);
+        for (let i = 0; i < system.species.length; i++) expect(g).toBeLessThanOrEqual(speciesPotential(system, i, pH, E));
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("regions tile the rectangle and every point lies in the region of its dominant species", () => {
+    fc.assert(
+      fc.property(conditions, fc.array(point, { minLength: 15, maxLength: 15 }), (c, points) => {
+        const system = build(c);
+        const window = { pHMin: -2, pHMax: 16, eMin: -2.5, eMax: 2.5 };
+        const regions = diagramRegions(system, window);
+        const area = regions.reduce((s, r) => s + Math.abs(polygonArea(r.vertices)), 0);
+        const box = 18 * 5;
+        expect(Math.abs(area - box) / box).toBeLessThan(1e-9);
+        for (const { pH, E } of points) {
+          const containing = regions.filter((r) => insideConvex(r.vertices, [pH, E]));
+          expect(containing.length).toBeGreaterThanOrEqual(1);
+          const dominant = dominantSpecies(system, pH, E);
+          if (containing.length === 1) expect(containing[0].species).toBe(dominant);
+          else expect(containing.map((r) => r.species)).toContain(dominant);
+        }
+      }),
+      { numRuns: 100 },
+    );
+  });
+
+  it("a boundary reported above or below a point changes the species 1 mV either side", () => {
+    fc.assert(
+      fc.property(conditions, point, fc.constantFrom(1 as const, -1 as const), (c, { pH, E }, direction) => {
+        const system = build(c);
+        const crossing = nearestBoundary(system, pH, E, direction);
+        if (!crossing) return;
+        expect(direction > 0 ? crossing.E > E : crossing.E < E).toBe(true);
+        const below = dominantSpecies(system, pH, crossing.E - 1e-3);
+        const above = dominantSpecies(system, pH, crossing.E + 1e-3);
+        expect(below).not.toBe(above);
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("hostile ligand input gives values or error values, never a throw, NaN or Infinity", () => {
+    const hostile = fc.oneof(
+      fc.constant(null),
+      fc.constant(""),
+      fc.constant("abc"),
+      fc.constant(true),
+      fc.constant(Number.NaN),
+      fc.constant(Number.POSITIVE_INFINITY),
+      fc.constant(-1),
+      fc.constant(1e300),
+      fc.constant(1e-320),
+      fc.constant("1e-3"),
+      fc.double(),
+      fc.constant([[1e-3, 2e-3]]),
+      fc.constant([[1e-3], [2e-3], [3e-3]]),
+      fc.constant([] as unknown[]),
+    );
+    fc.assert(
+      fc.property(fc.constantFrom(...metals), hostile, hostile, hostile, point, (metal, co3, cl, s, { pH, E }) => {
+        const wrap = (v: unknown) => (Array.isArray(v) ? v : [[v]]) as any[][];
+        const outputs = [
+          species([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s)),
+          regime([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s)),
+          boundary([[metal]], [[pH]], [[E]], undefined, undefined, undefined, wrap(co3), wrap(cl), wrap(s)),
+          dissolved([[metal]], [[pH]], [[E]], undefined, [["mg/L"]], undefined, wrap(co3), wrap(cl), wrap(s)),
+        ];
+        for (const out of outputs) {
+          for (const row of out) {
+            for (const cell of row) {
+              if (typeof cell === "number") expect(Number.isFinite(cell)).toBe(true);
+              else if (typeof cell !== "string") expect(cell).toBeInstanceOf(CellError);
+            }
+          }
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
