@@ -50,7 +50,7 @@ export function numberArg(
       if (typeof value === "number") x = value;
       else if (typeof value === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(value)) x = Number(value);
       else return valueError(`${name}: expected a number, got ${describe(value)}`);
-      if (!Number.isFinite(x)) return numError(`${name}: expected a finite number`);
+      if (!isFiniteNumber(x)) return numError(`${name}: expected a finite number`);
       if (min !== undefined && (minExclusive ? x <= min : x < min)) return numError(`${name}: ${x} is out of range (${rangeText()})`);
       if (max !== undefined && x > max) return numError(`${name}: ${x} is out of range (${rangeText()})`);
       return x;
@@ -92,6 +92,10 @@ interface Shape {
 }
 
 const BLANK = Symbol("blank");
+
+// Built-ins held in module constants: in a sandboxed host each global lookup can be slow, and these run per cell.
+const isFiniteNumber = Number.isFinite;
+const isArray = Array.isArray;
 type Parsed<T> = T | CellError | typeof BLANK;
 
 type SpecsOf<A extends unknown[]> = { [K in keyof A]: ArgSpec<A[K]> };
@@ -175,27 +179,27 @@ function safeCompute<A extends unknown[]>(compute: (...args: A) => CellOutput, a
 
 function finish(value: CellOutput): CellOutput {
   if (value instanceof CellError) return toHostError(value);
-  if (typeof value === "number" && !Number.isFinite(value)) return toHostError(numError("the result is not a finite number"));
+  if (typeof value === "number" && !isFiniteNumber(value)) return toHostError(numError("the result is not a finite number"));
   return value;
 }
 
 function shapeOf(input: CellInput): Shape | null {
-  if (!Array.isArray(input)) return { rows: 1, cols: 1 };
+  if (!isArray(input)) return { rows: 1, cols: 1 };
   const rows = input.length;
   if (rows === 0) return null;
   const first = input[0];
-  if (!Array.isArray(first)) return null;
+  if (!isArray(first)) return null;
   const cols = first.length;
   if (cols === 0) return null;
   for (let r = 1; r < rows; r++) {
     const row = input[r];
-    if (!Array.isArray(row) || row.length !== cols) return null;
+    if (!isArray(row) || row.length !== cols) return null;
   }
   return { rows, cols };
 }
 
 function cellAt(input: CellInput, r: number, c: number): unknown {
-  return Array.isArray(input) ? input[r][c] : input;
+  return isArray(input) ? input[r][c] : input;
 }
 
 function shapeError(specs: readonly ArgSpec<unknown>[], shapes: Shape[]): CellError {

@@ -3,6 +3,7 @@
 // here are recalled and say "from memory".
 import { create, faradayDependencies, gasConstantDependencies } from "mathjs";
 import { describe, expect, it } from "vitest";
+import { getDatabase } from "../../src/chemistry/database";
 import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "../../src/chemistry/constants";
 import { ehFromPe, peFromEh } from "../../src/chemistry/pe";
 import { kw, neutralPH, pKw, waterLine, waterMargin, waterStandardPotential } from "../../src/chemistry/water";
@@ -117,23 +118,21 @@ describe("ion product of water", () => {
     expect(residuals.length).toBe(11);
   });
 
-  for (const r of residuals.filter((x) => x.celsius <= 90)) {
+  for (const r of residuals) {
     it(`pKw at ${r.celsius} °C is within 0.05 of Bandura & Lvov 2006`, () => {
       expect(Math.abs(r.residual)).toBeLessThanOrEqual(0.05);
     });
   }
 
-  // Known limitation: with ΔCp of ionisation held at its 25 °C value (−224 J/(mol·K) from the NBS Cp° of OH− and
-  // H2O), the model's pKw at 100 °C is about 0.051 above the published value. This case is expected to fail the
-  // 0.05 tolerance; if the data or the model change so that it passes, vitest reports it and this note must go.
-  it.fails("pKw at 100 °C is within 0.05 of Bandura & Lvov 2006 (known to miss by ~0.001 with constant ΔCp)", () => {
-    const r = residuals.find((x) => x.celsius === 100)!;
-    expect(Math.abs(r.residual)).toBeLessThanOrEqual(0.05);
-  });
-
-  it("pKw at 100 °C is within 0.06 (the bound the constant-ΔCp model does meet)", () => {
-    const r = residuals.find((x) => x.celsius === 100)!;
-    expect(Math.abs(r.residual)).toBeLessThanOrEqual(0.06);
+  it("the check forces the ΔCp term: with ΔCp = 0 the 100 °C value would miss by far more than 0.05", () => {
+    // ΔG°(T) without the heat-capacity term, computed here from the records: ΔG°(T0) − ΔS°·(T − T0)
+    const T = 373.15;
+    const R = 8.314462618; // CODATA 2018
+    const db = getDatabase();
+    const [water, hydroxide] = [db.require("H2O(l)"), db.require("OH-")];
+    const dG = hydroxide.dGf - water.dGf - (hydroxide.S! - water.S!) * (T - 298.15);
+    const pKwWithoutCp = dG / (R * T * Math.LN10);
+    expect(Math.abs(pKwWithoutCp - 12.252)).toBeGreaterThan(0.15);
   });
 
   it("Kw at 25 °C is 1.01e-14 and neutral pH is 7.00", () => {
