@@ -124,8 +124,25 @@ function linePath(axes: Axes, w: AxisWindow, l: ShownLine): string {
   return `M${fixed(axes.x(w.pHMin))} ${fixed(axes.y(l.intercept + l.slope * w.pHMin))}L${fixed(axes.x(w.pHMax))} ${fixed(axes.y(l.intercept + l.slope * w.pHMax))}`;
 }
 
+/** Caption lines wrapped at word boundaries to fit `width` px of 10 px text (fixed-advance estimate). */
+export function wrapCaption(lines: readonly string[], width: number): string[] {
+  const perLine = Math.max(20, Math.floor((width - LEFT_BAND - RIGHT_BAND) / 5.4));
+  const out: string[] = [];
+  for (const line of lines) {
+    let current = "";
+    for (const word of line.split(/\s+/)) {
+      if (current && current.length + 1 + word.length > perLine) {
+        out.push(current);
+        current = word;
+      } else current = current ? `${current} ${word}` : word;
+    }
+    if (current) out.push(current);
+  }
+  return out;
+}
+
 export function renderDiagramSvg(o: DiagramSvgOptions): string {
-  const caption = o.caption ?? [];
+  const caption = wrapCaption(o.caption ?? [], o.width);
   const area = diagramLayout(o.width, o.height, caption.length);
   const axes = makeAxes(o.window, area);
   const w = o.window;

@@ -5,7 +5,7 @@
  * otherwise at the diagram's temperature. Pure: no host, no DOM.
  */
 import { getElectrodes } from "../chemistry/electrodes";
-import type { ColumnMapping } from "./header-match";
+import { ColumnMapping, findHeaderRow } from "./header-match";
 import type { PotentialUnit, SampleInput } from "./diagram-model";
 
 /** A block of cells as a host hands it over: header texts, data rows, and the row number of each data row. */
@@ -129,4 +129,26 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     if (hasTemperature) temperatures.push(celsius);
   });
   return { samples, temperatures, skipped, otherMetal };
+}
+
+/**
+ * A block of cells (a selection, a table, a parsed file) → header texts and data rows: the header row is found by
+ * its text among the first rows (header-match.ts findHeaderRow). Without one, `headersAbove` (the rows above the
+ * block in the sheet) may hold it; failing both, the block's first row serves as header and the user maps columns.
+ */
+export function tableFromBlock(
+  cells: readonly (readonly unknown[])[],
+  rowNumbers: readonly number[],
+  source: string,
+  headersAbove?: readonly (readonly unknown[])[],
+): SampleTable {
+  const text = (row: readonly unknown[]) => row.map((c) => (c === null || c === undefined ? "" : String(c).trim()));
+  const at = findHeaderRow(cells);
+  if (at >= 0) return { headers: text(cells[at]), rows: cells.slice(at + 1), rowNumbers: rowNumbers.slice(at + 1), source };
+  if (headersAbove && headersAbove.length > 0) {
+    const above = findHeaderRow(headersAbove, headersAbove.length);
+    if (above >= 0) return { headers: text(headersAbove[above]), rows: cells, rowNumbers, source };
+  }
+  if (cells.length === 0) return { headers: [], rows: [], rowNumbers: [], source };
+  return { headers: text(cells[0]), rows: cells.slice(1), rowNumbers: rowNumbers.slice(1), source };
 }
