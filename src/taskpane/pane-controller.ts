@@ -26,11 +26,12 @@ const ROLE_WORDS: Record<ColumnRole, string> = {
 /** Temperature spread above which one diagram no longer represents the rows well (°C). */
 export const SPREAD_WARNING = 10;
 
-/** The first sentence of a data file's compilation note, for captions. */
+/** The opening clause of a data file's compilation note (up to the first ";"), for captions. */
 function firstSentence(text: string): string {
-  const end = text.search(/[.;](\s|$)/);
-  const sentence = end > 0 ? text.slice(0, end) : text;
-  return sentence.length > 140 ? sentence.slice(0, 140) + "…" : sentence;
+  const clause = text.split(";")[0].trim();
+  if (clause.length <= 120) return clause;
+  const cut = clause.lastIndexOf(" ", 120);
+  return clause.slice(0, cut > 60 ? cut : 120) + "…";
 }
 
 function $(id: string): HTMLElement {
