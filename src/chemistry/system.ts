@@ -140,24 +140,19 @@ export function buildSystem(
         a[i] = aUnit[i] = Infinity; // ligand absent in this cell
         return;
       }
-      let coefficients: Rational[];
-      try {
-        coefficients = balanceWith(new Map([[s, rational(1)]]), basis);
-      } catch {
+      const coefficients = formationCoefficients(s, basis);
+      if (!coefficients) {
         a[i] = aUnit[i] = Infinity;
         return;
       }
       const stoichiometry = new Map<Species | typeof ELECTRON, number>([[s, 1]]);
-      basis.forEach((m, j) => {
-        const v = coefficients[j].valueOf();
-        stoichiometry.set(m, (stoichiometry.get(m) ?? 0) + v);
-      });
+      basis.forEach((m, j) => stoichiometry.set(m, (stoichiometry.get(m) ?? 0) + coefficients[j]));
       const x = entrySpecies.metalAtoms;
       const dG = gibbsAt(reactionProperties(db, stoichiometry), T);
-      const cProton = coefficients[2].valueOf();
-      const cElectron = coefficients[3].valueOf();
+      const cProton = coefficients[2];
+      const cElectron = coefficients[3];
       let ligandTerm = 0;
-      cell.ligands.forEach((l, j) => (ligandTerm += coefficients[4 + j].valueOf() * l.lnActivity));
+      cell.ligands.forEach((l, j) => (ligandTerm += coefficients[4 + j] * l.lnActivity));
       aUnit[i] = (dG / FARADAY + rtOverF * ligandTerm) / x;
       a[i] = aUnit[i] + (entrySpecies.dissolved ? (rtOverF * lnActivity) / x : 0);
       b[i] = (-cProton * k) / x;
@@ -167,6 +162,26 @@ export function buildSystem(
   });
 
   return { element, celsius: options.celsius, kelvin: T, activity: options.activity, species, cells, metalIndex };
+}
+
+/**
+ * Coefficients of the basis species in the formation reaction of `s` (exact balance, then as numbers), or null
+ * when no balance exists. The balance depends only on the formulas, so it is remembered across systems: systems
+ * for many temperatures, activities and ligand totals reuse it.
+ */
+const formationMemo = new Map<string, number[] | null>();
+function formationCoefficients(s: Species, basis: readonly (Species | typeof ELECTRON)[]): number[] | null {
+  const key = `${s.formula}|${basis.map((b) => (b === ELECTRON ? ELECTRON : b.formula)).join(",")}`;
+  let found = formationMemo.get(key);
+  if (found === undefined) {
+    try {
+      found = balanceWith(new Map([[s, rational(1)]]), basis).map((c: Rational) => c.valueOf());
+    } catch {
+      found = null;
+    }
+    formationMemo.set(key, found);
+  }
+  return found;
 }
 
 /** Indices of the species with a region of positive area in the pruning window of a cell. */

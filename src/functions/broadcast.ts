@@ -18,6 +18,8 @@ export interface ArgSpec<T> {
   readonly defaultValue?: T;
   /** Reads a non-blank cell. */
   parse(value: Exclude<CellScalar, null | undefined>): T | CellError;
+  /** For numbers: the accepted interval, so that a plain number inside it is taken without a call to parse. */
+  readonly accepts?: { readonly low: number; readonly high: number };
 }
 
 /** Reads a number; numeric text ("7.25") is accepted, as spreadsheets often hold numbers typed as text. */
@@ -41,10 +43,14 @@ export function numberArg(
     const high = max === undefined ? "" : `at most ${max}${suffix}`;
     return [low, high].filter(Boolean).join(" and ");
   };
+  // the closed interval a plain number may take without further checks (an excluded bound is left to parse)
+  const low = min === undefined ? -Number.MAX_VALUE : minExclusive ? Math.max(min, 0) * (1 + 1e-15) + Number.MIN_VALUE : min;
+  const high = max === undefined ? Number.MAX_VALUE : max;
   return {
     name,
     optional,
     defaultValue,
+    accepts: { low, high },
     parse(value) {
       let x: number;
       if (typeof value === "number") x = value;
@@ -134,6 +140,8 @@ export function mapCells<A extends unknown[]>(
   const constant: boolean[] = shapes.map((s) => s.rows === 1 && s.cols === 1);
   const constantValue: Parsed<unknown>[] = specs.map((spec, i) => (constant[i] ? parseCell(spec, cellAt(inputs[i], 0, 0)) : undefined));
   const rowStep: number[] = shapes.map((s) => (s.rows === 1 ? 0 : 1));
+  const lows: number[] = specs.map((spec) => spec.accepts?.low ?? Infinity);
+  const highs: number[] = specs.map((spec) => spec.accepts?.high ?? -Infinity);
   const colStep: number[] = shapes.map((s) => (s.cols === 1 ? 0 : 1));
 
   const args: unknown[] = specs.map(() => undefined);
@@ -144,9 +152,13 @@ export function mapCells<A extends unknown[]>(
       let blank = false;
       let error: CellError | undefined;
       for (let i = 0; i < count; i++) {
-        const parsed = constant[i]
-          ? constantValue[i]
-          : parseCell(specs[i], (inputs[i] as CellScalar[][])[r * rowStep[i]][c * colStep[i]]);
+        let parsed: Parsed<unknown>;
+        if (constant[i]) parsed = constantValue[i];
+        else {
+          const value = (inputs[i] as CellScalar[][])[r * rowStep[i]][c * colStep[i]];
+          // fast path: a plain number inside the accepted interval needs no further reading
+          parsed = typeof value === "number" && value >= lows[i] && value <= highs[i] ? value : parseCell(specs[i], value);
+        }
         if (parsed === BLANK) blank = true;
         else if (parsed instanceof CellError) error ??= parsed; // the first error in argument order wins over blanks
         else args[i] = parsed;
