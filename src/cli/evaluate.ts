@@ -129,7 +129,30 @@ function splitMessage(message: string): [string | null, string] {
   return m ? [m[1], m[2]] : [null, message];
 }
 
+/**
+ * Evaluates a batch. The rows are handed to the functions grouped by metal and temperature — the functions reuse
+ * the system of the previous row when its conditions are the same, so grouping saves most look-ups — and the
+ * results are put back in file order.
+ */
 export function evaluateBatch(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): BatchResult {
+  const key = (r: InputRow): string =>
+    `${plan.metalColumn === null ? "" : (r.fields[plan.metalColumn] ?? "").trim()}\u0000${plan.temperatureColumn === null ? "" : (r.fields[plan.temperatureColumn] ?? "").trim()}`;
+  const keys = rows.map(key);
+  const order = rows.map((_, i) => i).sort((a, b) => (keys[a] < keys[b] ? -1 : keys[a] > keys[b] ? 1 : a - b));
+  const result = evaluateInOrder(
+    plan,
+    order.map((i) => rows[i]),
+    fns,
+  );
+  const out: string[][] = new Array(rows.length);
+  order.forEach((original, k) => {
+    out[original] = result.rows[k];
+  });
+  const messages = [...result.messages].sort((a, b) => a.line - b.line);
+  return { ...result, rows: out, messages };
+}
+
+function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): BatchResult {
   const n = rows.length;
   const pH = column(rows, plan.phColumn);
   const rawReading = column(rows, plan.potentialColumn) as string[][];

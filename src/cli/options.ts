@@ -96,6 +96,7 @@ Messages and progress
       --progress             show a progress bar on standard error even when it is not a terminal
       --no-progress          never show one (default: shown when standard error is a terminal)
       --max-messages N       print at most N cell messages (default 50; 0 = none); the rest are counted
+      --batch-size N         rows evaluated together (default 4096); memory grows with it
   -q, --quiet                no summary
   -h, --help                 this text
   -V, --version              the program's version
@@ -139,6 +140,33 @@ function numberOption(name: string, text: string | undefined, check: (x: number)
   return x;
 }
 
+/** Every option the program accepts (node:util parseArgs); each is documented in HELP. */
+export const OPTION_SPEC = {
+  output: { type: "string", short: "o" },
+  "svg-dir": { type: "string" },
+  "no-svg": { type: "boolean" },
+  delimiter: { type: "string" },
+  "no-keep-input": { type: "boolean" },
+  "ph-column": { type: "string" },
+  "potential-column": { type: "string" },
+  "temperature-column": { type: "string" },
+  "metal-column": { type: "string" },
+  metal: { type: "string", short: "m", multiple: true },
+  electrode: { type: "string", short: "e" },
+  unit: { type: "string", short: "u" },
+  temperature: { type: "string", short: "t" },
+  activity: { type: "string", short: "a" },
+  "dissolved-unit": { type: "string" },
+  overpotential: { type: "string" },
+  progress: { type: "boolean" },
+  "no-progress": { type: "boolean" },
+  "max-messages": { type: "string" },
+  "batch-size": { type: "string" },
+  quiet: { type: "boolean", short: "q" },
+  help: { type: "boolean", short: "h" },
+  version: { type: "boolean", short: "V" },
+} as const;
+
 export type ParsedCommand = { kind: "help" } | { kind: "version" } | { kind: "run"; options: CliOptions };
 
 /** Parses argv (without node and script). Throws UsageError for anything wrong. */
@@ -149,31 +177,7 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
       args: [...argv],
       allowPositionals: true,
       strict: true,
-      options: {
-        output: { type: "string", short: "o" },
-        "svg-dir": { type: "string" },
-        "no-svg": { type: "boolean" },
-        delimiter: { type: "string" },
-        "no-keep-input": { type: "boolean" },
-        "ph-column": { type: "string" },
-        "potential-column": { type: "string" },
-        "temperature-column": { type: "string" },
-        "metal-column": { type: "string" },
-        metal: { type: "string", short: "m", multiple: true },
-        electrode: { type: "string", short: "e" },
-        unit: { type: "string", short: "u" },
-        temperature: { type: "string", short: "t" },
-        activity: { type: "string", short: "a" },
-        "dissolved-unit": { type: "string" },
-        overpotential: { type: "string" },
-        progress: { type: "boolean" },
-        "no-progress": { type: "boolean" },
-        "max-messages": { type: "string" },
-        "batch-size": { type: "string" },
-        quiet: { type: "boolean", short: "q" },
-        help: { type: "boolean", short: "h" },
-        version: { type: "boolean", short: "V" },
-      },
+      options: OPTION_SPEC,
     });
   } catch (error) {
     throw new UsageError(error instanceof Error ? error.message : String(error));

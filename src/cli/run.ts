@@ -284,7 +284,7 @@ export async function runWithOptions(options: CliOptions, streams: CliStreams, f
     let chunk = "";
     for (const r of result.rows) chunk += csvLine(r);
     if (outError) throw outError;
-    if (!out.write(chunk)) await Promise.race([once(out, "drain"), once(out, "error")]);
+    if (!out.write(chunk)) await drained(out);
     if (outError) throw outError;
   };
 
@@ -405,6 +405,21 @@ export async function runWithOptions(options: CliOptions, streams: CliStreams, f
   };
   if (!options.quiet) (toStdout ? err : streams.stdout).write(summaryText(summary));
   return { code: errorRows > 0 ? EXIT.rowErrors : EXIT.ok, summary };
+}
+
+/** Resolves when the stream has drained or failed (the failure is reported through its error listener). */
+function drained(stream: Writable): Promise<void> {
+  return new Promise((resolve) => {
+    const done = (): void => {
+      stream.off("drain", done);
+      stream.off("error", done);
+      stream.off("close", done);
+      resolve();
+    };
+    stream.on("drain", done);
+    stream.on("error", done);
+    stream.on("close", done);
+  });
 }
 
 function countLineBreaks(record: readonly string[]): number {

@@ -1,0 +1,255 @@
+// The redox-cells command line: a generated 200 000-row CSV (row count, columns, a sample of values against direct
+// calls of the worksheet functions, messages for bad cells), blank cells, delimiters and quoting, output to
+// standard output, --help, and the exit codes through the real bin/redox-cells.mjs.
+
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, readFileSync, rmSync, writeFileSync, createReadStream } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { Writable } from "node:stream";
+import { parse } from "csv-parse";
+import { parse as parseSync } from "csv-parse/sync";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { CellError, type CellOutput } from "../../src/functions/cell-values";
+import { toSHEAt } from "../../src/functions/electrode-functions";
+import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../../src/functions/stability-functions";
+import { waterMarginAt } from "../../src/functions/water-functions";
+import { formatNumber } from "../../src/cli/evaluate";
+import { HELP, OPTION_SPEC } from "../../src/cli/options";
+import { runCommand } from "../../src/cli/run";
+import { REPO_ROOT } from "../bundle/harness";
+import { SYNTHETIC_HEADER, writeSyntheticLog } from "./synthetic-log";
+
+/** Collects what the program writes. */
+class Capture extends Writable {
+  text = "";
+  isTTY = false;
+  override _write(chunk: Buffer | string, _enc: BufferEncoding, done: () => void): void {
+    this.text += chunk.toString();
+    done();
+  }
+}
+
+async function run(args: string[]) {
+  const stdout = new Capture();
+  const stderr = new Capture();
+  const result = await runCommand(args, { stdout, stderr });
+  return { ...result, stdout: stdout.text, stderr: stderr.text };
+}
+
+let dir: string;
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), "redox-cli-"));
+});
+afterAll(() => {
+  rmSync(dir, { recursive: true, force: true });
+});
+
+const RESULT_COLUMNS = [
+  "E_SHE_V",
+  "water_margin_V",
+  "metal_species",
+  "metal_regime",
+  "metal_boundary_above_V",
+  "metal_boundary_below_V",
+  "metal_dissolved_ug_L",
+  "errors",
+];
+
+/** What a result cell of the CSV should hold for a worksheet function's answer. */
+function expectedText(value: CellOutput): string {
+  if (value instanceof CellError) return value.code;
+  return typeof value === "number" ? formatNumber(value) : value;
+}
+
+describe("a generated 200 000-row log", () => {
+  const ROWS = 200_000;
+  // 0-based data rows with a mistyped or impossible pH; the file line is index + 2 (the header is line 1)
+  const bad = new Map<number, string>([
+    [1_000, "7,3"],
+    [123_456, "seven"],
+    [199_999, "17.5"],
+  ]);
+  let input: string;
+  let output: string;
+  let outcome: Awaited<ReturnType<typeof run>>;
+
+  beforeAll(async () => {
+    input = join(dir, "big.csv");
+    output = join(dir, "big-results.csv");
+    await writeSyntheticLog(input, ROWS, { seed: 11, bad });
+    outcome = await run([input, "-o", output, "--no-svg", "--max-messages", "10"]);
+  }, 600_000);
+
+  it("exits 1 (some rows had bad cells) and names line and column of each", () => {
+    expect(outcome.code).toBe(1);
+    expect(outcome.stderr).toContain(`line 1002, column "pH": expected a number, got the text "7,3" (#VALUE!)`);
+    expect(outcome.stderr).toContain(`line 123458, column "pH": expected a number, got the text "seven" (#VALUE!)`);
+    expect(outcome.stderr).toMatch(/line 200001, column "pH": 17\.5 is out of range.*\(#NUM!\)/);
+    expect(outcome.summary?.errorRows).toBe(3);
+    expect(outcome.summary?.rows).toBe(ROWS);
+  });
+
+  it("writes every row, in order, with the input columns and the result columns", async () => {
+    const parser = createReadStream(output).pipe(parse({ relax_column_count: false }));
+    let header: string[] | null = null;
+    let count = 0;
+    const sample = new Map<number, string[]>();
+    const wanted = new Set<number>([...bad.keys()]);
+    for (let k = 0; k < 300; k++) wanted.add((k * 7919 * 13 + 17) % ROWS);
+    for await (const record of parser as AsyncIterable<string[]>) {
+      if (header === null) {
+        header = record;
+        continue;
+      }
+      expect(record[0]).toBe(`S${count + 1}`);
+      if (wanted.has(count)) sample.set(count, record);
+      count++;
+    }
+    expect(header).toEqual([...SYNTHETIC_HEADER, ...RESULT_COLUMNS]);
+    expect(count).toBe(ROWS);
+
+    // a sample of rows against direct calls of the worksheet functions on the same cells
+    const inputRows = parseSync(readFileSync(input, "utf8"), { from_line: 2 }) as string[][];
+    let compared = 0;
+    for (const [index, record] of sample) {
+      const [, pH, orp, t, metal] = inputRows[index];
+      const reading = Number(orp) / 1000;
+      const e = toSHEAt(reading, "AgCl-sat", t)[0][0];
+      const ePassed = typeof e === "number" ? e : "";
+      const expected = [
+        e,
+        waterMarginAt(pH, ePassed, t)[0][0],
+        speciesAt(metal, pH, ePassed, t)[0][0],
+        regimeAt(metal, pH, ePassed, t)[0][0],
+        boundaryFrom(metal, pH, ePassed, 1, t)[0][0],
+        boundaryFrom(metal, pH, ePassed, -1, t)[0][0],
+        dissolvedAt(metal, pH, ePassed, t, "ug/L")[0][0],
+      ].map(expectedText);
+      const got = record.slice(SYNTHETIC_HEADER.length, SYNTHETIC_HEADER.length + 7);
+      expect(got, `row ${index + 1}`).toEqual(expected);
+      compared++;
+    }
+    expect(compared).toBe(sample.size);
+    expect(compared).toBeGreaterThan(250);
+
+    const badRow = sample.get(1_000)!;
+    expect(badRow.slice(SYNTHETIC_HEADER.length + 1, SYNTHETIC_HEADER.length + 7).every((c) => c === "#VALUE!")).toBe(true);
+    expect(badRow[badRow.length - 1]).toBe(`pH: expected a number, got the text "7,3" (#VALUE!)`);
+    const outOfRange = sample.get(199_999)!;
+    expect(outOfRange[SYNTHETIC_HEADER.length + 2]).toBe("#NUM!");
+  }, 600_000);
+
+  it("says how many messages it did not print", () => {
+    // 3 bad rows give 3 messages here; the limit is 10, so none is held back
+    expect(outcome.stderr).not.toContain("more messages not shown");
+    expect(outcome.summary?.messages).toBe(3);
+  });
+});
+
+describe("small files", () => {
+  const write = (name: string, text: string): string => {
+    const path = join(dir, name);
+    writeFileSync(path, text);
+    return path;
+  };
+
+  it("blank cells give blank results, a note, and exit 0", async () => {
+    const input = write("blank.csv", "# a comment line\nsite;pH;Eh (V);temp\nA;7;0.5;20\nB;;0.5;20\nC;8;;\n");
+    const r = await run([input, "-o", join(dir, "blank-out.csv"), "--metal", "Cu,iron", "--no-svg", "--quiet"]);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toContain(`line 4, column "pH": blank; this row's results are left blank`);
+    expect(r.stderr).toContain(`line 5, column "Eh (V)": blank`);
+    const rows = parseSync(readFileSync(join(dir, "blank-out.csv"), "utf8")) as string[][];
+    expect(rows[0]).toEqual([
+      "site", "pH", "Eh (V)", "temp", "E_SHE_V", "water_margin_V",
+      "Cu_species", "Cu_regime", "Cu_boundary_above_V", "Cu_boundary_below_V", "Cu_dissolved_ug_L",
+      "Fe_species", "Fe_regime", "Fe_boundary_above_V", "Fe_boundary_below_V", "Fe_dissolved_ug_L", "errors",
+    ]);
+    expect(rows[1][4]).toBe("0.5"); // Eh is on the SHE scale already
+    expect(rows[1][6]).toBe(expectedText(speciesAt("Cu", 7, 0.5, 20)[0][0]));
+    expect(rows[1][11]).toBe(expectedText(speciesAt("Fe", 7, 0.5, 20)[0][0]));
+    expect(rows[2].slice(5, 16).every((c) => c === "")).toBe(true);
+    expect(rows[3].slice(4, 16).every((c) => c === "")).toBe(true);
+  });
+
+  it("names the first line of a record that spans lines, and keeps quoted fields intact", async () => {
+    const input = write("quoted.csv", 'id,pH,ORP (mV),note\n1,7,200,"two\nlines"\n2,x,200,ok\n');
+    const r = await run([input, "-o", join(dir, "quoted-out.csv"), "-m", "Fe", "-e", "SCE", "--no-svg", "--quiet"]);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toContain(`line 4, column "pH": expected a number, got the text "x"`);
+    const rows = parseSync(readFileSync(join(dir, "quoted-out.csv"), "utf8")) as string[][];
+    expect(rows[1][3]).toBe("two\nlines");
+    expect(Number(rows[1][4])).toBeCloseTo(Number(expectedText(toSHEAt(0.2, "SCE")[0][0])), 12);
+  });
+
+  it("writes to standard output with -o - and keeps the summary off it", async () => {
+    const input = write("stdout.csv", "pH,E_V_SHE,metal\n7,0.2,Zn\n");
+    const r = await run([input, "-o", "-", "--no-svg"]);
+    expect(r.code).toBe(0);
+    const rows = parseSync(r.stdout) as string[][];
+    expect(rows).toHaveLength(2);
+    expect(rows[1][3]).toBe(expectedText(toSHEAt(0.2, "SHE")[0][0]));
+    expect(rows[1][5]).toBe(expectedText(speciesAt("Zn", 7, 0.2)[0][0]));
+    expect(r.stderr).toContain("1 rows from");
+  });
+
+  it("draws the progress bar only when asked (standard error is not a terminal here)", async () => {
+    const input = write("progress.csv", "pH,Eh_V,metal\n7,0.2,Zn\n");
+    const quiet = await run([input, "-o", join(dir, "p1.csv"), "--no-svg", "--quiet"]);
+    expect(quiet.stderr).toBe("");
+    const shown = await run([input, "-o", join(dir, "p2.csv"), "--no-svg", "--quiet", "--progress"]);
+    expect(shown.stderr).toMatch(/\r\[#+\] 100%/);
+  });
+
+  it("usage errors: no pH column, unknown metal, unknown electrode, missing unit", async () => {
+    const input = write("usage.csv", "depth,ORP mV\n1,200\n");
+    const noPH = await run([input, "-m", "Fe", "-e", "SCE"]);
+    expect(noPH.code).toBe(2);
+    expect(noPH.stderr).toContain("no pH column found");
+    const ok = write("usage2.csv", "pH,ORP\n7,200\n");
+    expect((await run([ok, "-m", "Unobtainium", "-e", "SCE", "-u", "mV"])).stderr).toContain(`--metal: "Unobtainium" is not a metal`);
+    expect((await run([ok, "-m", "Fe", "-e", "XYZ", "-u", "mV"])).code).toBe(2);
+    const noUnit = await run([ok, "-m", "Fe", "-e", "SCE"]);
+    expect(noUnit.code).toBe(2);
+    expect(noUnit.stderr).toContain("give --unit V or --unit mV");
+    const noElectrode = await run([ok, "-m", "Fe", "-u", "mV"]);
+    expect(noElectrode.stderr).toContain("give --electrode");
+  });
+
+  it("--help documents every option the parser accepts", async () => {
+    const r = await run(["--help"]);
+    expect(r.code).toBe(0);
+    for (const name of Object.keys(OPTION_SPEC)) expect(HELP, name).toContain(`--${name}`);
+    for (const code of ["0", "1", "2", "3"]) expect(HELP).toMatch(new RegExp(`^  ${code}  `, "m"));
+  });
+});
+
+describe("exit codes through bin/redox-cells.mjs", () => {
+  const bin = join(REPO_ROOT, "bin/redox-cells.mjs");
+  const exec = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: "utf8", cwd: REPO_ROOT, timeout: 120_000 });
+
+  it("0 for --help, 2 for a usage error, 3 for an unreadable input, 1 for bad cells", () => {
+    const help = exec(["--help"]);
+    expect(help.status).toBe(0);
+    expect(help.stdout).toContain("Usage");
+
+    const usage = exec(["--no-such-option", "x.csv"]);
+    expect(usage.status).toBe(2);
+    expect(usage.stderr).toContain("Try 'redox-cells --help'");
+
+    const missing = exec([join(dir, "does-not-exist.csv"), "-m", "Fe"]);
+    expect(missing.status).toBe(3);
+    expect(missing.stderr).toContain("no such file");
+
+    const malformed = join(dir, "malformed.csv");
+    writeFileSync(malformed, 'pH,Eh_V,metal\n7,0.2,Fe\n"7,0.3,Fe\n');
+    expect(exec([malformed, "-o", join(dir, "m-out.csv"), "--no-svg"]).status).toBe(3);
+
+    const badCells = join(dir, "bad-cells.csv");
+    writeFileSync(badCells, "pH,Eh (V),metal\n7,0.2,Fe\n7,oops,Fe\n");
+    const bad = exec([badCells, "-o", join(dir, "bad-out.csv"), "--no-svg"]);
+    expect(bad.status).toBe(1);
+    expect(bad.stderr).toContain(`line 3, column "Eh (V)": expected a number, got the text "oops"`);
+  }, 300_000);
+});

@@ -1,0 +1,42 @@
+// Synthetic CSV logs for the command-line tests and bench: n rows of pH, a potential reading in mV vs a saturated
+// Ag/AgCl electrode, temperature on a 0.5 °C grid (so that a handful of systems serve every row, as in real logs)
+// and a metal per row. Seeded, so every run writes the same file. Test data only — not the demo scenario.
+import { createWriteStream } from "node:fs";
+import { once } from "node:events";
+
+function mulberry32(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+export const SYNTHETIC_HEADER = ["id", "pH", "ORP_mV_AgCl_sat", "temp_C", "metal"];
+const METALS = ["Fe", "Cu", "Zn", "Pb"];
+
+/** The fields of row i (0-based) of the synthetic log with this seed; rows listed in `bad` get a mistyped pH. */
+export async function writeSyntheticLog(path: string, rows: number, options: { seed?: number; bad?: ReadonlyMap<number, string> } = {}): Promise<void> {
+  const random = mulberry32(options.seed ?? 7);
+  const out = createWriteStream(path);
+  out.write(SYNTHETIC_HEADER.join(",") + "\n");
+  let chunk = "";
+  for (let i = 0; i < rows; i++) {
+    const pH = (4 + random() * 8).toFixed(2);
+    const orp = Math.round(-400 + random() * 1200);
+    const t = (5 + Math.floor(random() * 41) * 0.5).toFixed(1);
+    const metal = METALS[Math.floor(random() * METALS.length)];
+    const badPH = options.bad?.get(i);
+    // a mistyped cell is quoted, as a spreadsheet export quotes text holding the delimiter
+    chunk += `S${i + 1},${badPH === undefined ? pH : `"${badPH.replace(/"/g, '""')}"`},${orp},${t},${metal}\n`;
+    if (chunk.length > 65536) {
+      if (!out.write(chunk)) await once(out, "drain");
+      chunk = "";
+    }
+  }
+  out.end(chunk);
+  await once(out, "finish");
+}
