@@ -160,7 +160,7 @@ export function mapCells<A extends unknown[]>(
           parsed = typeof value === "number" && value >= lows[i] && value <= highs[i] ? value : parseCell(specs[i], value);
         }
         if (parsed === BLANK) blank = true;
-        else if (parsed instanceof CellError) error ??= parsed; // the first error in argument order wins over blanks
+        else if (typeof parsed === "object" && parsed instanceof CellError) error ??= parsed; // first error in argument order wins over blanks
         else args[i] = parsed;
       }
       row[c] = error ? toHostError(error) : blank ? "" : finish(safeCompute(compute, args as A));
