@@ -11,7 +11,7 @@ import { clipPolygon, HalfPlane, Point, polygonArea } from "../chemistry/halfpla
 import { getElectrodes } from "../chemistry/electrodes";
 import { diagramRegions, Region } from "../chemistry/predominance";
 import { dominantSpecies, MetalSystem, Regime } from "../chemistry/system";
-import { waterLine, waterMargin } from "../chemistry/water";
+import { waterLine } from "../chemistry/water";
 import type { AxisWindow } from "./axes";
 
 export type PotentialUnit = "V" | "mV";
@@ -136,8 +136,16 @@ export interface SampleInput {
   readonly dissolved?: number;
 }
 
-/** Species, regime and water margin of each sample on the system (at the system's temperature and activity). */
+/**
+ * Species, regime and water margin of each sample on the system (at the system's temperature and activity). The
+ * water margin is waterMargin() of water.ts; at one temperature both lines are straight in pH, so they are taken
+ * once (at pH 0 and 1) instead of per sample.
+ */
 export function plotSamples(system: MetalSystem, samples: readonly SampleInput[], scale: DisplayScale): PlottedSample[] {
+  const o0 = waterLine(0, system.celsius, "O2");
+  const oSlope = waterLine(1, system.celsius, "O2") - o0;
+  const h0 = waterLine(0, system.celsius, "H2");
+  const hSlope = waterLine(1, system.celsius, "H2") - h0;
   return samples.map((s) => {
     const index = dominantSpecies(system, s.pH, s.eSHE);
     const species = system.species[index];
@@ -149,7 +157,7 @@ export function plotSamples(system: MetalSystem, samples: readonly SampleInput[]
       eSHE: s.eSHE,
       formula: species.formula,
       regime: species.regime,
-      waterMargin: waterMargin(s.pH, s.eSHE, system.celsius),
+      waterMargin: Math.min(o0 + oSlope * s.pH - s.eSHE, s.eSHE - (h0 + hSlope * s.pH)),
       dissolved: s.dissolved,
     };
   });

@@ -40,6 +40,11 @@ export interface DiagramSvgOptions {
   /** Lines printed under the legend (sources, data origin). */
   readonly caption?: readonly string[];
   readonly showKineticBand?: boolean;
+  /**
+   * Write each sample's hover text as its <title> (default true). Large sets may leave it out: the pane then shows
+   * the same text (sampleText) on hover and focus from data-i, and the browser parses half as many nodes.
+   */
+  readonly sampleTitles?: boolean;
   /** Overpotential of the kinetic band, V (default 0.6). */
   readonly kineticOverpotential?: number;
 }
@@ -258,12 +263,14 @@ export function renderDiagramSvg(o: DiagramSvgOptions): string {
 
   // samples last, on top
   out.push(`<g class="rc-samples" stroke="${MARKER_OUTLINE}" stroke-width="1">`);
-  for (const s of o.samples) {
+  const fill = MARKER_FILLS;
+  const titles = o.sampleTitles !== false;
+  for (let i = 0; i < o.samples.length; i++) {
+    const s = o.samples[i];
     if (!(s.pH >= w.pHMin && s.pH <= w.pHMax && s.E >= w.eMin && s.E <= w.eMax)) continue;
-    const text = escapeXml(sampleText(s, o.unit));
+    // <title> is both the hover text and the accessible name of the point
     out.push(
-      `<circle class="rc-sample" tabindex="0" role="img" aria-label="${text}" cx="${fixed(axes.x(s.pH))}" cy="${fixed(axes.y(s.E))}" r="4.5" fill="${MARKER_FILLS[s.regime]}"` +
-        ` data-row="${s.row}" data-ph="${s.pH}" data-e="${s.E}" data-eshe="${s.eSHE}" data-regime="${s.regime}" data-formula="${escapeXml(s.formula)}"><title>${text}</title></circle>`,
+      `<circle class="rc-sample" tabindex="0" cx="${axes.x(s.pH).toFixed(2)}" cy="${axes.y(s.E).toFixed(2)}" r="4.5" fill="${fill[s.regime]}" data-row="${s.row}" data-ph="${s.pH}" data-e="${s.E}" data-regime="${s.regime}" data-i="${i}">${titles ? `<title>${escapeXml(sampleText(s, o.unit))}</title>` : ""}</circle>`,
     );
   }
   out.push(`</g></svg>`);

@@ -7,7 +7,8 @@ import { getElectrodes } from "../chemistry/electrodes";
 import { SystemCache } from "../chemistry/system-cache";
 import type { AxisWindow } from "./axes";
 import { defaultWindow, displayScale, plotSamples, PotentialUnit, shownRegions, shownWaterLines } from "./diagram-model";
-import { formatActivity, renderDiagramSvg } from "./diagram-svg";
+import { formatActivity, renderDiagramSvg, sampleText } from "./diagram-svg";
+import type { PlottedSample } from "./diagram-model";
 import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders } from "./header-match";
 import type { HostAdapter, PaneSettings } from "./host";
 import { blobToBase64, download, svgToPngBlob } from "./png-export";
@@ -25,6 +26,8 @@ const ROLE_WORDS: Record<ColumnRole, string> = {
 
 /** Temperature spread above which one diagram no longer represents the rows well (°C). */
 export const SPREAD_WARNING = 10;
+/** Sample count up to which the on-screen SVG carries a <title> per point. */
+export const TITLED_SAMPLES = 2000;
 
 /** The opening clause of a data file's compilation note (up to the first ";"), for captions. */
 function firstSentence(text: string): string {
@@ -45,7 +48,7 @@ const select = (id: string) => $(id) as HTMLSelectElement;
 interface Drawn {
   svg: string;
   caption: string[];
-  render(width: number, height: number): string;
+  render(width: number, height: number, titles?: boolean): string;
 }
 
 export class DiagramPane {
@@ -57,6 +60,7 @@ export class DiagramPane {
   private manualTemperature = false;
   private window: AxisWindow | null = null;
   private drawn: Drawn | null = null;
+  private plotted: { samples: PlottedSample[]; unit: PotentialUnit } = { samples: [], unit: "V" };
   private settings: PaneSettings;
 
   constructor(private readonly host: HostAdapter) {
@@ -259,8 +263,11 @@ export class DiagramPane {
       `Samples: ${this.table ? `${this.table.source}; ${samples.length} drawn, ${read?.skipped.length ?? 0} not drawn` : "none"}. Thermodynamic data: ${firstSentence(compilation)}`,
     ];
     const showKineticBand = input("kinetic").checked;
-    const render = (width: number, height: number) =>
-      renderDiagramSvg({ system, window, regions, samples, water, axisTitle: scale.axisTitle, unit, width, height, title, caption, showKineticBand });
+    // above this many points the on-screen diagram leaves out the per-point <title> (the info line shows the text)
+    const sampleTitles = samples.length <= TITLED_SAMPLES;
+    this.plotted = { samples, unit };
+    const render = (width: number, height: number, titles = sampleTitles) =>
+      renderDiagramSvg({ system, window, regions, samples, water, axisTitle: scale.axisTitle, unit, width, height, title, caption, showKineticBand, sampleTitles: titles });
     const container = $("diagram");
     const width = Math.max(360, Math.min(900, Math.floor(container.clientWidth || 640)));
     const height = Math.round(width * 0.82);
@@ -324,7 +331,9 @@ export class DiagramPane {
     const target = (event: Event) => (event.target instanceof Element ? event.target.closest(".rc-sample") : null);
     const show = (event: Event) => {
       const point = target(event);
-      if (point) info.textContent = point.getAttribute("aria-label") ?? "";
+      if (!point) return;
+      const sample = this.plotted.samples[Number(point.getAttribute("data-i"))];
+      info.textContent = sample ? sampleText(sample, this.plotted.unit) : (point.querySelector("title")?.textContent ?? "");
     };
     container.addEventListener("mouseover", show);
     container.addEventListener("focusin", show);
@@ -358,7 +367,7 @@ export class DiagramPane {
   exportSvg(): void {
     if (!this.drawn) return;
     const { width, height } = this.exportSize();
-    download(new Blob([this.drawn.render(width, height)], { type: "image/svg+xml" }), this.fileName("svg"));
+    download(new Blob([this.drawn.render(width, height, true)], { type: "image/svg+xml" }), this.fileName("svg"));
   }
 
   async exportPng(): Promise<void> {
