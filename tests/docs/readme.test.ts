@@ -1,0 +1,110 @@
+/**
+ * README.md against the built add-in: the function reference lists every function of dist/functions.json with its
+ * arguments in order (optional ones in brackets) and names no function that does not exist; the literal formula
+ * examples give the answers the README states when evaluated through the built bundle; the set-up commands, the
+ * cautions and the screenshot are there.
+ */
+import { existsSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { beforeAll, describe, expect, it } from "vitest";
+import { loadBundle, LoadedBundle, REPO_ROOT, StandInError } from "../bundle/harness";
+
+const readme = readFileSync(join(REPO_ROOT, "README.md"), "utf8");
+let bundle: LoadedBundle;
+beforeAll(() => {
+  bundle = loadBundle();
+});
+
+function signature(f: { id: string; parameters: { name: string; optional?: boolean }[] }): string {
+  return `REDOX.${f.id}(${f.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(", ")})`;
+}
+
+/** Splits a formula's argument list on top-level commas; an empty piece is an omitted argument. */
+function splitArguments(text: string): string[] {
+  const parts: string[] = [];
+  let depth = 0;
+  let current = "";
+  let quoted = false;
+  for (const ch of text) {
+    if (ch === '"') quoted = !quoted;
+    if (!quoted && ch === "(") depth++;
+    if (!quoted && ch === ")") depth--;
+    if (!quoted && depth === 0 && ch === ",") {
+      parts.push(current.trim());
+      current = "";
+    } else current += ch;
+  }
+  parts.push(current.trim());
+  return parts;
+}
+
+/** Evaluates a literal formula (numbers, "text", omitted arguments, nested REDOX calls) through the bundle. */
+function evaluate(formula: string): unknown {
+  const match = /^REDOX\.([A-Z]+)\((.*)\)$/.exec(formula.trim());
+  if (!match) throw new Error(`not a REDOX formula: ${formula}`);
+  const fn = bundle.functions.get(match[1]);
+  if (!fn) throw new Error(`no function ${match[1]}`);
+  const args = splitArguments(match[2]).map((a) => {
+    if (a === "") return null;
+    if (a.startsWith('"')) return [[a.slice(1, -1)]];
+    if (a.startsWith("REDOX.")) return [[evaluate(a)]];
+    return [[Number(a)]];
+  });
+  const out = fn(...args) as unknown[][];
+  return out[0][0];
+}
+
+describe("README function reference", () => {
+  it("lists every function of functions.json with its arguments in order", () => {
+    for (const f of bundle.metadata.functions) expect(readme).toContain(`\`${signature(f)}`);
+  });
+
+  it("describes no function that functions.json lacks", () => {
+    const ids = new Set(bundle.metadata.functions.map((f) => f.id));
+    const headings = [...readme.matchAll(/^#### `REDOX\.([A-Z]+)\(/gm)].map((m) => m[1]);
+    expect(headings.length).toBeGreaterThanOrEqual(ids.size - 1); // PE and EH share one heading
+    for (const id of headings) expect(ids.has(id)).toBe(true);
+  });
+});
+
+describe("README formula examples, evaluated through the built bundle", () => {
+  const examples = [...readme.matchAll(/^=(REDOX\.[A-Z]+\(.*\))\s+→\s+(.+)$/gm)].map((m) => ({ formula: m[1], stated: m[2].trim() }));
+
+  it("finds the literal examples", () => {
+    expect(examples.length).toBeGreaterThanOrEqual(4);
+  });
+
+  for (const { formula, stated } of examples) {
+    it(`${formula} → ${stated}`, () => {
+      const value = evaluate(formula);
+      expect(value).not.toBeInstanceOf(StandInError);
+      const numeric = /^(about\s+)?(-?[\d.]+(?:E-?\d+)?)/i.exec(stated);
+      if (numeric) {
+        const expected = Number(numeric[2]);
+        const tolerance = numeric[1] ? 0.1 : 0.005; // "about" allows 10 %, a plain figure its last digit
+        expect(typeof value).toBe("number");
+        expect(Math.abs((value as number) - expected) / Math.abs(expected)).toBeLessThan(tolerance);
+      } else {
+        expect(value).toBe(stated.split(/\s+/)[0]);
+      }
+    });
+  }
+});
+
+describe("README essentials", () => {
+  it("shows the two set-up commands", () => {
+    expect(readme).toContain("npm ci && npm run demo");
+    expect(readme).toContain("npm ci && npm test");
+  });
+
+  it("has the cautions section the pane links to", () => {
+    expect(readme).toMatch(/^## Cautions$/m);
+    for (const phrase of ["not how fast", "laboratory", "regulators", "licensed corrosion professionals"]) expect(readme).toContain(phrase);
+  });
+
+  it("shows a screenshot that exists in the repository", () => {
+    const image = /!\[[^\]]*\]\(([^)]+\.png)\)/.exec(readme)?.[1];
+    expect(image).toBeDefined();
+    expect(existsSync(join(REPO_ROOT, image!))).toBe(true);
+  });
+});
