@@ -29,11 +29,25 @@ const HYDROGEN_EVOLUTION = { "H+": -2, "e-": -2, "H2(g)": 1 } as const;
 /** H2O(l) → H+ + OH− */
 const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
 
+/**
+ * Standard potentials by database, gas and temperature: columns of samples repeat a few temperatures, and each
+ * value costs a reaction balance, so they are remembered (bounded).
+ */
+const standardPotentials = new WeakMap<Database, Map<string, number>>();
+const REMEMBERED_POTENTIALS = 512;
+
 /** Standard potential (V vs SHE) of the O2/H2O (gas "O2") or H+/H2 (gas "H2") couple at `celsius`. */
 export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database = getDatabase()): number {
+  let memo = standardPotentials.get(db);
+  if (!memo) standardPotentials.set(db, (memo = new Map()));
+  const key = `${gas}|${celsius}`;
+  const known = memo.get(key);
+  if (known !== undefined) return known;
   const k = nernstFactor(kelvin(celsius));
   const e0 = gas === "O2" ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4 : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
-  return e0 + 0; // + 0 turns a negative zero into 0
+  if (memo.size >= REMEMBERED_POTENTIALS) memo.clear();
+  memo.set(key, e0 + 0); // + 0 turns a negative zero into 0
+  return e0 + 0;
 }
 
 /**
