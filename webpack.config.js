@@ -55,6 +55,27 @@ function devServerHttps() {
   return options;
 }
 
+/**
+ * cautions.html, the page the pane's caution line links to: README's "Cautions" section, so the two never differ.
+ * Paragraphs become <p>; `code` and **bold** marks are dropped to plain text.
+ */
+function cautionsPage() {
+  const readme = fs.readFileSync(path.resolve(__dirname, "README.md"), "utf8");
+  const section = (readme.split(/^## Cautions$/m)[1] || "").split(/^## /m)[0].trim();
+  const escape = (text) => text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
+  const paragraphs = section
+    .split(/\n\s*\n/)
+    .map((p) => `<p>${escape(p.replace(/\s+/g, " ").replace(/\*\*|`/g, ""))}</p>`)
+    .join("\n");
+  return `<!doctype html>
+<html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
+<title>Redox Cells: cautions</title>
+<style>body{font:15px/1.5 system-ui,sans-serif;max-width:40em;margin:2em auto;padding:0 1em;color:#1d2327}</style>
+</head><body><h1 id="cautions">Cautions</h1>
+${paragraphs}
+</body></html>`;
+}
+
 /** Prints every emitted asset with its size and the gzipped size of functions.js (production builds). */
 class ReportSizesPlugin {
   apply(compiler) {
@@ -132,6 +153,7 @@ module.exports = (env = {}, argv = {}) => {
       page("taskpane", ["functions", "commands", "taskpane"]),
       page("functions", ["functions"]),
       page("commands", ["commands"]),
+      new HtmlWebpackPlugin({ filename: "cautions.html", templateContent: cautionsPage(), inject: false }),
       new CopyWebpackPlugin({
         patterns: [
           { from: "assets/*.png", context: path.resolve(__dirname), to: "assets/[name][ext]" },

@@ -102,6 +102,14 @@ describe("README essentials", () => {
     for (const phrase of ["not how fast", "laboratory", "regulators", "licensed corrosion professionals"]) expect(readme).toContain(phrase);
   });
 
+  it("the pane's caution link leads to a built page carrying README's cautions", () => {
+    const pane = readFileSync(join(bundle.dist, "taskpane.html"), "utf8");
+    const target = /id="?caution-link"?[^>]*href="?([^"#\s>]+)/.exec(pane)?.[1];
+    expect(target).toBe("cautions.html");
+    const page = readFileSync(join(bundle.dist, target!), "utf8");
+    for (const phrase of ["not how fast", "laboratory analysis", "licensed corrosion professionals"]) expect(page).toContain(phrase);
+  });
+
   it("shows a screenshot that exists in the repository", () => {
     const image = /!\[[^\]]*\]\(([^)]+\.png)\)/.exec(readme)?.[1];
     expect(image).toBeDefined();
