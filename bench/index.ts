@@ -5,7 +5,10 @@ import fs from "node:fs";
 import path from "node:path";
 import zlib from "node:zlib";
 import { loadBundle } from "../tests/bundle/harness";
+import { spawnSync } from "node:child_process";
 import { benchEngine, BenchRow, fmt } from "./engine";
+import { benchLigands } from "./ligands";
+import { benchPaneRender } from "./pane-render";
 
 /** (c′) REDOX.SPECIES as the spreadsheet runs it: the built bundle, called with a 100 k-row range. */
 function bundleWrapperRow(): BenchRow {
@@ -41,13 +44,21 @@ function bundleRow(): BenchRow {
 }
 
 async function main(): Promise<void> {
-  const rows: BenchRow[] = [...benchEngine(), bundleWrapperRow(), bundleRow()];
+  const rows: BenchRow[] = [...benchEngine(), bundleWrapperRow(), ...benchLigands(), ...benchPaneRender(10_000), bundleRow()];
   const width = Math.max(...rows.map((r) => r.name.length));
   const figureWidth = Math.max(...rows.map((r) => r.figure.length));
   console.log(`Redox Cells benchmark — node ${process.version}, ${new Date().toISOString()}`);
   for (const r of rows) {
     const verdict = r.met === null ? "" : r.met ? "met" : "NOT MET";
     console.log(`${r.name.padEnd(width)}  ${r.figure.padEnd(figureWidth)}  target ${r.target.padEnd(18)} ${verdict}`);
+  }
+  // Figures measured in other processes: the command line over a generated 1 M-row log (rows/s, peak memory), and
+  // the task pane drawing 10 k samples in headless Chromium (when /usr/bin/chromium exists).
+  const children: [string, string[]][] = [["bench/cli.ts", [process.env.REDOX_BENCH_CLI_ROWS ?? "1000000"]]];
+  if (fs.existsSync("/usr/bin/chromium")) children.push(["bench/pane-browser.ts", []]);
+  for (const [script, args] of children) {
+    const run = spawnSync(process.execPath, ["--import", "tsx", script, ...args], { stdio: "inherit", env: process.env });
+    if (run.status !== 0) console.log(`${script}: exited with ${run.status ?? run.signal}`);
   }
 }
 

@@ -17,26 +17,30 @@ import { buildLigandSystem } from "../chemistry/ligand-system";
 import { carbonateArg, chlorideArg, sulfurArg } from "./ligand-args";
 
 let cache: SystemCache | undefined;
-/** Systems by element → temperature → activity, in front of the bounded cache: no key strings per row. */
-let recent = new Map<string, Map<number, Map<number, MetalSystem>>>();
-let recentCount = 0;
 
-/** The system for (element, T, activity); rows with conditions seen recently skip the cache's key building. */
+/**
+ * The last few systems used, scanned before the bounded cache: a column usually repeats a handful of (element,
+ * temperature, activity) conditions, and comparing three values is cheaper than building a cache key per row.
+ */
+const RECENT = 16;
+const recentElement: string[] = new Array(RECENT).fill("");
+const recentCelsius: number[] = new Array(RECENT).fill(NaN);
+const recentActivity: number[] = new Array(RECENT).fill(NaN);
+const recentSystem: (MetalSystem | null)[] = new Array(RECENT).fill(null);
+let recentNext = 0;
+
+/** The system for (element, T, activity), built once and reused. */
 function systemFor(element: string, celsius: number, activity: number): MetalSystem {
-  const found = recent.get(element)?.get(celsius)?.get(activity);
-  if (found) return found;
+  for (let k = 0; k < RECENT; k++) {
+    if (recentCelsius[k] === celsius && recentActivity[k] === activity && recentElement[k] === element) return recentSystem[k]!;
+  }
   cache ??= new SystemCache(getDatabase());
   const system = cache.get(element, celsius, activity);
-  if (recentCount >= 64) {
-    recent = new Map();
-    recentCount = 0;
-  }
-  let byCelsius = recent.get(element);
-  if (!byCelsius) recent.set(element, (byCelsius = new Map()));
-  let byActivity = byCelsius.get(celsius);
-  if (!byActivity) byCelsius.set(celsius, (byActivity = new Map()));
-  byActivity.set(activity, system);
-  recentCount++;
+  recentElement[recentNext] = element;
+  recentCelsius[recentNext] = celsius;
+  recentActivity[recentNext] = activity;
+  recentSystem[recentNext] = system;
+  recentNext = (recentNext + 1) % RECENT;
   return system;
 }
 
