@@ -9,6 +9,7 @@
  */
 import { clipPolygon, HalfPlane, Point, polygonArea } from "../chemistry/halfplane";
 import { getElectrodes } from "../chemistry/electrodes";
+import type { LigandTotals } from "../chemistry/ligand-cells";
 import { diagramRegions, Region } from "../chemistry/predominance";
 import { dominantSpecies, MetalSystem, Regime } from "../chemistry/system";
 import { waterLine } from "../chemistry/water";
@@ -125,6 +126,8 @@ export interface PlottedSample {
   /** Signed distance to the water window, V (positive inside). */
   readonly waterMargin: number;
   readonly dissolved?: number;
+  /** Ligand totals (mol/kg) the species and regime were found at; absent in pure water. */
+  readonly ligands?: LigandTotals;
 }
 
 export interface SampleInput {
@@ -134,22 +137,31 @@ export interface SampleInput {
   /** Potential vs SHE, V (already converted from the reading). */
   readonly eSHE: number;
   readonly dissolved?: number;
+  /** Ligand totals (mol/kg) of this sample's water, when they differ from sample to sample. */
+  readonly ligands?: LigandTotals;
 }
 
 /**
  * Species, regime and water margin of each sample on the system (at the system's temperature and activity). The
  * water margin is waterMargin() of water.ts; at one temperature both lines are straight in pH, so they are taken
- * once (at pH 0 and 1) instead of per sample.
+ * once (at pH 0 and 1) instead of per sample. `systemOf` gives a sample its own system (same temperature and
+ * activity, its own ligand totals) when the samples' waters differ.
  */
-export function plotSamples(system: MetalSystem, samples: readonly SampleInput[], scale: DisplayScale): PlottedSample[] {
+export function plotSamples(
+  system: MetalSystem,
+  samples: readonly SampleInput[],
+  scale: DisplayScale,
+  systemOf?: (sample: SampleInput) => MetalSystem,
+): PlottedSample[] {
   const o0 = waterLine(0, system.celsius, "O2");
   const oSlope = waterLine(1, system.celsius, "O2") - o0;
   const h0 = waterLine(0, system.celsius, "H2");
   const hSlope = waterLine(1, system.celsius, "H2") - h0;
   return samples.map((s) => {
-    const index = dominantSpecies(system, s.pH, s.eSHE);
-    const species = system.species[index];
-    return {
+    const own = systemOf ? systemOf(s) : system;
+    const index = dominantSpecies(own, s.pH, s.eSHE);
+    const species = own.species[index];
+    const plotted: PlottedSample = {
       row: s.row,
       id: s.id,
       pH: s.pH,
@@ -160,5 +172,6 @@ export function plotSamples(system: MetalSystem, samples: readonly SampleInput[]
       waterMargin: Math.min(o0 + oSlope * s.pH - s.eSHE, s.eSHE - (h0 + hSlope * s.pH)),
       dissolved: s.dissolved,
     };
+    return s.ligands ? { ...plotted, ligands: s.ligands } : plotted;
   });
 }

@@ -9,6 +9,7 @@ import type { MetalSystem, Regime } from "../chemistry/system";
 import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./axes";
 import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
 import { formulaSegments, Segment } from "./formula-markup";
+import { formatTotals } from "./ligand-inputs";
 import { placeLabel } from "./label-placement";
 import {
   AXIS_TEXT,
@@ -45,6 +46,11 @@ export interface DiagramSvgOptions {
    * the same text (sampleText) on hover and focus from data-i, and the browser parses half as many nodes.
    */
   readonly sampleTitles?: boolean;
+  /**
+   * Leave the sample circles out (default false): the pane draws large sets on a canvas laid over the SVG
+   * (sample-canvas.ts) and keeps the circles for exports.
+   */
+  readonly omitSamples?: boolean;
   /** Overpotential of the kinetic band, V (default 0.6). */
   readonly kineticOverpotential?: number;
 }
@@ -99,7 +105,8 @@ export function sampleText(s: PlottedSample, unit: "V" | "mV"): string {
   const e = unit === "mV" ? `${Math.round(s.E)} mV` : `${s.E.toFixed(3)} V`;
   const margin = `${s.waterMargin >= 0 ? "+" : "\u2212"}${Math.abs(s.waterMargin).toFixed(2)} V ${s.waterMargin >= 0 ? "inside" : "outside"} the water window`;
   const who = s.id ? `${s.id} (row ${s.row})` : `row ${s.row}`;
-  return `${who}: pH ${s.pH.toFixed(2)}, E ${e}; ${s.formula}, ${s.regime}; water margin ${margin}`;
+  const water = s.ligands ? formatTotals(s.ligands) : "";
+  return `${who}: pH ${s.pH.toFixed(2)}, E ${e}; ${s.formula}, ${s.regime}; water margin ${margin}${water ? `; water ${water}` : ""}`;
 }
 
 function patternDefs(): string {
@@ -202,7 +209,7 @@ export function renderDiagramSvg(o: DiagramSvgOptions): string {
 
   // labels in place
   out.push(`<g class="rc-labels" fill="${LABEL_TEXT}" text-anchor="middle" pointer-events="none" paint-order="stroke" stroke="#ffffff" stroke-width="3" stroke-opacity="0.75" stroke-linejoin="round">`);
-  for (const { region, pixels } of pixelRegions) {
+  const placed = pixelRegions.map(({ region, pixels }) => {
     const segments = formulaSegments(region.formula, region.charge);
     let chosen: { x: number; y: number; size: number; fits: boolean } | null = null;
     for (const size of LABEL_SIZES) {
@@ -212,7 +219,14 @@ export function renderDiagramSvg(o: DiagramSvgOptions): string {
         if (place.fits) break;
       }
     }
-    if (!chosen) continue;
+    return { region, segments, chosen };
+  });
+  // A species split over several ligand cells has several pieces: a piece too small for its label is left
+  // unlabelled when another piece of the same species carries the label in full. (In pure water each species has
+  // one piece, so every region keeps its label.)
+  const fitted = new Set(placed.filter((p) => p.chosen?.fits).map((p) => p.region.formula));
+  for (const { region, segments, chosen } of placed) {
+    if (!chosen || (!chosen.fits && fitted.has(region.formula))) continue;
     out.push(
       `<text class="rc-label" data-formula="${escapeXml(region.formula)}" data-fits="${chosen.fits}" x="${fixed(chosen.x, 1)}" y="${fixed(chosen.y + chosen.size * 0.35, 1)}" font-size="${chosen.size}">${segmentsSvg(segments)}</text>`,
     );
@@ -265,7 +279,7 @@ export function renderDiagramSvg(o: DiagramSvgOptions): string {
   out.push(`<g class="rc-samples" stroke="${MARKER_OUTLINE}" stroke-width="1">`);
   const fill = MARKER_FILLS;
   const titles = o.sampleTitles !== false;
-  for (let i = 0; i < o.samples.length; i++) {
+  for (let i = 0; o.omitSamples !== true && i < o.samples.length; i++) {
     const s = o.samples[i];
     if (!(s.pH >= w.pHMin && s.pH <= w.pHMax && s.E >= w.eMin && s.E <= w.eMax)) continue;
     // <title> is both the hover text and the accessible name of the point

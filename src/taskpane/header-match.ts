@@ -168,3 +168,87 @@ export function findHeaderRow(rows: readonly (readonly unknown[])[], maxRows = 1
   }
   return -1;
 }
+
+/**
+ * Columns describing the water rather than the sample's reading: total alkalinity, chloride and sulfate, with the
+ * unit their header names. The pane can take each row's ligand totals from them (ligand-inputs.ts). Matched apart
+ * from the main roles so a sample log's mapping is unchanged by them.
+ */
+export type WaterColumnRole = "alkalinity" | "chloride" | "sulfate";
+
+export const WATER_COLUMN_ROLES: readonly WaterColumnRole[] = ["alkalinity", "chloride", "sulfate"];
+
+/**
+ * Units of the water columns. Alkalinity: mg/L as CaCO3 (the utility unit, the default) or meq/L (also written
+ * mmol/L: the acid capacity to pH 4.3). Chloride: mg/L (default), µg/L or mmol/L as Cl. Sulfate: mg/L as SO4
+ * (default), mg/L as S, or mmol/L.
+ */
+export type WaterUnit = "mg/L CaCO3" | "meq/L" | "mg/L" | "ug/L" | "mmol/L" | "mg/L SO4" | "mg/L S";
+
+export interface WaterColumn {
+  readonly index: number;
+  readonly unit: WaterUnit;
+}
+
+export type WaterColumns = Partial<Record<WaterColumnRole, WaterColumn>>;
+
+function isAlkalinity(tokens: readonly string[]): boolean {
+  return has(tokens, "alkalinity", "alk", "talk", "tac") || (tokens[0] === "ta" && tokens.length <= 4);
+}
+
+function isChloride(tokens: readonly string[]): boolean {
+  // chlorine residual (Cl2, "free chlorine") is not chloride
+  if (has(tokens, "chlorine", "residual", "free", "combined", "chloramine") || (tokens.includes("cl") && tokens[tokens.indexOf("cl") + 1] === "2")) return false;
+  return has(tokens, "chloride", "chlorides", "cl");
+}
+
+function isSulfate(tokens: readonly string[]): boolean {
+  if (has(tokens, "sulfate", "sulphate", "sulfates", "sulphates")) return true;
+  const at = tokens.indexOf("so");
+  return at >= 0 && tokens[at + 1] === "4";
+}
+
+function waterUnit(role: WaterColumnRole, tokens: readonly string[]): WaterUnit {
+  const millimoles = has(tokens, "mmol", "mm", "mmol/l");
+  if (role === "alkalinity") return has(tokens, "meq", "mval") || millimoles ? "meq/L" : "mg/L CaCO3";
+  if (millimoles) return "mmol/L";
+  if (role === "chloride") return has(tokens, "ug", "ppb") ? "ug/L" : "mg/L";
+  // sulfate "as S" (SO4-S): the token "s" after "as", or "so 4 s"
+  const asS = tokens.some((t, i) => t === "s" && (tokens[i - 1] === "as" || (tokens[i - 1] === "4" && tokens[i - 2] === "so")));
+  return asS ? "mg/L S" : "mg/L SO4";
+}
+
+/**
+ * The alkalinity, chloride and sulfate columns among `headers`, skipping the columns the main mapping uses; the
+ * first matching column (left to right) wins.
+ */
+export function matchWaterColumns(headers: readonly unknown[], mapping: ColumnMapping = EMPTY_MAPPING): WaterColumns {
+  const tokens = headers.map((h) => headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)));
+  const taken = new Set(Object.values(mapping).filter((i) => i >= 0));
+  const out: WaterColumns = {};
+  const tests: Record<WaterColumnRole, (t: readonly string[]) => boolean> = { alkalinity: isAlkalinity, chloride: isChloride, sulfate: isSulfate };
+  for (const role of WATER_COLUMN_ROLES) {
+    const index = tokens.findIndex((t, i) => !taken.has(i) && t.length > 0 && tests[role](t));
+    if (index < 0) continue;
+    taken.add(index);
+    out[role] = { index, unit: waterUnit(role, tokens[index]) };
+  }
+  return out;
+}
+
+/** A column the user chose for `role`, with the unit its header names (or the role's default unit). */
+export function waterColumnAt(role: WaterColumnRole, headers: readonly unknown[], index: number): WaterColumn {
+  const h = headers[index];
+  return { index, unit: waterUnit(role, headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h))) };
+}
+
+/** Words for a water unit, for the pane's menus and captions. */
+export const WATER_UNIT_WORDS: Readonly<Record<WaterUnit, string>> = {
+  "mg/L CaCO3": "mg/L as CaCO3",
+  "meq/L": "meq/L",
+  "mg/L": "mg/L",
+  "ug/L": "µg/L",
+  "mmol/L": "mmol/L",
+  "mg/L SO4": "mg/L as SO4",
+  "mg/L S": "mg/L as S",
+};

@@ -5,8 +5,11 @@
  * otherwise at the diagram's temperature. Pure: no host, no DOM.
  */
 import { getElectrodes } from "../chemistry/electrodes";
-import { ColumnMapping, findHeaderRow } from "./header-match";
+import { getDatabase } from "../chemistry/database";
+import type { LigandName } from "../chemistry/ligand-cells";
+import { ColumnMapping, findHeaderRow, WaterColumn } from "./header-match";
 import type { PotentialUnit, SampleInput } from "./diagram-model";
+import { RowTotals, rowTotal } from "./ligand-inputs";
 
 /** A block of cells as a host hands it over: header texts, data rows, and the row number of each data row. */
 export interface SampleTable {
@@ -27,6 +30,8 @@ export interface ReadOptions {
   readonly celsius: number;
   /** When set and a metal column is mapped, only rows of this metal are read. */
   readonly onlyMetal?: string;
+  /** Ligands read per row from a water column (ligand-inputs.ts); absent: none. */
+  readonly waterColumns?: Partial<Record<LigandName, WaterColumn>>;
 }
 
 export interface SkippedRow {
@@ -41,6 +46,8 @@ export interface ReadResult {
   readonly skipped: SkippedRow[];
   /** Rows left out because the metal column names another metal. */
   readonly otherMetal: number;
+  /** Per drawn sample (aligned with `samples`): its ligand totals read from the water columns. */
+  readonly rowTotals: RowTotals[];
 }
 
 const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
@@ -67,6 +74,7 @@ export function median(values: readonly number[]): number {
   return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
 }
 
+const NO_TOTALS: RowTotals = Object.freeze({});
 const PH_RANGE = [-2, 16] as const; // GUIDE §3
 const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (GUIDE §3)
 
@@ -81,6 +89,9 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
   const temperatures: number[] = [];
   const skipped: SkippedRow[] = [];
   let otherMetal = 0;
+  const rowTotals: RowTotals[] = [];
+  const waterColumns = Object.entries(options.waterColumns ?? {}) as [LigandName, WaterColumn][];
+  const db = waterColumns.length > 0 ? getDatabase() : null;
   const cell = (row: readonly unknown[], index: number) => (index >= 0 ? row[index] : undefined);
 
   table.rows.forEach((row, i) => {
@@ -127,8 +138,14 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     const dissolved = readNumber(cell(row, mapping.dissolved));
     samples.push({ row: rowNumber, id, pH: pH.value, eSHE, dissolved: "value" in dissolved ? dissolved.value : undefined });
     if (hasTemperature) temperatures.push(celsius);
+    if (waterColumns.length === 0) rowTotals.push(NO_TOTALS);
+    else {
+      const totals: RowTotals = {};
+      for (const [ligand, column] of waterColumns) totals[ligand] = rowTotal(db!, ligand, column, cell(row, column.index), pH.value, celsius);
+      rowTotals.push(totals);
+    }
   });
-  return { samples, temperatures, skipped, otherMetal };
+  return { samples, temperatures, skipped, otherMetal, rowTotals };
 }
 
 /**

@@ -1,0 +1,185 @@
+/**
+ * The pane's water: water columns found by header, row values converted to ligand totals, the diagram's and each
+ * sample's totals, and the samples' species and regime checked against REDOX.SPECIES / REDOX.REGIME given the
+ * same totals.
+ */
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { getDatabase } from "../../src/chemistry/database";
+import { dicFromAlkalinity } from "../../src/chemistry/alkalinity";
+import { buildLigandSystem } from "../../src/chemistry/ligand-system";
+import { buildSystem } from "../../src/chemistry/system";
+import { regimeAt, speciesAt } from "../../src/functions/stability-functions";
+import { dicAt } from "../../src/functions/carbonate-functions";
+import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/taskpane/header-match";
+import { formatTotals, PURE_WATER, resolveWater, roundTotal, rowTotal, waterCaption, WaterSettings } from "../../src/taskpane/ligand-inputs";
+import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/taskpane/diagram-model";
+import { renderDiagramSvg, sampleText } from "../../src/taskpane/diagram-svg";
+import { readSamples } from "../../src/taskpane/sample-table";
+import { EMPTY_MAPPING } from "../../src/taskpane/header-match";
+
+const db = getDatabase();
+
+describe("water columns by header", () => {
+  it("finds the invented demo log's alkalinity column and leaves the main mapping as it was", () => {
+    const headers = "site,pipe_material,pipe_metal,sample_id,date,pH,ORP_mV_AgCl_sat,temp_C,alkalinity_mg_L_CaCO3,Fe_ug_L,Cu_ug_L,Pb_ug_L,note".split(",");
+    const { mapping } = matchHeaders(headers, "Pb", "lead");
+    expect(matchWaterColumns(headers, mapping)).toEqual({ alkalinity: { index: 8, unit: "mg/L CaCO3" } });
+  });
+
+  it("reads realistic spellings and their units", () => {
+    const headers = ["Sample ID", "pH", "ORP (mV)", "Total alkalinity (mg/L as CaCO3)", "Chloride (mg/L)", "Sulphate, mg/L"];
+    expect(matchWaterColumns(headers, matchHeaders(headers).mapping)).toEqual({
+      alkalinity: { index: 3, unit: "mg/L CaCO3" },
+      chloride: { index: 4, unit: "mg/L" },
+      sulfate: { index: 5, unit: "mg/L SO4" },
+    });
+    expect(matchWaterColumns(["Alk (meq/L)", "Cl- [mmol/L]", "SO4-S (mg/L)"])).toEqual({
+      alkalinity: { index: 0, unit: "meq/L" },
+      chloride: { index: 1, unit: "mmol/L" },
+      sulfate: { index: 2, unit: "mg/L S" },
+    });
+    expect(matchWaterColumns(["Alkalinity (mg/L as CaCO3)", "Cl (ug/L)", "SO4 (mg/L)"])).toMatchObject({
+      alkalinity: { unit: "mg/L CaCO3" },
+      chloride: { unit: "ug/L" },
+      sulfate: { unit: "mg/L SO4" },
+    });
+    expect(waterColumnAt("sulfate", ["x", "sulfate as S, mg/L"], 1)).toEqual({ index: 1, unit: "mg/L S" });
+  });
+
+  it("does not take chlorine residual for chloride, nor a column the main mapping uses", () => {
+    expect(matchWaterColumns(["Free chlorine (mg/L)", "Cl2 residual", "Total chlorine"])).toEqual({});
+    expect(matchWaterColumns(["alkalinity"], { ...EMPTY_MAPPING, id: 0 })).toEqual({});
+  });
+});
+
+describe("row values → ligand totals", () => {
+  const alk = { index: 0, unit: "mg/L CaCO3" } as const;
+  it("alkalinity gives REDOX.DIC's value, rounded to 0.01 in log10", () => {
+    const expected = dicAt(120, 7.8, 12)[0][0] as number;
+    const got = rowTotal(db, "carbonate", alk, "120", 7.8, 12) as number;
+    expect(got).toBe(roundTotal(expected));
+    expect(Math.abs(Math.log10(got / expected))).toBeLessThanOrEqual(0.005 + 1e-12);
+    // meq/L: 1 meq/L = 50.04 mg/L as CaCO3 (half the molar mass of CaCO3, 100.087 g/mol — common practice)
+    expect(rowTotal(db, "carbonate", { index: 0, unit: "meq/L" }, 2, 7.8, 12)).toBe(roundTotal(dicFromAlkalinity(2 * 50.0435, 7.8, 12)));
+  });
+
+  it("chloride and sulfate by their molar masses (hand calculation, atomic weights of data/elements.json)", () => {
+    // 35.45 mg/L Cl ÷ 35.45 g/mol = 1.000 mmol/L ≈ 1e-3 mol/kg in dilute water
+    expect(rowTotal(db, "chloride", { index: 0, unit: "mg/L" }, 35.45, 7, 25)).toBeCloseTo(1e-3, 9);
+    expect(rowTotal(db, "chloride", { index: 0, unit: "ug/L" }, 35450, 7, 25)).toBeCloseTo(1e-3, 9);
+    // SO4: 32.06 + 4 × 15.999 = 96.056 g/mol
+    const so4 = 32.06 + 4 * (db.element("O")?.atomicWeight ?? NaN);
+    expect(rowTotal(db, "sulfur", { index: 0, unit: "mg/L SO4" }, so4, 7, 25)).toBeCloseTo(1e-3, 9);
+    expect(rowTotal(db, "sulfur", { index: 0, unit: "mg/L S" }, 32.06, 7, 25)).toBeCloseTo(1e-3, 9);
+    expect(rowTotal(db, "sulfur", { index: 0, unit: "mmol/L" }, 0.5, 7, 25)).toBe(roundTotal(5e-4)); // 10^-3.30
+    expect(rowTotal(db, "chloride", { index: 0, unit: "mg/L" }, 0, 7, 25)).toBe(0);
+  });
+
+  it("blank, text, negative and impossible values give a reason, never a number", () => {
+    for (const cell of [null, "", "  ", "<5", "n/a", -3, "1,5"]) expect(typeof rowTotal(db, "carbonate", alk, cell, 7.5, 20)).toBe("object");
+    // hydroxide alone exceeds 1 mg/L as CaCO3 at pH 12
+    expect(rowTotal(db, "carbonate", alk, 1, 12, 25)).toHaveProperty("problem");
+  });
+
+  it("rounding keeps the total within 2.3 % and is stable", () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e-7, max: 5, noNaN: true }), (x) => {
+        const r = roundTotal(x);
+        expect(Math.abs(Math.log10(r / x))).toBeLessThanOrEqual(0.005 + 1e-9);
+        expect(roundTotal(r)).toBe(r);
+      }),
+    );
+  });
+});
+
+describe("the diagram's and each sample's water", () => {
+  it("pure water stays pure", () => {
+    const r = resolveWater(PURE_WATER, [{}, {}]);
+    expect(r.diagram).toEqual({});
+    expect(r.fromColumns).toEqual([]);
+    expect(waterCaption(r)).toBe("");
+  });
+
+  it("typed totals apply to every sample; a column gives each sample its own and the diagram the median", () => {
+    const settings: WaterSettings = {
+      carbonate: { kind: "column", column: { index: 3, unit: "mg/L CaCO3" } },
+      chloride: { kind: "typed", total: 5e-4 },
+      sulfur: { kind: "typed", total: null },
+    };
+    const r = resolveWater(settings, [{ carbonate: 1e-3 }, { carbonate: { problem: "blank" } }, { carbonate: 3e-3 }, { carbonate: 2e-3 }]);
+    expect(r.diagram).toEqual({ carbonate: roundTotal(2e-3), chloride: 5e-4 }); // median of 1, 2, 3 mmol/kg
+    expect(r.perSample.map((t) => t.carbonate)).toEqual([1e-3, roundTotal(2e-3), 3e-3, 2e-3]);
+    expect(r.perSample.every((t) => t.chloride === 5e-4)).toBe(true);
+    expect(r.fallbacks).toEqual({ carbonate: 1 });
+    expect(formatTotals(r.diagram)).toBe("DIC 2, Cl 0.5 mmol/kg");
+    expect(waterCaption(r)).toMatch(/^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' alkalinity values.*\); each ligand is taken at its full total/);
+    const none = resolveWater(settings, [{ carbonate: { problem: "blank" } }]);
+    expect(none.unusable).toEqual(["carbonate"]);
+    expect(none.diagram).toEqual({ chloride: 5e-4 });
+  });
+
+  it("readSamples reads each row's alkalinity at the row's own pH and temperature", () => {
+    const table = {
+      headers: ["pH", "Eh (V)", "Temp", "Alkalinity (mg/L as CaCO3)"],
+      rows: [
+        ["7.4", "0.3", "8", "95"],
+        ["8.1", "0.2", "", "140"],
+        ["7.0", "0.4", "15", ""],
+      ],
+      rowNumbers: [2, 3, 4],
+      source: "test",
+    };
+    const mapping = matchHeaders(table.headers).mapping;
+    const read = readSamples(table, { mapping, electrode: "SHE", unit: "V", temperatureUnit: "C", celsius: 21, waterColumns: { carbonate: { index: 3, unit: "mg/L CaCO3" } } });
+    expect(read.rowTotals).toEqual([{ carbonate: roundTotal(dicFromAlkalinity(95, 7.4, 8)) }, { carbonate: roundTotal(dicFromAlkalinity(140, 8.1, 21)) }, { carbonate: { problem: "blank" } }]);
+    expect(readSamples(table, { mapping, electrode: "SHE", unit: "V", temperatureUnit: "C", celsius: 21 }).rowTotals).toEqual([{}, {}, {}]);
+  });
+});
+
+describe("samples in a water with ligands", () => {
+  it("species and regime of every sample equal REDOX.SPECIES and REDOX.REGIME given the same totals", () => {
+    const scale = displayScale("SHE", "V", 15);
+    const waters = [{ carbonate: 2e-3 }, { carbonate: 6e-4, chloride: 1e-3 }, { carbonate: 1e-3, sulfur: 2e-4 }, { chloride: 3e-3 }, {}];
+    for (const metal of ["Pb", "Cu", "Fe"]) {
+      const diagram = buildLigandSystem(db, metal, { celsius: 15, activity: 1e-6 }, waters[0]);
+      const systems = new Map(waters.map((w) => [JSON.stringify(w), buildLigandSystem(db, metal, { celsius: 15, activity: 1e-6 }, w)]));
+      fc.assert(
+        fc.property(fc.array(fc.tuple(fc.double({ min: 3, max: 11, noNaN: true }), fc.double({ min: -0.7, max: 1.1, noNaN: true }), fc.nat(waters.length - 1)), { minLength: 1, maxLength: 20 }), (points) => {
+          const inputs: SampleInput[] = points.map(([pH, e, w], i) => ({ row: i + 2, id: "", pH, eSHE: e, ligands: waters[w] }));
+          const plotted = plotSamples(diagram, inputs, scale, (s) => systems.get(JSON.stringify(s.ligands))!);
+          plotted.forEach((p, i) => {
+            const w = waters[points[i][2]];
+            const args = [metal, p.pH, p.eSHE, 15, 1e-6, w.carbonate ?? null, w.chloride ?? null, w.sulfur ?? null] as const;
+            expect(p.formula).toBe(speciesAt(...args)[0][0]);
+            expect(p.regime).toBe(regimeAt(...args)[0][0]);
+            expect(p.ligands).toBe(w);
+          });
+        }),
+        { numRuns: 30 },
+      );
+    }
+  });
+
+  it("the hover text names the water; pure-water text is unchanged", () => {
+    const system = buildSystem(db, "Pb", { celsius: 25, activity: 1e-6 });
+    const scale = displayScale("SHE", "V", 25);
+    const [pure] = plotSamples(system, [{ row: 5, id: "A", pH: 7.5, eSHE: 0.4 }], scale);
+    expect(sampleText(pure, "V")).not.toMatch(/water DIC/);
+    expect(sampleText(pure, "V")).toMatch(/water margin \+0\.\d\d V inside the water window$/);
+    const [wet] = plotSamples(system, [{ row: 5, id: "A", pH: 7.5, eSHE: 0.4, ligands: { carbonate: 1.5e-3 } }], scale);
+    expect(sampleText(wet, "V")).toMatch(/; water DIC 1\.5 mmol\/kg$/);
+  });
+
+  it("labels every species of a diagram split along ligand boundaries", () => {
+    const system = buildLigandSystem(db, "Pb", { celsius: 25, activity: 1e-6 }, { carbonate: 2e-3, sulfur: 1e-4 });
+    const scale = displayScale("SHE", "V", 25);
+    const window = defaultWindow(scale);
+    const regions = shownRegions(system, window, scale);
+    const formulas = new Set(regions.map((r) => r.formula));
+    expect(regions.length).toBeGreaterThan(formulas.size); // some species are split by a ligand boundary
+    const svg = renderDiagramSvg({ system, window, regions, samples: [], water: shownWaterLines(25, scale), axisTitle: scale.axisTitle, unit: "V", width: 800, height: 650 });
+    const labelled = new Set([...svg.matchAll(/class="rc-label" data-formula="([^"]+)"/g)].map((m) => m[1].replace(/&amp;/g, "&")));
+    for (const f of formulas) expect(labelled.has(f), f).toBe(true);
+  });
+});
