@@ -5,11 +5,16 @@
 import { getDatabase } from "../chemistry/database";
 import { getElectrodes } from "../chemistry/electrodes";
 import { SystemCache } from "../chemistry/system-cache";
+import { hasLigands, ligandKey, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
+import { buildLigandSystem, MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
+import type { MetalSystem } from "../chemistry/system";
 import type { AxisWindow } from "./axes";
 import { defaultWindow, displayScale, plotSamples, PotentialUnit, shownRegions, shownWaterLines } from "./diagram-model";
 import { formatActivity, renderDiagramSvg, sampleText } from "./diagram-svg";
-import type { PlottedSample } from "./diagram-model";
-import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders } from "./header-match";
+import type { PlottedSample, SampleInput } from "./diagram-model";
+import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "./header-match";
+import { LIGAND_COLUMN, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
+import { CANVAS_SAMPLES, SampleCanvas } from "./sample-canvas";
 import type { HostAdapter, PaneSettings } from "./host";
 import { blobToBase64, download, svgToPngBlob } from "./png-export";
 import { median, readSamples, SampleTable } from "./sample-table";
@@ -62,6 +67,8 @@ export class DiagramPane {
   private drawn: Drawn | null = null;
   private plotted: { samples: PlottedSample[]; unit: PotentialUnit } = { samples: [], unit: "V" };
   private settings: PaneSettings;
+  private waterFound: WaterColumns = {};
+  private canvas: SampleCanvas | null = null;
 
   constructor(private readonly host: HostAdapter) {
     this.settings = host.loadSettings() ?? {};
@@ -103,6 +110,13 @@ export class DiagramPane {
       this.manualTemperature = false;
       redraw();
     });
+    for (const ligand of LIGAND_ORDER) {
+      input(`${ligand}-total`).addEventListener("change", redraw);
+      select(`${ligand}-source`).addEventListener("change", () => {
+        input(`${ligand}-total`).disabled = select(`${ligand}-source`).value !== "typed";
+        redraw();
+      });
+    }
     input("kinetic").addEventListener("change", redraw);
     input("only-metal").addEventListener("change", redraw);
     for (const id of ["ph-min", "ph-max", "e-min", "e-max"]) $(id).addEventListener("change", () => this.readWindow());
@@ -174,6 +188,63 @@ export class DiagramPane {
     }
     this.mapping = mapping;
     this.buildColumnControls();
+    this.buildWaterSources();
+  }
+
+  /**
+   * The "from column" menus of the ligand fieldset: the column found by its header first, then every other
+   * column. A choice survives a new table when a column of the same header text is still there.
+   */
+  private buildWaterSources(): void {
+    const headers = this.table?.headers ?? [];
+    this.waterFound = matchWaterColumns(headers, this.mapping);
+    for (const ligand of LIGAND_ORDER) {
+      const role = LIGAND_COLUMN[ligand];
+      const menu = select(`${ligand}-source`);
+      const previous = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : undefined;
+      menu.replaceChildren(new Option("typed total", "typed"));
+      const found = this.waterFound[role];
+      const order = found ? [found.index, ...headers.keys()].filter((i, k, all) => all.indexOf(i) === k) : [...headers.keys()];
+      for (const i of order) {
+        if (Object.values(this.mapping).includes(i)) continue; // pH, potential… are not water columns
+        const unit = WATER_UNIT_WORDS[waterColumnAt(role, headers, i).unit];
+        const option = new Option(`from ${i === found?.index ? `the ${role} column` : "column"} “${headers[i] || `column ${i + 1}`}” (${unit})`, `col:${i}`);
+        option.dataset.header = headers[i];
+        menu.add(option);
+      }
+      const keep = previous === undefined ? -1 : headers.indexOf(previous);
+      menu.value = keep >= 0 && !Object.values(this.mapping).includes(keep) ? `col:${keep}` : "typed";
+      input(`${ligand}-total`).disabled = menu.value !== "typed";
+    }
+  }
+
+  /** Ligand settings from the controls; a message when a typed total is not a number in range. */
+  private readWater(): { settings: WaterSettings; columns: Partial<Record<LigandName, WaterColumn>> } | { error: string } {
+    const settings: Partial<Record<LigandName, LigandSource>> = {};
+    const columns: Partial<Record<LigandName, WaterColumn>> = {};
+    const headers = this.table?.headers ?? [];
+    for (const ligand of LIGAND_ORDER) {
+      const source = select(`${ligand}-source`).value;
+      if (source.startsWith("col:") && this.table) {
+        const column = waterColumnAt(LIGAND_COLUMN[ligand], headers, Number(source.slice(4)));
+        settings[ligand] = { kind: "column", column };
+        columns[ligand] = column;
+        continue;
+      }
+      const text = input(`${ligand}-total`).value.trim();
+      const total = text === "" ? null : Number(text);
+      if (total !== null && !(total >= 0 && total <= MAX_LIGAND_TOTAL)) {
+        return { error: `${ligand[0].toUpperCase()}${ligand.slice(1)} total: a number from 0 to ${MAX_LIGAND_TOTAL} mol/kg (e.g. 1.5e-3), or blank for none.` };
+      }
+      settings[ligand] = { kind: "typed", total };
+    }
+    return { settings: settings as WaterSettings, columns };
+  }
+
+  /** The system of a water: the ligand-free one when no ligand is present. */
+  private systemIn(metal: string, celsius: number, activity: number, totals: LigandTotals): MetalSystem {
+    if (!hasLigands(totals)) return this.cache.get(metal, celsius, activity);
+    return this.cache.get(metal, celsius, activity, ligandKey(totals), () => buildLigandSystem(this.db, metal, { celsius, activity }, totals));
   }
 
   private buildColumnControls(): void {
@@ -228,6 +299,8 @@ export class DiagramPane {
     const unit = select("unit").value as PotentialUnit;
     const activity = Number(input("activity").value);
     if (!(activity > 0 && activity <= 10)) return this.status("Dissolved activity: a number above 0 and at most 10, e.g. 1e-6.");
+    const waterInput = this.readWater();
+    if ("error" in waterInput) return this.status(waterInput.error);
 
     // rows → samples (twice: the first pass finds the rows' temperatures for the default)
     const options = {
@@ -237,6 +310,7 @@ export class DiagramPane {
       temperatureUnit: this.temperatureUnit,
       celsius: 25,
       onlyMetal: input("only-metal").checked ? metal : undefined,
+      waterColumns: Object.keys(waterInput.columns).length > 0 ? waterInput.columns : undefined,
     };
     let read = this.table ? readSamples(this.table, options) : null;
     const temperatures = read?.temperatures ?? [];
@@ -249,30 +323,67 @@ export class DiagramPane {
     if (this.table) read = readSamples(this.table, { ...options, celsius });
     this.showTemperatureSpread(temperatures, celsius);
 
-    const system = this.cache.get(metal, celsius, activity);
+    // the water: typed ligand totals, or each row's from a column with the median for the diagram
+    const inputs = read?.samples ?? [];
+    const resolved = resolveWater(waterInput.settings, read?.rowTotals ?? []);
+    const ligands = hasLigands(resolved.diagram) || resolved.fromColumns.length > 0;
+    let system: MetalSystem;
+    try {
+      system = this.systemIn(metal, celsius, activity, resolved.diagram);
+    } catch (error) {
+      return this.status(`The diagram could not be built: ${(error as Error).message}`);
+    }
     const scale = displayScale(electrode, unit, celsius);
     const window = this.window ?? defaultWindow(scale);
     this.showWindow(window);
     const regions = shownRegions(system, window, scale);
-    const samples = plotSamples(system, read?.samples ?? [], scale);
+    let samples: PlottedSample[];
+    if (!ligands) samples = plotSamples(system, inputs, scale);
+    else {
+      const perRow = resolved.perSample;
+      const withWater: SampleInput[] = inputs.map((s, i) => ({ ...s, ligands: perRow[i] }));
+      const systems = new Map<string, MetalSystem>([[ligandKey(resolved.diagram), system]]);
+      const systemOf = (s: SampleInput) => {
+        const totals = s.ligands ?? {};
+        const key = ligandKey(totals);
+        let own = systems.get(key);
+        if (!own) systems.set(key, (own = this.systemIn(metal, celsius, activity, totals)));
+        return own;
+      };
+      try {
+        samples = plotSamples(system, withWater, scale, systemOf);
+      } catch (error) {
+        return this.status(`The samples could not be placed: ${(error as Error).message}`);
+      }
+    }
+    this.showWater(resolved, ligands);
     const water = shownWaterLines(celsius, scale);
-    const title = `${this.db.system(metal)?.title ?? metal} in water`;
+    const metalTitle = this.db.system(metal)?.title ?? metal;
+    const title = hasLigands(resolved.diagram) ? `${metalTitle} in water with ${ligandNames(resolved.diagram)}` : `${metalTitle} in water`;
     const compilation = this.db.system(metal)?.compilation ?? "";
+    const waterLine = waterCaption(resolved);
     const caption = [
       `${title} at ${celsius} °C, dissolved activity ${formatActivity(activity)}, potentials in ${unit} vs ${scale.electrode}.`,
+      ...(waterLine ? [waterLine] : []),
       `Samples: ${this.table ? `${this.table.source}; ${samples.length} drawn, ${read?.skipped.length ?? 0} not drawn` : "none"}. Thermodynamic data: ${firstSentence(compilation)}`,
     ];
     const showKineticBand = input("kinetic").checked;
     // above this many points the on-screen diagram leaves out the per-point <title> (the info line shows the text)
     const sampleTitles = samples.length <= TITLED_SAMPLES;
     this.plotted = { samples, unit };
-    const render = (width: number, height: number, titles = sampleTitles) =>
-      renderDiagramSvg({ system, window, regions, samples, water, axisTitle: scale.axisTitle, unit, width, height, title, caption, showKineticBand, sampleTitles: titles });
+    // above CANVAS_SAMPLES the screen gets the markers on a canvas layer (sample-canvas.ts); exports keep circles
+    const onCanvas = samples.length > CANVAS_SAMPLES;
+    const render = (width: number, height: number, titles = sampleTitles, omitSamples = false) =>
+      renderDiagramSvg({ system, window, regions, samples, water, axisTitle: scale.axisTitle, unit, width, height, title, caption, showKineticBand, sampleTitles: titles, omitSamples });
     const container = $("diagram");
     const width = Math.max(360, Math.min(900, Math.floor(container.clientWidth || 640)));
     const height = Math.round(width * 0.82);
-    const svg = render(width, height);
+    const svg = render(width, height, sampleTitles, onCanvas);
+    this.canvas?.clear();
     container.innerHTML = svg;
+    if (onCanvas) this.canvas?.draw(container.querySelector("svg")!, samples);
+    container.dataset.samplesDrawn = String(samples.length);
+    container.dataset.samplesOn = onCanvas ? "canvas" : "svg";
     this.drawn = { svg, caption, render };
     this.showSkipped(read);
     if (this.table) this.status(`${samples.length} sample${samples.length === 1 ? "" : "s"} drawn from ${this.table.source}.`);
@@ -294,6 +405,24 @@ export class DiagramPane {
     warning.textContent = wide
       ? `The rows span ${(high - low).toFixed(1)} °C (more than ${SPREAD_WARNING} °C): one diagram at ${celsius} °C only approximates them — consider drawing warm and cold samples separately.`
       : "";
+  }
+
+  /** The ligand note: which totals the diagram uses, and rows that fell back to the median. */
+  private showWater(resolved: ReturnType<typeof resolveWater>, ligands: boolean): void {
+    const note = $("ligand-note");
+    if (!ligands && resolved.unusable.length === 0) {
+      note.textContent = "A column choice reads each row's value: DIC from the row's alkalinity, pH and temperature; sulfate as total sulfur. The diagram is drawn at the median, each sample at its own row's water.";
+      return;
+    }
+    const parts: string[] = [];
+    const caption = waterCaption(resolved);
+    if (caption) parts.push(caption.split(";")[0] + ".");
+    for (const ligand of resolved.fromColumns) {
+      const n = resolved.fallbacks[ligand] ?? 0;
+      if (n > 0) parts.push(`${n} row${n === 1 ? "" : "s"} without a usable ${LIGAND_COLUMN[ligand]} value use the median.`);
+    }
+    for (const ligand of resolved.unusable) parts.push(`No row has a usable ${LIGAND_COLUMN[ligand]} value: ${ligand} is left out.`);
+    note.textContent = parts.join(" ");
   }
 
   private showWindow(w: AxisWindow): void {
@@ -337,10 +466,20 @@ export class DiagramPane {
     };
     container.addEventListener("mouseover", show);
     container.addEventListener("focusin", show);
-    const choose = (point: Element) => {
-      const row = Number(point.getAttribute("data-row"));
+    const selectRow = (row: number) => {
       if (this.host.selectRow && Number.isFinite(row)) void this.host.selectRow(row).catch((e: unknown) => this.status(`Could not select row ${row}: ${(e as Error).message}`));
     };
+    const choose = (point: Element) => selectRow(Number(point.getAttribute("data-row")));
+    this.canvas = new SampleCanvas(container, {
+      show: (i) => {
+        const sample = this.plotted.samples[i];
+        if (sample) info.textContent = sampleText(sample, this.plotted.unit);
+      },
+      choose: (i) => {
+        const sample = this.plotted.samples[i];
+        if (sample) selectRow(sample.row);
+      },
+    });
     container.addEventListener("click", (event) => {
       const point = target(event);
       if (point) choose(point);
