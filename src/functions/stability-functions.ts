@@ -8,7 +8,7 @@ import { formationGibbsAt } from "../chemistry/formation";
 import { nearestBoundary, dissolvedAtPoint } from "../chemistry/predominance";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
 import { SystemCache } from "../chemistry/system-cache";
-import { dominantSpecies, MetalSystem } from "../chemistry/system";
+import { dominantSpecies, MetalSystem, SystemSpecies } from "../chemistry/system";
 import { mapCells, numberArg, textArg } from "./broadcast";
 import { CellInput, CellOutput, notAvailable, numError, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
@@ -57,6 +57,21 @@ function systemInWater(element: string, celsius: number, activity: number, carbo
   return cache.get(element, celsius, activity, ligandKey(totals), () => buildLigandSystem(getDatabase(), element, { celsius, activity }, totals));
 }
 
+/** Reads the point arguments shared by SPECIES and REGIME and answers with `describe` of the dominant species. */
+function dominantAt(
+  describe: (species: SystemSpecies) => string,
+  inputs: readonly CellInput[],
+): CellOutput[][] {
+  return mapCells(
+    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
+    inputs,
+    (el, p, e, t, a, co3, cl, s) => {
+      const system = systemInWater(el, t, a, co3, cl, s);
+      return describe(system.species[dominantSpecies(system, p, e)]);
+    },
+  );
+}
+
 export function speciesAt(
   element: CellInput,
   pH: CellInput,
@@ -67,14 +82,7 @@ export function speciesAt(
   chloride?: CellInput,
   sulfur?: CellInput,
 ): CellOutput[][] {
-  return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
-    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur],
-    (el, p, e, t, a, co3, cl, s) => {
-      const system = systemInWater(el, t, a, co3, cl, s);
-      return system.species[dominantSpecies(system, p, e)].formula;
-    },
-  );
+  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur]);
 }
 
 export function regimeAt(
@@ -87,14 +95,7 @@ export function regimeAt(
   chloride?: CellInput,
   sulfur?: CellInput,
 ): CellOutput[][] {
-  return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
-    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur],
-    (el, p, e, t, a, co3, cl, s) => {
-      const system = systemInWater(el, t, a, co3, cl, s);
-      return system.species[dominantSpecies(system, p, e)].regime;
-    },
-  );
+  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur]);
 }
 
 export function boundaryFrom(
