@@ -4,6 +4,8 @@
  * DOM-free renderer (src/taskpane/diagram-svg.ts), run in Node.
  */
 import { getDatabase } from "../chemistry/database";
+import { hasLigands, LIGAND_ORDER, type LigandTotals } from "../chemistry/ligand-cells";
+import { buildLigandSystem } from "../chemistry/ligand-system";
 import { SystemCache } from "../chemistry/system-cache";
 import { displayScale, plotSamples, shownRegions, shownWaterLines } from "../taskpane/diagram-model";
 import { renderDiagramSvg } from "../taskpane/diagram-svg";
@@ -53,6 +55,33 @@ export function diagramCelsius(points: readonly SamplePoint[], fallback = 25): n
   return Math.round(median);
 }
 
+function median(values: number[]): number {
+  values.sort((a, b) => a - b);
+  const mid = values.length >> 1;
+  return values.length % 2 ? values[mid] : (values[mid - 1] + values[mid]) / 2;
+}
+
+/**
+ * The water a diagram is drawn in: per ligand, the median of the drawn samples' totals, counting a sample without
+ * the ligand as 0; a ligand is left out when that median is 0 (most samples lack it).
+ */
+export function diagramTotals(points: readonly SamplePoint[]): LigandTotals {
+  const totals: LigandTotals = {};
+  if (points.length === 0) return totals;
+  for (const ligand of LIGAND_ORDER) {
+    const m = median(points.map((p) => p.ligands?.[ligand] ?? 0));
+    if (m > 0) totals[ligand] = m;
+  }
+  return totals;
+}
+
+/** "DIC 1.73, chloride 0.56 mmol/kg" (three significant figures); "" for pure water. */
+export function totalsText(totals: LigandTotals): string {
+  const words = { carbonate: "DIC", chloride: "chloride", sulfur: "sulfur" } as const;
+  const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map((l) => `${words[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`);
+  return parts.length === 0 ? "" : `${parts.join(", ")} mmol/kg`;
+}
+
 /** What the command line draws for one metal. */
 export interface DiagramRequest {
   element: string;
@@ -61,6 +90,8 @@ export interface DiagramRequest {
   samples: readonly SamplePoint[];
   /** Lines under the legend: where the samples come from and how many were drawn. */
   caption: string[];
+  /** Ligand totals (mol/kg) of the diagram's water; absent or empty = pure water. */
+  ligands?: LigandTotals;
 }
 
 /** Diagram window: pH 0–14 and −1.5…+2 V vs SHE, which holds natural waters and both water lines. */
@@ -68,7 +99,12 @@ export const DIAGRAM_WINDOW = { pHMin: 0, pHMax: 14, eMin: -1.5, eMax: 2 } as co
 
 /** One potential–pH diagram as SVG text, vs SHE in volts, with the samples drawn on it (the pane's renderer). */
 export function renderDiagram(request: DiagramRequest): string {
-  const system = new SystemCache(getDatabase()).get(request.element, request.celsius, request.activity);
+  const db = getDatabase();
+  const options = { celsius: request.celsius, activity: request.activity };
+  const system =
+    request.ligands && hasLigands(request.ligands)
+      ? buildLigandSystem(db, request.element, options, request.ligands)
+      : new SystemCache(db).get(request.element, request.celsius, request.activity);
   const scale = displayScale("SHE", "V", request.celsius);
   const samples = plotSamples(
     system,

@@ -33,6 +33,13 @@ export interface CliOptions {
   phColumn?: string;
   potentialColumn?: string;
   temperatureColumn?: string | null;
+  /** Ligand columns (header text or 1-based number), null = "none", undefined = found by header. */
+  alkalinityColumn?: string | null;
+  dicColumn?: string | null;
+  chlorideColumn?: string | null;
+  sulfurColumn?: string | null;
+  /** Ignore every ligand column: evaluate in pure water. */
+  pureWater: boolean;
   /** Fixed temperature °C, used when there is no temperature column (and for blank cells in it). */
   temperature?: number;
   electrode?: string;
@@ -61,9 +68,17 @@ metal finds the dominant species (REDOX.SPECIES), the regime — immunity, passi
 equilibrium with the stable solid (REDOX.DISSOLVED). It writes the input columns plus result columns to a CSV,
 and one potential–pH diagram SVG per metal with the samples drawn on it.
 
+Real waters: when the file has alkalinity or DIC, chloride or sulfate columns, each row's totals go to the
+[carbonate], [chloride] and [sulfur] arguments of those functions (mol/kg; mass units are converted with the
+atomic weights of the element records, 1 L taken as 1 kg). Each ligand is taken at its full total where its own
+form predominates (an approximation within about a pH unit of its own boundaries). A blank cell there means the
+ligand is absent in that row, as in the worksheet. Every distinct total builds its own system (1–20 ms each), so
+files with a total per row run far slower than pure water; --pure-water ignores these columns.
+
 Columns are found by their headers (case and punctuation ignored): pH ("pH"), the potential reading ("ORP",
 "Eh", "redox", "potential", …), temperature ("temp", "temperature", …), the metal of each row ("metal",
-"element", "pipe metal"). The unit and electrode are read from the potential header when it names them
+"element", "pipe metal"), and the water: alkalinity ("alkalinity", "alk", "TA"), DIC ("DIC", "TIC"), chloride
+("chloride", "Cl"), sulfate ("sulfate", "SO4"). The unit and electrode are read from the potential header when it names them
 ("ORP_mV_AgCl_sat", "Eh (V)"); otherwise give --unit and --electrode. Lines starting with # are comments.
 
 Input and output
@@ -79,6 +94,15 @@ Columns (header text, or a 1-based column number)
       --temperature-column COL
                              the temperature column, °C; "none" to ignore one
       --metal-column COL     the column naming each row's metal ("Fe", "copper"); "none" to ignore one
+      --alkalinity-column COL
+                             total alkalinity, mg/L as CaCO3 (meq/L when the header says meq or mmol); each
+                             row's DIC is REDOX.DIC(alkalinity, pH, temperature); "none" to ignore one
+      --dic-column COL       dissolved inorganic carbon, mol/kg (mmol/L, µmol/L or mg/L as C when the header
+                             says so); a DIC column is used before an alkalinity column; "none" to ignore one
+      --chloride-column COL  chloride, mg/L (µg/L, mmol/L or mol/kg when the header says so); "none" to ignore
+      --sulfur-column COL    total sulfur: a sulfate column in mg/L as SO4 (mg/L as S, mmol/L or mol/kg when the
+                             header says so); "none" to ignore one
+      --pure-water           ignore every alkalinity, DIC, chloride and sulfur column (the functions' defaults)
 
 Chemistry
   -m, --metal LIST           metals evaluated on every row, comma-separated symbols or names: Fe,Cu,Pb
@@ -104,6 +128,8 @@ Messages and progress
 Result columns
   E_SHE_V                    potential vs SHE, V
   water_margin_V             distance from the water-stability window, V: positive inside, negative outside
+  DIC_mol_kg, chloride_mol_kg, sulfur_mol_kg
+                             the totals passed to the functions (only for the ligands read from columns)
   <M>_species                dominant species of metal M (M = symbol, or "metal" for the per-row metal column)
   <M>_regime                 immunity, passivation or corrosion
   <M>_boundary_above_V       nearest stability boundary above the point at its pH (#N/A if none up to +3 V)
@@ -151,6 +177,11 @@ export const OPTION_SPEC = {
   "potential-column": { type: "string" },
   "temperature-column": { type: "string" },
   "metal-column": { type: "string" },
+  "alkalinity-column": { type: "string" },
+  "dic-column": { type: "string" },
+  "chloride-column": { type: "string" },
+  "sulfur-column": { type: "string" },
+  "pure-water": { type: "boolean" },
   metal: { type: "string", short: "m", multiple: true },
   electrode: { type: "string", short: "e" },
   unit: { type: "string", short: "u" },
@@ -227,6 +258,11 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     phColumn: v["ph-column"],
     potentialColumn: v["potential-column"],
     temperatureColumn: columnOption(v["temperature-column"]),
+    alkalinityColumn: columnOption(v["alkalinity-column"]),
+    dicColumn: columnOption(v["dic-column"]),
+    chlorideColumn: columnOption(v["chloride-column"]),
+    sulfurColumn: columnOption(v["sulfur-column"]),
+    pureWater: v["pure-water"] ?? false,
     temperature: numberOption("temperature", v.temperature, (x) => x >= 0 && x <= 100, "a temperature from 0 to 100 °C"),
     electrode: v.electrode,
     unit,

@@ -10,11 +10,12 @@ import type { Writable } from "node:stream";
 import { parse } from "csv-parse";
 import { getDatabase } from "../chemistry/database";
 import { getElectrodes } from "../chemistry/electrodes";
-import { electrodeHint, headerTokens, matchHeaders } from "../taskpane/header-match";
-import { DiagramSamples, diagramCelsius, renderDiagram } from "./diagrams";
-import { EvaluationPlan, evaluateBatch, InputRow, MetalTarget, outputHeader, RowMessage } from "./evaluate";
+import { EMPTY_MAPPING, electrodeHint, headerTokens, matchHeaders } from "../taskpane/header-match";
+import { DiagramSamples, diagramCelsius, diagramTotals, renderDiagram, totalsText } from "./diagrams";
+import { csvLine, EvaluationPlan, evaluateBatch, InputRow, MetalTarget, outputHeader, RowMessage } from "./evaluate";
 import { CliOptions, EXIT, HELP, parseCommandLine, UsageError } from "./options";
 import { ProgressBar } from "./progress";
+import { planWater } from "./water";
 import { worksheetFunctions, WorksheetFunctions } from "./worksheet";
 
 export interface CliStreams {
@@ -156,6 +157,12 @@ export function planFromHeader(headers: string[], options: CliOptions): Evaluati
   const temperatureColumn = pick(options.temperatureColumn, auto.temperature, "--temperature-column");
   const metalColumn = pick(options.metalColumn === "auto" ? undefined : options.metalColumn, auto.metal, "--metal-column");
   const potentialHeader = headers[potential];
+  const ligands = planWater(
+    headers,
+    options,
+    { ...EMPTY_MAPPING, pH: ph, potential, temperature: temperatureColumn ?? -1, metal: metalColumn ?? -1, id: auto.id, site: auto.site },
+    (option, what) => pick(option, -1, what) as number,
+  );
 
   const electrodeName = options.electrode ?? electrodeHint(headerTokens(potentialHeader));
   if (electrodeName === null) {
@@ -190,15 +197,8 @@ export function planFromHeader(headers: string[], options: CliOptions): Evaluati
     overpotential: options.overpotential,
     targets,
     keepInput: options.keepInput,
+    ligands,
   };
-}
-
-function csvField(text: string): string {
-  return /[",\n\r]/.test(text) || /^\s|\s$/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
-function csvLine(cells: readonly string[]): string {
-  return cells.map(csvField).join(",") + "\n";
 }
 
 function formatMessage(m: RowMessage): string {
@@ -282,7 +282,7 @@ export async function runWithOptions(options: CliOptions, streams: CliStreams, f
     }
     for (const p of result.points) diagrams.add(p);
     let chunk = "";
-    for (const r of result.rows) chunk += csvLine(r);
+    for (const line of result.lines) chunk += line;
     if (outError) throw outError;
     if (!out.write(chunk)) await drained(out);
     if (outError) throw outError;
@@ -374,13 +374,21 @@ export async function runWithOptions(options: CliOptions, streams: CliStreams, f
         const points = diagrams.points(symbol);
         const total = diagrams.count(symbol);
         const celsius = plan.temperatureColumn === null ? (plan.fixedTemperature ?? 25) : diagramCelsius(points, plan.fixedTemperature ?? 25);
+        const ligands = diagramTotals(points);
         const caption = [
           `${total.toLocaleString("en-US")} samples from ${baseName(options.input)}${points.length < total ? ` (${points.length.toLocaleString("en-US")} drawn, chosen at random)` : ""}.`,
           plan.temperatureColumn === null
             ? `Drawn at ${celsius} °C.`
             : `Drawn at ${celsius} °C, the samples' median; each sample's result columns use its own temperature.`,
         ];
-        const svg = renderDiagram({ element: symbol, celsius, activity: plan.activity, samples: points, caption });
+        if (plan.ligands.length > 0) {
+          caption.push(
+            totalsText(ligands) === ""
+              ? "Drawn in pure water (no sample has ligand totals); each sample's result columns use its own water."
+              : `Drawn in water with the samples' median totals (${totalsText(ligands)}); each sample's result columns use its own water.`,
+          );
+        }
+        const svg = renderDiagram({ element: symbol, celsius, activity: plan.activity, samples: points, caption, ligands });
         const file = join(options.svgDir, `diagram-${symbol}.svg`);
         writeFileSync(file, svg, "utf8");
         svgFiles.push(file);

@@ -7,20 +7,43 @@ import type { CellInput, CellOutput } from "../functions/cell-values";
 import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../functions/stability-functions";
 import { toSHEAt } from "../functions/electrode-functions";
 import { waterMarginAt } from "../functions/water-functions";
+import { dicAt } from "../functions/carbonate-functions";
 
 export interface WorksheetFunctions {
   /** REDOX.TOSHE(reading, electrode, [temperature], [pH]) */
   toShe(reading: CellInput, electrode: CellInput, temperature?: CellInput, pH?: CellInput): CellOutput[][];
   /** REDOX.WATERMARGIN(pH, potential, [temperature], [overpotential]) */
   waterMargin(pH: CellInput, potential: CellInput, temperature?: CellInput, overpotential?: CellInput): CellOutput[][];
-  /** REDOX.SPECIES(element, pH, potential, [temperature], [activity]) */
-  species(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][];
-  /** REDOX.REGIME(element, pH, potential, [temperature], [activity]) */
-  regime(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][];
-  /** REDOX.BOUNDARY(element, pH, potential, [direction], [temperature], [activity]) */
-  boundary(element: CellInput, pH: CellInput, potential: CellInput, direction?: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][];
-  /** REDOX.DISSOLVED(element, pH, potential, [temperature], [unit], [activity]) */
-  dissolved(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, unit?: CellInput, activity?: CellInput): CellOutput[][];
+  /** REDOX.SPECIES(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur]) */
+  species(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput): CellOutput[][];
+  /** REDOX.REGIME(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur]) */
+  regime(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput): CellOutput[][];
+  /** REDOX.BOUNDARY(element, pH, potential, [direction], [temperature], [activity], [carbonate], [chloride], [sulfur]) */
+  boundary(
+    element: CellInput,
+    pH: CellInput,
+    potential: CellInput,
+    direction?: CellInput,
+    temperature?: CellInput,
+    activity?: CellInput,
+    carbonate?: CellInput,
+    chloride?: CellInput,
+    sulfur?: CellInput,
+  ): CellOutput[][];
+  /** REDOX.DISSOLVED(element, pH, potential, [temperature], [unit], [activity], [carbonate], [chloride], [sulfur]) */
+  dissolved(
+    element: CellInput,
+    pH: CellInput,
+    potential: CellInput,
+    temperature?: CellInput,
+    unit?: CellInput,
+    activity?: CellInput,
+    carbonate?: CellInput,
+    chloride?: CellInput,
+    sulfur?: CellInput,
+  ): CellOutput[][];
+  /** REDOX.DIC(alkalinity, pH, [temperature]) */
+  dic(alkalinity: CellInput, pH: CellInput, temperature?: CellInput): CellOutput[][];
 }
 
 export const worksheetFunctions: WorksheetFunctions = {
@@ -30,4 +53,5 @@ export const worksheetFunctions: WorksheetFunctions = {
   regime: regimeAt,
   boundary: boundaryFrom,
   dissolved: dissolvedAt,
+  dic: dicAt,
 };

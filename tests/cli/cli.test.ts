@@ -14,6 +14,8 @@ import { CellError, type CellOutput } from "../../src/functions/cell-values";
 import { toSHEAt } from "../../src/functions/electrode-functions";
 import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../../src/functions/stability-functions";
 import { waterMarginAt } from "../../src/functions/water-functions";
+import { dicAt } from "../../src/functions/carbonate-functions";
+import { getDatabase } from "../../src/chemistry/database";
 import { formatNumber } from "../../src/cli/evaluate";
 import { HELP, OPTION_SPEC } from "../../src/cli/options";
 import { runCommand } from "../../src/cli/run";
@@ -222,6 +224,109 @@ describe("small files", () => {
     expect(r.code).toBe(0);
     for (const name of Object.keys(OPTION_SPEC)) expect(HELP, name).toContain(`--${name}`);
     for (const code of ["0", "1", "2", "3"]) expect(HELP).toMatch(new RegExp(`^  ${code}  `, "m"));
+  });
+});
+
+describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate], [chloride], [sulfur]", () => {
+  const write = (name: string, text: string): string => {
+    const path = join(dir, name);
+    writeFileSync(path, text);
+    return path;
+  };
+  const read = (name: string) => parseSync(readFileSync(join(dir, name), "utf8"), { columns: true }) as Record<string, string>[];
+  // atomic weights from the element records, as the command line converts mg/L (1 L taken as 1 kg)
+  const weight = (symbol: string) => getDatabase().element(symbol)!.atomicWeight;
+
+  it("alkalinity (mg/L as CaCO3) → REDOX.DIC per row → the carbonate argument; chloride and sulfate in mg/L → mol/kg", async () => {
+    const input = write(
+      "water.csv",
+      "site,pH,ORP_mV_AgCl_sat,temp_C,pipe_metal,Alkalinity (mg/L CaCO3),Chloride mg/L,Sulfate mg/L\n" +
+        "A,7.2,350,12,Pb,80,35,40\n" +
+        "B,8.1,-250,18,Cu,150,,120\n" +
+        "C,6.9,420,9,Pb,,20,\n",
+    );
+    const r = await run([input, "-o", join(dir, "water-out.csv"), "--no-svg", "--quiet"]);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toContain(`line 4, column "Alkalinity (mg/L CaCO3)": blank; this row is evaluated without carbonate`);
+    const rows = read("water-out.csv");
+    expect(Object.keys(rows[0])).toEqual([
+      "site", "pH", "ORP_mV_AgCl_sat", "temp_C", "pipe_metal", "Alkalinity (mg/L CaCO3)", "Chloride mg/L", "Sulfate mg/L",
+      "E_SHE_V", "water_margin_V", "DIC_mol_kg", "chloride_mol_kg", "sulfur_mol_kg",
+      "metal_species", "metal_regime", "metal_boundary_above_V", "metal_boundary_below_V", "metal_dissolved_ug_L", "errors",
+    ]);
+    const cases: Array<[string, number, number, number, number | string, number | string, number | string]> = [
+      // metal, pH, reading mV, °C, alkalinity, chloride mg/L, sulfate mg/L
+      ["Pb", 7.2, 350, 12, 80, 35, 40],
+      ["Cu", 8.1, -250, 18, 150, "", 120],
+      ["Pb", 6.9, 420, 9, "", 20, ""],
+    ];
+    let carbonateMattered = false;
+    cases.forEach(([metal, pH, mV, t, alk, cl, so4], i) => {
+      const row = rows[i];
+      const e = toSHEAt(mV / 1000, "AgCl-sat", t)[0][0] as number;
+      const dic = alk === "" ? "" : (dicAt(alk, pH, t)[0][0] as number);
+      const chloride = cl === "" ? "" : (cl as number) / 1000 / weight("Cl");
+      const sulfur = so4 === "" ? "" : (so4 as number) / 1000 / (weight("S") + 4 * weight("O"));
+      expect(row.DIC_mol_kg).toBe(dic === "" ? "" : formatNumber(dic));
+      expect(row.chloride_mol_kg).toBe(chloride === "" ? "" : formatNumber(chloride));
+      expect(row.sulfur_mol_kg).toBe(sulfur === "" ? "" : formatNumber(sulfur));
+      expect(row.metal_species).toBe(expectedText(speciesAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
+      expect(row.metal_regime).toBe(expectedText(regimeAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
+      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, 1, t, undefined, dic, chloride, sulfur)[0][0]));
+      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, -1, t, undefined, dic, chloride, sulfur)[0][0]));
+      expect(row.metal_dissolved_ug_L).toBe(expectedText(dissolvedAt(metal, pH, e, t, "ug/L", undefined, dic, chloride, sulfur)[0][0]));
+      if (row.metal_species !== expectedText(speciesAt(metal, pH, e, t)[0][0])) carbonateMattered = true;
+    });
+    // the water changes at least one answer here (lead carbonates at pH 7.2 with 80 mg/L alkalinity)
+    expect(carbonateMattered).toBe(true);
+
+    const pure = await run([input, "-o", join(dir, "water-pure.csv"), "--no-svg", "--quiet", "--pure-water"]);
+    expect(pure.code).toBe(0);
+    const pureRows = read("water-pure.csv");
+    expect(Object.keys(pureRows[0])).not.toContain("DIC_mol_kg");
+    cases.forEach(([metal, pH, mV, t], i) => {
+      const e = toSHEAt(mV / 1000, "AgCl-sat", t)[0][0] as number;
+      expect(pureRows[i].metal_species).toBe(expectedText(speciesAt(metal, pH, e, t)[0][0]));
+    });
+
+    const noChloride = await run([input, "-o", join(dir, "water-nocl.csv"), "--no-svg", "--quiet", "--chloride-column", "none"]);
+    expect(Object.keys(read("water-nocl.csv")[0])).toEqual(expect.not.arrayContaining(["chloride_mol_kg"]));
+    expect(noChloride.code).toBe(0);
+  });
+
+  it("a DIC column (mmol/L) is used before the alkalinity; named columns and units from the header", async () => {
+    const input = write("dic.csv", "pH,Eh_V,metal,alk,DIC mmol/L,total S mol/kg\n7.5,-0.3,Fe,100,2.1,0.0004\n");
+    const r = await run([input, "-o", join(dir, "dic-out.csv"), "--no-svg", "--quiet", "--sulfur-column", "total S mol/kg"]);
+    expect(r.code).toBe(0);
+    const [row] = read("dic-out.csv");
+    expect(row.DIC_mol_kg).toBe(formatNumber(2.1 / 1000));
+    expect(row.sulfur_mol_kg).toBe("0.0004");
+    expect(row.metal_species).toBe(expectedText(speciesAt("Fe", 7.5, -0.3, undefined, undefined, 0.0021, undefined, 0.0004)[0][0]));
+    // naming the alkalinity column takes the carbonate from it instead
+    const alk = await run([input, "-o", join(dir, "dic-alk.csv"), "--no-svg", "--quiet", "--alkalinity-column", "alk", "--dic-column", "none"]);
+    expect(alk.code).toBe(0);
+    expect(read("dic-alk.csv")[0].DIC_mol_kg).toBe(formatNumber(dicAt(100, 7.5)[0][0] as number));
+    const both = await run([input, "--no-svg", "--alkalinity-column", "alk", "--dic-column", "5"]);
+    expect(both.code).toBe(2);
+    expect(both.stderr).toContain("name one of them");
+  });
+
+  it("bad water cells: messages name the column; an unusable alkalinity passes REDOX.DIC's error on, as a worksheet does", async () => {
+    const input = write("water-bad.csv", "pH,Eh_V,metal,alkalinity,chloride\n7,0.3,Cu,lots,10\n7,0.3,Cu,50,-5\n11.5,0.3,Cu,5,10\n");
+    const r = await run([input, "-o", join(dir, "water-bad-out.csv"), "--no-svg", "--quiet"]);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toContain(`line 2, column "alkalinity": expected a number, got the text "lots" (#VALUE!)`);
+    expect(r.stderr).toMatch(/line 3, column "chloride": .*out of range.* \(#NUM!\)/);
+    // 5 mg/L alkalinity cannot hold pH 11.5: hydroxide alone exceeds it
+    expect(r.stderr).toMatch(/line 4, column "alkalinity": .*hydroxide exceeds.*\(#NUM!\)/);
+    const rows = read("water-bad-out.csv");
+    expect(rows[0].DIC_mol_kg).toBe("#VALUE!");
+    expect(rows[0].metal_species).toBe("#VALUE!");
+    expect(rows[0].water_margin_V).not.toMatch(/^#/); // the margin does not take the carbonate
+    expect(rows[1].chloride_mol_kg).toBe("#NUM!");
+    expect(rows[1].metal_regime).toBe("#NUM!");
+    expect(rows[2].DIC_mol_kg).toBe("#NUM!");
+    expect(rows[2].metal_species).toBe("#NUM!");
   });
 });
 
