@@ -30,6 +30,10 @@ async function main(): Promise<number> {
     else entry.other++;
   }
 
+  const withCarbonate = rows.filter((r) => Number(r.DIC_mol_kg) > 0).length;
+  console.log(
+    `\nEach sample is evaluated in its own water: carbonate (DIC) from its alkalinity, pH and temperature (REDOX.DIC) for ${withCarbonate} of ${rows.length} samples.`,
+  );
   console.log(`\nSamples per regime of each site's pipe metal (${rows.length} samples):`);
   const width = Math.max(...[...bySite.keys()].map((s) => s.length)) + 2;
   console.log(`  ${"site".padEnd(width)}${"metal".padEnd(7)}${regimes.map((r) => r.padStart(13)).join("")}${"not evaluated".padStart(15)}`);

@@ -1,6 +1,7 @@
 // Writes data/demo/demo-workbook.xlsx: the INVENTED demo log (data/demo/sample-log.csv) on a sheet, with REDOX
-// formulas filled down in result columns — potential vs SHE (REDOX.TOSHE), water margin, and for the pipe metal of
-// each site the dominant species, regime, nearest boundaries above and below, and dissolved metal. A second sheet
+// formulas filled down in result columns — potential vs SHE (REDOX.TOSHE), water margin, dissolved inorganic carbon
+// from the alkalinity (REDOX.DIC), and for the pipe metal of each site in that water the dominant species, regime,
+// nearest boundaries above and below, and dissolved metal. A second sheet
 // says what the workbook is. Open it in Excel with the Redox Cells add-in loaded; formulas recalculate on load.
 //
 // Usage: npx tsx scripts/generate-demo-workbook.ts [input.csv] [output.xlsx]
@@ -45,19 +46,25 @@ async function main(): Promise<void> {
   const pH = col("pH");
   const orp = col("ORP_mV_AgCl_sat");
   const temp = col("temp_C");
+  const alkalinity = col("alkalinity_mg_L_CaCO3");
   const first = header.length + 1;
   const E = letter(first);
+  const DIC = letter(first + 2);
+  // activity of dissolved metal species (the functions' default, written out so the carbonate can follow it)
+  const activity = "1E-6";
 
   /** Result columns: header and formula for sheet row r (formulas without the leading "="). */
   const results: Array<[string, (r: number) => string]> = [
     // readings are in mV against a saturated Ag/AgCl electrode; TOSHE takes volts
     ["E_SHE_V", (r) => `IF(${orp}${r}="","",REDOX.TOSHE(${orp}${r}/1000,"AgCl-sat",${temp}${r}))`],
     ["water_margin_V", (r) => `REDOX.WATERMARGIN(${pH}${r},${E}${r},${temp}${r})`],
-    ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r})`],
-    ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r})`],
-    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},1,${temp}${r})`],
-    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},-1,${temp}${r})`],
-    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},"ug/L")`],
+    // the water: dissolved inorganic carbon (mol/kg) from the alkalinity at the sample's pH and temperature
+    ["DIC_mol_kg", (r) => `REDOX.DIC(${alkalinity}${r},${pH}${r},${temp}${r})`],
+    ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
+    ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
+    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},1,${temp}${r},${activity},${DIC}${r})`],
+    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},-1,${temp}${r},${activity},${DIC}${r})`],
+    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},"ug/L",${activity},${DIC}${r})`],
   ];
 
   const workbook = new ExcelJS.Workbook();
@@ -105,8 +112,10 @@ async function main(): Promise<void> {
     "INVENTED DATA: the Brackenholm Water Cooperative, its sites and samples are fictional, made up to show the functions at work.",
     "",
     "Sheet 'Sample log': one row per sample. ORP is in mV against a saturated Ag/AgCl electrode; the result columns convert it",
-    `to volts vs SHE with REDOX.TOSHE and evaluate the pipe metal named in column ${metal} (pipe_metal) at the sample's pH and temperature:`,
+    `to volts vs SHE with REDOX.TOSHE and evaluate the pipe metal named in column ${metal} (pipe_metal) at the sample's pH and temperature,`,
+    "in the sample's own water: its dissolved inorganic carbon from the alkalinity goes to the functions' carbonate argument.",
     "  water_margin_V       REDOX.WATERMARGIN — distance from the water-stability window (positive inside)",
+    "  DIC_mol_kg           REDOX.DIC — dissolved inorganic carbon, mol/kg, from the alkalinity (mg/L as CaCO3), pH and temperature",
     "  pipe_species         REDOX.SPECIES — dominant species of the pipe metal",
     "  pipe_regime          REDOX.REGIME — immunity, passivation or corrosion",
     "  boundary_above_V     REDOX.BOUNDARY(…, 1, …) — nearest stability boundary above the sample",
@@ -114,7 +123,10 @@ async function main(): Promise<void> {
     "  pipe_dissolved_ug_L  REDOX.DISSOLVED — dissolved metal in equilibrium with the stable solid, µg/L (#N/A where none is stable)",
     "",
     "Some cells are blank or mistyped on purpose (a decimal comma, '7.4.1', 'n/a', '1O.4', '612 mV', pH 17.2): their rows show",
-    "blank results or #VALUE! / #NUM!, as a real log would.",
+    "blank results or #VALUE! / #NUM!, as a real log would. A blank alkalinity leaves that sample's water without carbonate.",
+    "",
+    "Carbonate is treated at its fixed total by predominance: in each region its predominant form carries the whole total",
+    "(an approximation within about a pH unit of the carbonate boundaries); ideal dilute water.",
     "",
     "Thermodynamics says which state is stable, not how fast a metal corrodes. For lead and copper in drinking water, confirm",
     "by laboratory analysis and defer to local codes, regulators and licensed corrosion professionals.",

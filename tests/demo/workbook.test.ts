@@ -1,7 +1,8 @@
 // The demo workbook (data/demo/demo-workbook.xlsx, scripts/generate-demo-workbook.ts): every formula parses, calls
 // only functions the built add-in declares (dist/functions.json, namespace REDOX) with an argument count the
 // declaration allows, and — evaluated through the BUILT bundle (tests/bundle/harness.ts) with its cell references
-// resolved to the row's values — gives the values the command line writes for the same rows of the demo log.
+// resolved to the row's values — gives the values the command line writes for the same rows of the demo log, the
+// sample's water (carbonate from its alkalinity, REDOX.DIC) included.
 // Needs a build: `npm test` builds first; alone, build to a temporary directory and set REDOX_DIST.
 
 import { mkdtempSync, readFileSync, rmSync } from "node:fs";
@@ -71,7 +72,7 @@ afterAll(() => {
 
 describe("demo workbook formulas", () => {
   it("has formulas in every result column of every data row", () => {
-    expect(formulas.length).toBe(cliRows.length * 7);
+    expect(formulas.length).toBe(cliRows.length * 8);
   });
 
   it("calls only declared REDOX functions (and IF) with argument counts the declarations allow", () => {
@@ -96,7 +97,7 @@ describe("demo workbook formulas", () => {
       }
     }
     expect(problems).toEqual([]);
-    expect([...used].sort()).toEqual(["BOUNDARY", "DISSOLVED", "REGIME", "SPECIES", "TOSHE", "WATERMARGIN"]);
+    expect([...used].sort()).toEqual(["BOUNDARY", "DIC", "DISSOLVED", "REGIME", "SPECIES", "TOSHE", "WATERMARGIN"]);
   });
 
   it("evaluated through the built bundle, gives the values the command line writes", async () => {
@@ -136,6 +137,7 @@ describe("demo workbook formulas", () => {
     const counterpart: Record<string, string> = {
       E_SHE_V: "E_SHE_V",
       water_margin_V: "water_margin_V",
+      DIC_mol_kg: "DIC_mol_kg",
       pipe_species: "metal_species",
       pipe_regime: "metal_regime",
       boundary_above_V: "metal_boundary_above_V",
@@ -175,6 +177,10 @@ describe("demo workbook formulas", () => {
     // the comparison is not vacuous: most cells are numbers, and the mistyped rows give error values
     expect(numbers).toBeGreaterThan(cliRows.length * 3);
     expect(errorsSeen).toBeGreaterThan(0);
+    // and the water is not pure: the alkalinity's carbonate reaches the functions (carbonate species dominate some
+    // lead and copper samples in both the workbook and the command line)
+    expect(cliRows.filter((r) => r.metal_species.includes("CO3")).length).toBeGreaterThan(0);
+    expect(cliRows.filter((r) => Number(r.DIC_mol_kg) > 0).length).toBeGreaterThan(cliRows.length / 2);
     expect(await callFunction(bundle.functions.get("TOSHE")!, [[[0.5]], [["AgCl-sat"]], null, null])).not.toBeInstanceOf(StandInError);
   });
 });
