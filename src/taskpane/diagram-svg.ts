@@ -10,7 +10,7 @@ import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./a
 import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
 import { formulaSegments, Segment } from "./formula-markup";
 import { formatTotals } from "./ligand-inputs";
-import { placeLabel } from "./label-placement";
+import { placeLabel, touchingGroups } from "./label-placement";
 import {
   AXIS_TEXT,
   LABEL_TEXT,
@@ -211,22 +211,36 @@ export function renderDiagramSvg(o: DiagramSvgOptions): string {
   out.push(`<g class="rc-labels" fill="${LABEL_TEXT}" text-anchor="middle" pointer-events="none" paint-order="stroke" stroke="#ffffff" stroke-width="3" stroke-opacity="0.75" stroke-linejoin="round">`);
   const placed = pixelRegions.map(({ region, pixels }) => {
     const segments = formulaSegments(region.formula, region.charge);
-    let chosen: { x: number; y: number; size: number; fits: boolean } | null = null;
+    let chosen: { x: number; y: number; size: number; fits: boolean; room: number } | null = null;
     for (const size of LABEL_SIZES) {
       const place = placeLabel(pixels, formulaWidth(segments, size) + 4, size * 1.25 + 2);
       if (place.fits || size === LABEL_SIZES[LABEL_SIZES.length - 1]) {
-        chosen = { x: place.x, y: place.y, size, fits: place.fits };
+        chosen = { x: place.x, y: place.y, size, fits: place.fits, room: place.room };
         if (place.fits) break;
       }
     }
     return { region, segments, chosen };
   });
-  // A species split over several ligand cells has several pieces: a piece too small for its label is left
-  // unlabelled when another piece of the same species carries the label in full. (In pure water each species has
-  // one piece, so every region keeps its label.)
-  const fitted = new Set(placed.filter((p) => p.chosen?.fits).map((p) => p.region.formula));
-  for (const { region, segments, chosen } of placed) {
-    if (!chosen || (!chosen.fits && fitted.has(region.formula))) continue;
+  // A species split by ligand boundaries into touching pieces reads as one region: it is labelled once, on the
+  // piece where its label fits largest (then with the most room). In pure water each species has one piece, so
+  // every region keeps its own label.
+  const groups = touchingGroups(pixelRegions.map(({ region, pixels }) => ({ key: region.formula, pixels })));
+  const better = (a: (typeof placed)[number], b: (typeof placed)[number]) => {
+    const p = a.chosen!;
+    const q = b.chosen!;
+    if (p.fits !== q.fits) return p.fits;
+    if (p.size !== q.size) return p.size > q.size;
+    return p.room > q.room;
+  };
+  const labelOf = new Map<number, number>();
+  placed.forEach((p, i) => {
+    if (!p.chosen) return;
+    const current = labelOf.get(groups[i]);
+    if (current === undefined || better(p, placed[current])) labelOf.set(groups[i], i);
+  });
+  for (let i = 0; i < placed.length; i++) {
+    const { region, segments, chosen } = placed[i];
+    if (!chosen || labelOf.get(groups[i]) !== i) continue;
     out.push(
       `<text class="rc-label" data-formula="${escapeXml(region.formula)}" data-fits="${chosen.fits}" x="${fixed(chosen.x, 1)}" y="${fixed(chosen.y + chosen.size * 0.35, 1)}" font-size="${chosen.size}">${segmentsSvg(segments)}</text>`,
     );

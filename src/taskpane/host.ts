@@ -13,6 +13,8 @@ export interface PaneSettings {
   unit?: "V" | "mV";
   metal?: string;
   activity?: number;
+  /** Ligand totals as typed (text, blank = absent) and the header of a column chosen instead. */
+  water?: Partial<Record<"carbonate" | "chloride" | "sulfur", { total?: string; column?: string }>>;
 }
 
 export interface PictureRequest {

@@ -99,3 +99,35 @@ export function placeLabel(polygon: readonly Pixel[], width: number, height: num
   }
   return { ...best, fits: best.room >= 0 };
 }
+
+/** Distance from point p to the segment a–b, px. */
+function segmentDistance(p: Pixel, a: Pixel, b: Pixel): number {
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const length2 = dx * dx + dy * dy;
+  const t = length2 === 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / length2));
+  return Math.hypot(p[0] - a[0] - t * dx, p[1] - a[1] - t * dy);
+}
+
+/** Whether two convex polygons touch: a vertex of either lies within `tolerance` px of the other's boundary. */
+export function polygonsTouch(a: readonly Pixel[], b: readonly Pixel[], tolerance = 0.75): boolean {
+  const near = (p: Pixel, polygon: readonly Pixel[]) => polygon.some((v, i) => segmentDistance(p, v, polygon[(i + 1) % polygon.length]) <= tolerance);
+  return a.some((p) => near(p, b)) || b.some((p) => near(p, a));
+}
+
+/**
+ * Groups of pieces that form one visible region: pieces with the same key (a species' formula) that touch,
+ * directly or through each other. A species split by a ligand boundary into adjacent pieces is then labelled
+ * once. Returns a group number per piece (pieces alone get their own).
+ */
+export function touchingGroups(pieces: readonly { readonly key: string; readonly pixels: readonly Pixel[] }[]): number[] {
+  const parent = pieces.map((_, i) => i);
+  const root = (i: number): number => (parent[i] === i ? i : (parent[i] = root(parent[i])));
+  for (let i = 0; i < pieces.length; i++) {
+    for (let j = i + 1; j < pieces.length; j++) {
+      if (pieces[i].key !== pieces[j].key || root(i) === root(j)) continue;
+      if (polygonsTouch(pieces[i].pixels, pieces[j].pixels)) parent[root(j)] = root(i);
+    }
+  }
+  return pieces.map((_, i) => root(i));
+}

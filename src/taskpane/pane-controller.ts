@@ -111,9 +111,15 @@ export class DiagramPane {
       redraw();
     });
     for (const ligand of LIGAND_ORDER) {
-      input(`${ligand}-total`).addEventListener("change", redraw);
+      const saved = this.settings.water?.[ligand]?.total;
+      if (saved) input(`${ligand}-total`).value = saved;
+      input(`${ligand}-total`).addEventListener("change", () => {
+        this.rememberWater();
+        redraw();
+      });
       select(`${ligand}-source`).addEventListener("change", () => {
         input(`${ligand}-total`).disabled = select(`${ligand}-source`).value !== "typed";
+        this.rememberWater();
         redraw();
       });
     }
@@ -201,7 +207,7 @@ export class DiagramPane {
     for (const ligand of LIGAND_ORDER) {
       const role = LIGAND_COLUMN[ligand];
       const menu = select(`${ligand}-source`);
-      const previous = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : undefined;
+      const previous = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : this.settings.water?.[ligand]?.column;
       menu.replaceChildren(new Option("typed total", "typed"));
       const found = this.waterFound[role];
       const order = found ? [found.index, ...headers.keys()].filter((i, k, all) => all.indexOf(i) === k) : [...headers.keys()];
@@ -279,6 +285,19 @@ export class DiagramPane {
       unit: select("unit").value as PotentialUnit,
       activity: Number.isFinite(activity) && activity > 0 ? activity : undefined,
     };
+    void this.host.saveSettings(this.settings);
+  }
+
+  /** Ligand totals and column choices, kept with the workbook (or the browser). */
+  private rememberWater(): void {
+    const water: NonNullable<PaneSettings["water"]> = {};
+    for (const ligand of LIGAND_ORDER) {
+      const menu = select(`${ligand}-source`);
+      const total = input(`${ligand}-total`).value.trim();
+      const column = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : undefined;
+      if (total || column !== undefined) water[ligand] = { ...(total ? { total } : {}), ...(column !== undefined ? { column } : {}) };
+    }
+    this.settings = { ...this.settings, water };
     void this.host.saveSettings(this.settings);
   }
 

@@ -14,7 +14,9 @@ import { dicAt } from "../../src/functions/carbonate-functions";
 import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/taskpane/header-match";
 import { formatTotals, PURE_WATER, resolveWater, roundTotal, rowTotal, waterCaption, WaterSettings } from "../../src/taskpane/ligand-inputs";
 import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/taskpane/diagram-model";
-import { renderDiagramSvg, sampleText } from "../../src/taskpane/diagram-svg";
+import { diagramLayout, renderDiagramSvg, sampleText } from "../../src/taskpane/diagram-svg";
+import { makeAxes } from "../../src/taskpane/axes";
+import { touchingGroups } from "../../src/taskpane/label-placement";
 import { readSamples } from "../../src/taskpane/sample-table";
 import { EMPTY_MAPPING } from "../../src/taskpane/header-match";
 
@@ -181,5 +183,25 @@ describe("samples in a water with ligands", () => {
     const svg = renderDiagramSvg({ system, window, regions, samples: [], water: shownWaterLines(25, scale), axisTitle: scale.axisTitle, unit: "V", width: 800, height: 650 });
     const labelled = new Set([...svg.matchAll(/class="rc-label" data-formula="([^"]+)"/g)].map((m) => m[1].replace(/&amp;/g, "&")));
     for (const f of formulas) expect(labelled.has(f), f).toBe(true);
+    // touching pieces of one species read as one region and carry one label
+    const labels = [...svg.matchAll(/class="rc-label"/g)].length;
+    expect(labels).toBeLessThan(regions.length);
+    const axes = makeAxes(window, diagramLayout(800, 650, 0));
+    expect(labels).toBe(new Set(touchingGroups(regions.map((r) => ({ key: r.formula, pixels: r.vertices.map(([x, y]) => [axes.x(x), axes.y(y)] as const) })))).size);
+  });
+
+  it("groups touching pieces of the same species only", () => {
+    const square = (x: number, y: number) => [[x, y], [x + 10, y], [x + 10, y + 10], [x, y + 10]] as const;
+    const groups = touchingGroups([
+      { key: "A", pixels: square(0, 0) },
+      { key: "A", pixels: square(10, 0) }, // shares an edge with the first
+      { key: "B", pixels: square(20, 0) }, // touches the second but is another species
+      { key: "A", pixels: square(40, 0) }, // same species, apart
+      { key: "A", pixels: square(30, 0) }, // bridges B's neighbour… only to the fourth
+    ]);
+    expect(groups[0]).toBe(groups[1]);
+    expect(groups[2]).not.toBe(groups[1]);
+    expect(groups[3]).toBe(groups[4]);
+    expect(groups[3]).not.toBe(groups[0]);
   });
 });
