@@ -19,6 +19,12 @@ import { pKw } from "./water";
 /** Grams of CaCO3 per equivalent: ½ × 100.087 g/mol (IUPAC atomic weights; common practice for "as CaCO3"). */
 export const CACO3_GRAMS_PER_EQUIVALENT = 100.087 / 2;
 
+/**
+ * pH of the total-alkalinity titration end point (about 4.5; common practice, e.g. Standard Methods 2320). A
+ * sample already below it has no total alkalinity, so an alkalinity reported with such a pH cannot be carbonate.
+ */
+export const ALKALINITY_END_POINT_PH = 4.5;
+
 export class AlkalinityError extends Error {}
 
 /** Total alkalinity (mg/L as CaCO3) → equivalents per kg (dilute water, 1 L ≈ 1 kg). */
@@ -29,10 +35,13 @@ export function alkalinityEquivalents(mgPerLitreAsCaCO3: number): number {
 /**
  * Total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3), pH and temperature (°C).
  * Throws AlkalinityError when the carbonate alkalinity Alk − [OH−] + [H+] is not positive (hydroxide alone exceeds
- * the total alkalinity): no carbonate water matches that pair of numbers. Meaningful above the titration end point
- * (pH ≈ 4.5); below it the result grows without bound as α1 + 2α2 → 0.
+ * the total alkalinity): no carbonate water matches that pair of numbers; and below the titration end point
+ * (pH < 4.5), where DIC is not determined by alkalinity (α1 + 2α2 → 0 and the quotient grows without bound).
  */
 export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, db: Database = getDatabase()): number {
+  if (pH < ALKALINITY_END_POINT_PH) {
+    throw new AlkalinityError(`pH ${pH} is below the alkalinity end point (${ALKALINITY_END_POINT_PH}): alkalinity does not determine DIC there`);
+  }
   const h = 10 ** -pH;
   const k1 = 10 ** -carbonicPK1(celsius);
   const k2 = 10 ** -carbonicPK2(celsius);

@@ -204,7 +204,7 @@ export function speciestable(element: any[][], temperature?: any[][]): any[][] {
 }
 
 /**
- * Total dissolved inorganic carbon (mol/kg) from total alkalinity and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. Meaningful above the alkalinity end point, pH about 4.5.
+ * Total dissolved inorganic carbon (mol/kg) from total alkalinity and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. #NUM! below the alkalinity end point (pH 4.5), where alkalinity does not determine DIC.
  * @customfunction DIC
  * @param {any[][]} alkalinity Total alkalinity in mg/L as CaCO3, 0 or more.
  * @param {any[][]} pH pH, from -2 to 16.
