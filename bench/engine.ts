@@ -4,6 +4,7 @@
 import { getDatabase } from "../src/chemistry/database";
 import { diagramRegions } from "../src/chemistry/predominance";
 import { buildSystem, dominantSpecies, dominantSpeciesBatch } from "../src/chemistry/system";
+import { mulberry32 } from "../src/cli/seeded-random";
 import { speciesAt } from "../src/functions/stability-functions";
 
 export interface BenchRow {
@@ -13,19 +14,8 @@ export interface BenchRow {
   met: boolean | null;
 }
 
-/** Deterministic pseudo-random numbers (mulberry32), so runs are comparable. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-function best(runs: number, fn: () => void): number {
+/** Fastest of `runs` calls, ms. */
+export function best(runs: number, fn: () => void): number {
   let fastest = Infinity;
   for (let i = 0; i < runs; i++) {
     const start = performance.now();
@@ -38,7 +28,7 @@ function best(runs: number, fn: () => void): number {
 export function benchEngine(): BenchRow[] {
   const db = getDatabase();
   const rows: BenchRow[] = [];
-  const next = random(42);
+  const next = mulberry32(42);
 
   // (a) batch kernel: 1 M rows of typed arrays through one iron system
   const n = 1_000_000;

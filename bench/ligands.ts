@@ -7,17 +7,7 @@
 import { getDatabase } from "../src/chemistry/database";
 import { buildLigandSystem } from "../src/chemistry/ligand-system";
 import { buildSystem, dominantSpeciesBatch } from "../src/chemistry/system";
-import { BenchRow, fmt } from "./engine";
-
-function best(runs: number, fn: () => void): number {
-  let fastest = Infinity;
-  for (let i = 0; i < runs; i++) {
-    const start = performance.now();
-    fn();
-    fastest = Math.min(fastest, performance.now() - start);
-  }
-  return fastest;
-}
+import { BenchRow, best, fmt } from "./engine";
 
 export function benchLigands(): BenchRow[] {
   const db = getDatabase();

@@ -10,18 +10,12 @@ import { getDatabase } from "../src/chemistry/database";
 import { buildSystem } from "../src/chemistry/system";
 import { displayScale, defaultWindow, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../src/taskpane/diagram-model";
 import { renderDiagramSvg } from "../src/taskpane/diagram-svg";
+import { mulberry32 } from "../src/cli/seeded-random";
 import type { BenchRow } from "./engine";
 
 /** Deterministic samples spread over the usual window (mulberry32). */
 export function syntheticSamples(count: number, seed = 7): SampleInput[] {
-  let a = seed >>> 0;
-  const next = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const next = mulberry32(seed);
   return Array.from({ length: count }, (_, i) => ({ row: i + 2, id: `S-${i + 1}`, pH: 4 + 6 * next(), eSHE: -0.6 + 1.4 * next() }));
 }
 

@@ -3,17 +3,8 @@
 // and a metal per row. Seeded, so every run writes the same file. Test data only — not the demo scenario.
 import { createWriteStream } from "node:fs";
 import { once } from "node:events";
+import { mulberry32 } from "../../src/cli/seeded-random";
 
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 export const SYNTHETIC_HEADER = ["id", "pH", "ORP_mV_AgCl_sat", "temp_C", "metal"];
 const METALS = ["Fe", "Cu", "Zn", "Pb"];
