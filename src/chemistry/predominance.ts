@@ -5,7 +5,7 @@
 import { FARADAY, GAS_CONSTANT } from "./constants";
 import { envelopeRegions } from "./envelope";
 import { clipPolygon, intervalOnVertical, Point, polygonArea, rectangle } from "./halfplane";
-import { cellAt, dominantSpecies, MetalSystem, PlaneCell } from "./system";
+import { cellAt, dominantSpecies, MetalSystem, PlaneCell, PRUNE_PH_MAX, PRUNE_PH_MIN } from "./system";
 
 /** Potentials searched for boundaries, V vs SHE (GUIDE §3: #N/A when none in −3…+3 V). */
 export const BOUNDARY_SEARCH_LOW = -3;
@@ -89,6 +89,8 @@ export function boundariesAtPH(system: MetalSystem, pH: number, lo = BOUNDARY_SE
  * −3…+3 V. A point exactly on a boundary looks past it.
  */
 export function nearestBoundary(system: MetalSystem, pH: number, E: number, direction: 1 | -1): BoundaryCrossing | null {
+  const quick = nearestBoundaryInOneCell(system, pH, E, direction);
+  if (quick !== undefined) return quick;
   const crossings = boundariesAtPH(system, pH);
   if (direction > 0) {
     for (const c of crossings) if (c.E > E) return c;
@@ -96,6 +98,44 @@ export function nearestBoundary(system: MetalSystem, pH: number, E: number, dire
   }
   for (let i = crossings.length - 1; i >= 0; i--) if (crossings[i].E < E) return crossings[i];
   return null;
+}
+
+/**
+ * The same answer without walking the whole line, for a system of one cell and a point strictly inside a region:
+ * the species dominant at the point stays lowest until the first plane that falls faster with E (direction 1) or
+ * slower (−1) crosses it, so the boundary is the nearest such crossing. Returns undefined — "use the general walk"
+ * — for several cells, outside the pruning window, or when the point lies on a boundary or at a tie (there the
+ * walk's tie rules decide).
+ */
+function nearestBoundaryInOneCell(system: MetalSystem, pH: number, E: number, direction: 1 | -1): BoundaryCrossing | null | undefined {
+  if (system.cells.length !== 1 || !(pH >= PRUNE_PH_MIN && pH <= PRUNE_PH_MAX) || !(E >= BOUNDARY_SEARCH_LOW && E <= BOUNDARY_SEARCH_HIGH)) return undefined;
+  const { a, b, c, active } = system.cells[0];
+  const here = dominantSpecies(system, pH, E);
+  const offsetHere = a[here] + b[here] * pH;
+  const gHere = offsetHere + c[here] * E;
+  let next = -1;
+  let nextE = direction > 0 ? Infinity : -Infinity;
+  let tie = false;
+  for (let k = 0, n = active.length; k < n; k++) {
+    const j = active[k];
+    if (j === here) continue;
+    const gj = a[j] + b[j] * pH + c[j] * E;
+    if (gj - gHere <= 1e-12) return undefined; // a tie at the point itself
+    const dc = c[here] - c[j];
+    if (direction > 0 ? dc <= 0 : dc >= 0) continue; // never overtakes in this direction
+    const crossing = (a[j] + b[j] * pH - offsetHere) / dc;
+    const distance = direction > 0 ? crossing - nextE : nextE - crossing;
+    if (Math.abs(distance) <= 1e-12) tie = true;
+    else if (distance < 0) {
+      nextE = crossing;
+      next = j;
+      tie = false;
+    }
+  }
+  if (tie) return undefined; // several planes cross at once: the walk's tie rules pick the species
+  const limit = direction > 0 ? BOUNDARY_SEARCH_HIGH : BOUNDARY_SEARCH_LOW;
+  if (next < 0 || (direction > 0 ? nextE >= limit : nextE <= limit)) return null;
+  return direction > 0 ? { E: nextE, below: here, above: next } : { E: nextE, below: next, above: here };
 }
 
 export interface Region {
