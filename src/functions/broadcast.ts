@@ -136,34 +136,54 @@ export function mapCells<A extends unknown[]>(
     }
   }
 
-  // Arguments given as one cell are parsed once; ranges are read cell by cell.
-  const constant: boolean[] = shapes.map((s) => s.rows === 1 && s.cols === 1);
-  const constantValue: Parsed<unknown>[] = specs.map((spec, i) => (constant[i] ? parseCell(spec, cellAt(inputs[i], 0, 0)) : undefined));
-  const rowStep: number[] = shapes.map((s) => (s.rows === 1 ? 0 : 1));
-  const lows: number[] = specs.map((spec) => spec.accepts?.low ?? Infinity);
-  const highs: number[] = specs.map((spec) => spec.accepts?.high ?? -Infinity);
-  const colStep: number[] = shapes.map((s) => (s.cols === 1 ? 0 : 1));
-
+  // Arguments given as one cell are parsed once, before the loop; only ranges are read cell by cell.
   const args: unknown[] = specs.map(() => undefined);
+  const varying: number[] = [];
+  let constantError = -1; // index of the first single-cell argument holding an error
+  let constantBlank = false;
+  for (let i = 0; i < count; i++) {
+    const s = shapes[i];
+    if (s.rows !== 1 || s.cols !== 1) {
+      varying.push(i);
+      continue;
+    }
+    const parsed = parseCell(specs[i], cellAt(inputs[i], 0, 0));
+    if (parsed === BLANK) constantBlank = true;
+    else if (parsed instanceof CellError) {
+      if (constantError < 0) constantError = i;
+      args[i] = parsed;
+    } else args[i] = parsed;
+  }
+  const ranges = varying.map((i) => inputs[i] as CellScalar[][]);
+  const rowStep = varying.map((i) => (shapes[i].rows === 1 ? 0 : 1));
+  const colStep = varying.map((i) => (shapes[i].cols === 1 ? 0 : 1));
+  const lows = varying.map((i) => specs[i].accepts?.low ?? Infinity);
+  const highs = varying.map((i) => specs[i].accepts?.high ?? -Infinity);
+  const varyingCount = varying.length;
+
   const result: CellOutput[][] = new Array(rows);
   for (let r = 0; r < rows; r++) {
-    const row: CellOutput[] = new Array(cols);
+    const row: CellOutput[] = []; // a literal: in a sandboxed host the global Array is a slow lookup
     for (let c = 0; c < cols; c++) {
-      let blank = false;
-      let error: CellError | undefined;
-      for (let i = 0; i < count; i++) {
-        let parsed: Parsed<unknown>;
-        if (constant[i]) parsed = constantValue[i];
-        else {
-          const value = (inputs[i] as CellScalar[][])[r * rowStep[i]][c * colStep[i]];
-          // fast path: a plain number inside the accepted interval needs no further reading
-          parsed = typeof value === "number" && value >= lows[i] && value <= highs[i] ? value : parseCell(specs[i], value);
+      let blank = constantBlank;
+      let errorIndex = constantError;
+      for (let k = 0; k < varyingCount; k++) {
+        const value = ranges[k][r * rowStep[k]][c * colStep[k]];
+        // fast path: a plain number inside the accepted interval needs no further reading
+        if (typeof value === "number" && value >= lows[k] && value <= highs[k]) {
+          args[varying[k]] = value;
+          continue;
         }
+        const i = varying[k];
+        const parsed = parseCell(specs[i], value);
         if (parsed === BLANK) blank = true;
-        else if (typeof parsed === "object" && parsed instanceof CellError) error ??= parsed; // first error in argument order wins over blanks
-        else args[i] = parsed;
+        else if (typeof parsed === "object" && parsed instanceof CellError) {
+          if (errorIndex < 0 || i < errorIndex) errorIndex = i; // the first error in argument order wins over blanks
+          args[i] = parsed;
+        } else args[i] = parsed;
       }
-      row[c] = error ? toHostError(error) : blank ? "" : finish(safeCompute(compute, args as A));
+      if (errorIndex >= 0) row[c] = toHostError(args[errorIndex] as CellError);
+      else row[c] = blank ? "" : finish(safeCompute(compute, args as A));
     }
     result[r] = row;
   }
