@@ -42,8 +42,6 @@ export interface RunResult {
   summary: RunSummary | null;
 }
 
-class InputError extends Error {}
-
 const PROGRAM = "redox-cells";
 
 function version(): string {

@@ -14,38 +14,18 @@
  */
 import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
-import { reactionLogK, standardPotential } from "../../src/chemistry/reaction";
+import { reactionLogK } from "../../src/chemistry/reaction";
+import { BARD, BM, checkConstants, checkDisagreements, checkPotentials, ConstantCase, CRC, Disagreement, NBS, PotentialCase } from "./compilation-checks";
 import { buildSystem, pairBoundary } from "../../src/chemistry/system";
 import { FARADAY, GAS_CONSTANT, LN10, T0, nernstFactor } from "../../src/chemistry/constants";
 
 const db = getDatabase();
 const METALS = ["Fe", "Cu", "Zn", "Pb", "Ni", "Cr", "Al", "Mn"] as const;
 
-const BARD = "Bard, Parsons & Jordan 1985, Standard Potentials in Aqueous Solution (from memory)";
-const CRC = "CRC Handbook of Chemistry and Physics, Electrochemical Series (from memory)";
-const NBS = "Wagman et al. 1982, NBS tables (from memory)";
-const BM = "Baes & Mesmer 1976, The Hydrolysis of Cations, selected constants at 25 °C, I = 0 (from memory)";
 const ATLAS = "Pourbaix 1974, Atlas of Electrochemical Equilibria in Aqueous Solutions (from memory)";
 
 /** Nernst factor at 25 °C, V per decade. */
 const K25 = nernstFactor(T0);
-
-/** E° (V) of a reduction written as formula → coefficient (reactants negative, "e-" for electrons). */
-function potentialOf(reaction: Record<string, number>): number {
-  const electrons = -(reaction["e-"] ?? 0);
-  return (reactionLogK(db, reaction, 25) * GAS_CONSTANT * T0 * LN10) / (electrons * FARADAY);
-}
-
-interface PotentialCase {
-  couple: string;
-  /** An ox/red pair balanced by the engine with H2O/H+, or a reaction written out (alkaline couples). */
-  pair?: [string, string];
-  reaction?: Record<string, number>;
-  value: number;
-  source: string;
-  /** True where the record's ΔG°f was derived from this very potential (the check proves the arithmetic only). */
-  derived?: boolean;
-}
 
 const potentials: PotentialCase[] = [
   // iron
@@ -130,22 +110,14 @@ const potentials: PotentialCase[] = [
   },
 ];
 
-describe("group A metals: standard potentials (25 °C) within 10 mV of the tabulated values", () => {
-  for (const c of potentials) {
-    const tag = c.derived ? " [record derived from this value: arithmetic check]" : "";
-    it(`${c.couple}: ${c.value} V (${c.source})${tag}`, () => {
-      const e = c.pair ? standardPotential(db, c.pair[0], c.pair[1], 25) : potentialOf(c.reaction!);
-      expect(Math.abs(e - c.value)).toBeLessThanOrEqual(c.derived ? 0.0005 : 0.010);
-    });
-  }
-});
+checkPotentials("group A metals: standard potentials (25 °C) within 10 mV of the tabulated values", potentials);
 
 /**
  * Couples where the data follow one compilation and another differs by more than 10 mV. Each case states the value
  * the data follow and checks that the other source really is more than 10 mV away, so a data change that silently
  * switches compilation fails here.
  */
-const disagreements: (PotentialCase & { follows: number; followsSource: string })[] = [
+const disagreements: Disagreement[] = [
   {
     couple: "Fe2+ + 2e- = Fe",
     pair: ["Fe2+", "Fe(s)"],
@@ -228,24 +200,7 @@ const disagreements: (PotentialCase & { follows: number; followsSource: string }
   },
 ];
 
-describe("group A metals: documented disagreements between compilations", () => {
-  for (const c of disagreements) {
-    it(`${c.couple}: data follow ${c.follows} V (${c.followsSource}); ${c.source} gives ${c.value} V`, () => {
-      const e = c.pair ? standardPotential(db, c.pair[0], c.pair[1], 25) : potentialOf(c.reaction!);
-      expect(Math.abs(e - c.follows)).toBeLessThanOrEqual(0.003);
-      expect(Math.abs(e - c.value)).toBeGreaterThan(0.010);
-    });
-  }
-});
-
-interface ConstantCase {
-  label: string;
-  reaction: Record<string, number>;
-  logK: number;
-  source: string;
-  /** False where the species' ΔG°f was derived from this very constant (the check proves the arithmetic only). */
-  independent: boolean;
-}
+checkDisagreements("group A metals: documented disagreements between compilations", disagreements);
 
 const constants: ConstantCase[] = [
   // independent: NBS records against Baes & Mesmer
@@ -281,21 +236,7 @@ const constants: ConstantCase[] = [
   { label: "Al3+ + 2H2O = Al(OH)2+ + 2H+", reaction: { "Al3+": -1, "H2O(l)": -2, "Al(OH)2+": 1, "H+": 2 }, logK: -9.3, source: BM, independent: false },
 ];
 
-describe("group A metals: hydrolysis and solubility constants within 0.5 log units of Baes & Mesmer", () => {
-  for (const c of constants) {
-    const kind = c.independent ? "independent" : "derivation round trip";
-    it(`${c.label}: log K = ${c.logK} (${c.source}) [${kind}]`, () => {
-      const logK = reactionLogK(db, c.reaction, 25);
-      expect(Math.abs(logK - c.logK)).toBeLessThanOrEqual(c.independent ? 0.5 : 0.01);
-    });
-  }
-  it("every metal of the group has at least one independent constant checked", () => {
-    for (const m of METALS) {
-      const covered = constants.some((c) => c.independent && Object.keys(c.reaction).some((f) => db.species(f)?.system === m));
-      expect(covered, m).toBe(true);
-    }
-  });
-});
+checkConstants("group A metals: hydrolysis and solubility constants within 0.5 log units of Baes & Mesmer", constants, METALS);
 
 /**
  * Constants where the data (NBS 1982 or Robie & Hemingway 1995) and Baes & Mesmer differ by more than 0.5 log
