@@ -161,33 +161,42 @@ export function mapCells<A extends unknown[]>(
   const highs = varying.map((i) => specs[i].accepts?.high ?? -Infinity);
   const varyingCount = varying.length;
 
-  const result: CellOutput[][] = new Array(rows);
-  for (let r = 0; r < rows; r++) {
-    const row: CellOutput[] = []; // a literal: in a sandboxed host the global Array is a slow lookup
-    for (let c = 0; c < cols; c++) {
-      let blank = constantBlank;
-      let errorIndex = constantError;
-      for (let k = 0; k < varyingCount; k++) {
-        const value = ranges[k][r * rowStep[k]][c * colStep[k]];
-        // fast path: a plain number inside the accepted interval needs no further reading
-        if (typeof value === "number" && value >= lows[k] && value <= highs[k]) {
-          args[varying[k]] = value;
-          continue;
+  // Computations almost never throw: run unguarded, and only if one does, run again guarding every cell.
+  const fill = (guarded: boolean): CellOutput[][] => {
+    const result: CellOutput[][] = new Array(rows);
+    for (let r = 0; r < rows; r++) {
+      const row: CellOutput[] = []; // a literal: in a sandboxed host the global Array is a slow lookup
+      for (let c = 0; c < cols; c++) {
+        let blank = constantBlank;
+        let errorIndex = constantError;
+        for (let k = 0; k < varyingCount; k++) {
+          const value = ranges[k][r * rowStep[k]][c * colStep[k]];
+          // fast path: a plain number inside the accepted interval needs no further reading
+          if (typeof value === "number" && value >= lows[k] && value <= highs[k]) {
+            args[varying[k]] = value;
+            continue;
+          }
+          const i = varying[k];
+          const parsed = parseCell(specs[i], value);
+          if (parsed === BLANK) blank = true;
+          else if (typeof parsed === "object" && parsed instanceof CellError) {
+            if (errorIndex < 0 || i < errorIndex) errorIndex = i; // the first error in argument order wins over blanks
+            args[i] = parsed;
+          } else args[i] = parsed;
         }
-        const i = varying[k];
-        const parsed = parseCell(specs[i], value);
-        if (parsed === BLANK) blank = true;
-        else if (typeof parsed === "object" && parsed instanceof CellError) {
-          if (errorIndex < 0 || i < errorIndex) errorIndex = i; // the first error in argument order wins over blanks
-          args[i] = parsed;
-        } else args[i] = parsed;
+        if (errorIndex >= 0) row[c] = toHostError(args[errorIndex] as CellError);
+        else if (blank) row[c] = "";
+        else row[c] = finish(guarded ? safeCompute(compute, args as A) : compute(...(args as A)));
       }
-      if (errorIndex >= 0) row[c] = toHostError(args[errorIndex] as CellError);
-      else row[c] = blank ? "" : finish(safeCompute(compute, args as A));
+      result[r] = row;
     }
-    result[r] = row;
+    return result;
+  };
+  try {
+    return fill(false);
+  } catch {
+    return fill(true);
   }
-  return result;
 }
 
 function parseCell<T>(spec: ArgSpec<T>, value: unknown): Parsed<T> {
