@@ -109,7 +109,9 @@ export function nearestBoundary(system: MetalSystem, pH: number, E: number, dire
  */
 function nearestBoundaryInOneCell(system: MetalSystem, pH: number, E: number, direction: 1 | -1): BoundaryCrossing | null | undefined {
   if (system.cells.length !== 1 || !(pH >= PRUNE_PH_MIN && pH <= PRUNE_PH_MAX) || !(E >= BOUNDARY_SEARCH_LOW && E <= BOUNDARY_SEARCH_HIGH)) return undefined;
-  const { a, b, c, active } = system.cells[0];
+  const cell = system.cells[0];
+  const { a, b, c } = cell;
+  const active = cell.active ?? allSpecies(cell); // every species is a candidate until the cell has found its active ones
   const here = dominantSpecies(system, pH, E);
   const offsetHere = a[here] + b[here] * pH;
   const gHere = offsetHere + c[here] * E;
@@ -136,6 +138,13 @@ function nearestBoundaryInOneCell(system: MetalSystem, pH: number, E: number, di
   const limit = direction > 0 ? BOUNDARY_SEARCH_HIGH : BOUNDARY_SEARCH_LOW;
   if (next < 0 || (direction > 0 ? nextE >= limit : nextE <= limit)) return null;
   return direction > 0 ? { E: nextE, below: here, above: next } : { E: nextE, below: next, above: here };
+}
+
+/** Indices 0…n−1 of a cell's species. */
+function allSpecies(cell: PlaneCell): Int32Array {
+  const all = new Int32Array(cell.a.length);
+  for (let i = 0; i < all.length; i++) all[i] = i;
+  return all;
 }
 
 export interface Region {

@@ -52,10 +52,16 @@ export interface PlaneCell {
   readonly ligands: readonly LigandBasis[];
   /**
    * Species that are dominant somewhere in this cell for pH within PRUNE_PH_MIN…PRUNE_PH_MAX (any potential in
-   * ±PRUNE_E_LIMIT V): the only candidates a point there needs to compare.
+   * ±PRUNE_E_LIMIT V): the only candidates a point there needs to compare. Found on demand (activeSpecies): a
+   * system built for a single row — a water of its own — is answered faster by scanning every species.
    */
-  readonly active: Int32Array;
+  active: Int32Array | null;
+  /** Points answered by a full scan so far; after PRUNE_AFTER_QUERIES the active species are found. */
+  queries: number;
 }
+
+/** Full scans a cell answers before it finds its active species (pruning costs about as much as 50–100 scans). */
+export const PRUNE_AFTER_QUERIES = 64;
 
 /** The pH domain the worksheet functions accept (GUIDE §3), and a potential span far beyond any use. */
 export const PRUNE_PH_MIN = -2;
@@ -158,7 +164,7 @@ export function buildSystem(
       b[i] = (-cProton * k) / x;
       c[i] = -cElectron / x;
     });
-    return { region: cell.region, a, b, c, aUnit, ligands: cell.ligands, active: activeSpecies(cell.region, a, b, c, aUnit) };
+    return { region: cell.region, a, b, c, aUnit, ligands: cell.ligands, active: null, queries: 0 };
   });
 
   return { element, celsius: options.celsius, kelvin: T, activity: options.activity, species, cells, metalIndex };
@@ -184,13 +190,14 @@ function formationCoefficients(s: Species, basis: readonly (Species | typeof ELE
   return found;
 }
 
-/** Indices of the species with a region of positive area in the pruning window of a cell. */
-function activeSpecies(region: readonly HalfPlane[], a: Float64Array, b: Float64Array, c: Float64Array, aUnit: Float64Array): Int32Array {
+/** Indices of the species with a region of positive area in the pruning window of a cell (found once, kept). */
+export function activeSpecies(cell: PlaneCell): Int32Array {
+  if (cell.active) return cell.active;
   let area: Point[] = rectangle(PRUNE_PH_MIN, PRUNE_PH_MAX, -PRUNE_E_LIMIT, PRUNE_E_LIMIT);
-  for (const h of region) area = clipPolygon(area, h);
-  const all = { region, a, b, c, aUnit, ligands: [], active: new Int32Array(0) };
-  const pieces = area.length > 2 ? envelopeRegions(all, area, 0) : [];
-  return Int32Array.from(new Set(pieces.map((p) => p.species))).sort();
+  for (const h of cell.region) area = clipPolygon(area, h);
+  const pieces = area.length > 2 ? envelopeRegions(cell, area, 0) : [];
+  cell.active = Int32Array.from(new Set(pieces.map((p) => p.species))).sort();
+  return cell.active;
 }
 
 /** The cell containing (pH, E); the first one when on a seam. */
@@ -213,8 +220,9 @@ export function speciesPotential(system: MetalSystem, i: number, pH: number, E: 
  */
 export function dominantSpecies(system: MetalSystem, pH: number, E: number): number {
   const cell = cellAt(system, pH, E);
-  const { a, b, c, active } = cell;
-  if (pH >= PRUNE_PH_MIN && pH <= PRUNE_PH_MAX && E >= -PRUNE_E_LIMIT && E <= PRUNE_E_LIMIT && active.length > 0) {
+  const { a, b, c } = cell;
+  const active = cell.active ?? (++cell.queries > PRUNE_AFTER_QUERIES ? activeSpecies(cell) : null);
+  if (active && active.length > 0 && pH >= PRUNE_PH_MIN && pH <= PRUNE_PH_MAX && E >= -PRUNE_E_LIMIT && E <= PRUNE_E_LIMIT) {
     let best = active[0];
     let bestG = a[best] + b[best] * pH + c[best] * E;
     for (let k = 1, n = active.length; k < n; k++) {
@@ -246,7 +254,9 @@ export function dominantSpecies(system: MetalSystem, pH: number, E: number): num
 export function dominantSpeciesBatch(system: MetalSystem, pH: Float64Array, E: Float64Array, out: Int32Array): Int32Array {
   const rows = pH.length;
   if (system.cells.length === 1) {
-    const { a, b, c, active } = system.cells[0];
+    const cell = system.cells[0];
+    const { a, b, c } = cell;
+    const active = activeSpecies(cell);
     // the active species' planes, packed contiguously
     const m = active.length;
     const pa = new Float64Array(m);
