@@ -1,8 +1,8 @@
 /**
  * README.md against the built add-in: the function reference lists every function of dist/functions.json with its
  * arguments in order (optional ones in brackets) and names no function that does not exist; the literal formula
- * examples give the answers the README states when evaluated through the built bundle; the set-up commands, the
- * cautions and the screenshot are there.
+ * examples of the README and docs/ give the answers they state when evaluated through the built bundle; the set-up
+ * commands, the cautions and the screenshot are there.
  */
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
@@ -38,6 +38,15 @@ function splitArguments(text: string): string[] {
   return parts;
 }
 
+/** A number or a product/quotient of numbers, as typed in an example ("595/1000"). */
+function arithmetic(text: string): number {
+  const [first, ...rest] = text.split(/([*/])/).map((t) => t.trim());
+  let value = Number(first);
+  for (let i = 0; i < rest.length; i += 2) value = rest[i] === "*" ? value * Number(rest[i + 1]) : value / Number(rest[i + 1]);
+  if (!Number.isFinite(value)) throw new Error(`unreadable number ${text}`);
+  return value;
+}
+
 /** Evaluates a literal formula (numbers, "text", omitted arguments, nested REDOX calls) through the bundle. */
 function evaluate(formula: string): unknown {
   const match = /^REDOX\.([A-Z]+)\((.*)\)$/.exec(formula.trim());
@@ -48,7 +57,8 @@ function evaluate(formula: string): unknown {
     if (a === "") return null;
     if (a.startsWith('"')) return [[a.slice(1, -1)]];
     if (a.startsWith("REDOX.")) return [[evaluate(a)]];
-    return [[Number(a)]];
+    if (/^[\d.eE+\-*/ ]+$/.test(a)) return [[arithmetic(a)]];
+    throw new Error(`unreadable argument ${a}`);
   });
   const out = fn(...args) as unknown[][];
   return out[0][0];
@@ -67,27 +77,39 @@ describe("README function reference", () => {
   });
 });
 
-describe("README formula examples, evaluated through the built bundle", () => {
-  const examples = [...readme.matchAll(/^=(REDOX\.[A-Z]+\(.*\))\s+→\s+(.+)$/gm)].map((m) => ({ formula: m[1], stated: m[2].trim() }));
+/** Lines "=REDOX.F(args) → answer" in the README and the docs, evaluated through the built bundle. */
+const DOCUMENTS = ["README.md", "docs/worked-examples.md", "docs/ligands.md", "docs/cli.md"];
 
-  it("finds the literal examples", () => {
-    expect(examples.length).toBeGreaterThanOrEqual(4);
-  });
-
-  for (const { formula, stated } of examples) {
-    it(`${formula} → ${stated}`, () => {
-      const value = evaluate(formula);
-      expect(value).not.toBeInstanceOf(StandInError);
-      const numeric = /^(about\s+)?(-?[\d.]+(?:E-?\d+)?)/i.exec(stated);
-      if (numeric) {
-        const expected = Number(numeric[2]);
-        const tolerance = numeric[1] ? 0.1 : 0.005; // "about" allows 10 %, a plain figure its last digit
-        expect(typeof value).toBe("number");
-        expect(Math.abs((value as number) - expected) / Math.abs(expected)).toBeLessThan(tolerance);
-      } else {
-        expect(value).toBe(stated.split(/\s+/)[0]);
-      }
-    });
+describe("formula examples in the README and docs, evaluated through the built bundle", () => {
+  for (const document of DOCUMENTS) {
+    const text = readFileSync(join(REPO_ROOT, document), "utf8");
+    const examples = [...text.matchAll(/^=(REDOX\.[A-Z]+\(.*\))\s+→\s+(.+)$/gm)].map((m) => ({ formula: m[1], stated: m[2].trim() }));
+    if (document !== "docs/cli.md") {
+      it(`${document} has literal examples`, () => expect(examples.length).toBeGreaterThanOrEqual(4));
+    }
+    for (const { formula, stated } of examples) {
+      it(`${document}: ${formula} → ${stated}`, () => {
+        const value = evaluate(formula);
+        if (stated.startsWith("#")) {
+          expect(value).toBeInstanceOf(StandInError);
+          expect((value as StandInError).code).toBe(stated.split(/\s+/)[0]);
+          return;
+        }
+        expect(value).not.toBeInstanceOf(StandInError);
+        const numeric = /^(about\s+)?([-−]?\d[\d.]*(?:E-?\d+)?)/i.exec(stated);
+        if (numeric) {
+          const figure = numeric[2].replace("−", "-");
+          const expected = Number(figure);
+          const decimals = figure.includes(".") && !/E/i.test(figure) ? figure.split(".")[1].length : 0;
+          // "about" allows 10 %; a plain figure must round to what is printed (half a unit of its last digit)
+          const tolerance = numeric[1] ? 0.1 * Math.abs(expected) : /E/i.test(figure) ? 0.005 * Math.abs(expected) : 0.5 * 10 ** -decimals + 1e-12;
+          expect(typeof value).toBe("number");
+          expect(Math.abs((value as number) - expected)).toBeLessThanOrEqual(tolerance);
+        } else {
+          expect(value).toBe(stated.split(/\s+/)[0]);
+        }
+      });
+    }
   }
 });
 
