@@ -26,11 +26,10 @@
  */
 import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor } from "./constants";
 import { Database, Species } from "./database";
-import { rational } from "./exact";
+import { formationTable } from "./formation";
 import { clipPolygon, HalfPlane, Point, polygonArea, rectangle } from "./halfplane";
-import { balanceWith } from "./reaction";
 import { LigandBasis } from "./system";
-import { ELECTRON, gibbsAt, reactionProperties } from "./thermo";
+import { ELECTRON, gibbsAt } from "./thermo";
 
 export type LigandName = "carbonate" | "chloride" | "sulfur";
 
@@ -102,17 +101,18 @@ export function ligandOwnCells(db: Database, ligand: LigandName, total: number, 
   const basis = [pivot, db.require("H2O(l)"), db.require("H+"), ELECTRON] as const;
 
   // planes per ligand atom, g = a + b·pH + c·E (volts), relative to the pivot at unit activity
+  const formationOf = formationTable(db, basis);
   const planes = members.map((s) => {
     const atoms = s.elements[element];
-    const coefficients = balanceWith(new Map([[s, rational(1)]]), basis);
-    const stoichiometry = new Map<Species | typeof ELECTRON, number>([[s, 1]]);
-    basis.forEach((m, j) => stoichiometry.set(m, (stoichiometry.get(m) ?? 0) + coefficients[j].valueOf()));
-    const dG = gibbsAt(reactionProperties(db, stoichiometry), T);
+    const formation = formationOf(s);
+    if (!formation) throw new RangeError(`${s.formula} cannot be formed from ${pivot.formula}, H2O, H+ and e-`);
+    const { coefficients } = formation;
+    const dG = gibbsAt(formation.properties, T);
     const lnA = s.state === "aq" ? lnTotal : 0;
     return {
       a: (dG / FARADAY + rtOverF * lnA) / atoms,
-      b: (-coefficients[2].valueOf() * k) / atoms,
-      c: -coefficients[3].valueOf() / atoms,
+      b: (-coefficients[2] * k) / atoms,
+      c: -coefficients[3] / atoms,
       basis: { species: s, lnActivity: lnA },
     };
   });

@@ -14,11 +14,10 @@
  */
 import { FARADAY, GAS_CONSTANT, kelvin, MAX_CELSIUS, MIN_CELSIUS, nernstFactor } from "./constants";
 import { Database, Species } from "./database";
-import { rational, Rational } from "./exact";
 import { envelopeRegions } from "./envelope";
 import { clipPolygon, HalfPlane, insideAll, Point, rectangle } from "./halfplane";
-import { balanceWith } from "./reaction";
-import { ELECTRON, gibbsAt, reactionProperties } from "./thermo";
+import { formationTable } from "./formation";
+import { ELECTRON, gibbsAt } from "./thermo";
 
 export type Regime = "immunity" | "passivation" | "corrosion";
 
@@ -130,6 +129,9 @@ export function buildSystem(
   const proton = db.require("H+");
   const lnActivity = Math.log(options.activity);
 
+  // ligand elements each species needs (beyond the metal, H and O), found once
+  const needs = species.map((entrySpecies) => Object.keys(entrySpecies.species.elements).filter((e) => e !== element && e !== "H" && e !== "O"));
+
   const cells: PlaneCell[] = ligandCells.map((cell) => {
     const n = species.length;
     const a = new Float64Array(n);
@@ -137,24 +139,22 @@ export function buildSystem(
     const c = new Float64Array(n);
     const aUnit = new Float64Array(n);
     const basis = [metal, water, proton, ELECTRON, ...cell.ligands.map((l) => l.species)] as const;
+    const available = new Set(cell.ligands.flatMap((l) => Object.keys(l.species.elements)));
+    const formationOf = formationTable(db, basis);
     species.forEach((entrySpecies, i) => {
       if (i === metalIndex) return; // the metal's plane is 0
-      const s = entrySpecies.species;
-      const needed = Object.keys(s.elements).filter((e) => e !== element && e !== "H" && e !== "O");
-      const available = new Set(cell.ligands.flatMap((l) => Object.keys(l.species.elements)));
-      if (needed.some((e) => !available.has(e))) {
+      if (needs[i].some((e) => !available.has(e))) {
         a[i] = aUnit[i] = Infinity; // ligand absent in this cell
         return;
       }
-      const coefficients = formationCoefficients(s, basis);
-      if (!coefficients) {
+      const formation = formationOf(entrySpecies.species);
+      if (!formation) {
         a[i] = aUnit[i] = Infinity;
         return;
       }
-      const stoichiometry = new Map<Species | typeof ELECTRON, number>([[s, 1]]);
-      basis.forEach((m, j) => stoichiometry.set(m, (stoichiometry.get(m) ?? 0) + coefficients[j]));
+      const { coefficients } = formation;
       const x = entrySpecies.metalAtoms;
-      const dG = gibbsAt(reactionProperties(db, stoichiometry), T);
+      const dG = gibbsAt(formation.properties, T);
       const cProton = coefficients[2];
       const cElectron = coefficients[3];
       let ligandTerm = 0;
@@ -168,26 +168,6 @@ export function buildSystem(
   });
 
   return { element, celsius: options.celsius, kelvin: T, activity: options.activity, species, cells, metalIndex };
-}
-
-/**
- * Coefficients of the basis species in the formation reaction of `s` (exact balance, then as numbers), or null
- * when no balance exists. The balance depends only on the formulas, so it is remembered across systems: systems
- * for many temperatures, activities and ligand totals reuse it.
- */
-const formationMemo = new Map<string, number[] | null>();
-function formationCoefficients(s: Species, basis: readonly (Species | typeof ELECTRON)[]): number[] | null {
-  const key = `${s.formula}|${basis.map((b) => (b === ELECTRON ? ELECTRON : b.formula)).join(",")}`;
-  let found = formationMemo.get(key);
-  if (found === undefined) {
-    try {
-      found = balanceWith(new Map([[s, rational(1)]]), basis).map((c: Rational) => c.valueOf());
-    } catch {
-      found = null;
-    }
-    formationMemo.set(key, found);
-  }
-  return found;
 }
 
 /** Indices of the species with a region of positive area in the pruning window of a cell (found once, kept). */
