@@ -57,7 +57,9 @@ export function benchEngine(): BenchRow[] {
   const ratio = batchRate / naiveRate;
   rows.push({ name: `(b) naive rebuild per row (${naiveRows.toLocaleString("en")} rows)`, figure: `${fmt(naiveRate)} rows/s; batch is ${fmt(ratio)}× faster`, target: "batch ≥ 20× naive", met: ratio >= 20 });
 
-  // (c) REDOX.SPECIES through the worksheet wrapper over a 100 k-row range (mixed temperatures in 5 groups)
+  // (c) REDOX.SPECIES through the worksheet wrapper over a 100 k-row range (mixed temperatures in 5 groups), run
+  // from the TypeScript sources: tsx turns every imported binding into a getter call, so this row runs slower than
+  // the built bundle the spreadsheet loads — row (c′) in index.ts measures that one.
   const m = 100_000;
   const pHRange = Array.from({ length: m }, (_, i) => [pH[i]]);
   const eRange = Array.from({ length: m }, (_, i) => [E[i]]);
@@ -65,7 +67,7 @@ export function benchEngine(): BenchRow[] {
   for (let k = 0; k < 3; k++) speciesAt("Fe", pHRange, eRange, tRange); // warm-up: the JIT compiles the loop
   const wrapperMs = best(5, () => speciesAt("Fe", pHRange, eRange, tRange));
   const wrapperRate = m / (wrapperMs / 1000);
-  rows.push({ name: `(c) REDOX.SPECIES wrapper, ${m.toLocaleString("en")}-row range`, figure: `${fmt(wrapperRate)} rows/s (${wrapperMs.toFixed(1)} ms)`, target: "≥ 1 M rows/s", met: wrapperRate >= 1e6 });
+  rows.push({ name: `(c) REDOX.SPECIES wrapper from the sources under tsx, ${m.toLocaleString("en")} rows`, figure: `${fmt(wrapperRate)} rows/s (${wrapperMs.toFixed(1)} ms)`, target: "≥ 1 M rows/s", met: wrapperRate >= 1e6 });
 
   // (d) polygons of one diagram, per metal (the slowest reported)
   let slowest = 0;
