@@ -6,19 +6,15 @@
  *   npx webpack --mode production --output-path /tmp/pane-dist   (or npm run build)
  *   REDOX_DIST=/tmp/pane-dist npx tsx bench/pane-browser.ts
  */
-import { launchChromium, routeOfficeJs, serveDist } from "../tests/browser/serve-dist";
+import { openStandalonePane } from "../tests/browser/serve-dist";
 import { syntheticSamples } from "./pane-render";
 
 async function main(): Promise<void> {
   const count = Number(process.env.REDOX_BENCH_SAMPLES ?? 10_000);
   const text = ["id,pH,E (V) vs SHE", ...syntheticSamples(count).map((s) => `${s.id},${s.pH.toFixed(3)},${s.eSHE.toFixed(4)}`)].join("\n");
-  const { server, origin } = await serveDist();
-  const context = await launchChromium();
+  const pane = await openStandalonePane();
   try {
-    const page = await context.newPage();
-    await routeOfficeJs(page);
-    await page.goto(`${origin}/taskpane.html`);
-    await page.waitForSelector('body[data-pane-ready="standalone"]');
+    const { page } = pane;
     const times: number[] = [];
     for (let k = 0; k < 4; k++) {
       // set the text directly: typing 10 k lines through the input pipeline would measure the keyboard, not the pane
@@ -49,8 +45,7 @@ async function main(): Promise<void> {
     const warm = times.slice(1).filter((t) => t > 0);
     console.log(`pane in Chromium: ${count.toLocaleString("en")} samples pasted → drawn and painted: ${Math.min(...warm).toFixed(0)} ms (best of ${warm.length} warm runs; first ${times[0].toFixed(0)} ms)  target < 500 ms`);
   } finally {
-    await context.close();
-    server.close();
+    await pane.close();
   }
 }
 

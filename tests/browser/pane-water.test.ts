@@ -8,9 +8,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { readFileSync } from "fs";
 import { join } from "path";
-import type { Server } from "http";
-import type { BrowserContext, Page } from "playwright-core";
-import { launchChromium, routeOfficeJs, serveDist, ROOT } from "./serve-dist";
+import type { Page } from "playwright-core";
+import { OpenPane, openStandalonePane, ROOT } from "./serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildLigandSystem } from "../../src/chemistry/ligand-system";
 import { toSHE } from "../../src/chemistry/electrodes";
@@ -28,28 +27,16 @@ const DEMO_TEXT = readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8");
 const CHLORIDE = 5e-4;
 const SULFUR = 2e-4;
 
-let server: Server;
-let origin: string;
-let context: BrowserContext;
+let pane: OpenPane;
 let page: Page;
 
-async function openPane(): Promise<void> {
-  await page.goto(`${origin}/taskpane.html`);
-  await page.waitForSelector('body[data-pane-ready="standalone"]', { timeout: 30_000 });
-}
-
 beforeAll(async () => {
-  ({ server, origin } = await serveDist());
-  context = await launchChromium();
-  page = await context.newPage();
-  await routeOfficeJs(page);
-  page.on("pageerror", (error) => console.error("page error:", error.message));
-  await openPane();
+  pane = await openStandalonePane();
+  page = pane.page;
 });
 
 afterAll(async () => {
-  await context?.close();
-  await new Promise((done) => server?.close(done));
+  await pane?.close();
 });
 
 const hex = (rgb: string) => "#" + (rgb.match(/\d+/g) ?? []).slice(0, 3).map((v) => Number(v).toString(16).padStart(2, "0")).join("");
@@ -151,7 +138,7 @@ describe("a large set on the canvas layer", () => {
 
   beforeAll(async () => {
     await page.evaluate(() => localStorage.clear()); // the first part chose lead, mV and Ag/AgCl; start afresh
-    await openPane();
+    await pane.reload();
     const text = ["id,pH,E (V) vs SHE", ...inputs.map((s) => `${s.id},${s.pH.toFixed(3)},${s.eSHE.toFixed(4)}`)].join("\n");
     await page.evaluate((value) => ((document.getElementById("paste-input") as HTMLTextAreaElement).value = value), text);
     await page.click("#draw-pasted");

@@ -6,11 +6,10 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { copyFileSync, mkdirSync, readFileSync } from "fs";
 import { join } from "path";
-import type { Server } from "http";
-import type { BrowserContext, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { XMLValidator, XMLParser } from "fast-xml-parser";
 import { PNG } from "pngjs";
-import { launchChromium, routeOfficeJs, serveDist, ROOT } from "./serve-dist";
+import { OpenPane, openStandalonePane, ROOT } from "./serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildSystem } from "../../src/chemistry/system";
 import { toSHE, fromSHE } from "../../src/chemistry/electrodes";
@@ -24,27 +23,19 @@ import { parseDelimited } from "../../src/taskpane/delimited-text";
 
 const DEMO_TEXT = readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8");
 
-let server: Server;
-let origin: string;
-let context: BrowserContext;
+let pane: OpenPane;
 let page: Page;
 
 beforeAll(async () => {
-  ({ server, origin } = await serveDist());
-  context = await launchChromium();
-  page = await context.newPage();
-  await routeOfficeJs(page);
-  page.on("pageerror", (error) => console.error("page error:", error.message));
-  await page.goto(`${origin}/taskpane.html`);
-  await page.waitForSelector('body[data-pane-ready="standalone"]', { timeout: 30_000 });
+  pane = await openStandalonePane();
+  page = pane.page;
   await page.fill("#paste-input", DEMO_TEXT);
   await page.click("#draw-pasted");
   await page.waitForSelector("#diagram .rc-sample");
 });
 
 afterAll(async () => {
-  await context?.close();
-  await new Promise((done) => server?.close(done));
+  await pane?.close();
 });
 
 async function controls() {

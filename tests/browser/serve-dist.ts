@@ -71,3 +71,32 @@ export async function routeOfficeJs(page: Page): Promise<void> {
     await route.fulfill({ status: 200, contentType: TYPES[extname(file)] ?? "text/javascript", body: readFileSync(file) });
   });
 }
+
+/** A served dist/, a Chromium and a page with the standalone pane open and ready; `close` tears all down. */
+export interface OpenPane {
+  page: Page;
+  /** Reloads the pane page (a fresh pane on the same server and browser). */
+  reload(): Promise<void>;
+  close(): Promise<void>;
+}
+
+export async function openStandalonePane(): Promise<OpenPane> {
+  const { server, origin } = await serveDist();
+  const context = await launchChromium();
+  const page = await context.newPage();
+  await routeOfficeJs(page);
+  page.on("pageerror", (error) => console.error("page error:", error.message));
+  const reload = async () => {
+    await page.goto(`${origin}/taskpane.html`);
+    await page.waitForSelector('body[data-pane-ready="standalone"]', { timeout: 30_000 });
+  };
+  await reload();
+  return {
+    page,
+    reload,
+    close: async () => {
+      await context.close();
+      await new Promise((done) => server.close(done));
+    },
+  };
+}

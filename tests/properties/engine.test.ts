@@ -5,10 +5,10 @@
  * boundary the dissolved total carries exactly the activity the boundary was drawn for.
  */
 import fc from "fast-check";
+import { expectRegionsTile } from "./tiling";
 import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
-import { Point, polygonArea } from "../../src/chemistry/halfplane";
-import { diagramRegions, dissolvedTotal, nearestBoundary, boundariesAtPH } from "../../src/chemistry/predominance";
+import { dissolvedTotal, nearestBoundary, boundariesAtPH } from "../../src/chemistry/predominance";
 import { activeSpecies, buildSystem, dominantSpecies, speciesPotential } from "../../src/chemistry/system";
 
 const db = getDatabase();
@@ -20,17 +20,6 @@ const conditions = fc.record({
   logActivity: fc.double({ min: -9, max: 0, noNaN: true }),
 });
 const point = fc.record({ pH: fc.double({ min: -2, max: 16, noNaN: true }), E: fc.double({ min: -2.5, max: 2.5, noNaN: true }) });
-
-function insideConvex(polygon: readonly Point[], p: Point): boolean {
-  // a polygon from clipping is convex and counter-clockwise; on-edge counts as inside
-  for (let i = 0; i < polygon.length; i++) {
-    const a = polygon[i];
-    const b = polygon[(i + 1) % polygon.length];
-    const cross = (b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0]);
-    if (cross < -1e-9) return false;
-  }
-  return true;
-}
 
 describe("stability engine properties", () => {
   it("the dominant species has the lowest g of all species", () => {
@@ -78,20 +67,7 @@ describe("stability engine properties", () => {
   it("regions tile the rectangle: areas sum to it, and every point lies in the region of its dominant species", () => {
     fc.assert(
       fc.property(conditions, fc.array(point, { minLength: 20, maxLength: 20 }), ({ metal, celsius, logActivity }, points) => {
-        const system = buildSystem(db, metal, { celsius, activity: 10 ** logActivity });
-        const window = { pHMin: -2, pHMax: 16, eMin: -2.5, eMax: 2.5 };
-        const regions = diagramRegions(system, window);
-        const total = regions.reduce((sum, r) => sum + Math.abs(polygonArea(r.vertices)), 0);
-        const box = (window.pHMax - window.pHMin) * (window.eMax - window.eMin);
-        expect(Math.abs(total - box) / box).toBeLessThan(1e-9);
-        for (const { pH, E } of points) {
-          const containing = regions.filter((r) => insideConvex(r.vertices, [pH, E]));
-          expect(containing.length).toBeGreaterThanOrEqual(1);
-          const dominant = dominantSpecies(system, pH, E);
-          // interior points lie in exactly one region, that of the dominant species (points on an edge may touch two)
-          if (containing.length === 1) expect(containing[0].species).toBe(dominant);
-          else expect(containing.map((r) => r.species)).toContain(dominant);
-        }
+        expectRegionsTile(buildSystem(db, metal, { celsius, activity: 10 ** logActivity }), points);
       }),
       { numRuns: 150 },
     );
