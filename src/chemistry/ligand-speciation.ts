@@ -1,0 +1,90 @@
+/**
+ * Exact speciation of a ligand at fixed total at one point (pH, E, T, ionic strength): the activity of its pivot
+ * species from the mass balance over all its dissolved species (Stumm, W., Morgan, J.J., Aquatic Chemistry, 3rd ed.,
+ * 1996, ch. 3 (α-fractions) and ch. 8 (redox speciation)):
+ *
+ *   each species j (one ligand atom) is in equilibrium with the pivot P:  a_j = a_P·exp(−F·g_j/RT),
+ *   g_j = [ΔG°r,j(T) − c_H,j·RT ln10·pH ... ]/F  the formation of j from P, H2O, H+, e− (volts);
+ *   total = Σ_j a_j/γ_j   ⇒   ln a_P = ln total − ln Σ_j exp(−F·g_j/RT − ln γ_j)
+ *
+ * For carbonate (HCO3− pivot, CO2(aq) and CO3²−) this is the α-fraction of HCO3− at the pH; for sulfur (SO4²− pivot;
+ * HSO4−, H2S(aq), HS−, S²−) the distribution over its redox forms at pH and E. Where elemental sulfur would exceed
+ * unit activity (a_S(s) = a_P·exp(−F·g_S/RT) > 1) it is saturated: a_P is capped at exp(F·g_S/RT) and the rest
+ * of the total is taken as the solid. Ligand bound in complexes of the trace metal is neglected (metal totals are
+ * far below ligand totals in waters).
+ */
+import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "./constants";
+import { LigandTable } from "./species-tables";
+
+export class LigandAtPoint {
+  private celsius = NaN;
+  private f = 0;
+  /** Per species at the current temperature: g_j = g[j] + b[j]·pH + e[j]·E, volts. */
+  private readonly g: Float64Array;
+  private readonly b: Float64Array;
+  private readonly e: Float64Array;
+  private readonly u: Float64Array;
+  /** d ln a_P / dE at the last point (for boundary tracing). */
+  slopeE = 0;
+  /** Whether the solid was saturated at the last point. */
+  saturated = false;
+
+  constructor(private readonly table: LigandTable) {
+    const n = table.species.length;
+    this.g = new Float64Array(n);
+    this.b = new Float64Array(n);
+    this.e = new Float64Array(n);
+    this.u = new Float64Array(n);
+  }
+
+  /** Works out the temperature-dependent columns once per temperature. */
+  setTemperature(celsius: number): void {
+    if (celsius === this.celsius) return;
+    const t = this.table;
+    const T = kelvin(celsius);
+    const dT = T - T0;
+    const shape = dT - T * Math.log(T / T0);
+    const k = nernstFactor(T);
+    for (let j = 0; j < t.g0.length; j++) {
+      this.g[j] = (t.g0[j] - t.s[j] * dT + t.cp[j] * shape) / FARADAY;
+      this.b[j] = -t.proton[j] * k;
+      this.e[j] = -t.electron[j];
+    }
+    this.f = FARADAY / (GAS_CONSTANT * T);
+    this.celsius = celsius;
+  }
+
+  /** ln a(pivot) at (pH, E) for a total (ln, mol/kg) and ln γ of a unit charge; sets slopeE and saturated. */
+  lnPivot(lnTotal: number, lnGamma1: number, pH: number, E: number): number {
+    const { g, b, e, u, f } = this;
+    const z2 = this.table.chargeSquared;
+    const solid = this.table.solidIndex;
+    let top = -Infinity;
+    for (let j = 0; j < g.length; j++) {
+      if (j === solid) continue;
+      u[j] = -f * (g[j] + b[j] * pH + e[j] * E) - z2[j] * lnGamma1;
+      if (u[j] > top) top = u[j];
+    }
+    let sum = 0;
+    let slope = 0;
+    for (let j = 0; j < g.length; j++) {
+      if (j === solid) continue;
+      const w = Math.exp(u[j] - top);
+      sum += w;
+      slope += w * e[j];
+    }
+    // ln a_P = ln total − LSE(u);  d/dE = f·Σ w_j·e_j / Σ w_j   (u_j = −f·g_j − …, dg_j/dE = e_j)
+    let ln = lnTotal - top - Math.log(sum);
+    this.slopeE = (f * slope) / sum;
+    this.saturated = false;
+    if (solid >= 0) {
+      const cap = f * (g[solid] + b[solid] * pH + e[solid] * E); // a_S(s) = 1
+      if (ln > cap) {
+        ln = cap;
+        this.slopeE = f * e[solid];
+        this.saturated = true;
+      }
+    }
+    return ln;
+  }
+}
