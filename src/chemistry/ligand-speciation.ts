@@ -37,9 +37,13 @@ export class LigandAtPoint {
     this.u = new Float64Array(n);
   }
 
-  /** Works out the temperature-dependent columns once per temperature. */
-  setTemperature(celsius: number): void {
-    if (celsius === this.celsius) return;
+  /** This speciation at `celsius` (the temperature-dependent columns are redone only on change). */
+  at(celsius: number): this {
+    if (celsius !== this.celsius) this.setTemperature(celsius);
+    return this;
+  }
+
+  private setTemperature(celsius: number): void {
     const t = this.table;
     const T = kelvin(celsius);
     const dT = T - T0;

@@ -103,16 +103,15 @@ export class PointEngine {
     const shape = dT - T * Math.log(T / T0);
     const k = nernstFactor(T);
     const rtOverF = (GAS_CONSTANT * T) / FARADAY;
-    for (let i = 0; i < t.x.length; i++) {
-      const x = t.x[i];
-      this.aUnit[i] = (t.g0[i] - t.s[i] * dT + t.cp[i] * shape) / FARADAY / x;
-      this.b[i] = (-t.proton[i] * k) / x;
-      this.c[i] = -t.electron[i] / x;
-      this.r[i] = rtOverF / x;
+    const { aUnit, b, c, r } = this;
+    for (let i = 0, n = t.x.length; i < n; i++) {
+      const perAtom = 1 / t.x[i];
+      aUnit[i] = (t.g0[i] - t.s[i] * dT + t.cp[i] * shape) * (perAtom / FARADAY);
+      b[i] = -t.proton[i] * k * perAtom;
+      c[i] = -t.electron[i] * perAtom;
+      r[i] = rtOverF * perAtom;
     }
     this.f = 1 / rtOverF;
-    this.carbonateSpeciation.setTemperature(celsius);
-    this.sulfurSpeciation.setTemperature(celsius);
     this.celsius = celsius;
     this.stale = true;
   }
@@ -120,8 +119,8 @@ export class PointEngine {
   /** Exact ligand activities at (pH, E) into lnC, lnS, lnCl. */
   ligandsAt(pH: number, E: number): void {
     const present = this.present;
-    if (present & NEEDS_CARBONATE) this.lnC = this.carbonateSpeciation.lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
-    if (present & NEEDS_SULFUR) this.lnS = this.sulfurSpeciation.lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
+    if (present & NEEDS_CARBONATE) this.lnC = this.carbonateSpeciation.at(this.celsius).lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
+    if (present & NEEDS_SULFUR) this.lnS = this.sulfurSpeciation.at(this.celsius).lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
     this.lnCl = this.lnChloride;
   }
 
