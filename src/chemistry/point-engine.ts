@@ -14,7 +14,8 @@ import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "./constants";
 import { Database } from "./database";
 import { lnGammaUnitCharge } from "./activity-coefficients";
 import { LigandAtPoint } from "./ligand-speciation";
-import { LIGAND_BASIS } from "./ligand-cells";
+import { LIGAND_BASIS, LigandTotals } from "./ligand-cells";
+import type { SystemSpecies } from "./system";
 import { ligandTable, NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_SULFUR, SpeciesTable, speciesTable } from "./species-tables";
 
 /** The water of a point: temperature (°C), threshold molality of dissolved metal, ligand totals (mol/kg), I. */
@@ -198,4 +199,21 @@ export function pointEngine(db: Database, element: string): PointEngine {
   let engine = byElement.get(element);
   if (!engine) byElement.set(element, (engine = new PointEngine(db, element)));
   return engine;
+}
+
+/**
+ * The dominant species at one point of a drawn system's water (its temperature, threshold and ligand totals, or
+ * `ligands` of the sample's own), from the point engine: what SPECIES answers there. Returns the species record.
+ */
+export function dominantInWater(
+  db: Database,
+  system: { readonly element: string; readonly celsius: number; readonly activity: number; readonly ligandTotals?: LigandTotals },
+  pH: number,
+  E: number,
+  ligands?: LigandTotals,
+): SystemSpecies {
+  const water = ligands ?? system.ligandTotals ?? {};
+  const engine = pointEngine(db, system.element);
+  engine.setWater(system.celsius, system.activity, water.carbonate ?? 0, water.chloride ?? 0, water.sulfur ?? 0, 0);
+  return engine.table.species[engine.dominant(pH, E)];
 }

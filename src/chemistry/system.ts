@@ -18,6 +18,7 @@ import { envelopeRegions } from "./envelope";
 import { clipPolygon, HalfPlane, insideAll, Point, rectangle } from "./halfplane";
 import { formationTable } from "./formation";
 import { ELECTRON, gibbsAt } from "./thermo";
+import type { LigandTotals } from "./ligand-cells";
 
 export type Regime = "immunity" | "passivation" | "corrosion";
 
@@ -77,6 +78,8 @@ export interface MetalSystem {
   readonly cells: readonly PlaneCell[];
   /** Index of the metal itself. */
   readonly metalIndex: number;
+  /** The ligand totals the system was built for (absent in pure water), so points on it use the same water. */
+  readonly ligandTotals?: LigandTotals;
 }
 
 export interface SystemOptions {

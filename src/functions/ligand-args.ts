@@ -7,19 +7,18 @@ import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
 import { ArgSpec, numberArg } from "./broadcast";
 import { CellError, valueError } from "./cell-values";
 
-/** A number argument whose out-of-range values are #VALUE! (the user's input), with the given message. */
-function rangeAsValueError(spec: ArgSpec<number>, message: (x: unknown) => string): ArgSpec<number> {
+/** A number argument whose out-of-range values are #VALUE! (the user's input), its message followed by `hint`. */
+function rangeAsValueError(spec: ArgSpec<number>, hint = ""): ArgSpec<number> {
   return {
     ...spec,
     parse(value) {
       const parsed = spec.parse(value);
-      return parsed instanceof CellError && parsed.code === "#NUM!" ? valueError(message(value)) : parsed;
+      return parsed instanceof CellError && parsed.code === "#NUM!" ? valueError(parsed.message + hint) : parsed;
     },
   };
 }
 
-const totalArg = (name: string) =>
-  rangeAsValueError(numberArg(name, { min: 0, max: MAX_LIGAND_TOTAL, unit: "mol/kg", optional: true, defaultValue: 0 }), (x) => `${name}: ${x} is outside 0–${MAX_LIGAND_TOTAL} mol/kg`);
+const totalArg = (name: string) => rangeAsValueError(numberArg(name, { min: 0, max: MAX_LIGAND_TOTAL, unit: "mol/kg", optional: true, defaultValue: 0 }));
 
 export const carbonateArg = totalArg("carbonate");
 export const chlorideArg = totalArg("chloride");
@@ -27,5 +26,5 @@ export const sulfurArg = totalArg("sulfur");
 
 export const ionicStrengthArg = rangeAsValueError(
   numberArg("ionicStrength", { min: 0, max: MAX_IONIC_STRENGTH, unit: "mol/kg", optional: true, defaultValue: 0 }),
-  (x) => `ionicStrength: ${x} mol/kg is outside 0–${MAX_IONIC_STRENGTH} mol/kg, the range of the Davies equation (REDOX.IONICSTRENGTH estimates it from conductivity or TDS)`,
+  `: the Davies equation holds up to about ${MAX_IONIC_STRENGTH} mol/kg (REDOX.IONICSTRENGTH estimates I from conductivity or TDS)`,
 );

@@ -11,7 +11,9 @@ import { clipPolygon, HalfPlane, Point, polygonArea } from "../chemistry/halfpla
 import { getElectrodes } from "../chemistry/electrodes";
 import type { LigandTotals } from "../chemistry/ligand-cells";
 import { diagramRegions, Region } from "../chemistry/predominance";
-import { dominantSpecies, MetalSystem, Regime } from "../chemistry/system";
+import { getDatabase } from "../chemistry/database";
+import { dominantInWater } from "../chemistry/point-engine";
+import { MetalSystem, Regime } from "../chemistry/system";
 import { waterLine } from "../chemistry/water";
 import type { AxisWindow } from "./axes";
 
@@ -159,8 +161,7 @@ export function plotSamples(
   const hSlope = waterLine(1, system.celsius, "H2") - h0;
   return samples.map((s) => {
     const own = systemOf ? systemOf(s) : system;
-    const index = dominantSpecies(own, s.pH, s.eSHE);
-    const species = own.species[index];
+    const species = dominantInWater(getDatabase(), own, s.pH, s.eSHE, s.ligands); // exactly what REDOX.SPECIES answers
     const plotted: PlottedSample = {
       row: s.row,
       id: s.id,
