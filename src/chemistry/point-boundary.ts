@@ -13,8 +13,8 @@ export const BOUNDARY_SEARCH_LOW = -3;
 export const BOUNDARY_SEARCH_HIGH = 3;
 /** Largest step of the walk where sulfur bends the lines, V. */
 export const MAX_STEP = 0.05;
-/** Width of the final bracket around a bent boundary, V (0.001 mV). */
-export const BOUNDARY_TOLERANCE = 1e-6;
+/** Width of the final bracket around a bent boundary, V (0.0001 mV). */
+export const BOUNDARY_TOLERANCE = 1e-7;
 
 export interface PointCrossing {
   /** Potential of the boundary, V vs SHE. */
