@@ -9,6 +9,7 @@
 /* eslint-disable @typescript-eslint/no-explicit-any */
 import { fromSHEAt, toSHEAt } from "./electrode-functions";
 import { ehAt, neutralPHAt, peAt, slopeAt, waterLineAt, waterMarginAt } from "./water-functions";
+import { ionicStrengthAt } from "./ionic-strength-functions";
 import { boundaryFrom, coupleAt, dissolvedAt, regimeAt, speciesAt, speciesTable } from "./stability-functions";
 import { dicAt } from "./carbonate-functions";
 
@@ -196,6 +197,17 @@ export function dissolved(element: any[][], pH: any[][], potential: any[][], tem
 }
 
 /**
+ * Ionic strength in mol/kg estimated from specific conductance (I ≈ 1.6E-5 × µS/cm, Russell 1976) or total dissolved solids (I ≈ 2.5E-5 × mg/L, Langelier 1936), for the ionicStrength argument. Empirical, about ±30 % in fresh waters.
+ * @customfunction IONICSTRENGTH
+ * @param {any[][]} value Specific conductance in µS/cm at 25 °C, or TDS in mg/L.
+ * @param {any[][]} basis "uS/cm" (conductance) or "mg/L" (TDS).
+ * @returns {any[][]} Ionic strength in mol/kg.
+ */
+export function ionicstrength(value: any[][], basis: any[][]): any[][] {
+  return ionicStrengthAt(value, basis);
+}
+
+/**
  * Table of a metal's species with a header row: formula, state, name, Gibbs energy of formation at the temperature (kJ/mol) and data source.
  * @customfunction SPECIESTABLE
  * @param {any[][]} element Metal symbol or name.
@@ -232,6 +244,7 @@ if (typeof CustomFunctions !== "undefined") {
   CustomFunctions.associate("BOUNDARY", boundary);
   CustomFunctions.associate("COUPLE", couple);
   CustomFunctions.associate("DISSOLVED", dissolved);
+  CustomFunctions.associate("IONICSTRENGTH", ionicstrength);
   CustomFunctions.associate("SPECIESTABLE", speciestable);
   CustomFunctions.associate("DIC", dic);
 }
