@@ -10,6 +10,10 @@
 import { Database } from "./database";
 import { PointEngine, pointEngine, PointWater } from "./point-engine";
 
+// Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
+const { exp } = Math;
+const INF = 1 / 0;
+
 /** Largest total reported, mol/kg: beyond it no solid forms and the dilute-solution treatment is meaningless. */
 export const MAX_DISSOLVED = 1;
 
@@ -25,7 +29,7 @@ export function controllingSolid(engine: PointEngine, pH: number, E: number): nu
   engine.ligandsAt(pH, E);
   const dissolved = engine.table.dissolved;
   let best = -1;
-  let bestG = Infinity;
+  let bestG = INF;
   for (let i = 0; i < engine.size; i++) {
     if (dissolved[i] || !engine.available(i)) continue;
     const g = engine.g(i, pH, E, true);
@@ -47,7 +51,7 @@ export function dissolvedAtPoint(engine: PointEngine, pH: number, E: number): Di
   for (let i = 0; i < engine.size; i++) {
     if (!t.dissolved[i] || !engine.available(i)) continue;
     const x = t.x[i];
-    total += x * Math.exp(x * f * (gSolid - engine.g(i, pH, E, true)) - engine.lnGamma(i));
+    total += x * exp(x * f * (gSolid - engine.g(i, pH, E, true)) - engine.lnGamma(i));
   }
   return { total, solid };
 }
@@ -61,7 +65,7 @@ export function dissolvedParts(engine: PointEngine, solid: number, pH: number, E
   for (let i = 0; i < engine.size; i++) {
     if (!t.dissolved[i] || !engine.available(i)) continue;
     const x = t.x[i];
-    parts.push({ species: i, molality: Math.exp(x * engine.fOverRT * (gSolid - engine.g(i, pH, E, true)) - engine.lnGamma(i)) });
+    parts.push({ species: i, molality: exp(x * engine.fOverRT * (gSolid - engine.g(i, pH, E, true)) - engine.lnGamma(i)) });
   }
   return parts;
 }

@@ -12,11 +12,16 @@
  */
 import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "./constants";
 import { Database } from "./database";
-import { lnGammaUnitCharge } from "./activity-coefficients";
+import { debyeHuckelA, lnGammaWithA } from "./activity-coefficients";
 import { LigandAtPoint } from "./ligand-speciation";
 import { LIGAND_BASIS, LigandTotals } from "./ligand-cells";
 import type { SystemSpecies } from "./system";
 import { ligandTable, NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_SULFUR, SpeciesTable, speciesTable } from "./species-tables";
+
+// Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
+const { log } = Math;
+const INF = 1 / 0;
+const NOT_A_NUMBER = 0 / 0;
 
 /** The water of a point: temperature (°C), threshold molality of dissolved metal, ligand totals (mol/kg), I. */
 export interface PointWater {
@@ -33,7 +38,7 @@ export class PointEngine {
   private readonly carbonateSpeciation: LigandAtPoint;
   private readonly sulfurSpeciation: LigandAtPoint;
   // per temperature: g = a + b·pH + c·E (+ ligand and activity terms scaled by r)
-  private celsius = NaN;
+  private celsius = NOT_A_NUMBER;
   private readonly aUnit: Float64Array;
   private readonly b: Float64Array;
   private readonly c: Float64Array;
@@ -42,8 +47,13 @@ export class PointEngine {
   private readonly aThreshold: Float64Array;
   /** aThreshold must be redone (a new temperature). */
   private stale = true;
-  private activity = NaN;
+  private activity = NOT_A_NUMBER;
+  /** Debye–Hückel A at the current temperature, found when an ionic strength first needs it. */
+  private debyeHuckel = NOT_A_NUMBER;
   private f = 0;
+  private dT = 0;
+  private shape = 0;
+  private k = 0;
   // per water
   private lnActivity = 0;
   private lnGamma1 = 0;
@@ -79,18 +89,20 @@ export class PointEngine {
     if (this.stale || activity !== this.activity || ionicStrength !== this.ionicStrength) {
       this.activity = activity;
       this.ionicStrength = ionicStrength;
-      this.lnGamma1 = lnGammaUnitCharge(ionicStrength, celsius);
-      this.lnActivity = Math.log(activity);
-      const t = this.table;
-      for (let i = 0; i < t.x.length; i++) {
-        this.aThreshold[i] = this.aUnit[i] + (t.dissolved[i] ? this.r[i] * (this.lnActivity + t.chargeSquared[i] * this.lnGamma1) : 0);
+      if (ionicStrength > 0 && this.debyeHuckel !== this.debyeHuckel) this.debyeHuckel = debyeHuckelA(celsius);
+      this.lnGamma1 = lnGammaWithA(ionicStrength, this.debyeHuckel);
+      this.lnActivity = log(activity);
+      const { dissolved, chargeSquared } = this.table;
+      const { aThreshold, aUnit, r, lnActivity, lnGamma1 } = this;
+      for (let i = 0, n = aUnit.length; i < n; i++) {
+        aThreshold[i] = aUnit[i] + (dissolved[i] ? r[i] * (lnActivity + chargeSquared[i] * lnGamma1) : 0);
       }
       this.stale = false;
     }
     this.present = (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0);
-    this.lnCarbonate = carbonate > 0 ? Math.log(carbonate) : 0;
-    this.lnSulfur = sulfur > 0 ? Math.log(sulfur) : 0;
-    this.lnChloride = chloride > 0 ? Math.log(chloride) + this.lnGamma1 : 0; // Cl− is free: a = γ·total
+    this.lnCarbonate = carbonate > 0 ? log(carbonate) : 0;
+    this.lnSulfur = sulfur > 0 ? log(sulfur) : 0;
+    this.lnChloride = chloride > 0 ? log(chloride) + this.lnGamma1 : 0; // Cl− is free: a = γ·total
   }
 
   setPointWater(w: PointWater): void {
@@ -101,33 +113,44 @@ export class PointEngine {
     const t = this.table;
     const T = kelvin(celsius);
     const dT = T - T0;
-    const shape = dT - T * Math.log(T / T0);
+    const shape = dT - T * log(T / T0);
     const k = nernstFactor(T);
     const rtOverF = (GAS_CONSTANT * T) / FARADAY;
     const { aUnit, b, c, r } = this;
-    for (let i = 0, n = t.x.length; i < n; i++) {
-      const perAtom = 1 / t.x[i];
-      aUnit[i] = (t.g0[i] - t.s[i] * dT + t.cp[i] * shape) * (perAtom / FARADAY);
-      b[i] = -t.proton[i] * k * perAtom;
-      c[i] = -t.electron[i] * perAtom;
+    const { x, g0, s, cp, proton, electron } = t;
+    const inverseF = 1 / FARADAY;
+    for (let i = 0, n = x.length; i < n; i++) {
+      const perAtom = 1 / x[i];
+      aUnit[i] = (g0[i] - s[i] * dT + cp[i] * shape) * perAtom * inverseF;
+      b[i] = -proton[i] * k * perAtom;
+      c[i] = -electron[i] * perAtom;
       r[i] = rtOverF * perAtom;
     }
     this.f = 1 / rtOverF;
     this.celsius = celsius;
     this.stale = true;
+    this.debyeHuckel = NOT_A_NUMBER;
+    this.dT = dT;
+    this.shape = shape;
+    this.k = k;
   }
 
   /** Exact ligand activities at (pH, E) into lnC, lnS, lnCl. */
   ligandsAt(pH: number, E: number): void {
     const present = this.present;
-    if (present & NEEDS_CARBONATE) this.lnC = this.carbonateSpeciation.at(this.celsius).lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
-    if (present & NEEDS_SULFUR) this.lnS = this.sulfurSpeciation.at(this.celsius).lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
+    if (present & NEEDS_CARBONATE) this.lnC = this.carbonateSpeciation.at(this.celsius, this.dT, this.shape, this.k, this.f).lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
+    if (present & NEEDS_SULFUR) this.lnS = this.sulfurSpeciation.at(this.celsius, this.dT, this.shape, this.k, this.f).lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
     this.lnCl = this.lnChloride;
   }
 
   /** d ln a(SO4²−)/dE at the last point (0 without sulfur): the only potential dependence of the ligand terms. */
   get sulfurSlope(): number {
     return this.present & NEEDS_SULFUR ? this.sulfurSpeciation.slopeE : 0;
+  }
+
+  /** How far in E from the last point the sulfur term stays linear (INF without sulfur). */
+  get sulfurStraightFor(): number {
+    return this.present & NEEDS_SULFUR ? this.sulfurSpeciation.straightFor : INF;
   }
 
   get hasSulfur(): boolean {
@@ -163,7 +186,7 @@ export class PointEngine {
     const lnS = this.lnS;
     const lnCl = this.lnCl;
     let best = -1;
-    let bestG = Infinity;
+    let bestG = INF;
     for (let i = 0, n = aThreshold.length; i < n; i++) {
       const need = needs[i];
       let g = aThreshold[i] + b[i] * pH + c[i] * E;
