@@ -16,7 +16,8 @@ import { debyeHuckelA, lnGammaWithA } from "./activity-coefficients";
 import { LigandAtPoint } from "./ligand-speciation";
 import { LIGAND_BASIS, LigandTotals } from "./ligand-cells";
 import type { SystemSpecies } from "./system";
-import { ligandTable, NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_SULFUR, SpeciesTable, speciesTable } from "./species-tables";
+import { ligandTable, NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_SULFUR, rowGibbs, SpeciesTable, speciesTable } from "./species-tables";
+import { correspondenceBasis } from "./criss-cobble";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { log } = Math;
@@ -117,11 +118,12 @@ export class PointEngine {
     const k = nernstFactor(T);
     const rtOverF = (GAS_CONSTANT * T) / FARADAY;
     const { aUnit, b, c, r } = this;
-    const { x, g0, s, cp, proton, electron } = t;
+    const { x, proton, electron } = t;
     const inverseF = 1 / FARADAY;
+    const basis = correspondenceBasis(T);
     for (let i = 0, n = x.length; i < n; i++) {
       const perAtom = 1 / x[i];
-      aUnit[i] = (g0[i] - s[i] * dT + cp[i] * shape) * perAtom * inverseF;
+      aUnit[i] = rowGibbs(t, i, dT, shape, basis) * perAtom * inverseF;
       b[i] = -proton[i] * k * perAtom;
       c[i] = -electron[i] * perAtom;
       r[i] = rtOverF * perAtom;

@@ -8,6 +8,7 @@
  * at any temperature and in any water needs only arithmetic on these numbers (point-engine.ts). The ligands' own
  * species get the same treatment from their pivot (HCO3−, SO4²−) for the ligand speciation (ligand-speciation.ts).
  */
+import { CORRESPONDENCE_TERMS } from "./criss-cobble";
 import { Database, Species } from "./database";
 import { formationTable } from "./formation";
 import type { Regime, SystemSpecies } from "./system";
@@ -23,11 +24,22 @@ export const CARBONATE_PIVOT = "HCO3-";
 export const SULFUR_PIVOT = "SO42-";
 export const CHLORIDE_PIVOT = "Cl-";
 
-/** Reaction properties as numbers: ΔG°r(T) = g0 − s·(T − T0) + cp·[(T − T0) − T·ln(T/T0)]. */
+/**
+ * Reaction properties as numbers: ΔG°r(T) = g0 − s·(T − T0) + cp·[(T − T0) − T·ln(T/T0)] + the Criss–Cobble
+ * terms above 100 °C (row i's CORRESPONDENCE_TERMS weights from i·CORRESPONDENCE_TERMS; criss-cobble.ts).
+ */
 export interface ReactionColumns {
   readonly g0: Float64Array;
   readonly s: Float64Array;
   readonly cp: Float64Array;
+  readonly correspondence: Float64Array;
+}
+
+/** ΔG°r(T) of row i, J/mol, with dT = T − T0, shape = dT − T·ln(T/T0) and the correspondence basis at T. */
+export function rowGibbs(columns: ReactionColumns, i: number, dT: number, shape: number, basis: Float64Array): number {
+  let extra = 0;
+  for (let k = 0, at = i * CORRESPONDENCE_TERMS; k < CORRESPONDENCE_TERMS; k++) extra += columns.correspondence[at + k] * basis[k];
+  return columns.g0[i] - columns.s[i] * dT + columns.cp[i] * shape + extra;
 }
 
 export interface SpeciesTable extends ReactionColumns {
@@ -65,6 +77,7 @@ function putReaction(columns: ReactionColumns, i: number, p: ReactionProperties)
   columns.g0[i] = p.dG0;
   columns.s[i] = p.dS === null ? 0 : p.dS;
   columns.cp[i] = p.dS === null ? 0 : p.dCp;
+  if (p.dS !== null && p.correspondence) columns.correspondence.set(p.correspondence, i * CORRESPONDENCE_TERMS);
 }
 
 const LIGAND_ELEMENTS: Readonly<Record<string, number>> = { C: NEEDS_CARBONATE, S: NEEDS_SULFUR, Cl: NEEDS_CHLORIDE };
@@ -108,7 +121,7 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     element,
     species: rows.map((r) => r.s),
     metalIndex: rows.findIndex((r) => r.s.species === metal),
-    g0: col(), s: col(), cp: col(), x: col(), proton: col(), electron: col(), carbonate: col(), sulfur: col(), chloride: col(),
+    g0: col(), s: col(), cp: col(), correspondence: new Float64Array(n * CORRESPONDENCE_TERMS), x: col(), proton: col(), electron: col(), carbonate: col(), sulfur: col(), chloride: col(),
     needs: new Uint8Array(n),
     dissolved: new Uint8Array(n),
     chargeSquared: col(),
@@ -141,7 +154,7 @@ export function ligandTable(db: Database, members: readonly string[]): LigandTab
   const species = members.map((f) => db.require(f));
   const formationOf = formationTable(db, [species[0], db.require("H2O(l)"), db.require("H+"), ELECTRON]);
   const n = species.length;
-  const built = { species, g0: new Float64Array(n), s: new Float64Array(n), cp: new Float64Array(n), proton: new Float64Array(n), electron: new Float64Array(n), chargeSquared: new Float64Array(n), solidIndex: species.findIndex((s) => s.state === "s") };
+  const built = { species, g0: new Float64Array(n), s: new Float64Array(n), cp: new Float64Array(n), correspondence: new Float64Array(n * CORRESPONDENCE_TERMS), proton: new Float64Array(n), electron: new Float64Array(n), chargeSquared: new Float64Array(n), solidIndex: species.findIndex((s) => s.state === "s") };
   species.forEach((s, i) => {
     const formation = formationOf(s);
     if (!formation) throw new Error(`${s.formula} cannot be formed from ${species[0].formula}, H2O, H+ and e-`);

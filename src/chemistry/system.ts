@@ -17,6 +17,7 @@ import { Database, Species } from "./database";
 import { envelopeRegions } from "./envelope";
 import { clipPolygon, HalfPlane, insideAll, Point, rectangle } from "./halfplane";
 import { formationTable } from "./formation";
+import { presentLigands, temperatureProblem } from "./temperature-range";
 import { ELECTRON, gibbsAt } from "./thermo";
 import type { LigandTotals } from "./ligand-cells";
 
@@ -108,6 +109,9 @@ export function buildSystem(
 
   const ligandElements = new Set<string>();
   for (const cell of ligandCells) for (const l of cell.ligands) for (const e of Object.keys(l.species.elements)) if (e !== "H" && e !== "O") ligandElements.add(e);
+  const present = presentLigands(ligandElements.has("C") ? 1 : 0, ligandElements.has("Cl") ? 1 : 0, ligandElements.has("S") ? 1 : 0);
+  const problem = temperatureProblem(db, element, options.celsius, present);
+  if (problem) throw new SystemError(problem);
 
   // Species of the metal: those in its own file, plus ligand-bearing species of it in ligand files.
   const candidates = db.allSpecies().filter((s) => s.elements[element] !== undefined);

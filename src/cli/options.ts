@@ -3,6 +3,7 @@
  * reads is declared and documented here.
  */
 import { parseArgs } from "node:util";
+import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 
 export const EXIT = {
   /** Every row was read; results written (blank input cells give blank results and do not count as errors). */
@@ -263,7 +264,7 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     chlorideColumn: columnOption(v["chloride-column"]),
     sulfurColumn: columnOption(v["sulfur-column"]),
     pureWater: v["pure-water"] ?? false,
-    temperature: numberOption("temperature", v.temperature, (x) => x >= 0 && x <= 100, "a temperature from 0 to 100 °C"),
+    temperature: numberOption("temperature", v.temperature, (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS, `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`),
     electrode: v.electrode,
     unit,
     activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,

@@ -4,7 +4,7 @@
  */
 import { Electrode, getElectrodes, inRange } from "../chemistry/electrodes";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellError, CellInput, CellOutput, numError, valueError } from "./cell-values";
+import { CellError, CellInput, CellOutput, valueError } from "./cell-values";
 import { potentialArg, temperatureArg } from "./common-args";
 
 /** A reference electrode by name or alias, case-insensitive ("SCE", "Ag/AgCl 3M", "copper sulfate"). */
@@ -19,7 +19,7 @@ const electrodePHArg = numberArg("pH", { min: -2, max: 16, optional: true });
 function electrodePotential(electrode: Electrode, celsius: number, pH: number | undefined): number | CellError {
   if (!inRange(electrode, celsius)) {
     const [low, high] = electrode.validCelsius;
-    return numError(`temperature: ${celsius} °C is outside the range of ${electrode.id} (${low} to ${high} °C)`);
+    return valueError(`temperature: ${celsius} °C is outside the published range of ${electrode.id} (${low} to ${high} °C)`);
   }
   if (electrode.needsPH && pH === undefined) return valueError(`pH: ${electrode.id} needs the pH of the solution`);
   return getElectrodes().potential(electrode, celsius, pH);

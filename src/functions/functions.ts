@@ -18,7 +18,7 @@ import { dicAt } from "./carbonate-functions";
  * to oxygen, or the H+/H2 line (gas "H2") below which it is reduced to hydrogen.
  * @customfunction WATERLINE
  * @param {any[][]} pH pH of the solution, −2 to 16.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @param {any[][]} [gas] "O2" for the oxygen line (default) or "H2" for the hydrogen line.
  * @param {any[][]} [pressure] Partial pressure of the gas in bar, above 0 (default 1).
  * @returns {any[][]} Potential in V vs SHE.
@@ -33,7 +33,7 @@ export function waterline(pH: any[][], temperature?: any[][], gas?: any[][], pre
  * @customfunction WATERMARGIN
  * @param {any[][]} pH pH of the solution, −2 to 16.
  * @param {any[][]} potential Potential in V vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @param {any[][]} [overpotential] Extra width in V added beyond each line, 0 or more (default 0; about 0.6 V describes where water decomposes in practice).
  * @returns {any[][]} Margin in V.
  */
@@ -71,7 +71,7 @@ export function fromshe(potential: any[][], electrode: any[][], temperature?: an
  * Converts a potential (Eh, V vs SHE) to pe = F·Eh / (RT ln10).
  * @customfunction PE
  * @param {any[][]} potential Potential in V vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @returns {any[][]} pe (dimensionless).
  */
 export function pe(potential: any[][], temperature?: any[][]): any[][] {
@@ -82,7 +82,7 @@ export function pe(potential: any[][], temperature?: any[][]): any[][] {
  * Converts pe to a potential (Eh, V vs SHE) = pe·RT ln10 / F.
  * @customfunction EH
  * @param {any[][]} pe pe (dimensionless).
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @returns {any[][]} Potential in V vs SHE.
  */
 export function eh(pe: any[][], temperature?: any[][]): any[][] {
@@ -92,7 +92,7 @@ export function eh(pe: any[][], temperature?: any[][]): any[][] {
 /**
  * pH of pure water, ½ pKw, at the temperature (7.00 at 25 °C).
  * @customfunction NEUTRALPH
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @returns {any[][]} Neutral pH.
  */
 export function neutralph(temperature?: any[][]): any[][] {
@@ -102,7 +102,7 @@ export function neutralph(temperature?: any[][]): any[][] {
 /**
  * Nernst slope RT ln10 / F in V per decade (0.05916 V at 25 °C).
  * @customfunction SLOPE
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @returns {any[][]} Slope in V per decade.
  */
 export function slope(temperature?: any[][]): any[][] {
@@ -115,7 +115,7 @@ export function slope(temperature?: any[][]): any[][] {
  * @param {any[][]} element Metal symbol or name: Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE (convert meter readings with REDOX.TOSHE).
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species, above 0 and at most 10. Default 1e-6.
  * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
@@ -133,7 +133,7 @@ export function species(element: any[][], pH: any[][], potential: any[][], tempe
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
  * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
@@ -151,7 +151,7 @@ export function regime(element: any[][], pH: any[][], potential: any[][], temper
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
  * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
@@ -170,7 +170,7 @@ export function boundary(element: any[][], pH: any[][], potential: any[][], temp
  * @param {any[][]} oxidized Formula of the oxidized species, e.g. Fe3+ or Fe2O3(s).
  * @param {any[][]} reduced Formula of the reduced species, e.g. Fe2+ or Fe(s).
  * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of the dissolved species. Default 1e-6.
  * @returns {any[][]} Equilibrium potential in volts vs SHE.
  */
@@ -184,7 +184,7 @@ export function couple(oxidized: any[][], reduced: any[][], pH: any[][], tempera
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
@@ -211,7 +211,7 @@ export function ionicstrength(value: any[][], basis: any[][]): any[][] {
  * Table of a metal's species with a header row: formula, state, name, Gibbs energy of formation at the temperature (kJ/mol) and data source.
  * @customfunction SPECIESTABLE
  * @param {any[][]} element Metal symbol or name.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @returns {any[][]} The table; it spills.
  */
 export function speciestable(element: any[][], temperature?: any[][]): any[][] {
@@ -223,7 +223,7 @@ export function speciestable(element: any[][], temperature?: any[][]): any[][] {
  * @customfunction DIC
  * @param {any[][]} alkalinity Total alkalinity in mg/L as CaCO3, 0 or more.
  * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @returns {any[][]} Dissolved inorganic carbon in mol/kg.
  */
 export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): any[][] {

@@ -10,17 +10,25 @@ import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
 import { PointEngine, pointEngine } from "../chemistry/point-engine";
 import { speciesTable as metalSpeciesTable } from "../chemistry/species-tables";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
+import { CONSTANT_GIBBS_MAX_CELSIUS, presentLigands, temperatureProblem } from "../chemistry/temperature-range";
 import type { SystemSpecies } from "../chemistry/system";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
+import { CellError, CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";
 
 let lastElement = "";
 let lastEngine: PointEngine | null = null;
 
-/** The point engine of an element with the row's water set (the engine keeps what depends only on T). */
-function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, ionicStrength: number): PointEngine {
+/**
+ * The point engine of an element with the row's water set (the engine keeps what depends only on T), or #VALUE!
+ * naming the species without S° when the element cannot be answered above 100 °C (temperature-range.ts).
+ */
+function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, ionicStrength: number): PointEngine | CellError {
+  if (celsius > CONSTANT_GIBBS_MAX_CELSIUS) {
+    const problem = temperatureProblem(getDatabase(), element, celsius, presentLigands(carbonate, chloride, sulfur));
+    if (problem) return valueError(problem);
+  }
   if (element !== lastElement || !lastEngine) {
     lastEngine = pointEngine(getDatabase(), element);
     lastElement = element;
@@ -42,6 +50,7 @@ const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityA
 function dominantAt(describe: (species: SystemSpecies) => string, inputs: readonly CellInput[]): CellOutput[][] {
   return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, i) => {
     const engine = engineIn(el, t, a, co3, cl, s, i);
+    if (engine instanceof CellError) return engine;
     return describe(engine.table.species[engine.dominant(p, e)]);
   });
 }
@@ -90,7 +99,9 @@ export function boundaryFrom(
     [...POINT_ARGS, directionArg],
     [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, direction],
     (el, p, e, t, a, co3, cl, s, i, d) => {
-      const crossing = pointBoundary(engineIn(el, t, a, co3, cl, s, i), p, e, d);
+      const engine = engineIn(el, t, a, co3, cl, s, i);
+      if (engine instanceof CellError) return engine;
+      const crossing = pointBoundary(engine, p, e, d);
       return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
     },
   );
@@ -115,6 +126,10 @@ function couple(ox: Species, red: Species, pH: number, celsius: number, activity
     throw error;
   }
   if (Math.abs(reaction.electrons) < 1e-12) return notAvailable(`${ox.formula} and ${red.formula} have the same oxidation state`);
+  if (celsius > CONSTANT_GIBBS_MAX_CELSIUS) {
+    const missing = [ox, red].filter((sp) => sp.S === null).map((sp) => sp.formula);
+    if (missing.length) return valueError(`temperature ${celsius} °C: this couple is modelled 0–${CONSTANT_GIBBS_MAX_CELSIUS} °C only; above ${CONSTANT_GIBBS_MAX_CELSIUS} °C the records lack S° for ${missing.join(", ")}`);
+  }
   // the couple's potential does not depend on which member is named first
   const [o, r] = reaction.electrons > 0 ? [ox, red] : [red, ox];
   return couplePotential(db, o, r, { pH, celsius, activity });
@@ -154,6 +169,7 @@ export function dissolvedAt(
     [element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, unit],
     (el, p, e, t, co3, cl, s, i, u) => {
       const engine = engineIn(el, t, 1, co3, cl, s, i);
+      if (engine instanceof CellError) return engine;
       const { total, solid } = dissolvedAtPoint(engine, p, e);
       if (!(total <= MAX_DISSOLVED)) {
         return notAvailable(`no solid forms here: ${engine.table.species[solid].formula}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);
@@ -179,7 +195,8 @@ export function speciesTable(element: CellInput, temperature?: CellInput): CellO
   const header: CellOutput[] = ["formula", "state", "name", `ΔG°f(${celsius} °C) kJ/mol`, "source"];
   const rows: CellOutput[][] = [header];
   for (const s of table.species.filter((_, i) => table.needs[i] === 0)) {
-    const g = formationGibbsAt(db, s.species, celsius);
+    // above 100 °C a record without S° has no temperature dependence to give: the cell is left empty
+    const g = s.species.S === null && celsius > CONSTANT_GIBBS_MAX_CELSIUS ? null : formationGibbsAt(db, s.species, celsius);
     rows.push([s.formula, STATE_WORDS[s.species.state], s.species.name, g === null ? "" : Math.round(g / 10) / 100, s.species.source]);
   }
   return rows;

@@ -3,6 +3,7 @@
  * SVG (diagram-svg.ts). The host adapter supplies tables and, in Excel, row selection and picture insertion.
  */
 import { getDatabase } from "../chemistry/database";
+import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import { getElectrodes } from "../chemistry/electrodes";
 import { SystemCache } from "../chemistry/system-cache";
 import { hasLigands, ligandKey, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
@@ -338,7 +339,7 @@ export class DiagramPane {
       celsius = Math.round(median(temperatures) * 10) / 10;
       input("temperature").value = String(celsius);
     }
-    if (!(celsius >= 0 && celsius <= 100)) return this.status("Temperature: 0 to 100 °C.");
+    if (!(celsius >= MIN_CELSIUS && celsius <= MAX_CELSIUS)) return this.status(`Temperature: ${MIN_CELSIUS} to ${MAX_CELSIUS} °C.`);
     if (this.table) read = readSamples(this.table, { ...options, celsius });
     this.showTemperatureSpread(temperatures, celsius);
 

@@ -6,6 +6,7 @@
  */
 import { getElectrodes } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
+import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import type { LigandName } from "../chemistry/ligand-cells";
 import { ColumnMapping, findHeaderRow, WaterColumn } from "./header-match";
 import type { PotentialUnit, SampleInput } from "./diagram-model";
@@ -118,7 +119,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     if ("error" in temperature) reasons.push(`temperature ${temperature.error}`);
     else if ("value" in temperature) {
       celsius = options.temperatureUnit === "F" ? ((temperature.value - 32) * 5) / 9 : temperature.value;
-      if (celsius < 0 || celsius > 100) reasons.push(`temperature ${temperature.value} °${options.temperatureUnit} is outside 0…100 °C`);
+      if (celsius < MIN_CELSIUS || celsius > MAX_CELSIUS) reasons.push(`temperature ${temperature.value} °${options.temperatureUnit} is outside ${MIN_CELSIUS}…${MAX_CELSIUS} °C`);
       else hasTemperature = true;
     }
     let eSHE = NaN;
