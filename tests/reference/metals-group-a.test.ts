@@ -16,7 +16,7 @@ import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import { BARD, BM, checkConstants, checkDisagreements, checkPotentials, ConstantCase, CRC, Disagreement, NBS, PotentialCase } from "./compilation-checks";
-import { buildSystem, pairBoundary } from "../../src/chemistry/system";
+import { buildSystem, dominantSpecies, pairBoundary } from "../../src/chemistry/system";
 import { FARADAY, GAS_CONSTANT, LN10, T0, nernstFactor } from "../../src/chemistry/constants";
 
 const db = getDatabase();
@@ -234,6 +234,7 @@ const constants: ConstantCase[] = [
   { label: "Cr3+ + 2H2O = Cr(OH)2+ + 2H+", reaction: { "Cr3+": -1, "H2O(l)": -2, "Cr(OH)2+": 1, "H+": 2 }, logK: -9.7, source: BM, independent: false },
   { label: "Cr3+ + 4H2O = Cr(OH)4- + 4H+", reaction: { "Cr3+": -1, "H2O(l)": -4, "Cr(OH)4-": 1, "H+": 4 }, logK: -27.4, source: BM, independent: false },
   { label: "Al3+ + 2H2O = Al(OH)2+ + 2H+", reaction: { "Al3+": -1, "H2O(l)": -2, "Al(OH)2+": 1, "H+": 2 }, logK: -9.3, source: BM, independent: false },
+  { label: "NiO(s) + H2O = HNiO2- + H+ (Ni(OH)2 + H2O = Ni(OH)3- + H+ in base: log*Ks10 10.8 + log*β13 −29.0)", reaction: { "NiO(s)": -1, "H2O(l)": -1, "HNiO2-": 1, "H+": 1 }, logK: -18.2, source: BM, independent: false },
 ];
 
 checkConstants("group A metals: hydrolysis and solubility constants within 0.5 log units of Baes & Mesmer", constants, METALS);
@@ -245,7 +246,15 @@ checkConstants("group A metals: hydrolysis and solubility constants within 0.5 l
 const constantDisagreements: (ConstantCase & { follows: number; followsSource: string })[] = [
   { label: "Cu2+ + 3H2O = Cu(OH)3- + 3H+, log*β13 (as HCuO2- + H2O)", reaction: { "Cu2+": -1, "H2O(l)": -2, "HCuO2-": 1, "H+": 3 }, logK: -26.9, source: BM, independent: true, follows: -26.33, followsSource: `${NBS}, ΔG°f(HCuO2-) = −258.5 kJ/mol` },
   { label: "Ni(OH)2 + 2H+ = Ni2+ + 2H2O, log*Ks10", reaction: { "Ni(OH)2(s)": -1, "H+": -2, "Ni2+": 1, "H2O(l)": 2 }, logK: 10.8, source: BM, independent: true, follows: 12.73, followsSource: `${NBS}, ΔG°f(Ni(OH)2) = −447.2 kJ/mol` },
-  { label: "Ni2+ + 3H2O = Ni(OH)3- + 3H+, log*β13 (as HNiO2- + H2O)", reaction: { "Ni2+": -1, "H2O(l)": -2, "HNiO2-": 1, "H+": 3 }, logK: -29.0, source: BM, independent: true, follows: -29.9, followsSource: `${NBS}, ΔG°f(HNiO2-) = −349.2 kJ/mol` },
+  {
+    label: "Ni2+ + 3H2O = Ni(OH)3- + 3H+, log*β13 (as HNiO2- + H2O)",
+    reaction: { "Ni2+": -1, "H2O(l)": -2, "HNiO2-": 1, "H+": 3 },
+    logK: -29.0,
+    source: BM,
+    independent: true,
+    follows: -30.64,
+    followsSource: "HNiO2- anchored on NBS NiO through Baes & Mesmer's solubility in base (log K −18.2), NBS NiO being 1.6 log units more soluble than their Ni(OH)2",
+  },
   { label: "Al3+ + 4H2O = Al(OH)4- + 4H+, log*β14", reaction: { "Al3+": -1, "H2O(l)": -4, "Al(OH)4-": 1, "H+": 4 }, logK: -23.0, source: BM, independent: true, follows: -22.46, followsSource: `${NBS}, ΔG°f(Al(OH)4-) = −1305.3 kJ/mol` },
   { label: "Al(OH)3 (gibbsite) + 3H+ = Al3+ + 3H2O, log*Ks10", reaction: { "Al(OH)3(s)": -1, "H+": -3, "Al3+": 1, "H2O(l)": 3 }, logK: 8.2, source: BM, independent: true, follows: 7.27, followsSource: `Robie & Hemingway 1995 gibbsite with ${NBS} Al3+` },
 ];
@@ -392,4 +401,23 @@ describe("group A metals: Atlas lines where the Atlas used other data", () => {
       }
     });
   }
+});
+
+/**
+ * Nickel in base (data correction): with NBS HNiO2- nickel corroded from pH 11.45 at 1e-6 (=REDOX.SPECIES("Ni",
+ * 11.8, -0.3) gave HNiO2-); with HNiO2- from Baes & Mesmer's solubility in base it is passive (NiO) there, and the
+ * NiO/HNiO2- line lies at pH 12.2 as in the Atlas.
+ */
+describe("group A metals: nickel passive in base up to about pH 12.2", () => {
+  const system = buildSystem(db, "Ni", { celsius: 25, activity: 1e-6 });
+  it(`Ni at pH 11.8, −0.3 V is NiO(s), passivation (${ATLAS}, nickel diagram at 1e-6: passive to about pH 12.2)`, () => {
+    const s = system.species[dominantSpecies(system, 11.8, -0.3)];
+    expect(s.formula).toBe("NiO(s)");
+    expect(s.regime).toBe("passivation");
+  });
+  it(`NiO / HNiO2- at 1e-6: pH 12.2 within 0.3 (${ATLAS}; ${BM})`, () => {
+    const boundary = pairBoundary(system, "NiO(s)", "HNiO2-");
+    expect(boundary?.kind).toBe("vertical");
+    if (boundary?.kind === "vertical") expect(Math.abs(boundary.pH - 12.2)).toBeLessThanOrEqual(0.3);
+  });
 });
