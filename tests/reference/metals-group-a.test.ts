@@ -421,3 +421,27 @@ describe("group A metals: nickel passive in base up to about pH 12.2", () => {
     if (boundary?.kind === "vertical") expect(Math.abs(boundary.pH - 12.2)).toBeLessThanOrEqual(0.3);
   });
 });
+
+/**
+ * The Cu+ band (README's statement): in acid, Cu+ has a region where the Cu2+/Cu+ line lies above the Cu+/Cu line.
+ * At 1e-6 that happens when the disproportionation constant of 2Cu+ = Cu2+ + Cu falls below 10^6: with these data
+ * log K = 6.04 at 25 °C, so the band opens at about 26 °C, 11 mV wide at 30 °C and 93 mV at 60 °C. The widths are
+ * the data's (pinned, so that README cannot drift from them); the constant is compared with the CRC's potentials.
+ */
+describe("group A metals: the Cu+ band as README states it", () => {
+  const width = (celsius: number) => {
+    const system = buildSystem(db, "Cu", { celsius, activity: 1e-6 });
+    const upper = pairBoundary(system, "Cu2+", "Cu+");
+    const lower = pairBoundary(system, "Cu+", "Cu(s)");
+    if (upper?.kind !== "line" || lower?.kind !== "line") throw new Error("copper couples are not lines");
+    return upper.intercept - lower.intercept;
+  };
+  it(`2Cu+ = Cu2+ + Cu: log K ${"6.22"} within 0.25 (${CRC}: E° Cu+/Cu 0.521 V, Cu2+/Cu+ 0.153 V)`, () => {
+    expect(Math.abs(reactionLogK(db, { "Cu+": -2, "Cu2+": 1, "Cu(s)": 1 }, 25) - 6.22)).toBeLessThanOrEqual(0.25);
+  });
+  it("no band at 25 °C; 11 ± 2 mV at 30 °C; 93 ± 5 mV at 60 °C (data's figures, as README states)", () => {
+    expect(width(25)).toBeLessThan(0);
+    expect(Math.abs(width(30) - 0.0113)).toBeLessThanOrEqual(0.002);
+    expect(Math.abs(width(60) - 0.093)).toBeLessThanOrEqual(0.005);
+  });
+});
