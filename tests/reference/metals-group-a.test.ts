@@ -380,6 +380,12 @@ const atlasDisagreements: AtlasDisagreement[] = [
     metal: "Cu", pair: ["Cu2+", "CuO(s)"], equation: "log(Cu2+) = 7.89 − 2 pH", kind: "vertical", pH0: 7.89 / 2, logCoefPH: -1 / 2, h: 2, source: ATLAS,
     predicted: (7.35 - 7.89) / 2, why: "tenorite log*Ks10 7.35 (NBS 1982) against 7.89 (Atlas)",
   },
+  {
+    // 2CrO4 2- + 10H+ + 6e- = Cr2O3 + 5H2O: NBS Cr2O3 −1058.1 against the Atlas's −1046.8 kJ/mol, NBS CrO4 2- −727.75
+    // against Latimer's −736.8 kJ/mol (−176.1 kcal, from memory): E° 1.362 V here, 1.311 V in the Atlas
+    metal: "Cr", pair: ["CrO42-", "Cr2O3(s)"], equation: "E = 1.311 − 0.0985 pH + 0.0197 log(CrO4 2-)", kind: "line", e0: 1.311, hPerN: 10 / 6, logCoef: 0.0197, source: ATLAS,
+    predicted: (-(-1058.1 - -1046.8) + 2 * (-727.75 - -736.8)) * 1000 / (6 * FARADAY), why: "Cr2O3 (NBS −1058.1, Atlas −1046.8 kJ/mol) and CrO4 2- (NBS −727.75, Latimer −736.8 kJ/mol), 6 e−",
+  },
 ];
 
 describe("group A metals: Atlas lines where the Atlas used other data", () => {
