@@ -451,3 +451,27 @@ describe("group A metals: the Cu+ band as README states it", () => {
     expect(Math.abs(width(60) - 0.093)).toBeLessThanOrEqual(0.005);
   });
 });
+
+/**
+ * Zinc's neutral complex Zn(OH)2(aq), a documented choice: Baes & Mesmer give only an upper limit, log *β2 ≤ −16.9.
+ * Taken at that limit, zincite's solubility as the neutral complex would be 10^(log*Ks10 − 16.9) = 10^-5.4 mol/kg at
+ * every pH — above 1e-6, so zinc would have no passive window at the default activity. The database leaves the
+ * complex out (data/species/zn.json) and zinc is passive (ZnO) from pH 8.8 to 10.9 at 1e-6; this pins both.
+ */
+describe("group A metals: zinc without Zn(OH)2(aq), and what including it would do", () => {
+  const system = buildSystem(db, "Zn", { celsius: 25, activity: 1e-6 });
+  it("Zn(OH)2(aq) is not in the database (the upper limit of Baes & Mesmer 1976 is not taken as a value)", () => {
+    expect(db.species("Zn(OH)2(aq)")).toBeUndefined();
+  });
+  it(`at the limit log *β2 = −16.9 (${BM}) the neutral complex alone would exceed 1e-6 over zincite`, () => {
+    const logKs = reactionLogK(db, { "ZnO(s)": -1, "H+": -2, "Zn2+": 1, "H2O(l)": 1 }, 25);
+    expect(logKs - 16.9).toBeGreaterThan(-6);
+  });
+  it("without it, zinc is passive at 1e-6 between the Zn2+/ZnO and ZnO/Zn(OH)3- lines, pH 8.8 to 10.9 (data's figures, as README states)", () => {
+    const acid = pairBoundary(system, "Zn2+", "ZnO(s)");
+    const base = pairBoundary(system, "ZnO(s)", "Zn(OH)3-");
+    expect(acid?.kind === "vertical" && Math.abs(acid.pH - 8.77) < 0.05).toBe(true);
+    expect(base?.kind === "vertical" && Math.abs(base.pH - 10.86) < 0.05).toBe(true);
+    expect(system.species[dominantSpecies(system, 9.8, 0)].formula).toBe("ZnO(s)");
+  });
+});
