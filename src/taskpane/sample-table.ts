@@ -7,7 +7,7 @@
 import { getElectrodes } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
 import type { LigandName } from "../chemistry/ligand-cells";
-import { ColumnMapping, findHeaderRow, WaterColumn } from "./header-match";
+import { ColumnMapping, findHeaderRow, WaterColumn } from "../tables";
 import type { PotentialUnit, SampleInput } from "./diagram-model";
 import { RowTotals, rowTotal } from "./ligand-inputs";
 

@@ -16,7 +16,7 @@ import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../../src/functi
 import { waterMarginAt } from "../../src/functions/water-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
 import { getDatabase } from "../../src/chemistry/database";
-import { formatNumber } from "../../src/cli/evaluate";
+import { DEFAULT_FORMAT, numberField, type NumberKind } from "../../src/cli/csv-format";
 import { HELP, OPTION_SPEC } from "../../src/cli/options";
 import { runCommand } from "../../src/cli/run";
 import { REPO_ROOT } from "../bundle/harness";
@@ -59,10 +59,13 @@ const RESULT_COLUMNS = [
 ];
 
 /** What a result cell of the CSV should hold for a worksheet function's answer. */
-function expectedText(value: CellOutput): string {
+function expectedText(value: CellOutput, kind: NumberKind = "amount"): string {
   if (value instanceof CellError) return value.code;
-  return typeof value === "number" ? formatNumber(value) : value;
+  return typeof value === "number" ? numberField(value, kind, DEFAULT_FORMAT) : value;
 }
+
+/** A total (mol/kg) as the results write it: 4 significant figures. */
+const formatNumber = (x: number): string => numberField(x, "amount", DEFAULT_FORMAT);
 
 describe("a generated 200 000-row log", () => {
   const ROWS = 200_000;
@@ -120,14 +123,14 @@ describe("a generated 200 000-row log", () => {
       const e = toSHEAt(reading, "AgCl-sat", t)[0][0];
       const ePassed = typeof e === "number" ? e : "";
       const expected = [
-        e,
-        waterMarginAt(pH, ePassed, t)[0][0],
-        speciesAt(metal, pH, ePassed, t)[0][0],
-        regimeAt(metal, pH, ePassed, t)[0][0],
-        boundaryFrom(metal, pH, ePassed, 1, t)[0][0],
-        boundaryFrom(metal, pH, ePassed, -1, t)[0][0],
-        dissolvedAt(metal, pH, ePassed, t, "ug/L")[0][0],
-      ].map(expectedText);
+        expectedText(e, "volts"),
+        expectedText(waterMarginAt(pH, ePassed, t)[0][0], "volts"),
+        expectedText(speciesAt(metal, pH, ePassed, t)[0][0]),
+        expectedText(regimeAt(metal, pH, ePassed, t)[0][0]),
+        expectedText(boundaryFrom(metal, pH, ePassed, 1, t)[0][0], "volts"),
+        expectedText(boundaryFrom(metal, pH, ePassed, -1, t)[0][0], "volts"),
+        expectedText(dissolvedAt(metal, pH, ePassed, t, "ug/L")[0][0]),
+      ];
       const got = record.slice(SYNTHETIC_HEADER.length, SYNTHETIC_HEADER.length + 7);
       expect(got, `row ${index + 1}`).toEqual(expected);
       compared++;
@@ -161,8 +164,10 @@ describe("small files", () => {
     const r = await run([input, "-o", join(dir, "blank-out.csv"), "--metal", "Cu,iron", "--no-svg", "--quiet"]);
     expect(r.code).toBe(0);
     expect(r.stderr).toContain(`line 4, column "pH": blank; this row's results are left blank`);
-    expect(r.stderr).toContain(`line 5, column "Eh (V)": blank`);
-    const rows = parseSync(readFileSync(join(dir, "blank-out.csv"), "utf8")) as string[][];
+    // a blank temperature is a missing measurement: blank results, reported
+    expect(r.stderr).toContain(`line 5, column "temp": blank: a missing measurement`);
+    // the results use the input's delimiter
+    const rows = parseSync(readFileSync(join(dir, "blank-out.csv"), "utf8"), { delimiter: ";" }) as string[][];
     expect(rows[0]).toEqual([
       "site", "pH", "Eh (V)", "temp", "E_SHE_V", "water_margin_V",
       "Cu_species", "Cu_regime", "Cu_boundary_above_V", "Cu_boundary_below_V", "Cu_dissolved_ug_L",
@@ -182,7 +187,7 @@ describe("small files", () => {
     expect(r.stderr).toContain(`line 4, column "pH": expected a number, got the text "x"`);
     const rows = parseSync(readFileSync(join(dir, "quoted-out.csv"), "utf8")) as string[][];
     expect(rows[1][3]).toBe("two\nlines");
-    expect(Number(rows[1][4])).toBeCloseTo(Number(expectedText(toSHEAt(0.2, "SCE")[0][0])), 12);
+    expect(rows[1][4]).toBe(expectedText(toSHEAt(0.2, "SCE")[0][0], "volts"));
   });
 
   it("writes to standard output with -o - and keeps the summary off it", async () => {
@@ -191,7 +196,7 @@ describe("small files", () => {
     expect(r.code).toBe(0);
     const rows = parseSync(r.stdout) as string[][];
     expect(rows).toHaveLength(2);
-    expect(rows[1][3]).toBe(expectedText(toSHEAt(0.2, "SHE")[0][0]));
+    expect(rows[1][3]).toBe(expectedText(toSHEAt(0.2, "SHE")[0][0], "volts"));
     expect(rows[1][5]).toBe(expectedText(speciesAt("Zn", 7, 0.2)[0][0]));
     expect(r.stderr).toContain("1 rows from");
   });
@@ -272,8 +277,8 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
       expect(row.sulfur_mol_kg).toBe(sulfur === "" ? "" : formatNumber(sulfur));
       expect(row.metal_species).toBe(expectedText(speciesAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
       expect(row.metal_regime).toBe(expectedText(regimeAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
-      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, 1, t, undefined, dic, chloride, sulfur)[0][0]));
-      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, -1, t, undefined, dic, chloride, sulfur)[0][0]));
+      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, 1, t, undefined, dic, chloride, sulfur)[0][0], "volts"));
+      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, -1, t, undefined, dic, chloride, sulfur)[0][0], "volts"));
       expect(row.metal_dissolved_ug_L).toBe(expectedText(dissolvedAt(metal, pH, e, t, "ug/L", undefined, dic, chloride, sulfur)[0][0]));
       if (row.metal_species !== expectedText(speciesAt(metal, pH, e, t)[0][0])) carbonateMattered = true;
     });

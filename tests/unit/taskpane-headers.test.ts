@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { findHeaderRow, headerTokens, matchHeaders } from "../../src/taskpane/header-match";
-import { parseDelimited } from "../../src/taskpane/delimited-text";
+import { findHeaderRow, headerTokens, matchHeaders } from "../../src/tables";
+import { parseDelimited } from "../../src/tables";
 
 describe("header matching on realistic spellings", () => {
   it("the invented demo log's header (snake case with units and electrode)", () => {
