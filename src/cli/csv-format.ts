@@ -30,6 +30,7 @@ function needsQuotes(text: string, delimiter: string): boolean {
 
 /** A text cell as a CSV field in this format. */
 export function textField(text: string, format: CsvFormat): string {
+  if (text === "") return "";
   if (!format.rawText && FORMULA_START.test(text) && readNumber(text, format.decimalMark) === null) {
     return `"'${text.replace(/"/g, '""')}"`;
   }
@@ -38,7 +39,8 @@ export function textField(text: string, format: CsvFormat): string {
 
 /** A result number as a CSV field: rounded by kind (unless full precision), with the format's decimal mark. */
 export function numberField(x: number, kind: NumberKind, format: CsvFormat): string {
-  const text = format.fullPrecision ? String(x) : String(kind === "volts" ? Number(x.toFixed(4)) : Number(x.toPrecision(4)));
+  // volts: to 0.1 mV by scaling (the same digits as toFixed(4) but for exact ties, at a fraction of its cost)
+  const text = format.fullPrecision ? String(x) : String(kind === "volts" ? Math.round(x * 1e4) / 1e4 : Number(x.toPrecision(4)));
   return format.decimalMark === "." ? text : text.replace(".", ",");
 }
 

@@ -279,6 +279,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   let blankRows = 0;
   const cellCount = 2 + ligandCells.length + 5 * perTarget.length;
 
+  const rowCells: CellOutput[] = new Array(cellCount);
   for (let r = 0; r < n; r++) {
     const row = rows[r];
     if (row.fields.every(isBlank)) {
@@ -298,7 +299,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     const eError = e instanceof CellError ? e : null;
     // the spreadsheet passes an error in an argument cell straight through: the potential first, then the carbonate
     const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]);
-    const cells: CellOutput[] = new Array(cellCount);
+    const cells = rowCells; // reused: each row's line is written before the next row
     let k = 0;
     cells[k++] = e;
     cells[k++] = eError ?? margin[r][0];

@@ -78,11 +78,13 @@ export class RecordSplitter {
     }
     const d = this.delimiter;
     let pos = 0;
+    // the next quote at or after pos (searched again only once passed: one scan per chunk, not one per line)
+    let quote = text.indexOf('"');
     for (;;) {
       const nl = text.indexOf("\n", pos);
       if (nl < 0) break;
       const end = nl > pos && text.charCodeAt(nl - 1) === 13 ? nl - 1 : nl;
-      const quote = text.indexOf('"', pos);
+      if (quote >= 0 && quote < pos) quote = text.indexOf('"', pos);
       if (quote < 0 || quote > nl) {
         this.emit(text.slice(pos, end), null, out);
         pos = nl + 1;
