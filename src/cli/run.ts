@@ -295,9 +295,9 @@ class StreamedRun {
   }
 
   private async write(out: Writable, text: string, state: { failed: unknown }): Promise<void> {
-    if (state.failed) throw state.failed;
+    if (state.failed) throw cannotWrite(this.options, state.failed);
     if (!out.write(text)) await drained(out);
-    if (state.failed) throw state.failed;
+    if (state.failed) throw cannotWrite(this.options, state.failed);
   }
 }
 

@@ -1,8 +1,7 @@
 // The redox-cells command line: a generated 200 000-row CSV (row count, columns, a sample of values against direct
 // calls of the worksheet functions, messages for bad cells), blank cells, delimiters and quoting, output to
-// standard output, --help, and the exit codes through the real bin/redox-cells.mjs.
+// standard output, --help, and the exit codes (in process; the spawned bin is in cli-bin.test.ts).
 
-import { spawnSync } from "node:child_process";
 import { mkdtempSync, readFileSync, rmSync, writeFileSync, createReadStream } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -19,7 +18,6 @@ import { getDatabase } from "../../src/chemistry/database";
 import { DEFAULT_FORMAT, numberField, type NumberKind } from "../../src/cli/csv-format";
 import { HELP, OPTION_SPEC } from "../../src/cli/options";
 import { runCommand } from "../../src/cli/run";
-import { REPO_ROOT } from "../bundle/harness";
 import { SYNTHETIC_HEADER, writeSyntheticLog } from "./synthetic-log";
 
 /** Collects what the program writes. */
@@ -228,7 +226,7 @@ describe("small files", () => {
     const r = await run(["--help"]);
     expect(r.code).toBe(0);
     for (const name of Object.keys(OPTION_SPEC)) expect(HELP, name).toContain(`--${name}`);
-    for (const code of ["0", "1", "2", "3"]) expect(HELP).toMatch(new RegExp(`^  ${code}  `, "m"));
+    for (const code of ["0", "1", "2", "3", "4", "130"]) expect(HELP).toMatch(new RegExp(`^  ${code}  `, "m"));
   });
 });
 
@@ -335,31 +333,30 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
   });
 });
 
-describe("exit codes through bin/redox-cells.mjs", () => {
-  const bin = join(REPO_ROOT, "bin/redox-cells.mjs");
-  const exec = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: "utf8", cwd: REPO_ROOT, timeout: 120_000 });
-
-  it("0 for --help, 2 for a usage error, 3 for an unreadable input, 1 for bad cells", () => {
-    const help = exec(["--help"]);
-    expect(help.status).toBe(0);
+describe("exit codes, in process (the spawned bin is tested in cli-bin.test.ts)", () => {
+  it("0 for --help, 2 for a usage error, 3 for an unreadable input, 1 for bad cells", async () => {
+    const help = await run(["--help"]);
+    expect(help.code).toBe(0);
     expect(help.stdout).toContain("Usage");
 
-    const usage = exec(["--no-such-option", "x.csv"]);
-    expect(usage.status).toBe(2);
+    const usage = await run(["--no-such-option", "x.csv"]);
+    expect(usage.code).toBe(2);
     expect(usage.stderr).toContain("Try 'redox-cells --help'");
 
-    const missing = exec([join(dir, "does-not-exist.csv"), "-m", "Fe"]);
-    expect(missing.status).toBe(3);
+    const missing = await run([join(dir, "does-not-exist.csv"), "-m", "Fe"]);
+    expect(missing.code).toBe(3);
     expect(missing.stderr).toContain("no such file");
 
     const malformed = join(dir, "malformed.csv");
     writeFileSync(malformed, 'pH,Eh_V,metal\n7,0.2,Fe\n"7,0.3,Fe\n');
-    expect(exec([malformed, "-o", join(dir, "m-out.csv"), "--no-svg"]).status).toBe(3);
+    const m = await run([malformed, "-o", join(dir, "m-out.csv"), "--no-svg"]);
+    expect(m.code).toBe(3);
+    expect(m.stderr).toContain("line 3: a quoted field is not closed");
 
     const badCells = join(dir, "bad-cells.csv");
     writeFileSync(badCells, "pH,Eh (V),metal\n7,0.2,Fe\n7,oops,Fe\n");
-    const bad = exec([badCells, "-o", join(dir, "bad-out.csv"), "--no-svg"]);
-    expect(bad.status).toBe(1);
+    const bad = await run([badCells, "-o", join(dir, "bad-out.csv"), "--no-svg"]);
+    expect(bad.code).toBe(1);
     expect(bad.stderr).toContain(`line 3, column "Eh (V)": expected a number, got the text "oops"`);
-  }, 300_000);
+  });
 });
