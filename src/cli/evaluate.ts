@@ -47,6 +47,8 @@ export interface EvaluationPlan {
   readonly ligands: readonly LigandInput[];
   /** Delimiter, decimal mark, text neutralising and precision of the input and the results. */
   readonly format: CsvFormat;
+  /** Whether the batch results carry the sample points for diagrams. */
+  readonly diagrams: boolean;
 }
 
 export const RESULT_SUFFIXES = ["species", "regime", "boundary_above_V", "boundary_below_V"] as const;
@@ -282,7 +284,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   const rowCells: CellOutput[] = new Array(cellCount);
   for (let r = 0; r < n; r++) {
     const row = rows[r];
-    if (row.fields.every(isBlank)) {
+    if (isBlank(row.fields[plan.phColumn]) && row.fields.every(isBlank)) {
       messages.push({ line: row.line, column: null, text: "a record of blank cells; its results are left blank", kind: "blank" });
       out[r] = blankLine(plan, row, cellCount);
       blankRows++;
@@ -359,6 +361,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
         if (typeof regime !== "string" || regime === "" || typeof species !== "string") continue;
         const counts = regimes.get(p.target.prefix)!;
         counts.set(regime, (counts.get(regime) ?? 0) + 1);
+        if (!plan.diagrams) continue;
         const symbol = p.target.symbol ?? String((p.element as CellScalar[][])[r][0]).trim();
         const point: SamplePoint = { symbol, pH: pHValue, E: e, regime, species, celsius, line: row.line };
         points.push(ligands ? { ...point, ligands } : point);

@@ -149,7 +149,9 @@ Messages and progress
       --progress             show a progress bar on standard error even when it is not a terminal
       --no-progress          never show one (default: shown when standard error is a terminal)
       --max-messages N       print at most N cell messages (default 50; 0 = none); the rest are counted
-      --batch-size N         rows evaluated together (default 4096); memory grows with it
+      --batch-size N         rows evaluated together (default 256, what the engine's system cache holds, so a
+                             batch whose every row has its own water builds each system once, not once per
+                             function); memory grows with it
   -q, --quiet                no summary
   -h, --help                 this text
   -V, --version              the program's version
@@ -192,6 +194,13 @@ and licensed corrosion professionals.
 `;
 
 const DEFAULT_MAX_MESSAGES = 50;
+
+/**
+ * Rows per batch: no more than the engine's system cache holds (SYSTEM_CACHE_SIZE, src/chemistry/system-cache.ts;
+ * a test keeps them tied), so that rows with waters of their own build each system once per batch and the other
+ * four functions find it cached. Not imported here: --help and --version load no chemistry.
+ */
+export const DEFAULT_BATCH_SIZE = 256;
 
 function numberOption(name: string, text: string | undefined, check: (x: number) => boolean, expected: string): number | undefined {
   if (text === undefined) return undefined;
@@ -332,7 +341,7 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     progress: v["no-progress"] ? false : v.progress ? true : "auto",
     maxMessages: numberOption("max-messages", v["max-messages"], (x) => Number.isInteger(x) && x >= 0, "a whole number ≥ 0") ?? DEFAULT_MAX_MESSAGES,
     quiet: v.quiet ?? false,
-    batchSize: numberOption("batch-size", v["batch-size"], (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000, "a whole number from 1 to 1000000") ?? 4096,
+    batchSize: numberOption("batch-size", v["batch-size"], (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000, "a whole number from 1 to 1000000") ?? DEFAULT_BATCH_SIZE,
   };
   return { kind: "run", options };
 }

@@ -128,5 +128,6 @@ export function planFromHeader(headers: string[], options: CliOptions, format: C
     keepInput: options.keepInput,
     ligands,
     format,
+    diagrams: options.svgDir !== null,
   };
 }

@@ -9,6 +9,8 @@ import { join } from "node:path";
 import { Writable } from "node:stream";
 import { parse as parseSync } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { SYSTEM_CACHE_SIZE } from "../../src/chemistry/system-cache";
+import { DEFAULT_BATCH_SIZE } from "../../src/cli/options";
 import { runCommand, type CliStreams } from "../../src/cli/run";
 
 class Capture extends Writable {
@@ -205,5 +207,11 @@ describe("bounded messages and precision", () => {
     expect(Number(a[0].metal_boundary_below_V)).toBeCloseTo(Number(b[0].metal_boundary_below_V), 4);
     const dissolved = Number(b[0].metal_dissolved_ug_L);
     expect(a[0].metal_dissolved_ug_L).toBe(String(Number(dissolved.toPrecision(4))));
+  });
+});
+
+describe("batches", () => {
+  it("are no larger than the engine's system cache, so a batch's systems are built once and found by every function", () => {
+    expect(DEFAULT_BATCH_SIZE).toBeLessThanOrEqual(SYSTEM_CACHE_SIZE);
   });
 });
