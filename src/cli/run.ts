@@ -38,6 +38,8 @@ export interface RunResult {
 const PROGRAM = "redox-cells";
 /** A record longer than this is refused (an unclosed quote would otherwise read the whole file into memory). */
 const MAX_RECORD_CHARS = 64 * 1024 * 1024;
+/** Results text gathered before one write. */
+const WRITE_CHARS = 1 << 20;
 
 /** Entry point: parses argv, runs, returns the exit code. Never throws. */
 export async function runCli(argv: readonly string[], streams: CliStreams, fns: WorksheetFunctions = worksheetFunctions): Promise<number> {
@@ -256,11 +258,18 @@ class StreamedRun {
   private async flush(plan: EvaluationPlan, out: Writable, rows: InputRow[], state: { failed: unknown }, all: boolean): Promise<InputRow[]> {
     const size = this.options.batchSize;
     let start = 0;
+    // batches' lines are written together, about 1 MiB at a time (one write per batch costs more than the batch)
+    let text = "";
     while (rows.length - start >= size || (all && start < rows.length)) {
       const batch = rows.slice(start, start + size).map((r) => this.fitted(plan, r));
       start += batch.length;
-      await this.write(out, this.evaluate(plan, batch), state);
+      text += this.evaluate(plan, batch);
+      if (text.length >= WRITE_CHARS) {
+        await this.write(out, text, state);
+        text = "";
+      }
     }
+    if (text !== "") await this.write(out, text, state);
     return rows.slice(start);
   }
 
