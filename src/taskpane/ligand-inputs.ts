@@ -16,7 +16,7 @@ import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
 import type { Database } from "../chemistry/database";
 import { hasLigands, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
-import { alkalinityFactor, molalFactor, type WaterColumn, type WaterColumnRole } from "../tables";
+import { alkalinityFactor, molalFactor, readNumber, type WaterColumn, type WaterColumnRole } from "../tables";
 
 /** Where each ligand's total comes from. */
 export type LigandSource = { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: WaterColumn };
@@ -47,7 +47,7 @@ function numberIn(cell: unknown): number | null {
   if (typeof cell === "number") return Number.isFinite(cell) ? cell : null;
   if (typeof cell !== "string") return null;
   const text = cell.trim();
-  return /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(text) ? Number(text) : null;
+  return readNumber(text);
 }
 
 /** Molar mass (g/mol) from the element records. */
