@@ -38,9 +38,28 @@ export function textField(text: string, format: CsvFormat): string {
 }
 
 /** A result number as a CSV field: rounded by kind (unless full precision), with the format's decimal mark. */
+/**
+ * Volts to 0.1 mV, written from the integer number of tenths of a millivolt: the text String(round(x·1e4)/1e4)
+ * gives (no trailing zeros), without formatting a double.
+ */
+function voltsText(x: number): string {
+  const n = Math.round(x * 1e4);
+  if (!(Math.abs(n) < 1e15)) return String(n / 1e4);
+  const a = n < 0 ? -n : n;
+  const whole = Math.floor(a / 1e4);
+  let fraction = a - whole * 1e4;
+  const sign = n < 0 ? "-" : "";
+  if (fraction === 0) return sign + whole;
+  let digits = 4;
+  while (fraction % 10 === 0) {
+    fraction /= 10;
+    digits--;
+  }
+  return `${sign}${whole}.${String(fraction).padStart(digits, "0")}`;
+}
+
 export function numberField(x: number, kind: NumberKind, format: CsvFormat): string {
-  // volts: to 0.1 mV by scaling (the same digits as toFixed(4) but for exact ties, at a fraction of its cost)
-  const text = format.fullPrecision ? String(x) : String(kind === "volts" ? Math.round(x * 1e4) / 1e4 : Number(x.toPrecision(4)));
+  const text = format.fullPrecision ? String(x) : kind === "volts" ? voltsText(x) : String(Number(x.toPrecision(4)));
   return format.decimalMark === "." ? text : text.replace(".", ",");
 }
 

@@ -11,6 +11,7 @@ import { parse as parseSync } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { SYSTEM_CACHE_SIZE } from "../../src/chemistry/system-cache";
 import { DEFAULT_BATCH_SIZE } from "../../src/cli/options";
+import { DEFAULT_FORMAT, numberField } from "../../src/cli/csv-format";
 import { runCommand, type CliStreams } from "../../src/cli/run";
 
 class Capture extends Writable {
@@ -213,5 +214,19 @@ describe("bounded messages and precision", () => {
 describe("batches", () => {
   it("are no larger than the engine's system cache, so a batch's systems are built once and found by every function", () => {
     expect(DEFAULT_BATCH_SIZE).toBeLessThanOrEqual(SYSTEM_CACHE_SIZE);
+  });
+});
+
+describe("number text", () => {
+  it("potentials to 0.1 mV read back as the rounded value, with a decimal comma where the file has one", () => {
+    for (let i = -30_000; i <= 30_000; i += 7) {
+      const x = i / 1e4 + (i % 3) * 1.3e-5;
+      const text = numberField(x, "volts", DEFAULT_FORMAT);
+      expect(Number(text)).toBe(Math.round(x * 1e4) / 1e4);
+      expect(text).not.toMatch(/\.\d*0$|e/);
+    }
+    expect(numberField(-0.00004, "volts", DEFAULT_FORMAT)).toBe("0");
+    expect(numberField(-1.25, "volts", { ...DEFAULT_FORMAT, delimiter: ";", decimalMark: "," })).toBe("-1,25");
+    expect(numberField(1.234567e-7, "amount", DEFAULT_FORMAT)).toBe("1.235e-7");
   });
 });
