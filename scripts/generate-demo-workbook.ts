@@ -50,7 +50,8 @@ async function main(): Promise<void> {
   const first = header.length + 1;
   const E = letter(first);
   const DIC = letter(first + 2);
-  // activity of dissolved metal species (the functions' default, written out so the carbonate can follow it)
+  // activity of dissolved metal species (the functions' default, written out so the carbonate can follow it);
+  // chloride, sulfur and ionic strength are written as 0 (absent, ideal solution) so the option can follow them
   const activity = "1E-6";
 
   /** Result columns: header and formula for sheet row r (formulas without the leading "="). */
@@ -62,9 +63,9 @@ async function main(): Promise<void> {
     ["DIC_mol_kg", (r) => `REDOX.DIC(${alkalinity}${r},${pH}${r},${temp}${r})`],
     ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
     ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
-    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},,,,1)`],
-    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},,,,-1)`],
-    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},,,,"ug/L")`],
+    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,1)`],
+    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,-1)`],
+    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,0,"ug/L")`],
   ];
 
   const workbook = new ExcelJS.Workbook();
