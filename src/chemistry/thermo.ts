@@ -60,9 +60,3 @@ export function gibbsAt(props: ReactionProperties, kelvinT: number): number {
   const dT = kelvinT - T0;
   return props.dG0 - props.dS * dT + props.dCp * (dT - kelvinT * Math.log(kelvinT / T0));
 }
-
-/** ΔS°r at temperature T (kelvin): ΔS°r(T0) + ΔCp°r·ln(T/T0). */
-export function entropyAt(props: ReactionProperties, kelvinT: number): number | null {
-  if (props.dS === null) return null;
-  return props.dS + props.dCp * Math.log(kelvinT / T0);
-}
