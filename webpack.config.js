@@ -1,4 +1,3 @@
-/* eslint-env node */
 // Bundles the add-in into dist/:
 //   functions.js + functions.json (metadata generated from the JSDoc in src/functions/functions.ts) + functions.html
 //   taskpane.js + taskpane.html  (the shared-runtime page: it also loads functions.js and commands.js)

@@ -7,7 +7,7 @@ import { describe, expect, it } from "vitest";
 import { CellError } from "../../src/functions/cell-values";
 import { eh, fromshe, neutralph, pe, slope, toshe, waterline, watermargin } from "../../src/functions/functions";
 
-type Fn = (...args: any[]) => unknown[][]; // eslint-disable-line @typescript-eslint/no-explicit-any
+type Fn = (...args: any[]) => unknown[][];
 
 const FUNCTIONS: { id: string; fn: Fn; arity: number; argNames: string[] }[] = [
   { id: "WATERLINE", fn: waterline, arity: 4, argNames: ["pH", "temperature", "gas", "pressure"] },
