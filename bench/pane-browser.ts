@@ -1,5 +1,5 @@
 /**
- * Task pane drawing in the browser: the built standalone page in headless Chromium (GUIDE §7), 10 k synthetic
+ * Task pane drawing in the browser: the built standalone page in headless Chromium (DEVELOPERS.md), 10 k synthetic
  * samples pasted, time from "Draw" to the next painted frame with every marker drawn (SVG circles, or the canvas
  * layer the pane uses for large sets). Prints the figure; never fails on time.
  *

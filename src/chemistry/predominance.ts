@@ -7,7 +7,7 @@ import { envelopeRegions } from "./envelope";
 import { clipPolygon, intervalOnVertical, Point, polygonArea, rectangle } from "./halfplane";
 import { cellAt, dominantSpecies, MetalSystem, PlaneCell, PRUNE_PH_MAX, PRUNE_PH_MIN } from "./system";
 
-/** Potentials searched for boundaries, V vs SHE (GUIDE §3: #N/A when none in −3…+3 V). */
+/** Potentials searched for boundaries, V vs SHE (docs/method.md, Domain: #N/A when none in −3…+3 V). */
 export const BOUNDARY_SEARCH_LOW = -3;
 export const BOUNDARY_SEARCH_HIGH = 3;
 

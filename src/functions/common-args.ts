@@ -1,5 +1,5 @@
 /**
- * Argument readers shared by the worksheet functions (GUIDE §3 ranges and defaults).
+ * Argument readers shared by the worksheet functions (ranges and defaults: docs/method.md, Domain).
  */
 import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import { getDatabase } from "../chemistry/database";

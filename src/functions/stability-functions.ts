@@ -1,6 +1,6 @@
 /**
  * Worksheet functions over a metal's stability system: SPECIES, REGIME, BOUNDARY, COUPLE, DISSOLVED and
- * SPECIESTABLE (GUIDE §3). Thin adapters: argument reading and broadcasting come from broadcast.ts, the answers
+ * SPECIESTABLE (README). Thin adapters: argument reading and broadcasting come from broadcast.ts, the answers
  * from src/chemistry.
  */
 import { getDatabase, Species } from "../chemistry/database";

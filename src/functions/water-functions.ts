@@ -1,6 +1,6 @@
 /**
  * Worksheet functions for water and the redox scale: WATERLINE, WATERMARGIN, PE, EH, NEUTRALPH and SLOPE
- * (GUIDE §3). Thin adapters: arguments are read and broadcast by broadcast.ts, the answers come from
+ * (README). Thin adapters: arguments are read and broadcast by broadcast.ts, the answers come from
  * src/chemistry/water.ts, pe.ts and constants.ts. Temperatures in °C, potentials in V vs SHE.
  */
 import { kelvin, nernstFactor } from "../chemistry/constants";

@@ -51,7 +51,7 @@ describe("water lines from the species data", () => {
   });
 
   it("E°(H+/H2) is zero at every temperature (hydrogen-electrode convention)", () => {
-    // source: common practice (IUPAC convention, GUIDE §2)
+    // source: common practice (IUPAC convention; docs/method.md, Temperature)
     for (const t of [0, 25, 60, 100]) expect(Math.abs(waterStandardPotential("H2", t))).toBeLessThan(1e-12);
   });
 

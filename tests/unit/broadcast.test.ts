@@ -1,5 +1,5 @@
 // The shared coercion and broadcasting layer (src/functions/broadcast.ts): shapes, 1×1 / row / column broadcasting,
-// blanks, error precedence and messages that name the argument (GUIDE §3).
+// blanks, error precedence and messages that name the argument (docs/method.md, Domain).
 import { afterEach, describe, expect, it } from "vitest";
 import { mapCells, numberArg, textArg } from "../../src/functions/broadcast";
 import { CellError, CellOutput, valueError } from "../../src/functions/cell-values";
