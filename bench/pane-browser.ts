@@ -6,7 +6,7 @@
  *   npx webpack --mode production --output-path /tmp/pane-dist   (or npm run build)
  *   REDOX_DIST=/tmp/pane-dist npx tsx bench/pane-browser.ts
  */
-import { openStandalonePane } from "../tests/browser/serve-dist";
+import { openStandalonePane } from "../tests/support/serve-dist";
 import { syntheticSamples } from "./pane-render";
 
 async function main(): Promise<void> {
