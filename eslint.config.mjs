@@ -14,6 +14,14 @@ export default tseslint.config(
   {
     files: ["**/*.ts", "**/*.mts"],
     languageOptions: { globals: { ...globals.browser, ...globals.node } },
+    rules: {
+      // A leading underscore marks a binding kept on purpose (a parameter a callback must accept, a property
+      // dropped by a rest destructuring).
+      "@typescript-eslint/no-unused-vars": [
+        "error",
+        { argsIgnorePattern: "^_", varsIgnorePattern: "^_", caughtErrorsIgnorePattern: "^_", ignoreRestSiblings: true },
+      ],
+    },
   },
   {
     // webpack.config.js and the .cjs files are CommonJS, loaded by Node with require().
