@@ -183,7 +183,7 @@ export function diagramRegions(system: MetalSystem, window: DiagramWindow): Regi
 
 /**
  * Total dissolved metal (mol/kg, ideal activities) in equilibrium with the solid `solid` at (pH, E):
- * for each dissolved species i,  ln a_i = x_i·F·(g_S − g_i°)/(RT)  and the total is Σ x_i·a_i.
+ * for each dissolved species i,  ln a_i = x_i·F·(g_S − g_i°)/(RT), total Σ x_i·a_i (docs/method.md, Dissolved metal).
  */
 export function dissolvedTotal(system: MetalSystem, solid: number, pH: number, E: number): { total: number; parts: { species: number; molality: number }[] } {
   const cell = cellAt(system, pH, E);

@@ -7,7 +7,7 @@
  *   g(pH, E) = [ΔG°r(T) + RT ln a] / (xF) − ((2y − z)/x)·k(T)·pH − (n/x)·E,     k = RT ln10 / F
  *
  * with a the activity of a dissolved species (1 for solids). The metal has g = 0. The dominant species at a point
- * is the one with the lowest g; two species share a boundary where their g are equal.
+ * is the one with the lowest g; two share a boundary where their g are equal (Pourbaix 1974; Garrels & Christ 1965).
  *
  * Ligands (issue: real waters) split the plane into cells in each of which one basis species of every ligand
  * predominates; within a cell every plane is linear. Without ligands there is one cell covering everything.
