@@ -8,9 +8,10 @@ import { formationGibbsAt } from "../chemistry/formation";
 import { nearestBoundary, dissolvedAtPoint } from "../chemistry/predominance";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
 import { SystemCache } from "../chemistry/system-cache";
+import { ownEntry } from "../chemistry/own-entry";
 import { dominantSpecies, MetalSystem, SystemSpecies } from "../chemistry/system";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellInput, CellOutput, notAvailable, numError, toHostError, valueError } from "./cell-values";
+import { CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { ligandKey, LigandTotals } from "../chemistry/ligand-cells";
 import { buildLigandSystem } from "../chemistry/ligand-system";
@@ -113,7 +114,7 @@ export function boundaryFrom(
     [elementArg, pHArg, potentialArg(), directionArg, temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
     [element, pH, potential, direction, temperature, activity, carbonate, chloride, sulfur],
     (el, p, e, d, t, a, co3, cl, s) => {
-      if (d !== 1 && d !== -1) return numError("direction: expected 1 (above) or -1 (below)");
+      if (d !== 1 && d !== -1) return valueError(`direction: expected 1 (above) or -1 (below), got ${d}`);
       const crossing = nearestBoundary(systemInWater(el, t, a, co3, cl, s), p, e, d);
       return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
     },
@@ -156,8 +157,8 @@ const unitArg = textArg(
   "unit",
   (text) => {
     const key = text.toLowerCase().replace(/\s+/g, "");
-    const unit = UNIT_ALIASES[key] ?? key;
-    return unit in DISSOLVED_UNITS ? unit : valueError(`unit: "${text}" is not one of mol/kg, mg/L, ug/L`);
+    const unit = ownEntry(UNIT_ALIASES, key) ?? key;
+    return ownEntry(DISSOLVED_UNITS, unit) ? unit : valueError(`unit: "${text}" is not one of mol/kg, mg/L, ug/L`);
   },
   { optional: true, defaultValue: "mol/kg" },
 );

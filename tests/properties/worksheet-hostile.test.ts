@@ -47,7 +47,8 @@ const ragged = fc.array(fc.array(cell, { maxLength: 4 }), { maxLength: 4 });
 const nested = fc.array(fc.array(fc.oneof(cell, fc.array(cell, { maxLength: 3 })), { maxLength: 3 }), { maxLength: 3 });
 const argument = fc.oneof({ weight: 3, arbitrary: cell }, { weight: 3, arbitrary: rectangle }, { weight: 1, arbitrary: ragged }, { weight: 1, arbitrary: nested });
 
-const CODES = new Set(["#VALUE!", "#NUM!", "#N/A"]);
+// Excel shows a message only with #VALUE! and #N/A: no other code may come out
+const CODES = new Set(["#VALUE!", "#N/A"]);
 
 /** Why a result is not a well-formed spilled answer, or null. */
 function problem(result: unknown, argNames: string[]): string | null {
