@@ -13,6 +13,8 @@ import { fromSHEAt, toSHEAt } from "./electrode-functions";
 import { ehAt, neutralPHAt, peAt, slopeAt, waterLineAt, waterMarginAt } from "./water-functions";
 import { boundaryFrom, coupleAt, dissolvedAt, regimeAt, speciesAt, speciesTable } from "./stability-functions";
 import { dicAt } from "./carbonate-functions";
+import { assessAt } from "./assess-functions";
+import { electrodeList, metalList, versionTable } from "./list-functions";
 
 /**
  * Potential of a water stability line, V vs SHE: the O2/H2O line (gas "O2", default) above which water is oxidised
@@ -219,6 +221,52 @@ export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): an
   return dicAt(alkalinity, pH, temperature);
 }
 
+/**
+ * One row per sample: dominant species, regime, nearest boundary above and below (V vs SHE), water margin (V), equilibrium dissolved metal and the solid controlling it — what SPECIES, REGIME, BOUNDARY, WATERMARGIN and DISSOLVED give for that row. Give single cells or columns; the answer spills. Thermodynamics only: what can form, not how fast.
+ * @customfunction ASSESS
+ * @param {any[][]} element Metal symbol or name (REDOX.METALS lists them).
+ * @param {any[][]} pH pH, from -2 to 16.
+ * @param {any[][]} potential Potential in volts vs SHE, −3 to +3 (convert meter readings with REDOX.TOSHE).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25; a blank cell is a missing measurement.
+ * @param {any[][]} [activity] Activity of dissolved metal species deciding the dominant species. Default 1e-6.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none.
+ * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
+ * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none.
+ * @param {any[][]} [unit] Unit of the dissolved metal: mol/kg (default), mg/L or ug/L.
+ * @param {any[][]} [header] TRUE for a header row above the answers.
+ * @returns {any[][]} Seven columns per sample row.
+ */
+export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], unit?: any[][], header?: any[][]): any[][] {
+  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, unit, header);
+}
+
+/**
+ * The supported metals by symbol, one per row (for a Data Validation list).
+ * @customfunction METALS
+ * @returns {any[][]} Metal symbols; the list spills down.
+ */
+export function metals(): any[][] {
+  return metalList();
+}
+
+/**
+ * The reference electrode names the conversions accept, one per row (for a Data Validation list).
+ * @customfunction ELECTRODES
+ * @returns {any[][]} Electrode names; the list spills down.
+ */
+export function electrodes(): any[][] {
+  return electrodeList();
+}
+
+/**
+ * The add-in version and a fingerprint of the thermodynamic and electrode data it answers from, for audit trails.
+ * @customfunction VERSION
+ * @returns {any[][]} Two rows: add-in and data.
+ */
+export function version(): any[][] {
+  return versionTable();
+}
+
 if (typeof CustomFunctions !== "undefined") {
   CustomFunctions.associate("WATERLINE", waterline);
   CustomFunctions.associate("WATERMARGIN", watermargin);
@@ -235,4 +283,8 @@ if (typeof CustomFunctions !== "undefined") {
   CustomFunctions.associate("DISSOLVED", dissolved);
   CustomFunctions.associate("SPECIESTABLE", speciestable);
   CustomFunctions.associate("DIC", dic);
+  CustomFunctions.associate("ASSESS", assess);
+  CustomFunctions.associate("METALS", metals);
+  CustomFunctions.associate("ELECTRODES", electrodes);
+  CustomFunctions.associate("VERSION", version);
 }

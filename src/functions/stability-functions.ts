@@ -51,7 +51,7 @@ const directionArg = numberArg("direction", { optional: true, defaultValue: 1 })
  * The system for a water with ligand totals (mol/kg, 0 = absent). With none present this is systemFor itself (the
  * ligand-free path); otherwise the ligand cells are built once per condition through the same cache.
  */
-function systemInWater(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number): MetalSystem {
+export function systemInWater(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number): MetalSystem {
   if (carbonate === 0 && chloride === 0 && sulfur === 0) return systemFor(element, celsius, activity);
   const totals: LigandTotals = { carbonate, chloride, sulfur };
   cache ??= new SystemCache(getDatabase());
@@ -146,14 +146,14 @@ function couple(ox: Species, red: Species, pH: number, celsius: number, activity
 }
 
 /** Units for dissolved totals: factor from mol/kg given the metal's atomic weight (g/mol). */
-const DISSOLVED_UNITS: Record<string, (atomicWeight: number) => number> = {
+export const DISSOLVED_UNITS: Record<string, (atomicWeight: number) => number> = {
   "mol/kg": () => 1,
   "mg/l": (w) => w * 1e3,
   "ug/l": (w) => w * 1e6,
 };
 const UNIT_ALIASES: Record<string, string> = { "µg/l": "ug/l", "μg/l": "ug/l", ppb: "ug/l", ppm: "mg/l", molal: "mol/kg", "mol/l": "mol/kg" };
 
-const unitArg = textArg(
+export const unitArg = textArg(
   "unit",
   (text) => {
     const key = text.toLowerCase().replace(/\s+/g, "");

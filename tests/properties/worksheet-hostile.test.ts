@@ -116,8 +116,10 @@ describe("valid input gives numbers of the broadcast shape", () => {
 
   it("FROMSHE undoes TOSHE for every electrode in its range", () => {
     const electrodes = ["SHE", "SCE", "AgCl-sat", "AgCl-3.5M", "AgCl-3M", "AgCl-1M", "AgCl-sea", "CSE", "MSE", "HgO-1M", "RHE"];
+    // readings within ±2 V keep the potential vs SHE inside the ±3 V the functions accept (electrodes lie within 1 V of SHE)
+    const reading2 = fc.double({ min: -2, max: 2, noNaN: true });
     fc.assert(
-      fc.property(volts, fc.constantFrom(...electrodes), fc.double({ min: 0, max: 40, noNaN: true }), pH, (reading, electrode, t, p) => {
+      fc.property(reading2, fc.constantFrom(...electrodes), fc.double({ min: 0, max: 40, noNaN: true }), pH, (reading, electrode, t, p) => {
         const she = toshe([[reading]], [[electrode]], [[t]], [[p]])[0][0] as number;
         const back = fromshe([[she]], [[electrode]], [[t]], [[p]])[0][0] as number;
         expect(typeof she).toBe("number");
