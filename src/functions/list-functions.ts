@@ -2,7 +2,7 @@
  * Lists for Data Validation and audit trails: REDOX.METALS() and REDOX.ELECTRODES() spill the supported names down
  * one column; REDOX.VERSION() gives the add-in version and the fingerprint of the data it answers from.
  */
-import { version as addInVersion } from "../../package.json";
+import addIn from "../../package.json";
 import { dataFileCount, dataFingerprint } from "../chemistry/data-fingerprint";
 import { getDatabase } from "../chemistry/database";
 import { getElectrodes } from "../chemistry/electrodes";
@@ -25,7 +25,7 @@ export function electrodeList(): CellOutput[][] {
 /** Two rows: the add-in's version, and the data fingerprint with the number of files it covers. */
 export function versionTable(): CellOutput[][] {
   return [
-    ["add-in", addInVersion],
+    ["add-in", addIn.version],
     ["data", `${dataFingerprint()} (${dataFileCount()} files)`],
   ];
 }
