@@ -12,8 +12,8 @@ type Fn = (...args: any[]) => unknown[][]; // eslint-disable-line @typescript-es
 const FUNCTIONS: { id: string; fn: Fn; arity: number; argNames: string[] }[] = [
   { id: "WATERLINE", fn: waterline, arity: 4, argNames: ["pH", "temperature", "gas", "pressure"] },
   { id: "WATERMARGIN", fn: watermargin, arity: 4, argNames: ["pH", "potential", "temperature", "overpotential"] },
-  { id: "TOSHE", fn: toshe, arity: 4, argNames: ["reading", "electrode", "temperature", "pH"] },
-  { id: "FROMSHE", fn: fromshe, arity: 4, argNames: ["potential", "electrode", "temperature", "pH"] },
+  { id: "TOSHE", fn: toshe, arity: 5, argNames: ["reading", "electrode", "temperature", "pH", "unit"] },
+  { id: "FROMSHE", fn: fromshe, arity: 5, argNames: ["potential", "electrode", "temperature", "pH", "unit"] },
   { id: "PE", fn: pe, arity: 2, argNames: ["potential", "temperature"] },
   { id: "EH", fn: eh, arity: 2, argNames: ["pe", "temperature"] },
   { id: "NEUTRALPH", fn: neutralph, arity: 1, argNames: ["temperature"] },
@@ -23,7 +23,7 @@ const FUNCTIONS: { id: string; fn: Fn; arity: number; argNames: string[] }[] = [
 const hostileText = fc.constantFrom(
   "NaN", "Infinity", "-Infinity", "1e999", "-1e999", "", " ", "  7 ", "7,5", "0x10", "1e", ".", "-", "#VALUE!", "#N/A",
   "null", "undefined", "true", "SCE", "rhe", "Ag/AgCl", "AgCl-3M", "copper sulfate", "O2", "h2", "oxygen", "CO2",
-  "\u0000", "💧", "a".repeat(300), "25", "-5", "101", "16.0001",
+  "\u0000", "💧", "a".repeat(300), "25", "-5", "101", "16.0001", "mV", "V", "constructor", "__proto__", "toString",
 );
 const hostileNumber = fc.oneof(
   fc.double(), // includes NaN, ±Infinity, −0, subnormals
