@@ -21,6 +21,7 @@ const zlib = require("zlib");
 const HtmlWebpackPlugin = require("html-webpack-plugin");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const CustomFunctionsMetadataPlugin = require("custom-functions-metadata-plugin");
+const { ErrorCellsMetadataPlugin } = require("./scripts/error-cells-metadata-plugin");
 
 const OFFICE_JS_CDN = "https://appsforoffice.microsoft.com/lib/1/hosted/office.js";
 const OFFICE_JS_LOCAL = "/office-js/office.js";
@@ -183,6 +184,7 @@ function addinConfig(env, argv) {
         input: "./src/functions/functions.ts",
         output: "functions.json",
       }),
+      new ErrorCellsMetadataPlugin("functions.json"),
       // The shared runtime loads taskpane.html once and keeps it: that page carries all three bundles.
       page("taskpane", ["functions", "commands", "taskpane"]),
       page("functions", ["functions"]),

@@ -179,9 +179,9 @@ describe("conversions", () => {
     expect(toSHEAt(0.1, "RHE", 25, 7)[0][0] as number).toBeCloseTo(0.1 - 0.414, 3);
   });
 
-  it("REDOX.TOSHE: temperature outside an electrode's range is #NUM! naming temperature", () => {
+  it("REDOX.TOSHE: temperature outside an electrode's range is #VALUE! naming temperature", () => {
     const out = toSHEAt(0.1, "SCE", 90)[0][0] as CellError;
-    expect(out.code).toBe("#NUM!");
+    expect(out.code).toBe("#VALUE!");
     expect(out.message).toMatch(/^temperature:.*SCE/);
   });
 
