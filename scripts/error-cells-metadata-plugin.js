@@ -1,4 +1,3 @@
-/* eslint-env node */
 // Sets "allowErrorForDataTypeAny": true in the generated functions.json, so that Excel still calls a function when a
 // range argument holds an error cell and passes the error in its place: one error cell in a column then gives one
 // error cell in the spilled result instead of an error for the whole formula. Every parameter here has type `any`.
