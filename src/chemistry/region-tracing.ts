@@ -42,10 +42,15 @@ function column(engine: PointEngine, pH: number, w: DiagramWindow): Column {
   return { pH, species, edges };
 }
 
-const sameSequence = (a: Column, b: Column) => a.species.length === b.species.length && a.species.every((s, i) => s === b.species[i]);
+const sameSequence = (a: Column, b: Column) =>
+  a.species.length === b.species.length && a.species.every((s, i) => s === b.species[i]);
 
 /** The traced regions of `system`'s water (its ligand totals) inside the window, species indexed as in `system`. */
-export function tracedRegions(db: Database, system: MetalSystem & { readonly ligandTotals?: LigandTotals }, w: DiagramWindow): Region[] {
+export function tracedRegions(
+  db: Database,
+  system: MetalSystem & { readonly ligandTotals?: LigandTotals },
+  w: DiagramWindow,
+): Region[] {
   const engine = pointEngine(db, system.element);
   const water = system.ligandTotals ?? {};
   engine.setWater(system.celsius, system.activity, water.carbonate ?? 0, water.chloride ?? 0, water.sulfur ?? 0, 0);
@@ -55,13 +60,21 @@ export function tracedRegions(db: Database, system: MetalSystem & { readonly lig
     left.species.forEach((s, k) => {
       const lo = (c: Column) => (k === 0 ? w.eMin : c.edges[k - 1]);
       const hi = (c: Column) => (k === c.species.length - 1 ? w.eMax : c.edges[k]);
-      const vertices: Point[] = [[leftPH, lo(left)], [rightPH, lo(right)], [rightPH, hi(right)], [leftPH, hi(left)]];
+      const vertices: Point[] = [
+        [leftPH, lo(left)],
+        [rightPH, lo(right)],
+        [rightPH, hi(right)],
+        [leftPH, hi(left)],
+      ];
       regions.push({ species: toSystem[s], formula: engine.table.species[s].formula, vertices });
     });
   };
   const strip = (left: Column, right: Column) => {
     const middle = column(engine, 0.5 * (left.pH + right.pH), w);
-    const straight = sameSequence(left, right) && sameSequence(left, middle) && middle.edges.every((e, k) => Math.abs(e - 0.5 * (left.edges[k] + right.edges[k])) <= TRACE_TOLERANCE_E);
+    const straight =
+      sameSequence(left, right) &&
+      sameSequence(left, middle) &&
+      middle.edges.every((e, k) => Math.abs(e - 0.5 * (left.edges[k] + right.edges[k])) <= TRACE_TOLERANCE_E);
     if (straight) return emit(left, right, left.pH, right.pH);
     if (right.pH - left.pH <= TRACE_TOLERANCE_PH) {
       emit(left, left, left.pH, middle.pH);

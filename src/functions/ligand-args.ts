@@ -18,7 +18,8 @@ function withHint(spec: ArgSpec<number>, hint: string): ArgSpec<number> {
   };
 }
 
-const totalArg = (name: string) => numberArg(name, { min: 0, max: MAX_LIGAND_TOTAL, unit: "mol/kg", optional: true, defaultValue: 0 });
+const totalArg = (name: string) =>
+  numberArg(name, { min: 0, max: MAX_LIGAND_TOTAL, unit: "mol/kg", optional: true, defaultValue: 0 });
 
 export const carbonateArg = totalArg("carbonate");
 export const chlorideArg = totalArg("chloride");

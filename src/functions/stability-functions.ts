@@ -12,7 +12,7 @@ import { speciesTable as metalSpeciesTable } from "../chemistry/species-tables";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
 import type { SystemSpecies } from "../chemistry/system";
 import { ownEntry } from "../chemistry/own-entry";
-import { mapCells, numberArg, textArg } from "./broadcast";
+import { mapCells, textArg } from "./broadcast";
 import { CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";

@@ -11,7 +11,10 @@ import { tracedRegions } from "../../src/chemistry/region-tracing";
 import { speciesAt } from "../../src/functions/stability-functions";
 
 const db = getDatabase();
-const total = fc.oneof(fc.constant(0), fc.double({ min: -6, max: -1, noNaN: true }).map((l) => 10 ** l));
+const total = fc.oneof(
+  fc.constant(0),
+  fc.double({ min: -6, max: -1, noNaN: true }).map((l) => 10 ** l),
+);
 const WINDOW = { pHMin: 0, pHMax: 14, eMin: -1.5, eMax: 2 };
 
 describe("traced diagram regions", () => {
@@ -22,7 +25,10 @@ describe("traced diagram regions", () => {
         fc.double({ min: 0, max: 90, noNaN: true }),
         fc.double({ min: -8, max: -3, noNaN: true }),
         fc.record({ carbonate: total, chloride: total, sulfur: total }),
-        fc.array(fc.tuple(fc.double({ min: 0.1, max: 0.9, noNaN: true }), fc.double({ min: 0.1, max: 0.9, noNaN: true })), { minLength: 3, maxLength: 3 }),
+        fc.array(
+          fc.tuple(fc.double({ min: 0.1, max: 0.9, noNaN: true }), fc.double({ min: 0.1, max: 0.9, noNaN: true })),
+          { minLength: 3, maxLength: 3 },
+        ),
         (metal, celsius, logActivity, totals, fractions) => {
           if (!(totals.carbonate || totals.chloride || totals.sulfur)) return;
           const system = buildLigandSystem(db, metal, { celsius, activity: 10 ** logActivity }, totals);
@@ -40,7 +46,19 @@ describe("traced diagram regions", () => {
               const E = lo + 1e-3 + v * (hi - lo - 2e-3);
               engine.setWater(celsius, 10 ** logActivity, totals.carbonate, totals.chloride, totals.sulfur, 0);
               expect(engine.table.species[engine.dominant(pH, E)].formula).toBe(r.formula);
-              if (checked++ < 3) expect(speciesAt(metal, pH, E, celsius, 10 ** logActivity, totals.carbonate, totals.chloride, totals.sulfur)[0][0]).toBe(r.formula);
+              if (checked++ < 3)
+                expect(
+                  speciesAt(
+                    metal,
+                    pH,
+                    E,
+                    celsius,
+                    10 ** logActivity,
+                    totals.carbonate,
+                    totals.chloride,
+                    totals.sulfur,
+                  )[0][0],
+                ).toBe(r.formula);
             }
           }
           expect(checked).toBeGreaterThan(0);
