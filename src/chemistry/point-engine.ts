@@ -16,7 +16,15 @@ import { debyeHuckelA, lnGammaWithA } from "./activity-coefficients";
 import { LigandAtPoint } from "./ligand-speciation";
 import { LIGAND_BASIS, LigandTotals } from "./ligand-cells";
 import type { SystemSpecies } from "./system";
-import { ligandTable, NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_SULFUR, rowGibbs, SpeciesTable, speciesTable } from "./species-tables";
+import {
+  ligandTable,
+  NEEDS_CARBONATE,
+  NEEDS_CHLORIDE,
+  NEEDS_SULFUR,
+  rowGibbs,
+  SpeciesTable,
+  speciesTable,
+} from "./species-tables";
 import { correspondenceBasis } from "./criss-cobble";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
@@ -85,7 +93,14 @@ export class PointEngine {
   }
 
   /** Sets the water for the next points; work that depends only on T (or T, threshold and I) is redone on change. */
-  setWater(celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, ionicStrength: number): void {
+  setWater(
+    celsius: number,
+    activity: number,
+    carbonate: number,
+    chloride: number,
+    sulfur: number,
+    ionicStrength: number,
+  ): void {
     if (celsius !== this.celsius) this.setTemperature(celsius);
     if (this.stale || activity !== this.activity || ionicStrength !== this.ionicStrength) {
       this.activity = activity;
@@ -100,7 +115,8 @@ export class PointEngine {
       }
       this.stale = false;
     }
-    this.present = (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0);
+    this.present =
+      (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0);
     this.lnCarbonate = carbonate > 0 ? log(carbonate) : 0;
     this.lnSulfur = sulfur > 0 ? log(sulfur) : 0;
     this.lnChloride = chloride > 0 ? log(chloride) + this.lnGamma1 : 0; // Cl− is free: a = γ·total
@@ -140,8 +156,14 @@ export class PointEngine {
   /** Exact ligand activities at (pH, E) into lnC, lnS, lnCl. */
   ligandsAt(pH: number, E: number): void {
     const present = this.present;
-    if (present & NEEDS_CARBONATE) this.lnC = this.carbonateSpeciation.at(this.celsius, this.dT, this.shape, this.k, this.f).lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
-    if (present & NEEDS_SULFUR) this.lnS = this.sulfurSpeciation.at(this.celsius, this.dT, this.shape, this.k, this.f).lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
+    if (present & NEEDS_CARBONATE)
+      this.lnC = this.carbonateSpeciation
+        .at(this.celsius, this.dT, this.shape, this.k, this.f)
+        .lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
+    if (present & NEEDS_SULFUR)
+      this.lnS = this.sulfurSpeciation
+        .at(this.celsius, this.dT, this.shape, this.k, this.f)
+        .lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
     this.lnCl = this.lnChloride;
   }
 
@@ -232,7 +254,12 @@ export function pointEngine(db: Database, element: string): PointEngine {
  */
 export function dominantInWater(
   db: Database,
-  system: { readonly element: string; readonly celsius: number; readonly activity: number; readonly ligandTotals?: LigandTotals },
+  system: {
+    readonly element: string;
+    readonly celsius: number;
+    readonly activity: number;
+    readonly ligandTotals?: LigandTotals;
+  },
   pH: number,
   E: number,
   ligands?: LigandTotals,

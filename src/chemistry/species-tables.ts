@@ -96,9 +96,20 @@ export function speciesTable(db: Database, element: string): SpeciesTable {
 function buildSpeciesTable(db: Database, element: string): SpeciesTable {
   const entry = db.system(element);
   if (!entry || entry.kind !== "metal") throw new Error(`no data for the metal ${element}`);
-  const metal = entry.species.find((s) => s.state === "s" && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
+  // the element in its reference state: a solid, or the liquid for mercury
+  const metal = entry.species.find(
+    (s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1,
+  );
   if (!metal) throw new Error(`the ${element} file lacks the metal ${element}(s)`);
-  const basis = [metal, db.require("H2O(l)"), db.require("H+"), ELECTRON, db.require(CARBONATE_PIVOT), db.require(SULFUR_PIVOT), db.require(CHLORIDE_PIVOT)] as const;
+  const basis = [
+    metal,
+    db.require("H2O(l)"),
+    db.require("H+"),
+    ELECTRON,
+    db.require(CARBONATE_PIVOT),
+    db.require(SULFUR_PIVOT),
+    db.require(CHLORIDE_PIVOT),
+  ] as const;
   const formationOf = formationTable(db, basis);
   const rows: { s: SystemSpecies; needs: number; coefficients: readonly number[]; props: ReactionProperties }[] = [];
   for (const s of db.allSpecies()) {
@@ -113,7 +124,12 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     const formation = unknown ? null : formationOf(s);
     if (!formation) continue;
     const regime: Regime = s === metal ? "immunity" : s.state === "aq" ? "corrosion" : "passivation";
-    rows.push({ s: { species: s, formula: s.formula, metalAtoms: s.elements[element], dissolved: s.state === "aq", regime }, needs, coefficients: formation.coefficients, props: formation.properties });
+    rows.push({
+      s: { species: s, formula: s.formula, metalAtoms: s.elements[element], dissolved: s.state === "aq", regime },
+      needs,
+      coefficients: formation.coefficients,
+      props: formation.properties,
+    });
   }
   const n = rows.length;
   const col = () => new Float64Array(n);

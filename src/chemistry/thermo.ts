@@ -29,7 +29,7 @@ export interface ReactionProperties {
   readonly dG0: number;
   /** ΔS°r, J/(mol·K); null when a species lacks S° (then ΔG°r is taken as independent of T). */
   readonly dS: number | null;
-  /** ΔCp°r, J/(mol·K); 0 when a species lacks Cp° (as GUIDE §2 and the records' notes say). */
+  /** ΔCp°r, J/(mol·K); 0 when a species lacks Cp° (docs/method.md, Temperature; the records' notes). */
   readonly dCp: number;
   /** True when some Cp° was missing and ΔCp°r was set to 0. */
   readonly cpMissing: boolean;

@@ -8,7 +8,7 @@ import { getElectrodes } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
 import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import type { LigandName } from "../chemistry/ligand-cells";
-import { ColumnMapping, findHeaderRow, WaterColumn } from "./header-match";
+import { ColumnMapping, findHeaderRow, POINT_NUMBER, toCelsius, WaterColumn } from "../tables";
 import type { PotentialUnit, SampleInput } from "./diagram-model";
 import { RowTotals, rowTotal } from "./ligand-inputs";
 
@@ -51,7 +51,7 @@ export interface ReadResult {
   readonly rowTotals: RowTotals[];
 }
 
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+const NUMBER = POINT_NUMBER;
 
 type Parsed = { value: number } | { blank: true } | { error: string };
 
@@ -76,8 +76,8 @@ export function median(values: readonly number[]): number {
 }
 
 const NO_TOTALS: RowTotals = Object.freeze({});
-const PH_RANGE = [-2, 16] as const; // GUIDE §3
-const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (GUIDE §3)
+const PH_RANGE = [-2, 16] as const; // docs/method.md, Domain
+const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (docs/method.md, Domain)
 
 export function readSamples(table: SampleTable, options: ReadOptions): ReadResult {
   const { mapping } = options;
@@ -118,7 +118,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     let hasTemperature = false;
     if ("error" in temperature) reasons.push(`temperature ${temperature.error}`);
     else if ("value" in temperature) {
-      celsius = options.temperatureUnit === "F" ? ((temperature.value - 32) * 5) / 9 : temperature.value;
+      celsius = toCelsius(temperature.value, options.temperatureUnit);
       if (celsius < MIN_CELSIUS || celsius > MAX_CELSIUS) reasons.push(`temperature ${temperature.value} °${options.temperatureUnit} is outside ${MIN_CELSIUS}…${MAX_CELSIUS} °C`);
       else hasTemperature = true;
     }

@@ -9,7 +9,7 @@ import { join } from "path";
 import type { Page } from "playwright-core";
 import { XMLValidator, XMLParser } from "fast-xml-parser";
 import { PNG } from "pngjs";
-import { OpenPane, openStandalonePane, ROOT } from "./serve-dist";
+import { OpenPane, openStandalonePane, ROOT } from "../support/serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildSystem } from "../../src/chemistry/system";
 import { toSHE, fromSHE } from "../../src/chemistry/electrodes";
@@ -19,7 +19,7 @@ import { diagramLayout } from "../../src/taskpane/diagram-svg";
 import { formulaSegments, segmentsText } from "../../src/taskpane/formula-markup";
 import { MARKER_FILLS } from "../../src/taskpane/palette";
 import { regimeAt } from "../../src/functions/stability-functions";
-import { parseDelimited } from "../../src/taskpane/delimited-text";
+import { parseDelimited } from "../../src/tables";
 
 const DEMO_TEXT = readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8");
 

@@ -121,7 +121,7 @@ describe("reference electrodes vs SHE", () => {
     expect(lines.length).toBe(at25.length + otherTemperature.length);
   });
 
-  it("every electrode of GUIDE §3 is in the data, each citing its sources", () => {
+  it("every electrode of README's electrode table is in the data, each citing its sources", () => {
     const ids = ["SHE", "SCE", "AgCl-sat", "AgCl-3.5M", "AgCl-3M", "AgCl-1M", "AgCl-sea", "CSE", "MSE", "HgO-1M", "RHE"];
     expect(table.all().map((e) => e.id).sort()).toEqual([...ids].sort());
     for (const e of table.all()) {

@@ -11,14 +11,14 @@ import { buildLigandSystem } from "../../src/chemistry/ligand-system";
 import { buildSystem } from "../../src/chemistry/system";
 import { regimeAt, speciesAt } from "../../src/functions/stability-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
-import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/taskpane/header-match";
+import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/tables";
 import { formatTotals, PURE_WATER, resolveWater, roundTotal, rowTotal, waterCaption, WaterSettings } from "../../src/taskpane/ligand-inputs";
 import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/taskpane/diagram-model";
 import { diagramLayout, renderDiagramSvg, sampleText } from "../../src/taskpane/diagram-svg";
 import { makeAxes } from "../../src/taskpane/axes";
 import { touchingGroups } from "../../src/taskpane/label-placement";
 import { readSamples } from "../../src/taskpane/sample-table";
-import { EMPTY_MAPPING } from "../../src/taskpane/header-match";
+import { EMPTY_MAPPING } from "../../src/tables";
 
 const db = getDatabase();
 
@@ -115,7 +115,7 @@ describe("the diagram's and each sample's water", () => {
     expect(r.perSample.every((t) => t.chloride === 5e-4)).toBe(true);
     expect(r.fallbacks).toEqual({ carbonate: 1 });
     expect(formatTotals(r.diagram)).toBe("DIC 2, Cl 0.5 mmol/kg");
-    expect(waterCaption(r)).toMatch(/^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' alkalinity values.*\); each ligand is taken at its full total/);
+    expect(waterCaption(r)).toMatch(/^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' alkalinity values.*\); each ligand is speciated exactly at every point/);
     const none = resolveWater(settings, [{ carbonate: { problem: "blank" } }]);
     expect(none.unusable).toEqual(["carbonate"]);
     expect(none.diagram).toEqual({ chloride: 5e-4 });
