@@ -89,7 +89,13 @@ export function setReplacedHeatCapacity(weights: Float64Array, dCp: number): voi
 
 /** ∫ from T1 to T of g(T') dT' by Simpson's rule (g smooth between the table's temperatures; split there). */
 function integrate(g: (kelvinT: number) => number, kelvinT: number): number {
-  const knots = [T1, ...TABLE_CELSIUS.slice(1).map((t) => t + ZERO_CELSIUS).filter((k) => k < kelvinT), kelvinT];
+  const knots = [
+    T1,
+    ...TABLE_CELSIUS.slice(1)
+      .map((t) => t + ZERO_CELSIUS)
+      .filter((k) => k < kelvinT),
+    kelvinT,
+  ];
   let total = 0;
   for (let j = 0; j + 1 < knots.length; j++) {
     const [lo, hi] = [knots[j], knots[j + 1]];
@@ -120,7 +126,8 @@ export function correspondenceBasis(kelvinT: number): Float64Array {
       (["a", "b"] as const).forEach((key, k) => {
         const series = PARAMETERS[cls][key];
         const atT1 = parameterAt(series, CORRESPONDENCE_FROM_CELSIUS) * lnAtT1;
-        values[2 * c + k] = -CALORIE * integrate((T) => parameterAt(series, T - ZERO_CELSIUS) * Math.log(T / T0) - atT1, kelvinT);
+        values[2 * c + k] =
+          -CALORIE * integrate((T) => parameterAt(series, T - ZERO_CELSIUS) * Math.log(T / T0) - atT1, kelvinT);
       });
     });
     values[CONSTANT_CP_TERM] = kelvinT * Math.log(kelvinT / T1) - (kelvinT - T1);

@@ -38,7 +38,8 @@ export interface ReactionColumns {
 /** ΔG°r(T) of row i, J/mol, with dT = T − T0, shape = dT − T·ln(T/T0) and the correspondence basis at T. */
 export function rowGibbs(columns: ReactionColumns, i: number, dT: number, shape: number, basis: Float64Array): number {
   let extra = 0;
-  for (let k = 0, at = i * CORRESPONDENCE_TERMS; k < CORRESPONDENCE_TERMS; k++) extra += columns.correspondence[at + k] * basis[k];
+  for (let k = 0, at = i * CORRESPONDENCE_TERMS; k < CORRESPONDENCE_TERMS; k++)
+    extra += columns.correspondence[at + k] * basis[k];
   return columns.g0[i] - columns.s[i] * dT + columns.cp[i] * shape + extra;
 }
 
@@ -137,7 +138,16 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     element,
     species: rows.map((r) => r.s),
     metalIndex: rows.findIndex((r) => r.s.species === metal),
-    g0: col(), s: col(), cp: col(), correspondence: new Float64Array(n * CORRESPONDENCE_TERMS), x: col(), proton: col(), electron: col(), carbonate: col(), sulfur: col(), chloride: col(),
+    g0: col(),
+    s: col(),
+    cp: col(),
+    correspondence: new Float64Array(n * CORRESPONDENCE_TERMS),
+    x: col(),
+    proton: col(),
+    electron: col(),
+    carbonate: col(),
+    sulfur: col(),
+    chloride: col(),
     needs: new Uint8Array(n),
     dissolved: new Uint8Array(n),
     chargeSquared: col(),
@@ -170,7 +180,17 @@ export function ligandTable(db: Database, members: readonly string[]): LigandTab
   const species = members.map((f) => db.require(f));
   const formationOf = formationTable(db, [species[0], db.require("H2O(l)"), db.require("H+"), ELECTRON]);
   const n = species.length;
-  const built = { species, g0: new Float64Array(n), s: new Float64Array(n), cp: new Float64Array(n), correspondence: new Float64Array(n * CORRESPONDENCE_TERMS), proton: new Float64Array(n), electron: new Float64Array(n), chargeSquared: new Float64Array(n), solidIndex: species.findIndex((s) => s.state === "s") };
+  const built = {
+    species,
+    g0: new Float64Array(n),
+    s: new Float64Array(n),
+    cp: new Float64Array(n),
+    correspondence: new Float64Array(n * CORRESPONDENCE_TERMS),
+    proton: new Float64Array(n),
+    electron: new Float64Array(n),
+    chargeSquared: new Float64Array(n),
+    solidIndex: species.findIndex((s) => s.state === "s"),
+  };
   species.forEach((s, i) => {
     const formation = formationOf(s);
     if (!formation) throw new Error(`${s.formula} cannot be formed from ${species[0].formula}, H2O, H+ and e-`);

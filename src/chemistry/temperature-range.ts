@@ -11,17 +11,24 @@ import { NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_SULFUR, speciesTable } from "./s
 /** Highest temperature a species without S° may be used at, °C (the range the data were fitted near, 1 bar). */
 export const CONSTANT_GIBBS_MAX_CELSIUS = 100;
 
-const LIGAND_NAMES: readonly [number, string][] = [[NEEDS_CARBONATE, "carbonate"], [NEEDS_SULFUR, "sulfur"], [NEEDS_CHLORIDE, "chloride"]];
+const LIGAND_NAMES: readonly [number, string][] = [
+  [NEEDS_CARBONATE, "carbonate"],
+  [NEEDS_SULFUR, "sulfur"],
+  [NEEDS_CHLORIDE, "chloride"],
+];
 
 /** Formulas of the species of `element` lacking S° that take part in a water with the `present` ligand bits. */
 export function speciesWithoutEntropy(db: Database, element: string, present: number): string[] {
   const table = speciesTable(db, element);
-  return table.species.filter((s, i) => s.species.S === null && (table.needs[i] & ~present) === 0).map((s) => s.formula);
+  return table.species
+    .filter((s, i) => s.species.S === null && (table.needs[i] & ~present) === 0)
+    .map((s) => s.formula);
 }
 
 /** Why `element` cannot be answered at `celsius` with the `present` ligands, or null when it can. */
 export function temperatureProblem(db: Database, element: string, celsius: number, present = 0): string | null {
-  if (!(celsius >= MIN_CELSIUS && celsius <= MAX_CELSIUS)) return `temperature ${celsius} °C is outside ${MIN_CELSIUS}–${MAX_CELSIUS} °C`;
+  if (!(celsius >= MIN_CELSIUS && celsius <= MAX_CELSIUS))
+    return `temperature ${celsius} °C is outside ${MIN_CELSIUS}–${MAX_CELSIUS} °C`;
   if (celsius <= CONSTANT_GIBBS_MAX_CELSIUS) return null;
   const missing = speciesWithoutEntropy(db, element, present);
   if (missing.length === 0) return null;

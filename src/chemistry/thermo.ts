@@ -74,5 +74,10 @@ export function reactionProperties(db: Database, stoichiometry: Stoichiometry): 
 export function gibbsAt(props: ReactionProperties, kelvinT: number): number {
   if (props.dS === null) return props.dG0;
   const dT = kelvinT - T0;
-  return props.dG0 - props.dS * dT + props.dCp * (dT - kelvinT * Math.log(kelvinT / T0)) + correspondenceGibbs(props.correspondence, kelvinT);
+  return (
+    props.dG0 -
+    props.dS * dT +
+    props.dCp * (dT - kelvinT * Math.log(kelvinT / T0)) +
+    correspondenceGibbs(props.correspondence, kelvinT)
+  );
 }

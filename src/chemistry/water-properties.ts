@@ -32,12 +32,16 @@ export function dielectricAtOneAtmosphere(celsius: number): number {
 /** Density of liquid water at 1 atm, g/cm³ (Kell 1975, 0–150 °C). */
 export function densityAtOneAtmosphere(celsius: number): number {
   const t = celsius;
-  const numerator = 999.83952 + t * (16.945176 + t * (-7.9870401e-3 + t * (-46.170461e-6 + t * (105.56302e-9 + t * -280.54253e-12))));
+  const numerator =
+    999.83952 + t * (16.945176 + t * (-7.9870401e-3 + t * (-46.170461e-6 + t * (105.56302e-9 + t * -280.54253e-12))));
   return numerator / (1 + 16.87985e-3 * t) / 1000;
 }
 
 /** IAPWS-IF97 region 4 coefficients n1…n10 (R7-97(2012), table 34). */
-const N = [0.11670521452767e4, -0.72421316598378e6, -0.17073846940092e2, 0.12020824702470e5, -0.32325550322333e7, 0.14915108613530e2, -0.48232657361591e4, 0.40511340542057e6, -0.23855557567849, 0.65017534844798e3];
+const N = [
+  0.11670521452767e4, -0.72421316598378e6, -0.17073846940092e2, 0.1202082470247e5, -0.32325550322333e7,
+  0.1491510861353e2, -0.48232657361591e4, 0.40511340542057e6, -0.23855557567849, 0.65017534844798e3,
+];
 
 /** Saturation pressure of water at t °C, MPa (IAPWS-IF97 eq. 30, 273.15–647.096 K). */
 export function saturationPressure(celsius: number): number {
@@ -59,7 +63,7 @@ const CRITICAL_T = 647.096;
 const CRITICAL_RHO = 322;
 /** Wagner & Pruss (1993) saturated-liquid density: exponents (in thirds) and coefficients b1…b6. */
 const LIQUID_EXPONENTS = [1, 2, 5, 16, 43, 110];
-const LIQUID_B = [1.99274064, 1.09965342, -0.510839303, -1.75493479, -45.5170352, -6.74694450e5];
+const LIQUID_B = [1.99274064, 1.09965342, -0.510839303, -1.75493479, -45.5170352, -6.7469445e5];
 
 /** Density of saturated liquid water at t °C, g/cm³ (Wagner & Pruss 1993, eq. 2.3). */
 export function saturatedLiquidDensity(celsius: number): number {
@@ -93,14 +97,27 @@ export function liquidDielectric(celsius: number): number {
 }
 
 /** IAPWS R11-07 constants (Bandura & Lvov 2006, table 1). */
-const KW = { n: 6, alpha0: -0.864671, alpha1: 8659.19, alpha2: -22786.2, beta0: 0.642044, beta1: -56.8534, beta2: -0.375754, molarMass: 18.015268 };
+const KW = {
+  n: 6,
+  alpha0: -0.864671,
+  alpha1: 8659.19,
+  alpha2: -22786.2,
+  beta0: 0.642044,
+  beta1: -56.8534,
+  beta2: -0.375754,
+  molarMass: 18.015268,
+};
 
 /** pKw of water at T (K) and density ρ (g/cm³), molal scale (IAPWS R11-07, eq. 1–3). */
 export function banduraLvovPKw(kelvinT: number, density: number): number {
   const { n, alpha0, alpha1, alpha2, beta0, beta1, beta2, molarMass } = KW;
   const Z = density * exp(alpha0 + alpha1 / kelvinT + (alpha2 / (kelvinT * kelvinT)) * density ** (2 / 3));
   const pKwGas = 0.61415 + 48251.33 / kelvinT - 67707.93 / kelvinT ** 2 + 10102100 / kelvinT ** 3;
-  return -2 * n * (log10(1 + Z) - (Z / (Z + 1)) * density * (beta0 + beta1 / kelvinT + beta2 * density)) + pKwGas + 2 * log10(molarMass / 1000);
+  return (
+    -2 * n * (log10(1 + Z) - (Z / (Z + 1)) * density * (beta0 + beta1 / kelvinT + beta2 * density)) +
+    pKwGas +
+    2 * log10(molarMass / 1000)
+  );
 }
 
 /** pKw of liquid water at t °C as the model takes it (R11-07 at 1 atm below 100 °C, on the saturation curve from 100 °C). */

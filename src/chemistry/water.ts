@@ -47,7 +47,10 @@ export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database
   const known = memo.get(key);
   if (known !== undefined) return known;
   const k = nernstFactor(kelvin(celsius));
-  const e0 = gas === "O2" ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4 : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
+  const e0 =
+    gas === "O2"
+      ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4
+      : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
   if (memo.size >= REMEMBERED_POTENTIALS) memo.clear();
   memo.set(key, e0 + 0); // + 0 turns a negative zero into 0
   return e0 + 0;
@@ -57,7 +60,13 @@ export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database
  * Potential (V vs SHE) of a water line at pH, temperature (°C) and partial pressure of the gas (bar).
  * Above the O2 line water is oxidised to oxygen; below the H2 line it is reduced to hydrogen.
  */
-export function waterLine(pH: number, celsius = 25, gas: WaterGas = "O2", pressure = 1, db: Database = getDatabase()): number {
+export function waterLine(
+  pH: number,
+  celsius = 25,
+  gas: WaterGas = "O2",
+  pressure = 1,
+  db: Database = getDatabase(),
+): number {
   const k = nernstFactor(kelvin(celsius));
   const e0 = waterStandardPotential(gas, celsius, db);
   // Nernst: E = E° − (k/n)·log10 Q, Q = products over reactants with a(H+) = 10^−pH
@@ -90,9 +99,14 @@ export function neutralPH(celsius = 25): number {
  * `overpotential` (V, ≥ 0) widens both sides, for the kinetic window in which water decomposes only slowly
  * (about 0.6 V beyond each line in practice).
  */
-export function waterMargin(pH: number, potential: number, celsius = 25, overpotential = 0, db: Database = getDatabase()): number {
+export function waterMargin(
+  pH: number,
+  potential: number,
+  celsius = 25,
+  overpotential = 0,
+  db: Database = getDatabase(),
+): number {
   const upper = waterLine(pH, celsius, "O2", 1, db) + overpotential;
   const lower = waterLine(pH, celsius, "H2", 1, db) - overpotential;
   return Math.min(upper - potential, potential - lower);
 }
-

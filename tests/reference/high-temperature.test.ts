@@ -20,7 +20,6 @@ import { neutralPHAt, waterLineAt } from "../../src/functions/water-functions";
 const db = getDatabase();
 const withEntropy = db.allSpecies().filter((s) => s.S !== null);
 
-
 describe("continuity across 100 °C and nothing changed below it", () => {
   it("every species' ΔG°f(T) and its slope −ΔS°f are continuous at 100 °C (second difference under 0.01 J/mol at ±1 mK)", () => {
     const h = 1e-3;
@@ -50,7 +49,8 @@ describe("continuity across 100 °C and nothing changed below it", () => {
 
   it("water functions are continuous at 100 °C: neutral pH within 0.002, water lines within 1 mV", () => {
     expect(Math.abs(neutralPH(100 - 1e-6) - neutralPH(100))).toBeLessThan(0.002);
-    for (const gas of ["O2", "H2"] as const) expect(Math.abs(waterLine(7, 100 - 1e-6, gas) - waterLine(7, 100, gas))).toBeLessThan(1e-3);
+    for (const gas of ["O2", "H2"] as const)
+      expect(Math.abs(waterLine(7, 100 - 1e-6, gas) - waterLine(7, 100, gas))).toBeLessThan(1e-3);
   });
 
   it("the engine's coefficient tables give the same ΔG°r as the reactions at 250 °C (point path = reaction path)", () => {
@@ -59,7 +59,15 @@ describe("continuity across 100 °C and nothing changed below it", () => {
     const shape = dT - T * Math.log(T / T0);
     const basisFor = (element: string) => {
       const metal = db.require(`${element}(s)`);
-      return [metal, db.require("H2O(l)"), db.require("H+"), ELECTRON, db.require("HCO3-"), db.require("SO42-"), db.require("Cl-")] as const;
+      return [
+        metal,
+        db.require("H2O(l)"),
+        db.require("H+"),
+        ELECTRON,
+        db.require("HCO3-"),
+        db.require("SO42-"),
+        db.require("Cl-"),
+      ] as const;
     };
     for (const element of ["Fe", "Cu", "Ni", "Zn"]) {
       const table = speciesTable(db, element);
@@ -112,11 +120,16 @@ describe("Criss & Cobble (1964) correspondence against published high-temperatur
   // E°(AgCl/Ag): Bates & Bower 1954 to 95 °C (data/electrodes.json) and Greeley, Smith, Stoughton & Lietzke,
   // J. Phys. Chem. 64, 652 (1960), measured to 275 °C (values from memory: 0.1032 V at 150 °C, 0.0348 V at 200 °C,
   // −0.0475 V at 250 °C)
-  const silverChloride = (celsius: number) => nernstFactor(kelvin(celsius)) * reactionLogK(db, { "AgCl(s)": -1, "e-": -1, "Ag(s)": 1, "Cl-": 1 }, celsius);
+  const silverChloride = (celsius: number) =>
+    nernstFactor(kelvin(celsius)) * reactionLogK(db, { "AgCl(s)": -1, "e-": -1, "Ag(s)": 1, "Cl-": 1 }, celsius);
   it("E°(AgCl/Ag) at 90 °C within 3 mV of Bates & Bower 1954 (0.16945 V from their polynomial)", () => {
     expect(Math.abs(silverChloride(90) - 0.16945)).toBeLessThan(0.003);
   });
-  for (const [celsius, published, tolerance] of [[150, 0.1032, 0.01], [200, 0.0348, 0.01], [250, -0.0475, 0.025]]) {
+  for (const [celsius, published, tolerance] of [
+    [150, 0.1032, 0.01],
+    [200, 0.0348, 0.01],
+    [250, -0.0475, 0.025],
+  ]) {
     it(`E°(AgCl/Ag) at ${celsius} °C within ${tolerance * 1000} mV of Greeley et al. 1960 (${published} V, from memory)`, () => {
       expect(Math.abs(silverChloride(celsius) - published)).toBeLessThan(tolerance);
     });
@@ -163,7 +176,10 @@ describe("functions at 100–300 °C", () => {
   });
 
   it("REDOX.COUPLE answers above 100 °C for couples whose records carry S°, and refuses the others by name", () => {
-    expect(coupleAt("Fe2+", "Fe", 0, 250, 1)[0][0] as number).toBeCloseTo(standardPotential(db, "Fe2+", "Fe(s)", 250), 12);
+    expect(coupleAt("Fe2+", "Fe", 0, 250, 1)[0][0] as number).toBeCloseTo(
+      standardPotential(db, "Fe2+", "Fe(s)", 250),
+      12,
+    );
     const refused = coupleAt("FeOH+", "Fe", 0, 250, 1)[0][0] as CellError;
     expect(refused.code).toBe("#VALUE!");
     expect(refused.message).toMatch(/lack S° for FeOH\+/);

@@ -9,7 +9,13 @@ import { describe, expect, it } from "vitest";
 import fixture from "../fixtures/iapws-water.json";
 import { debyeHuckelA } from "../../src/chemistry/activity-coefficients";
 import { neutralPH } from "../../src/chemistry/water";
-import { liquidDensity, liquidDielectric, saturatedLiquidDensity, saturationPressure, waterPressure } from "../../src/chemistry/water-properties";
+import {
+  liquidDensity,
+  liquidDielectric,
+  saturatedLiquidDensity,
+  saturationPressure,
+  waterPressure,
+} from "../../src/chemistry/water-properties";
 
 const rows = fixture.rows;
 
@@ -29,7 +35,9 @@ describe("water properties against IAPWS (fixture computed with the iapws packag
     });
     if (r.saturatedLiquidDensityKgM3 !== null) {
       it(`${r.celsius} °C: saturated-liquid density (Wagner & Pruss 1993) within 3e-4 of IAPWS-95`, () => {
-        expect(Math.abs((saturatedLiquidDensity(r.celsius) * 1000) / r.saturatedLiquidDensityKgM3! - 1)).toBeLessThan(3e-4);
+        expect(Math.abs((saturatedLiquidDensity(r.celsius) * 1000) / r.saturatedLiquidDensityKgM3! - 1)).toBeLessThan(
+          3e-4,
+        );
       });
     }
     it(`${r.celsius} °C: neutral pH within 0.03 of IAPWS R11-07 (½ pKw = ${(r.pKw / 2).toFixed(3)})`, () => {
