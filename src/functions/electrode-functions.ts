@@ -50,7 +50,7 @@ function readingVolts(reading: number, unit: { unit: ReadingUnit; volts: number 
 function electrodePotential(electrode: Electrode, celsius: number, pH: number | undefined): number | CellError {
   if (!inRange(electrode, celsius)) {
     const [low, high] = electrode.validCelsius;
-    return valueError(`temperature: ${celsius} °C is outside the published range of ${electrode.id} (${low} to ${high} °C)`);
+    return valueError(`temperature: ${celsius} °C is outside the range of ${electrode.id} (${low} to ${high} °C)`);
   }
   if (electrode.needsPH && pH === undefined) return valueError(`pH: ${electrode.id} needs the pH of the solution`);
   return getElectrodes().potential(electrode, celsius, pH);
