@@ -35,7 +35,11 @@ const HYDROGEN_ION_ABSOLUTE_ENTROPY = -5.0;
 export const CORRESPONDENCE_FROM_CELSIUS = 100;
 const T1 = CORRESPONDENCE_FROM_CELSIUS + ZERO_CELSIUS;
 
-/** Criss & Cobble (1964) table: a(t), b(t) at 100, 150 and 200 °C, cal mol⁻¹ K⁻¹ (from memory). */
+/**
+ * Criss & Cobble (1964) table: a(t), b(t) at 100, 150 and 200 °C, cal mol⁻¹ K⁻¹ (from memory; the cation, anion
+ * and oxy-anion rows are recalled with more confidence than the acid oxy-anion row at 150 and 200 °C, which should
+ * be checked against the paper before an acid oxy-anion decides an answer above 100 °C).
+ */
 const TABLE_CELSIUS = [100, 150, 200];
 const PARAMETERS: Readonly<Record<IonClass, { a: readonly number[]; b: readonly number[] }>> = {
   cation: { a: [46, 46, 50], b: [-0.55, -0.59, -0.63] },
