@@ -1,6 +1,6 @@
 /**
  * Task pane drawing figure (GUIDE §6: 10 k samples < 0.5 s): the samples' species, regime and water margin on the
- * engine's system, then the whole SVG as text (src/taskpane/diagram-svg.ts), in Node. The browser's own parse and
+ * engine's system, then the whole SVG as text (src/diagram/diagram-svg.ts), in Node. The browser's own parse and
  * paint of that SVG is measured by bench/pane-browser.ts.
  *
  *   npx tsx bench/pane-render.ts          prints the figure
@@ -8,8 +8,8 @@
  */
 import { getDatabase } from "../src/chemistry/database";
 import { buildSystem } from "../src/chemistry/system";
-import { displayScale, defaultWindow, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../src/taskpane/diagram-model";
-import { renderDiagramSvg } from "../src/taskpane/diagram-svg";
+import { displayScale, defaultWindow, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../src/diagram/diagram-model";
+import { renderDiagramSvg } from "../src/diagram/diagram-svg";
 import { mulberry32 } from "../src/cli/seeded-random";
 import type { BenchRow } from "./engine";
 

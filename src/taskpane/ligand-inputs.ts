@@ -17,6 +17,9 @@ import type { Database } from "../chemistry/database";
 import { hasLigands, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
 import type { WaterColumn, WaterColumnRole } from "./header-match";
+import { formatTotals, LIGAND_WORDS } from "../diagram/water-words";
+
+export { formatTotals };
 
 /** Where each ligand's total comes from. */
 export type LigandSource = { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: WaterColumn };
@@ -147,14 +150,6 @@ export function resolveWater(settings: WaterSettings, rows: readonly RowTotals[]
     return own;
   });
   return { diagram, perSample, fromColumns, fallbacks, unusable };
-}
-
-const LIGAND_WORDS: Readonly<Record<LigandName, string>> = { carbonate: "DIC", chloride: "Cl", sulfur: "S" };
-
-/** "DIC 1.35, Cl 2 mmol/kg" — totals in mmol/kg with three significant figures; "" without ligands. */
-export function formatTotals(totals: LigandTotals): string {
-  const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map((l) => `${LIGAND_WORDS[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`);
-  return parts.length === 0 ? "" : `${parts.join(", ")} mmol/kg`;
 }
 
 /** Names of the ligands present, for titles: "carbonate, chloride and sulfur". */

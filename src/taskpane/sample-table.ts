@@ -8,7 +8,7 @@ import { getElectrodes } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
 import type { LigandName } from "../chemistry/ligand-cells";
 import { ColumnMapping, findHeaderRow, WaterColumn } from "./header-match";
-import type { PotentialUnit, SampleInput } from "./diagram-model";
+import type { PotentialUnit, SampleInput } from "../diagram/diagram-model";
 import { RowTotals, rowTotal } from "./ligand-inputs";
 
 /** A block of cells as a host hands it over: header texts, data rows, and the row number of each data row. */

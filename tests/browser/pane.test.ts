@@ -13,11 +13,11 @@ import { OpenPane, openStandalonePane, ROOT } from "./serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildSystem } from "../../src/chemistry/system";
 import { toSHE, fromSHE } from "../../src/chemistry/electrodes";
-import { displayScale, shownRegions } from "../../src/taskpane/diagram-model";
-import { makeAxes } from "../../src/taskpane/axes";
-import { diagramLayout } from "../../src/taskpane/diagram-svg";
-import { formulaSegments, segmentsText } from "../../src/taskpane/formula-markup";
-import { MARKER_FILLS } from "../../src/taskpane/palette";
+import { displayScale, shownRegions } from "../../src/diagram/diagram-model";
+import { makeAxes } from "../../src/diagram/axes";
+import { diagramLayout } from "../../src/diagram/diagram-svg";
+import { formulaSegments, segmentsText } from "../../src/diagram/formula-markup";
+import { MARKER_FILLS } from "../../src/diagram/palette";
 import { regimeAt } from "../../src/functions/stability-functions";
 import { parseDelimited } from "../../src/taskpane/delimited-text";
 

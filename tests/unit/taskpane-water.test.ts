@@ -13,10 +13,10 @@ import { regimeAt, speciesAt } from "../../src/functions/stability-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
 import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/taskpane/header-match";
 import { formatTotals, PURE_WATER, resolveWater, roundTotal, rowTotal, waterCaption, WaterSettings } from "../../src/taskpane/ligand-inputs";
-import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/taskpane/diagram-model";
-import { diagramLayout, renderDiagramSvg, sampleText } from "../../src/taskpane/diagram-svg";
-import { makeAxes } from "../../src/taskpane/axes";
-import { touchingGroups } from "../../src/taskpane/label-placement";
+import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/diagram/diagram-model";
+import { diagramLayout, renderDiagramSvg, sampleText } from "../../src/diagram/diagram-svg";
+import { makeAxes } from "../../src/diagram/axes";
+import { touchingGroups } from "../../src/diagram/label-placement";
 import { readSamples } from "../../src/taskpane/sample-table";
 import { EMPTY_MAPPING } from "../../src/taskpane/header-match";
 

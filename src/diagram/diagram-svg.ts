@@ -9,7 +9,7 @@ import type { MetalSystem, Regime } from "../chemistry/system";
 import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./axes";
 import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
 import { formulaSegments, Segment } from "./formula-markup";
-import { formatTotals } from "./ligand-inputs";
+import { formatTotals } from "./water-words";
 import { placeLabel, touchingGroups } from "./label-placement";
 import {
   AXIS_TEXT,
