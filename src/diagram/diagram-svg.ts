@@ -100,13 +100,15 @@ export function formatActivity(a: number): string {
   return `${Number(mantissa.toPrecision(3))} \u00d7 10${sup(String(exponent))}`;
 }
 
-/** Hover and focus text of a sample. */
+/** Hover and focus text of a sample: the reading as logged, E vs SHE, the row's own temperature and water, its answer. */
 export function sampleText(s: PlottedSample, unit: "V" | "mV"): string {
-  const e = unit === "mV" ? `${Math.round(s.E)} mV` : `${s.E.toFixed(3)} V`;
+  const shown = unit === "mV" ? `${Math.round(s.E)} mV` : `${s.E.toFixed(3)} V`;
+  const reading = s.reading ? `reading ${s.reading} = ${s.eSHE.toFixed(3)} V vs SHE` : `E ${shown}`;
   const margin = `${s.waterMargin >= 0 ? "+" : "\u2212"}${Math.abs(s.waterMargin).toFixed(2)} V ${s.waterMargin >= 0 ? "inside" : "outside"} the water window`;
   const who = s.id ? `${s.id} (row ${s.row})` : `row ${s.row}`;
+  const at = s.celsius === undefined ? "" : ` at ${Number(s.celsius.toFixed(1))} \u00b0C`;
   const water = s.ligands ? formatTotals(s.ligands) : "";
-  return `${who}: pH ${s.pH.toFixed(2)}, E ${e}; ${s.formula}, ${s.regime}; water margin ${margin}${water ? `; water ${water}` : ""}`;
+  return `${who}: pH ${s.pH.toFixed(2)}, ${reading}${at}${water ? `, water ${water}` : ""}; ${s.formula}, ${s.regime}; water margin ${margin}`;
 }
 
 function patternDefs(): string {

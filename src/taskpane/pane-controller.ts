@@ -11,13 +11,14 @@ import type { MetalSystem } from "../chemistry/system";
 import type { AxisWindow } from "../diagram/axes";
 import { defaultWindow, displayScale, plotSamples, PotentialUnit, shownRegions, shownWaterLines } from "../diagram/diagram-model";
 import { formatActivity, renderDiagramSvg, sampleText } from "../diagram/diagram-svg";
-import type { PlottedSample, SampleInput } from "../diagram/diagram-model";
+import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
 import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "./header-match";
 import { LIGAND_COLUMN, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
 import { CANVAS_SAMPLES, SampleCanvas } from "./sample-canvas";
 import type { HostAdapter, PaneSettings } from "./host";
 import { blobToBase64, download, svgToPngBlob } from "./png-export";
-import { median, readSamples, SampleTable } from "./sample-table";
+import { median, readSamples, SampleTable, SkippedRow } from "./sample-table";
+import { AnswerPlan, answerSamples, RowLigand, rowLigand } from "./sample-answers";
 
 const ROLE_WORDS: Record<ColumnRole, string> = {
   pH: "pH",
@@ -31,6 +32,10 @@ const ROLE_WORDS: Record<ColumnRole, string> = {
 
 /** Temperature spread above which one diagram no longer represents the rows well (°C). */
 export const SPREAD_WARNING = 10;
+/** The caption's promise about markers (sample-answers.ts keeps it). */
+export const OWN_ANSWERS =
+  "Each marker's shape and colour are its own row's answer (REDOX.REGIME at that row's temperature and water, its reading as logged); the regions are drawn at the single temperature and water above.";
+export const POINT_PROMPT = "Hover over a sample, or tab to the samples and use the arrow keys, for its details.";
 /** Sample count up to which the on-screen SVG carries a <title> per point. */
 export const TITLED_SAMPLES = 2000;
 
@@ -218,8 +223,11 @@ export class DiagramPane {
         option.dataset.header = headers[i];
         menu.add(option);
       }
+      // a column found by its header is used unless the user chose otherwise (as the command line does)
       const keep = previous === undefined ? -1 : headers.indexOf(previous);
-      menu.value = keep >= 0 && !Object.values(this.mapping).includes(keep) ? `col:${keep}` : "typed";
+      const typedChosen = this.settings.water?.[ligand]?.typed === true;
+      const usable = (i: number) => i >= 0 && !Object.values(this.mapping).includes(i);
+      menu.value = usable(keep) ? `col:${keep}` : found && !typedChosen && usable(found.index) ? `col:${found.index}` : "typed";
       input(`${ligand}-total`).disabled = menu.value !== "typed";
     }
   }
@@ -295,7 +303,8 @@ export class DiagramPane {
       const menu = select(`${ligand}-source`);
       const total = input(`${ligand}-total`).value.trim();
       const column = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : undefined;
-      if (total || column !== undefined) water[ligand] = { ...(total ? { total } : {}), ...(column !== undefined ? { column } : {}) };
+      const typed = column === undefined && this.waterFound[LIGAND_COLUMN[ligand]] !== undefined;
+      if (total || column !== undefined || typed) water[ligand] = { ...(total ? { total } : {}), ...(column !== undefined ? { column } : {}), ...(typed ? { typed } : {}) };
     }
     this.settings = { ...this.settings, water };
     void this.host.saveSettings(this.settings);
@@ -356,33 +365,18 @@ export class DiagramPane {
     const window = this.window ?? defaultWindow(scale);
     this.showWindow(window);
     const regions = shownRegions(system, window, scale);
-    let samples: PlottedSample[];
-    if (!ligands) samples = plotSamples(system, inputs, scale);
-    else {
-      const perRow = resolved.perSample;
-      const withWater: SampleInput[] = inputs.map((s, i) => ({ ...s, ligands: perRow[i] }));
-      const systems = new Map<string, MetalSystem>([[ligandKey(resolved.diagram), system]]);
-      const systemOf = (s: SampleInput) => {
-        const totals = s.ligands ?? {};
-        const key = ligandKey(totals);
-        let own = systems.get(key);
-        if (!own) systems.set(key, (own = this.systemIn(metal, celsius, activity, totals)));
-        return own;
-      };
-      try {
-        samples = plotSamples(system, withWater, scale, systemOf);
-      } catch (error) {
-        return this.status(`The samples could not be placed: ${(error as Error).message}`);
-      }
-    }
+    const own = this.ownAnswers(read, waterInput.settings, { metal, electrode, unit, activity, celsius }, scale);
+    const samples = own.samples;
     this.showWater(resolved, ligands);
     const water = shownWaterLines(celsius, scale);
     const metalTitle = this.db.system(metal)?.title ?? metal;
     const title = hasLigands(resolved.diagram) ? `${metalTitle} in water with ${ligandNames(resolved.diagram)}` : `${metalTitle} in water`;
     const compilation = this.db.system(metal)?.compilation ?? "";
     const waterLine = waterCaption(resolved);
+    const atMedian = !this.manualTemperature && temperatures.length > 0;
     const caption = [
-      `${title} at ${celsius} °C, dissolved activity ${formatActivity(activity)}, potentials in ${unit} vs ${scale.electrode}.`,
+      `${title} at ${celsius} °C${atMedian ? " (the rows' median temperature)" : ""}, dissolved activity ${formatActivity(activity)}, potentials in ${unit} vs ${scale.electrode}.`,
+      ...(samples.length > 0 ? [OWN_ANSWERS] : []),
       ...(waterLine ? [waterLine] : []),
       `Samples: ${this.table ? `${this.table.source}; ${samples.length} drawn, ${read?.skipped.length ?? 0} not drawn` : "none"}. Thermodynamic data: ${firstSentence(compilation)}`,
     ];
@@ -399,13 +393,70 @@ export class DiagramPane {
     const height = Math.round(width * 0.82);
     const svg = render(width, height, sampleTitles, onCanvas);
     this.canvas?.clear();
+    $("point-info").textContent = POINT_PROMPT; // the previous drawing's sample is gone
     container.innerHTML = svg;
     if (onCanvas) this.canvas?.draw(container.querySelector("svg")!, samples);
     container.dataset.samplesDrawn = String(samples.length);
     container.dataset.samplesOn = onCanvas ? "canvas" : "svg";
     this.drawn = { svg, caption, render };
-    this.showSkipped(read);
+    this.showSkipped(read, own.failed);
     if (this.table) this.status(`${samples.length} sample${samples.length === 1 ? "" : "s"} drawn from ${this.table.source}.`);
+  }
+
+  /**
+   * Every drawn row's own answer from the worksheet functions (sample-answers.ts): its reading as logged at its
+   * own temperature, its own water. Rows the functions refuse move to the "not drawn" list with their message.
+   */
+  private ownAnswers(
+    read: ReturnType<typeof readSamples> | null,
+    water: WaterSettings,
+    at: { metal: string; electrode: string; unit: PotentialUnit; activity: number; celsius: number },
+    scale: DisplayScale,
+  ): { samples: PlottedSample[]; failed: SkippedRow[] } {
+    if (!this.table || !read) return { samples: [], failed: [] };
+    const table = this.table;
+    const ligands: RowLigand[] = [];
+    const typed: Partial<Record<LigandName, number>> = {};
+    for (const ligand of LIGAND_ORDER) {
+      const source = water[ligand];
+      if (source.kind === "column") ligands.push(rowLigand(ligand, source.column));
+      else if (source.total !== null && source.total > 0) typed[ligand] = source.total;
+    }
+    const plan: AnswerPlan = {
+      ...at,
+      phColumn: this.mapping.pH,
+      potentialColumn: this.mapping.potential,
+      temperatureColumn: this.mapping.temperature,
+      temperatureUnit: this.temperatureUnit,
+      ligands,
+      typed,
+    };
+    const rows = read.indices.map((i) => table.rows[i]);
+    const answers = answerSamples(plan, rows);
+    const samples: PlottedSample[] = [];
+    const failed: SkippedRow[] = [];
+    const electrodeId = scale.electrode;
+    read.samples.forEach((s, k) => {
+      const a = answers[k];
+      if ("error" in a) return void failed.push({ row: s.row, reason: a.error });
+      const logged = String(rows[k][this.mapping.potential] ?? "").trim();
+      const plotted: PlottedSample = {
+        row: s.row,
+        id: s.id,
+        pH: s.pH,
+        E: scale.fromSHE(s.pH, a.eSHE),
+        eSHE: a.eSHE,
+        formula: a.species,
+        regime: a.regime,
+        waterMargin: a.margin,
+        dissolved: s.dissolved,
+        reading: `${logged} ${at.unit} vs ${electrodeId}`,
+        celsius: a.celsius,
+        equilibrium: a.dissolved,
+      };
+      samples.push(hasLigands(a.water) ? { ...plotted, ligands: a.water } : plotted);
+    });
+    return { samples, failed };
   }
 
   private showTemperatureSpread(temperatures: number[], celsius: number): void {
@@ -454,10 +505,10 @@ export class DiagramPane {
     input("e-max").step = step;
   }
 
-  private showSkipped(read: ReturnType<typeof readSamples> | null): void {
+  private showSkipped(read: ReturnType<typeof readSamples> | null, failed: readonly SkippedRow[] = []): void {
     const list = $("skipped");
     list.replaceChildren();
-    const skipped = read?.skipped ?? [];
+    const skipped = [...(read?.skipped ?? []), ...failed].sort((a, b) => a.row - b.row);
     const parts: string[] = [];
     if (skipped.length === 0) parts.push("None.");
     else parts.push(`${skipped.length} row${skipped.length === 1 ? "" : "s"} with blank or unreadable cells:`);

@@ -48,6 +48,8 @@ export interface ReadResult {
   readonly otherMetal: number;
   /** Per drawn sample (aligned with `samples`): its ligand totals read from the water columns. */
   readonly rowTotals: RowTotals[];
+  /** Per drawn sample: its index in `table.rows`. */
+  readonly indices: number[];
 }
 
 const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
@@ -90,6 +92,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
   const skipped: SkippedRow[] = [];
   let otherMetal = 0;
   const rowTotals: RowTotals[] = [];
+  const indices: number[] = [];
   const waterColumns = Object.entries(options.waterColumns ?? {}) as [LigandName, WaterColumn][];
   const db = waterColumns.length > 0 ? getDatabase() : null;
   const cell = (row: readonly unknown[], index: number) => (index >= 0 ? row[index] : undefined);
@@ -137,6 +140,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     const id = [idCell, siteCell].filter((c) => c !== undefined && c !== null && String(c).trim() !== "").map((c) => String(c).trim())[0] ?? "";
     const dissolved = readNumber(cell(row, mapping.dissolved));
     samples.push({ row: rowNumber, id, pH: pH.value, eSHE, dissolved: "value" in dissolved ? dissolved.value : undefined });
+    indices.push(i);
     if (hasTemperature) temperatures.push(celsius);
     if (waterColumns.length === 0) rowTotals.push(NO_TOTALS);
     else {
@@ -145,7 +149,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
       rowTotals.push(totals);
     }
   });
-  return { samples, temperatures, skipped, otherMetal, rowTotals };
+  return { samples, temperatures, skipped, otherMetal, rowTotals, indices };
 }
 
 /**

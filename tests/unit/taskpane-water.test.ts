@@ -170,7 +170,7 @@ describe("samples in a water with ligands", () => {
     expect(sampleText(pure, "V")).not.toMatch(/water DIC/);
     expect(sampleText(pure, "V")).toMatch(/water margin \+0\.\d\d V inside the water window$/);
     const [wet] = plotSamples(system, [{ row: 5, id: "A", pH: 7.5, eSHE: 0.4, ligands: { carbonate: 1.5e-3 } }], scale);
-    expect(sampleText(wet, "V")).toMatch(/; water DIC 1\.5 mmol\/kg$/);
+    expect(sampleText(wet, "V")).toMatch(/, water DIC 1\.5 mmol\/kg;/);
   });
 
   it("labels every species of a diagram split along ligand boundaries", () => {
