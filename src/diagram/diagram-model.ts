@@ -134,6 +134,8 @@ export interface PlottedSample {
   readonly celsius?: number;
   /** Equilibrium dissolved metal, µg/L (null: no solid is stable there). */
   readonly equilibrium?: number | null;
+  /** The row's site, when the log names one. */
+  readonly site?: string;
 }
 
 export interface SampleInput {

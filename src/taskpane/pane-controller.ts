@@ -10,11 +10,16 @@ import { buildLigandSystem, MAX_LIGAND_TOTAL } from "../chemistry/ligand-system"
 import type { MetalSystem } from "../chemistry/system";
 import type { AxisWindow } from "../diagram/axes";
 import { defaultWindow, displayScale, plotSamples, PotentialUnit, shownRegions, shownWaterLines } from "../diagram/diagram-model";
-import { formatActivity, renderDiagramSvg, sampleText } from "../diagram/diagram-svg";
+import { escapeXml, formatActivity, renderDiagramSvg, sampleText } from "../diagram/diagram-svg";
+import { boundaryEquations, equationText } from "../diagram/boundary-equations";
+import { ligandEdges } from "../diagram/ligand-edges";
+import { fitWindow, isClustered, zoomWindow } from "../diagram/view-window";
+import { DiagramView, type DrawingOptions } from "./pane-view";
+import { SITE_COLOURS } from "./pane-legend";
+import { resultsCsv, resultsHtml, resultsTsv } from "./results-table";
 import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
 import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "./header-match";
 import { LIGAND_COLUMN, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
-import { CANVAS_SAMPLES, SampleCanvas } from "./sample-canvas";
 import type { HostAdapter, PaneSettings } from "./host";
 import { blobToBase64, download, svgToPngBlob } from "./png-export";
 import { median, readSamples, SampleTable, SkippedRow } from "./sample-table";
@@ -56,8 +61,8 @@ const input = (id: string) => $(id) as HTMLInputElement;
 const select = (id: string) => $(id) as HTMLSelectElement;
 
 interface Drawn {
-  svg: string;
   caption: string[];
+  /** The drawing for export, title, legend and caption inside. */
   render(width: number, height: number, titles?: boolean): string;
 }
 
@@ -73,7 +78,10 @@ export class DiagramPane {
   private plotted: { samples: PlottedSample[]; unit: PotentialUnit } = { samples: [], unit: "V" };
   private settings: PaneSettings;
   private waterFound: WaterColumns = {};
-  private canvas: SampleCanvas | null = null;
+  private view!: DiagramView;
+  /** "fit": the samples' window; "full": pH −2…16, ±2 V; null: fit when the samples are clustered. */
+  private viewMode: "fit" | "full" | null = null;
+  private lastWindow: AxisWindow | null = null;
 
   constructor(private readonly host: HostAdapter) {
     this.settings = host.loadSettings() ?? {};
@@ -83,6 +91,7 @@ export class DiagramPane {
     const metals = select("metal");
     for (const symbol of this.db.metals()) metals.add(new Option(`${this.db.system(symbol)?.title ?? symbol} (${symbol})`, symbol));
     metals.value = this.settings.metal && this.db.metals().includes(this.settings.metal) ? this.settings.metal : "Fe";
+    for (const symbol of this.db.metals()) select("compare-metal").add(new Option(`${this.db.system(symbol)?.title ?? symbol} (${symbol})`, symbol));
     const electrodes = select("electrode");
     for (const e of getElectrodes().all()) electrodes.add(new Option(`${e.id} — ${e.name}`, e.id));
     electrodes.value = this.settings.electrode ?? "SHE";
@@ -133,6 +142,7 @@ export class DiagramPane {
     for (const id of ["ph-min", "ph-max", "e-min", "e-max"]) $(id).addEventListener("change", () => this.readWindow());
     $("reset-axes").addEventListener("click", () => {
       this.window = null;
+      this.viewMode = null;
       redraw();
     });
     $("export-svg").addEventListener("click", () => this.exportSvg());
@@ -141,7 +151,12 @@ export class DiagramPane {
       $("insert-sheet").hidden = false;
       $("insert-sheet").addEventListener("click", () => void this.insertPicture());
     }
+    this.view = new DiagramView($("diagram"), {
+      show: (sample) => ($("point-info").textContent = sampleText(sample, this.plotted.unit)),
+      choose: (sample) => this.selectRow(sample.row),
+    });
     this.wireSamples();
+    this.wireView();
     this.draw();
     await this.host.start(
       (table) => this.setTable(table),
@@ -362,11 +377,11 @@ export class DiagramPane {
       return this.status(`The diagram could not be built: ${(error as Error).message}`);
     }
     const scale = displayScale(electrode, unit, celsius);
-    const window = this.window ?? defaultWindow(scale);
+    const own = this.ownAnswers(read, waterInput.settings, { metal, electrode, unit, activity, celsius }, scale);
+    const samples = this.siteFiltered(own.samples);
+    const window = this.chooseWindow(scale, samples);
     this.showWindow(window);
     const regions = shownRegions(system, window, scale);
-    const own = this.ownAnswers(read, waterInput.settings, { metal, electrode, unit, activity, celsius }, scale);
-    const samples = own.samples;
     this.showWater(resolved, ligands);
     const water = shownWaterLines(celsius, scale);
     const metalTitle = this.db.system(metal)?.title ?? metal;
@@ -381,24 +396,30 @@ export class DiagramPane {
       `Samples: ${this.table ? `${this.table.source}; ${samples.length} drawn, ${read?.skipped.length ?? 0} not drawn` : "none"}. Thermodynamic data: ${firstSentence(compilation)}`,
     ];
     const showKineticBand = input("kinetic").checked;
-    // above this many points the on-screen diagram leaves out the per-point <title> (the info line shows the text)
-    const sampleTitles = samples.length <= TITLED_SAMPLES;
     this.plotted = { samples, unit };
-    // above CANVAS_SAMPLES the screen gets the markers on a canvas layer (sample-canvas.ts); exports keep circles
-    const onCanvas = samples.length > CANVAS_SAMPLES;
-    const render = (width: number, height: number, titles = sampleTitles, omitSamples = false) =>
-      renderDiagramSvg({ system, window, regions, samples, water, axisTitle: scale.axisTitle, unit, width, height, title, caption, showKineticBand, sampleTitles: titles, omitSamples });
-    const container = $("diagram");
-    const width = Math.max(360, Math.min(900, Math.floor(container.clientWidth || 640)));
-    const height = Math.round(width * 0.82);
-    const svg = render(width, height, sampleTitles, onCanvas);
-    this.canvas?.clear();
-    $("point-info").textContent = POINT_PROMPT; // the previous drawing's sample is gone
-    container.innerHTML = svg;
-    if (onCanvas) this.canvas?.draw(container.querySelector("svg")!, samples);
-    container.dataset.samplesDrawn = String(samples.length);
-    container.dataset.samplesOn = onCanvas ? "canvas" : "svg";
-    this.drawn = { svg, caption, render };
+    const sites = this.siteColours(own.samples);
+    const drawing: DrawingOptions = {
+      system,
+      window,
+      regions,
+      samples,
+      water,
+      axisTitle: scale.axisTitle,
+      unit,
+      title,
+      caption,
+      showKineticBand,
+      // above this many points the on-screen diagram leaves out the per-point <title> (the info line shows the text)
+      sampleTitles: samples.length <= TITLED_SAMPLES,
+      sampleFill: sites ? (p: PlottedSample) => sites.get(p.site ?? "") ?? "#888888" : undefined,
+    };
+    const compare = this.compareOptions(drawing, { electrode, unit, activity, celsius }, resolved.diagram, read, waterInput.settings, scale);
+    this.view.show({ options: drawing, caption, compare, legend: { kinetic: showKineticBand, ligandEdges: ligandEdges(system), sites } });
+    this.drawn = {
+      caption,
+      render: (width, height, titles = true) => renderDiagramSvg({ ...drawing, width, height, sampleTitles: titles }),
+    };
+    this.showResults(samples, system, celsius, resolved.diagram);
     this.showSkipped(read, own.failed);
     if (this.table) this.status(`${samples.length} sample${samples.length === 1 ? "" : "s"} drawn from ${this.table.source}.`);
   }
@@ -453,6 +474,7 @@ export class DiagramPane {
         reading: `${logged} ${at.unit} vs ${electrodeId}`,
         celsius: a.celsius,
         equilibrium: a.dissolved,
+        site: this.mapping.site >= 0 ? String(rows[k][this.mapping.site] ?? "").trim() : undefined,
       };
       samples.push(hasLigands(a.water) ? { ...plotted, ligands: a.water } : plotted);
     });
@@ -523,44 +545,125 @@ export class DiagramPane {
     }
   }
 
-  /** Hover, focus, click and Enter on sample points. */
+  /** Hover and click on sample points (the keyboard is the view's: one tab stop, arrow keys). */
   private wireSamples(): void {
     const container = $("diagram");
     const info = $("point-info");
     const target = (event: Event) => (event.target instanceof Element ? event.target.closest(".rc-sample") : null);
-    const show = (event: Event) => {
+    container.addEventListener("mouseover", (event) => {
       const point = target(event);
-      if (!point) return;
-      const sample = this.plotted.samples[Number(point.getAttribute("data-i"))];
-      info.textContent = sample ? sampleText(sample, this.plotted.unit) : (point.querySelector("title")?.textContent ?? "");
-    };
-    container.addEventListener("mouseover", show);
-    container.addEventListener("focusin", show);
-    const selectRow = (row: number) => {
-      if (this.host.selectRow && Number.isFinite(row)) void this.host.selectRow(row).catch((e: unknown) => this.status(`Could not select row ${row}: ${(e as Error).message}`));
-    };
-    const choose = (point: Element) => selectRow(Number(point.getAttribute("data-row")));
-    this.canvas = new SampleCanvas(container, {
-      show: (i) => {
-        const sample = this.plotted.samples[i];
-        if (sample) info.textContent = sampleText(sample, this.plotted.unit);
-      },
-      choose: (i) => {
-        const sample = this.plotted.samples[i];
-        if (sample) selectRow(sample.row);
-      },
+      const sample = point ? this.plotted.samples[Number(point.getAttribute("data-i"))] : undefined;
+      if (sample) info.textContent = sampleText(sample, this.plotted.unit);
     });
     container.addEventListener("click", (event) => {
       const point = target(event);
-      if (point) choose(point);
+      const sample = point ? this.plotted.samples[Number(point.getAttribute("data-i"))] : undefined;
+      if (sample) this.selectRow(sample.row);
     });
-    container.addEventListener("keydown", (event) => {
-      const point = target(event);
-      if (point && (event.key === "Enter" || event.key === " ")) {
-        event.preventDefault();
-        choose(point);
-      }
-    });
+  }
+
+  private selectRow(row: number): void {
+    if (this.host.selectRow && Number.isFinite(row)) void this.host.selectRow(row).catch((e: unknown) => this.status(`Could not select row ${row}: ${(e as Error).message}`));
+  }
+
+
+  /** View buttons: fit to the samples, the full range, zoom in and out. */
+  private wireView(): void {
+    const setWindow = (w: AxisWindow | null, mode: "fit" | "full" | null) => {
+      this.window = w;
+      this.viewMode = mode;
+      this.draw();
+    };
+    $("fit-samples").addEventListener("click", () => setWindow(null, "fit"));
+    $("full-range").addEventListener("click", () => setWindow(null, "full"));
+    $("zoom-in").addEventListener("click", () => this.lastWindow && setWindow(zoomWindow(this.lastWindow, 0.6), this.viewMode));
+    $("zoom-out").addEventListener("click", () => this.lastWindow && setWindow(zoomWindow(this.lastWindow, 1 / 0.6), this.viewMode));
+    for (const id of ["color-by", "site-filter", "compare-metal"]) $(id).addEventListener("change", () => this.draw());
+    $("export-csv").addEventListener("click", () => download(new Blob([resultsCsv(this.plotted.samples)], { type: "text/csv" }), this.fileName("csv")));
+    $("copy-results").addEventListener("click", () => void this.copy(resultsTsv(this.plotted.samples), "Results copied: paste them into a sheet."));
+    $("copy-equations").addEventListener("click", () => void this.copy(this.equationsText, "Boundary equations copied."));
+  }
+
+  private async copy(text: string, done: string): Promise<void> {
+    try {
+      await navigator.clipboard.writeText(text);
+      this.status(done);
+    } catch (error) {
+      this.status(`Could not copy (${(error as Error).message}); use Download CSV instead.`);
+    }
+  }
+
+  /** The shown window: the user's limits, else fitted to the samples when asked or when they are clustered. */
+  private chooseWindow(scale: DisplayScale, samples: readonly PlottedSample[]): AxisWindow {
+    const full = defaultWindow(scale);
+    let chosen = this.window;
+    if (!chosen && this.viewMode !== "full") {
+      const fitted = fitWindow(samples, scale.unit);
+      if (fitted && (this.viewMode === "fit" || isClustered(fitted, full))) chosen = fitted;
+    }
+    this.lastWindow = chosen ?? full;
+    return this.lastWindow;
+  }
+
+  /** Samples of the chosen site only (the "Show site" menu), refreshing the menu's list of sites. */
+  private siteFiltered(samples: PlottedSample[]): PlottedSample[] {
+    const menu = select("site-filter");
+    const sites = [...new Set(samples.map((s) => s.site ?? "").filter((x) => x !== ""))].sort();
+    const keep = menu.value;
+    menu.replaceChildren(new Option("all sites", ""), ...sites.map((x) => new Option(x, x)));
+    menu.value = sites.includes(keep) ? keep : "";
+    menu.disabled = sites.length === 0;
+    return menu.value === "" ? samples : samples.filter((s) => s.site === menu.value);
+  }
+
+  /** Site → colour when colouring by site (Okabe–Ito colours, cycling past eight sites). */
+  private siteColours(samples: readonly PlottedSample[]): Map<string, string> | undefined {
+    if (select("color-by").value !== "site") return undefined;
+    const sites = [...new Set(samples.map((s) => s.site ?? "").filter((x) => x !== ""))].sort();
+    if (sites.length === 0) return undefined;
+    return new Map(sites.map((x, i) => [x, SITE_COLOURS[i % SITE_COLOURS.length]]));
+  }
+
+  /** A second metal with the same window, temperature, water and samples (their own answers for that metal). */
+  private compareOptions(
+    first: DrawingOptions,
+    at: { electrode: string; unit: PotentialUnit; activity: number; celsius: number },
+    totals: LigandTotals,
+    read: ReturnType<typeof readSamples> | null,
+    water: WaterSettings,
+    scale: DisplayScale,
+  ): DrawingOptions | undefined {
+    const metal = select("compare-metal").value;
+    if (!metal || metal === select("metal").value) return undefined;
+    try {
+      const system = this.systemIn(metal, at.celsius, at.activity, totals);
+      const own = this.ownAnswers(read, water, { ...at, metal }, scale);
+      const keep = new Set(first.samples.map((s) => s.row));
+      const title = `${this.db.system(metal)?.title ?? metal} in water`;
+      return { ...first, system, regions: shownRegions(system, first.window, scale), samples: own.samples.filter((s) => keep.has(s.row)), title, sampleFill: undefined };
+    } catch (error) {
+      this.status(`The comparison could not be drawn: ${(error as Error).message}`);
+      return undefined;
+    }
+  }
+
+  private equationsText = "";
+
+  /** The results table and the pure-water boundary equations at the diagram's temperature. */
+  private showResults(samples: readonly PlottedSample[], system: MetalSystem, celsius: number, totals: LigandTotals): void {
+    $("results-table").innerHTML = resultsHtml(samples);
+    const metal = system.element;
+    const pure = hasLigands(totals) ? this.systemIn(metal, celsius, system.activity, {}) : system;
+    const equations = boundaryEquations(pure, { pHMin: -2, pHMax: 16, eMin: -2, eMax: 2 });
+    const head = ["between", "and", "boundary (E in V vs SHE)"];
+    const rows = equations.map((e) => [e.first, e.second, equationText(e)]);
+    this.equationsText = [head, ...rows].map((r) => r.join("\t")).join("\n") + "\n";
+    $("equations-note").textContent =
+      `${this.db.system(metal)?.title ?? metal} in pure water at ${celsius} °C, dissolved activity ${formatActivity(system.activity)}: each boundary drawn between pH −2 and 16 and −2…+2 V vs SHE.` +
+      (hasLigands(totals) ? " (The drawing itself includes the water's ligands; these equations do not.)" : "");
+    $("equations-table").innerHTML =
+      `<thead><tr>${head.map((h) => `<th scope="col">${escapeXml(h)}</th>`).join("")}</tr></thead>` +
+      `<tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${escapeXml(c)}</td>`).join("")}</tr>`).join("")}</tbody>`;
   }
 
   private exportSize(): { width: number; height: number } {
