@@ -215,6 +215,9 @@ function waterSvg(o: DiagramSvgOptions, axes: Axes): string {
   return out.join("\n");
 }
 
+/** The width estimate is a fixed-advance guess; fonts differ, so labels are planned 15 % wider than estimated. */
+const LABEL_WIDTH_SAFETY = 1.15;
+
 /** What the numbered key beside the diagram lists: number → formula (and whether it is marked in place). */
 export interface KeyEntry {
   readonly number: number;
@@ -225,7 +228,7 @@ export interface KeyEntry {
 /** The labels as SVG and the numbered key for regions too small for their formula. */
 function labelsSvg(regions: readonly PixelRegion[]): { svg: string; key: KeyEntry[] } {
   const segments = regions.map((r) => formulaSegments(r.region.formula, r.region.charge));
-  const plans: LabelPlan[] = planLabels(regions.map((r, i) => ({ key: r.region.formula, pixels: r.pixels, width: (size: number) => formulaWidth(segments[i], size) })));
+  const plans: LabelPlan[] = planLabels(regions.map((r, i) => ({ key: r.region.formula, pixels: r.pixels, width: (size: number) => formulaWidth(segments[i], size) * LABEL_WIDTH_SAFETY })));
   const out = [`<g class="rc-labels" fill="${LABEL_TEXT}" text-anchor="middle" pointer-events="none" paint-order="stroke" stroke="#ffffff" stroke-width="3" stroke-opacity="0.75" stroke-linejoin="round">`];
   const key: KeyEntry[] = [];
   for (const p of plans) {
