@@ -233,6 +233,7 @@ export class DiagramPane {
       const order = found ? [found.index, ...headers.keys()].filter((i, k, all) => all.indexOf(i) === k) : [...headers.keys()];
       for (const i of order) {
         if (Object.values(this.mapping).includes(i)) continue; // pH, potential… are not water columns
+        if (i !== found?.index && !this.mostlyNumbers(i)) continue; // site, date, note… are not either
         const unit = WATER_UNIT_WORDS[waterColumnAt(role, headers, i).unit];
         const option = new Option(`from ${i === found?.index ? `the ${role} column` : "column"} “${headers[i] || `column ${i + 1}`}” (${unit})`, `col:${i}`);
         option.dataset.header = headers[i];
@@ -245,6 +246,19 @@ export class DiagramPane {
       menu.value = usable(keep) ? `col:${keep}` : found && !typedChosen && usable(found.index) ? `col:${found.index}` : "typed";
       input(`${ligand}-total`).disabled = menu.value !== "typed";
     }
+  }
+
+  /** Whether most filled cells of column `index` (among the first 200 rows) are numbers. */
+  private mostlyNumbers(index: number): boolean {
+    let numbers = 0;
+    let filled = 0;
+    for (const row of (this.table?.rows ?? []).slice(0, 200)) {
+      const cell = row[index];
+      if (cell === null || cell === undefined || String(cell).trim() === "") continue;
+      filled++;
+      if (typeof cell === "number" || /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(String(cell))) numbers++;
+    }
+    return filled > 0 && numbers >= filled / 2;
   }
 
   /** Ligand settings from the controls; a message when a typed total is not a number in range. */

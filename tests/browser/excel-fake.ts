@@ -127,8 +127,8 @@ export class FakeWorkbook {
         // the block from A1 to the last non-blank cell (Excel's used range, values only)
         const cells = workbook.sheets.get(name)!;
         const filled = (v: unknown) => v !== "" && v !== null && v !== undefined;
-        const lastRow = cells.reduce((last, r, i) => (r.some(filled) ? i : last), -1);
-        const lastCol = cells.reduce((last, r) => Math.max(last, r.reduce((c, v, j) => (filled(v) ? j : c), -1)), -1);
+        const lastRow = cells.reduce<number>((last, r, i) => (r.some(filled) ? i : last), -1);
+        const lastCol = cells.reduce<number>((last, r) => Math.max(last, r.reduce<number>((c, v, j) => (filled(v) ? j : c), -1)), -1);
         if (lastRow < 0) return { load() {}, isNullObject: true, rowIndex: 0, columnIndex: 0, rowCount: 0, columnCount: 0 };
         return workbook.range(name, 0, 0, lastRow + 1, lastCol + 1);
       },
