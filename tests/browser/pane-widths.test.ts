@@ -35,6 +35,10 @@ async function openAt(width: number): Promise<void> {
 async function screenshot(name: string): Promise<void> {
   mkdirSync(join(ROOT, "test-results"), { recursive: true });
   const shot = join(ROOT, `test-results/${name}.png`);
+  await page.evaluate(() => {
+    (document.activeElement as HTMLElement | null)?.blur();
+    window.scrollTo(0, 0);
+  });
   await page.screenshot({ path: shot, fullPage: false });
   if (process.env.REDOX_UPDATE_SCREENSHOT === "1") {
     mkdirSync(join(ROOT, "docs/images"), { recursive: true });
