@@ -22,7 +22,10 @@ import { formatTotals, LIGAND_WORDS } from "../diagram/water-words";
 export { formatTotals };
 
 /** Where each ligand's total comes from. */
-export type LigandSource = { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: WaterColumn };
+/** A water column; for carbonate read from a DIC column, `dicFactor` is mol/kg per unit of the column. */
+export type LigandColumn = WaterColumn & { readonly dicFactor?: number };
+
+export type LigandSource = { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: LigandColumn };
 
 export type WaterSettings = Readonly<Record<LigandName, LigandSource>>;
 
@@ -74,7 +77,9 @@ export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, 
   if (value === null) return { problem: `"${String(cell).trim().slice(0, 20)}" is not a number` };
   if (value < 0) return { problem: `${value} is negative` };
   let total: number;
-  if (ligand === "carbonate") {
+  const dicFactor = (column as LigandColumn).dicFactor;
+  if (ligand === "carbonate" && dicFactor !== undefined) total = value * dicFactor;
+  else if (ligand === "carbonate") {
     const mgCaCO3 = column.unit === "meq/L" ? value * CACO3_GRAMS_PER_EQUIVALENT : value;
     if (mgCaCO3 === 0) return { problem: "alkalinity is 0" };
     try {

@@ -19,7 +19,8 @@ import { SITE_COLOURS } from "./pane-legend";
 import { resultsCsv, resultsHtml, resultsTsv } from "./results-table";
 import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
 import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "./header-match";
-import { LIGAND_COLUMN, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
+import { LIGAND_COLUMN, LigandColumn, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
+import { dicColumnAt, findDicColumn } from "./dic-columns";
 import type { HostAdapter, PaneSettings } from "./host";
 import { blobToBase64, download, svgToPngBlob } from "./png-export";
 import { median, readSamples, SampleTable, SkippedRow } from "./sample-table";
@@ -227,8 +228,15 @@ export class DiagramPane {
     for (const ligand of LIGAND_ORDER) {
       const role = LIGAND_COLUMN[ligand];
       const menu = select(`${ligand}-source`);
-      const previous = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : this.settings.water?.[ligand]?.column;
+      const previous = /^(col|dic):/.test(menu.value) ? menu.selectedOptions[0]?.dataset.header : this.settings.water?.[ligand]?.column;
       menu.replaceChildren(new Option("typed total", "typed"));
+      // carbonate: a measured DIC column first (used before alkalinity, as the command line does)
+      const dic = ligand === "carbonate" ? findDicColumn(headers, new Set(Object.values(this.mapping).filter((i) => i >= 0))) : null;
+      if (dic) {
+        const option = new Option(`from the DIC column “${headers[dic.index]}” (${dic.unit})`, `dic:${dic.index}`);
+        option.dataset.header = headers[dic.index];
+        menu.add(option);
+      }
       const found = this.waterFound[role];
       const order = found ? [found.index, ...headers.keys()].filter((i, k, all) => all.indexOf(i) === k) : [...headers.keys()];
       for (const i of order) {
@@ -243,7 +251,8 @@ export class DiagramPane {
       const keep = previous === undefined ? -1 : headers.indexOf(previous);
       const typedChosen = this.settings.water?.[ligand]?.typed === true;
       const usable = (i: number) => i >= 0 && !Object.values(this.mapping).includes(i);
-      menu.value = usable(keep) ? `col:${keep}` : found && !typedChosen && usable(found.index) ? `col:${found.index}` : "typed";
+      const auto = dic && !typedChosen ? `dic:${dic.index}` : found && !typedChosen && usable(found.index) ? `col:${found.index}` : "typed";
+      menu.value = dic && keep === dic.index ? `dic:${dic.index}` : usable(keep) ? `col:${keep}` : auto;
       input(`${ligand}-total`).disabled = menu.value !== "typed";
     }
   }
@@ -268,6 +277,13 @@ export class DiagramPane {
     const headers = this.table?.headers ?? [];
     for (const ligand of LIGAND_ORDER) {
       const source = select(`${ligand}-source`).value;
+      if (source.startsWith("dic:") && this.table) {
+        const dic = dicColumnAt(headers, Number(source.slice(4)));
+        const column: LigandColumn = { index: dic.index, unit: "mg/L CaCO3", dicFactor: dic.factor };
+        settings[ligand] = { kind: "column", column };
+        columns[ligand] = column;
+        continue;
+      }
       if (source.startsWith("col:") && this.table) {
         const column = waterColumnAt(LIGAND_COLUMN[ligand], headers, Number(source.slice(4)));
         settings[ligand] = { kind: "column", column };
@@ -331,7 +347,7 @@ export class DiagramPane {
     for (const ligand of LIGAND_ORDER) {
       const menu = select(`${ligand}-source`);
       const total = input(`${ligand}-total`).value.trim();
-      const column = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : undefined;
+      const column = /^(col|dic):/.test(menu.value) ? menu.selectedOptions[0]?.dataset.header : undefined;
       const typed = column === undefined && this.waterFound[LIGAND_COLUMN[ligand]] !== undefined;
       if (total || column !== undefined || typed) water[ligand] = { ...(total ? { total } : {}), ...(column !== undefined ? { column } : {}), ...(typed ? { typed } : {}) };
     }

@@ -144,9 +144,10 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
 }
 
 /** Factor from a water column's unit to the functions' argument (command-line factors, src/cli/water.ts). */
-export function rowLigand(ligand: LigandName, column: WaterColumn): RowLigand {
+export function rowLigand(ligand: LigandName, column: WaterColumn & { readonly dicFactor?: number }): RowLigand {
   const weight = (symbol: string) => getDatabase().element(symbol)?.atomicWeight ?? NaN;
   const c = column.index;
+  if (ligand === "carbonate" && column.dicFactor !== undefined) return { ligand, column: c, kind: "total", factor: column.dicFactor };
   if (ligand === "carbonate") return { ligand, column: c, kind: "alkalinity", factor: column.unit === "meq/L" ? CACO3_GRAMS_PER_EQUIVALENT : 1 };
   if (column.unit === "mmol/L") return { ligand, column: c, kind: "total", factor: 1e-3 };
   if (ligand === "chloride") return { ligand, column: c, kind: "total", factor: (column.unit === "ug/L" ? 1e-6 : 1e-3) / weight("Cl") };

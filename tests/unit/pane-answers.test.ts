@@ -5,7 +5,7 @@
  * that row alone with its own temperature and water (REDOX.DIC of its alkalinity, as a worksheet would chain it).
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { mkdtempSync, readFileSync, rmSync } from "fs";
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "fs";
 import { tmpdir } from "os";
 import { join } from "path";
 import { PassThrough } from "stream";
@@ -19,6 +19,7 @@ import { waterMarginAt } from "../../src/functions/water-functions";
 import { matchHeaders, matchWaterColumns } from "../../src/taskpane/header-match";
 import { answerSamples, rowLigand } from "../../src/taskpane/sample-answers";
 import { tableFromText } from "../../src/taskpane/standalone-adapter";
+import { findDicColumn } from "../../src/taskpane/dic-columns";
 
 const DEMO = join(__dirname, "../../data/demo/sample-log.csv");
 const table = tableFromText(readFileSync(DEMO, "utf8"), "demo");
@@ -115,4 +116,29 @@ describe("pane, command line and worksheet functions on every demo row", () => {
       expect(compared).toBeGreaterThan(table.rows.length - 12);
     });
   }
+});
+
+describe("a log with a measured DIC column", () => {
+  it("pane and command line read the DIC column alike (mmol/L) and give the same answers", async () => {
+    const text = ["site,pH,Eh (V),Temp C,DIC (mmol/L)", "A,6.8,0.35,12,1.9", "B,7.9,0.42,18,3.2", "C,8.6,-0.1,9,0.6", "D,7.2,0.05,15,", "E,6.2,0.55,22,4.4"].join("\n");
+    const file = join(dir, "dic.csv");
+    const output = join(dir, "dic-results.csv");
+    writeFileSync(file, text);
+    const result = await runCommand([file, "--metal", "Cu,Pb,Fe", "--output", output, "--no-svg"], { stdout: new PassThrough(), stderr: new PassThrough() });
+    expect(result.code).toBe(0);
+    const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
+    const t = tableFromText(text, "dic");
+    const headers = t.headers as string[];
+    const dic = findDicColumn(headers, new Set([1, 2, 3]))!;
+    expect(dic).toMatchObject({ index: 4, factor: 1e-3 });
+    for (const metal of ["Cu", "Pb", "Fe"]) {
+      const answers = answerSamples(
+        { metal, phColumn: 1, potentialColumn: 2, temperatureColumn: 3, temperatureUnit: "C", celsius: 25, electrode: "SHE", unit: "V", activity: 1e-6, ligands: [rowLigand("carbonate", { index: dic.index, unit: "mg/L CaCO3", dicFactor: dic.factor })], typed: {} },
+        t.rows,
+      );
+      answers.forEach((a, r) => {
+        expect("error" in a ? a.error : `${a.species}/${a.regime}`, `${metal} row ${r}`).toBe(`${lines[r][`${metal}_species`]}/${lines[r][`${metal}_regime`]}`);
+      });
+    }
+  });
 });
