@@ -18,9 +18,8 @@ import { DiagramView, type DrawingOptions } from "./pane-view";
 import { SITE_COLOURS } from "./pane-legend";
 import { resultsCsv, resultsHtml, resultsTsv } from "./results-table";
 import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
-import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "./header-match";
-import { LIGAND_COLUMN, LigandColumn, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
-import { dicColumnAt, findDicColumn } from "./dic-columns";
+import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "../tables";
+import { LIGAND_COLUMN, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
 import type { HostAdapter, PaneSettings } from "./host";
 import { blobToBase64, download, svgToPngBlob } from "./png-export";
 import { median, readSamples, SampleTable, SkippedRow } from "./sample-table";
@@ -231,9 +230,9 @@ export class DiagramPane {
       const previous = /^(col|dic):/.test(menu.value) ? menu.selectedOptions[0]?.dataset.header : this.settings.water?.[ligand]?.column;
       menu.replaceChildren(new Option("typed total", "typed"));
       // carbonate: a measured DIC column first (used before alkalinity, as the command line does)
-      const dic = ligand === "carbonate" ? findDicColumn(headers, new Set(Object.values(this.mapping).filter((i) => i >= 0))) : null;
+      const dic = ligand === "carbonate" ? this.waterFound.dic : undefined;
       if (dic) {
-        const option = new Option(`from the DIC column “${headers[dic.index]}” (${dic.unit})`, `dic:${dic.index}`);
+        const option = new Option(`from the DIC column “${headers[dic.index]}” (${WATER_UNIT_WORDS[dic.unit]})`, `dic:${dic.index}`);
         option.dataset.header = headers[dic.index];
         menu.add(option);
       }
@@ -278,8 +277,7 @@ export class DiagramPane {
     for (const ligand of LIGAND_ORDER) {
       const source = select(`${ligand}-source`).value;
       if (source.startsWith("dic:") && this.table) {
-        const dic = dicColumnAt(headers, Number(source.slice(4)));
-        const column: LigandColumn = { index: dic.index, unit: "mg/L CaCO3", dicFactor: dic.factor };
+        const column = waterColumnAt("dic", headers, Number(source.slice(4)));
         settings[ligand] = { kind: "column", column };
         columns[ligand] = column;
         continue;

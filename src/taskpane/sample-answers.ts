@@ -6,7 +6,6 @@
  * The pane therefore shows for a row what the sheet and the command line give for it — by construction, not by a
  * second implementation. The diagram behind the markers is drawn separately, at one temperature and one water.
  */
-import { CACO3_GRAMS_PER_EQUIVALENT } from "../chemistry/alkalinity";
 import { getDatabase } from "../chemistry/database";
 import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import type { Regime } from "../chemistry/system";
@@ -15,7 +14,7 @@ import { dicAt } from "../functions/carbonate-functions";
 import { toSHEAt } from "../functions/electrode-functions";
 import { dissolvedAt, regimeAt, speciesAt } from "../functions/stability-functions";
 import { waterMarginAt } from "../functions/water-functions";
-import type { WaterColumn } from "./header-match";
+import { alkalinityFactor, isAlkalinityUnit, molalFactor, type FormulaParts, type WaterColumn } from "../tables";
 
 /** One ligand argument read per row: the column's number × factor is mg/L as CaCO3 (alkalinity) or mol/kg (total). */
 export interface RowLigand {
@@ -143,13 +142,19 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
   });
 }
 
-/** Factor from a water column's unit to the functions' argument (command-line factors, src/cli/water.ts). */
-export function rowLigand(ligand: LigandName, column: WaterColumn & { readonly dicFactor?: number }): RowLigand {
-  const weight = (symbol: string) => getDatabase().element(symbol)?.atomicWeight ?? NaN;
-  const c = column.index;
-  if (ligand === "carbonate" && column.dicFactor !== undefined) return { ligand, column: c, kind: "total", factor: column.dicFactor };
-  if (ligand === "carbonate") return { ligand, column: c, kind: "alkalinity", factor: column.unit === "meq/L" ? CACO3_GRAMS_PER_EQUIVALENT : 1 };
-  if (column.unit === "mmol/L") return { ligand, column: c, kind: "total", factor: 1e-3 };
-  if (ligand === "chloride") return { ligand, column: c, kind: "total", factor: (column.unit === "ug/L" ? 1e-6 : 1e-3) / weight("Cl") };
-  return { ligand, column: c, kind: "total", factor: 1e-3 / (column.unit === "mg/L S" ? weight("S") : weight("S") + 4 * weight("O")) };
+/**
+ * A water column → the argument the functions take, with the command line's factors (src/cli/water.ts inputFor,
+ * src/tables units): alkalinity units go through REDOX.DIC as mg/L CaCO3; DIC, chloride and sulfate are totals.
+ */
+export function rowLigand(ligand: LigandName, column: WaterColumn): RowLigand {
+  if (ligand === "carbonate" && isAlkalinityUnit(column.unit)) return { ligand, column: column.index, kind: "alkalinity", factor: alkalinityFactor(column.unit) };
+  const ownIon: FormulaParts = ligand === "carbonate" ? { C: 1 } : ligand === "chloride" ? { Cl: 1 } : { S: 1, O: 4 };
+  return { ligand, column: column.index, kind: "total", factor: molalFactor(column.unit, ownIon, molarMass) };
+}
+
+/** g/mol of formula parts from the element records. */
+function molarMass(parts: FormulaParts): number {
+  let sum = 0;
+  for (const [symbol, count] of Object.entries(parts)) sum += count * (getDatabase().element(symbol)?.atomicWeight ?? NaN);
+  return sum;
 }

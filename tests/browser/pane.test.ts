@@ -21,7 +21,7 @@ import { MARKER_FILLS } from "../../src/diagram/palette";
 import { regimeAt } from "../../src/functions/stability-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
 import { MARKER_RADIUS } from "../../src/diagram/markers";
-import { parseDelimited } from "../../src/taskpane/delimited-text";
+import { parseDelimited } from "../../src/tables";
 
 const DEMO_TEXT = readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8");
 

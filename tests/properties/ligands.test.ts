@@ -8,7 +8,7 @@ import { expectRegionsTile } from "./tiling";
 import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildLigandSystem } from "../../src/chemistry/ligand-system";
-import { nearestBoundary } from "../../src/chemistry/predominance";
+import { boundariesAtPH, nearestBoundary } from "../../src/chemistry/predominance";
 import { dominantSpecies, speciesPotential } from "../../src/chemistry/system";
 import { CellError } from "../../src/functions/cell-values";
 import { boundary, dissolved, regime, species } from "../../src/functions/functions";
@@ -58,8 +58,11 @@ describe("engine properties with ligands", () => {
         const crossing = nearestBoundary(system, pH, E, direction);
         if (!crossing) return;
         expect(direction > 0 ? crossing.E > E : crossing.E < E).toBe(true);
-        const below = dominantSpecies(system, pH, crossing.E - 1e-3);
-        const above = dominantSpecies(system, pH, crossing.E + 1e-3);
+        // 1 mV either side, or half the width of a narrower band next to it (a CdS sliver at 1e-6 sulfur is 1 mV wide)
+        const others = boundariesAtPH(system, pH).map((b) => Math.abs(b.E - crossing.E)).filter((d) => d > 1e-9);
+        const step = Math.min(1e-3, ...others.map((d) => d / 2));
+        const below = dominantSpecies(system, pH, crossing.E - step);
+        const above = dominantSpecies(system, pH, crossing.E + step);
         expect(below).not.toBe(above);
       }),
       { numRuns: 200 },

@@ -16,10 +16,9 @@ import { dicAt } from "../../src/functions/carbonate-functions";
 import { toSHEAt } from "../../src/functions/electrode-functions";
 import { dissolvedAt, regimeAt, speciesAt } from "../../src/functions/stability-functions";
 import { waterMarginAt } from "../../src/functions/water-functions";
-import { matchHeaders, matchWaterColumns } from "../../src/taskpane/header-match";
+import { matchHeaders, matchWaterColumns } from "../../src/tables";
 import { answerSamples, rowLigand } from "../../src/taskpane/sample-answers";
 import { tableFromText } from "../../src/taskpane/standalone-adapter";
-import { findDicColumn } from "../../src/taskpane/dic-columns";
 
 const DEMO = join(__dirname, "../../data/demo/sample-log.csv");
 const table = tableFromText(readFileSync(DEMO, "utf8"), "demo");
@@ -129,11 +128,11 @@ describe("a log with a measured DIC column", () => {
     const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
     const t = tableFromText(text, "dic");
     const headers = t.headers as string[];
-    const dic = findDicColumn(headers, new Set([1, 2, 3]))!;
-    expect(dic).toMatchObject({ index: 4, factor: 1e-3 });
+    const dic = matchWaterColumns(headers, matchHeaders(headers).mapping).dic!;
+    expect(dic.index).toBe(4);
     for (const metal of ["Cu", "Pb", "Fe"]) {
       const answers = answerSamples(
-        { metal, phColumn: 1, potentialColumn: 2, temperatureColumn: 3, temperatureUnit: "C", celsius: 25, electrode: "SHE", unit: "V", activity: 1e-6, ligands: [rowLigand("carbonate", { index: dic.index, unit: "mg/L CaCO3", dicFactor: dic.factor })], typed: {} },
+        { metal, phColumn: 1, potentialColumn: 2, temperatureColumn: 3, temperatureUnit: "C", celsius: 25, electrode: "SHE", unit: "V", activity: 1e-6, ligands: [rowLigand("carbonate", dic)], typed: {} },
         t.rows,
       );
       answers.forEach((a, r) => {
