@@ -126,6 +126,8 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
   const regime = regimeAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur);
   const dissolved = dissolvedAt(el, pH, potential, temperature, "ug/L", plan.activity, carbonate, chloride, sulfur);
   return rows.map((_, r): SampleAnswer => {
+    // a blank cell in the temperature column is a missing measurement, not 25 °C (as in the command line)
+    if (Array.isArray(temperature) && temperature[r][0] === "") return { error: "temperature is blank: a missing measurement, so the row has no answer" };
     const cells = [eShe[r][0], errors[r] ?? "", margin[r][0], species[r][0], regime[r][0]];
     const failed = cells.find((c): c is CellError => c instanceof CellError);
     if (failed) return { error: failed.message };
