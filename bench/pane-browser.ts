@@ -1,7 +1,8 @@
 /**
- * Task pane drawing in the browser: the built standalone page in headless Chromium (GUIDE §7), 10 k synthetic
- * samples pasted, time from "Draw" to the next painted frame with every marker drawn (SVG circles, or the canvas
- * layer the pane uses for large sets). Prints the figure; never fails on time.
+ * Task pane drawing in the browser: the built standalone page in headless Chromium, 10 k synthetic
+ * samples pasted (pure water, then a temperature and alkalinity per row), time from "Draw" to the next painted
+ * frame with every marker drawn (SVG markers, or the canvas layer the pane uses for large sets). Prints the
+ * figures; never fails on time.
  *
  *   npx webpack --mode production --output-path /tmp/pane-dist   (or npm run build)
  *   REDOX_DIST=/tmp/pane-dist npx tsx bench/pane-browser.ts

@@ -442,6 +442,7 @@ export class DiagramPane {
       sampleFill: sites ? (p: PlottedSample) => sites.get(p.site ?? "") ?? "#888888" : undefined,
     };
     const compare = this.compareOptions(drawing, { electrode, unit, activity, celsius }, resolved.diagram, read, waterInput.settings, scale);
+    $("point-info").textContent = POINT_PROMPT; // the previous drawing's sample may not be on this one
     this.view.show({ options: drawing, caption, compare, legend: { kinetic: showKineticBand, ligandEdges: ligandEdges(system), sites } });
     this.drawn = {
       caption,

@@ -148,6 +148,16 @@ describe("standalone pane with the demo data pasted", () => {
       .toMatch(new RegExp(`row ${row}\\): pH \\d+\\.\\d{2}, reading -?\\d+ mV vs AgCl-sat = -?\\d\\.\\d{3} V vs SHE at [\\d.]+ °C.*; .+, (immunity|passivation|corrosion); water margin`));
   });
 
+  it("clears the info line when the metal changes", async () => {
+    await page.focus("#diagram .rc-samples");
+    await page.keyboard.press("Home");
+    await expect.poll(() => page.textContent("#point-info")).toMatch(/^\S.*\(row \d+\)/);
+    const metal = await page.inputValue("#metal");
+    await page.selectOption("#metal", metal === "Cu" ? "Fe" : "Cu");
+    expect(await page.textContent("#point-info")).toMatch(/^Hover over a sample/);
+    await page.selectOption("#metal", metal);
+  });
+
   it("exports a valid SVG and a PNG of the stated size; saves a screenshot", async () => {
     const svgDownload = page.waitForEvent("download");
     await page.click("#export-svg");
