@@ -1,5 +1,5 @@
 /**
- * Task pane drawing in the browser: the built standalone page in headless Chromium, 10 k synthetic
+ * Task pane drawing in the browser: the built standalone page in headless Chromium (DEVELOPERS.md), 10 k synthetic
  * samples pasted (pure water, then a temperature and alkalinity per row), time from "Draw" to the next painted
  * frame with every marker drawn (SVG markers, or the canvas layer the pane uses for large sets). Prints the
  * figures; never fails on time.
@@ -8,7 +8,7 @@
  *   REDOX_DIST=/tmp/pane-dist npx tsx bench/pane-browser.ts
  */
 import type { Page } from "playwright-core";
-import { openStandalonePane } from "../tests/browser/serve-dist";
+import { openStandalonePane } from "../tests/support/serve-dist";
 import { syntheticLog } from "./pane-render";
 
 async function main(): Promise<void> {

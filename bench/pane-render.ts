@@ -1,5 +1,5 @@
 /**
- * Task pane drawing figure (budget: 10 k samples < 0.5 s, with a water of their own per row too): every sample's
+ * Task pane drawing figure (DEVELOPERS.md budget: 10 k samples < 0.5 s, with a water of their own per row too): every sample's
  * answer through the worksheet functions as the pane computes it (src/taskpane/sample-answers.ts), then the whole
  * SVG as text (src/diagram), in Node. The browser's own parse and
  * paint of that SVG is measured by bench/pane-browser.ts.

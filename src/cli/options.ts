@@ -169,7 +169,7 @@ Result columns
                              is dominant)
   errors                     what was wrong with the row's cells (empty when nothing was)
 A blank input cell gives blank results in that row. An unreadable or out-of-range cell gives the spreadsheet's
-error code (#VALUE!, #NUM!) in the results that depend on it, a message on standard error naming the line and
+error code (#VALUE!; #N/A where an input admits no answer) in the results that depend on it, a message on standard error naming the line and
 column, and its text in the errors column; the row is never dropped.
 
 Exit codes
@@ -279,7 +279,7 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
   if (v["dissolved-unit"] !== undefined) {
     const key = v["dissolved-unit"].trim().toLowerCase().replace(/[µμ]/g, "u");
     const known: Record<string, DissolvedUnit> = { "ug/l": "ug/L", ppb: "ug/L", "mg/l": "mg/L", ppm: "mg/L", "mol/kg": "mol/kg" };
-    if (!(key in known)) throw new UsageError(`--dissolved-unit: expected ug/L, mg/L or mol/kg, got "${v["dissolved-unit"]}"`);
+    if (!Object.prototype.hasOwnProperty.call(known, key)) throw new UsageError(`--dissolved-unit: expected ug/L, mg/L or mol/kg, got "${v["dissolved-unit"]}"`);
     dissolvedUnit = known[key];
   }
 

@@ -1,6 +1,6 @@
 /**
  * Worksheet functions over a metal's stability system: SPECIES, REGIME, BOUNDARY, COUPLE, DISSOLVED and
- * SPECIESTABLE (GUIDE §3). Thin adapters: argument reading and broadcasting come from broadcast.ts, the answers
+ * SPECIESTABLE (README). Thin adapters: argument reading and broadcasting come from broadcast.ts, the answers
  * from src/chemistry.
  */
 import { getDatabase, Species } from "../chemistry/database";
@@ -8,9 +8,10 @@ import { formationGibbsAt } from "../chemistry/formation";
 import { nearestBoundary, dissolvedAtPoint } from "../chemistry/predominance";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
 import { SystemCache } from "../chemistry/system-cache";
+import { ownEntry } from "../chemistry/own-entry";
 import { dominantSpecies, MetalSystem, SystemSpecies } from "../chemistry/system";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellInput, CellOutput, notAvailable, numError, toHostError, valueError } from "./cell-values";
+import { CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { ligandKey, LigandTotals } from "../chemistry/ligand-cells";
 import { buildLigandSystem } from "../chemistry/ligand-system";
@@ -50,7 +51,7 @@ const directionArg = numberArg("direction", { optional: true, defaultValue: 1 })
  * The system for a water with ligand totals (mol/kg, 0 = absent). With none present this is systemFor itself (the
  * ligand-free path); otherwise the ligand cells are built once per condition through the same cache.
  */
-function systemInWater(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number): MetalSystem {
+export function systemInWater(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number): MetalSystem {
   if (carbonate === 0 && chloride === 0 && sulfur === 0) return systemFor(element, celsius, activity);
   const totals: LigandTotals = { carbonate, chloride, sulfur };
   cache ??= new SystemCache(getDatabase());
@@ -113,7 +114,7 @@ export function boundaryFrom(
     [elementArg, pHArg, potentialArg(), directionArg, temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
     [element, pH, potential, direction, temperature, activity, carbonate, chloride, sulfur],
     (el, p, e, d, t, a, co3, cl, s) => {
-      if (d !== 1 && d !== -1) return numError("direction: expected 1 (above) or -1 (below)");
+      if (d !== 1 && d !== -1) return valueError(`direction: expected 1 (above) or -1 (below), got ${d}`);
       const crossing = nearestBoundary(systemInWater(el, t, a, co3, cl, s), p, e, d);
       return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
     },
@@ -145,19 +146,19 @@ function couple(ox: Species, red: Species, pH: number, celsius: number, activity
 }
 
 /** Units for dissolved totals: factor from mol/kg given the metal's atomic weight (g/mol). */
-const DISSOLVED_UNITS: Record<string, (atomicWeight: number) => number> = {
+export const DISSOLVED_UNITS: Record<string, (atomicWeight: number) => number> = {
   "mol/kg": () => 1,
   "mg/l": (w) => w * 1e3,
   "ug/l": (w) => w * 1e6,
 };
 const UNIT_ALIASES: Record<string, string> = { "µg/l": "ug/l", "μg/l": "ug/l", ppb: "ug/l", ppm: "mg/l", molal: "mol/kg", "mol/l": "mol/kg" };
 
-const unitArg = textArg(
+export const unitArg = textArg(
   "unit",
   (text) => {
     const key = text.toLowerCase().replace(/\s+/g, "");
-    const unit = UNIT_ALIASES[key] ?? key;
-    return unit in DISSOLVED_UNITS ? unit : valueError(`unit: "${text}" is not one of mol/kg, mg/L, ug/L`);
+    const unit = ownEntry(UNIT_ALIASES, key) ?? key;
+    return ownEntry(DISSOLVED_UNITS, unit) ? unit : valueError(`unit: "${text}" is not one of mol/kg, mg/L, ug/L`);
   },
   { optional: true, defaultValue: "mol/kg" },
 );

@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { readFileSync } from "fs";
 import { join } from "path";
 import type { Page } from "playwright-core";
-import { OpenPane, openStandalonePane, ROOT } from "./serve-dist";
+import { OpenPane, openStandalonePane, ROOT } from "../support/serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildLigandSystem } from "../../src/chemistry/ligand-system";
 import { toSHE } from "../../src/chemistry/electrodes";

@@ -1,5 +1,5 @@
 /**
- * Properties of the engine with ligands (GUIDE §4): diagram polygons still tile the rectangle; the dominant species
+ * Engine properties with ligands (DEVELOPERS.md): diagram polygons still tile the rectangle; the dominant species
  * is still the argmin of the planes; a boundary reported changes the species 1 mV either side; hostile ligand
  * input gives error values, never a throw, NaN or Infinity.
  */
