@@ -11,7 +11,10 @@ import { openStandalonePane } from "../tests/support/serve-dist";
 import { measureLayout, tabStops } from "../tests/support/layout-probe";
 
 async function main(): Promise<void> {
-  const widths = process.argv.slice(2).map(Number).filter((w) => w > 0);
+  const widths = process.argv
+    .slice(2)
+    .map(Number)
+    .filter((w) => w > 0);
   const pane = await openStandalonePane();
   try {
     const { page } = pane;

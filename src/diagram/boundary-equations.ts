@@ -18,8 +18,13 @@ export interface BoundaryEquation {
 }
 
 /** Whether two convex polygons share an edge (two vertices of one within `tolerance` of the other's boundary). */
-function shareEdge(a: readonly (readonly [number, number])[], b: readonly (readonly [number, number])[], tolerance: number): boolean {
-  const near = (p: readonly [number, number], poly: readonly (readonly [number, number])[]) => polygonsTouch([p], poly, tolerance);
+function shareEdge(
+  a: readonly (readonly [number, number])[],
+  b: readonly (readonly [number, number])[],
+  tolerance: number,
+): boolean {
+  const near = (p: readonly [number, number], poly: readonly (readonly [number, number])[]) =>
+    polygonsTouch([p], poly, tolerance);
   const count = a.filter((p) => near(p, b)).length + b.filter((p) => near(p, a)).length;
   return count >= 2 && polygonsTouch(a, b, tolerance);
 }

@@ -6,12 +6,32 @@ import type { MetalSystem } from "../chemistry/system";
 import { formulaSegments } from "./formula-markup";
 
 const SUB = "₀₁₂₃₄₅₆₇₈₉";
-const SUP: Record<string, string> = { "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹", "+": "⁺", "-": "⁻", "\u2212": "⁻" };
+const SUP: Record<string, string> = {
+  "0": "⁰",
+  "1": "¹",
+  "2": "²",
+  "3": "³",
+  "4": "⁴",
+  "5": "⁵",
+  "6": "⁶",
+  "7": "⁷",
+  "8": "⁸",
+  "9": "⁹",
+  "+": "⁺",
+  "-": "⁻",
+  "\u2212": "⁻",
+};
 
 /** A formula in plain Unicode text: HCO₃⁻, CO₃²⁻ (for HTML legends, where SVG tspans are not available). */
 export function formulaUnicode(formula: string, charge: number): string {
   return formulaSegments(formula, charge)
-    .map((s) => (s.kind === "sub" ? s.text.replace(/[0-9]/g, (d) => SUB[Number(d)]) : s.kind === "sup" ? [...s.text].map((c) => SUP[c] ?? c).join("") : s.text))
+    .map((s) =>
+      s.kind === "sub"
+        ? s.text.replace(/[0-9]/g, (d) => SUB[Number(d)])
+        : s.kind === "sup"
+          ? [...s.text].map((c) => SUP[c] ?? c).join("")
+          : s.text,
+    )
     .join("");
 }
 

@@ -13,7 +13,11 @@ export const MARKER_RADIUS = 4.5;
 
 export type MarkerShape = "square" | "circle" | "triangle";
 
-export const MARKER_SHAPES: Readonly<Record<Regime, MarkerShape>> = { immunity: "square", passivation: "circle", corrosion: "triangle" };
+export const MARKER_SHAPES: Readonly<Record<Regime, MarkerShape>> = {
+  immunity: "square",
+  passivation: "circle",
+  corrosion: "triangle",
+};
 
 /** The few drawing calls a marker needs: an SVG path builder and a canvas 2-D context both provide them. */
 export interface PathSink {
@@ -55,7 +59,10 @@ export function markerPath(regime: Regime, x: number, y: number, r = MARKER_RADI
       moveTo: (a, b) => parts.push(`M${f(a)} ${f(b)}`),
       lineTo: (a, b) => parts.push(`L${f(a)} ${f(b)}`),
       // a full circle as two half arcs
-      arc: (cx, cy, radius) => parts.push(`A${f(radius)} ${f(radius)} 0 1 0 ${f(cx - radius)} ${f(cy)}A${f(radius)} ${f(radius)} 0 1 0 ${f(cx + radius)} ${f(cy)}`),
+      arc: (cx, cy, radius) =>
+        parts.push(
+          `A${f(radius)} ${f(radius)} 0 1 0 ${f(cx - radius)} ${f(cy)}A${f(radius)} ${f(radius)} 0 1 0 ${f(cx + radius)} ${f(cy)}`,
+        ),
       closePath: () => parts.push("Z"),
     },
     regime,

@@ -24,7 +24,14 @@ export interface Box {
 
 export type LabelPlan =
   | { readonly kind: "formula"; readonly piece: number; readonly x: number; readonly y: number; readonly size: number }
-  | { readonly kind: "number"; readonly piece: number; readonly x: number; readonly y: number; readonly size: number; readonly number: number }
+  | {
+      readonly kind: "number";
+      readonly piece: number;
+      readonly x: number;
+      readonly y: number;
+      readonly size: number;
+      readonly number: number;
+    }
   | { readonly kind: "key-only"; readonly piece: number; readonly number: number };
 
 export const LABEL_SIZES = [13, 11, 9] as const;
@@ -61,7 +68,12 @@ function candidates(polygon: readonly Pixel[], w: number, h: number): Pixel[] {
 }
 
 /** The first candidate centre whose box clears every placed box. */
-function freeSpot(polygon: readonly Pixel[], width: number, size: number, placed: readonly Box[]): { x: number; y: number; box: Box } | null {
+function freeSpot(
+  polygon: readonly Pixel[],
+  width: number,
+  size: number,
+  placed: readonly Box[],
+): { x: number; y: number; box: Box } | null {
   const probe = labelBox(0, 0, width, size);
   for (const [x, y] of candidates(polygon, probe.width, probe.height)) {
     const box = labelBox(x, y, width, size);
@@ -75,9 +87,12 @@ export function planLabels(requests: readonly LabelRequest[]): LabelPlan[] {
   const groups = touchingGroups(requests.map((r) => ({ key: r.key, pixels: r.pixels })));
   const members = new Map<number, number[]>();
   groups.forEach((g, i) => members.set(g, [...(members.get(g) ?? []), i]));
-  const roomOf = (i: number) => placeLabel(requests[i].pixels, requests[i].width(LABEL_SIZES[2]) + 4, LABEL_SIZES[2] * 1.25 + 2).room;
+  const roomOf = (i: number) =>
+    placeLabel(requests[i].pixels, requests[i].width(LABEL_SIZES[2]) + 4, LABEL_SIZES[2] * 1.25 + 2).room;
   // each group's pieces, most room first; groups with the most room are labelled first
-  const ordered = [...members.values()].map((pieces) => pieces.map((i) => ({ i, room: roomOf(i) })).sort((a, b) => b.room - a.room));
+  const ordered = [...members.values()].map((pieces) =>
+    pieces.map((i) => ({ i, room: roomOf(i) })).sort((a, b) => b.room - a.room),
+  );
   ordered.sort((a, b) => b[0].room - a[0].room);
   const placed: Box[] = [];
   const plans: LabelPlan[] = [];

@@ -16,7 +16,10 @@ function roundOut(low: number, high: number, step: number): [number, number] {
 }
 
 /** The window around the points (pH, E shown) with 15 % margins and minimum spans, rounded outwards; null without points. */
-export function fitWindow(points: readonly { readonly pH: number; readonly E: number }[], unit: "V" | "mV"): AxisWindow | null {
+export function fitWindow(
+  points: readonly { readonly pH: number; readonly E: number }[],
+  unit: "V" | "mV",
+): AxisWindow | null {
   if (points.length === 0) return null;
   let [p0, p1, e0, e1] = [Infinity, -Infinity, Infinity, -Infinity];
   for (const p of points) {
@@ -33,7 +36,12 @@ export function fitWindow(points: readonly { readonly pH: number; readonly E: nu
   };
   const [pHMin, pHMax] = roundOut(...widen(p0, p1, MIN_PH_SPAN), 0.5);
   const [eMin, eMax] = roundOut(...widen(e0, e1, MIN_E_SPAN_V * factor), 0.05 * factor);
-  return { pHMin: Math.max(-2, pHMin), pHMax: Math.min(16, pHMax), eMin: Number(eMin.toPrecision(6)), eMax: Number(eMax.toPrecision(6)) };
+  return {
+    pHMin: Math.max(-2, pHMin),
+    pHMax: Math.min(16, pHMax),
+    eMin: Number(eMin.toPrecision(6)),
+    eMax: Number(eMax.toPrecision(6)),
+  };
 }
 
 /** Whether the fitted window is a small part of the full one. */
@@ -49,5 +57,10 @@ export function zoomWindow(w: AxisWindow, factor: number): AxisWindow {
   const hp = ((w.pHMax - w.pHMin) / 2) * factor;
   const he = ((w.eMax - w.eMin) / 2) * factor;
   const round = (v: number) => Number(v.toPrecision(6));
-  return { pHMin: round(Math.max(-2, cp - hp)), pHMax: round(Math.min(16, cp + hp)), eMin: round(ce - he), eMax: round(ce + he) };
+  return {
+    pHMin: round(Math.max(-2, cp - hp)),
+    pHMax: round(Math.min(16, cp + hp)),
+    eMin: round(ce - he),
+    eMax: round(ce + he),
+  };
 }

@@ -7,6 +7,8 @@ export const LIGAND_WORDS: Readonly<Record<LigandName, string>> = { carbonate: "
 
 /** "DIC 1.35, Cl 2 mmol/kg" — totals in mmol/kg with three significant figures; "" without ligands. */
 export function formatTotals(totals: LigandTotals): string {
-  const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map((l) => `${LIGAND_WORDS[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`);
+  const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map(
+    (l) => `${LIGAND_WORDS[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`,
+  );
   return parts.length === 0 ? "" : `${parts.join(", ")} mmol/kg`;
 }

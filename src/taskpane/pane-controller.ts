@@ -9,7 +9,7 @@ import { hasLigands, ligandKey, LIGAND_ORDER, LigandName, LigandTotals } from ".
 import { buildLigandSystem, MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
 import type { MetalSystem } from "../chemistry/system";
 import type { AxisWindow } from "../diagram/axes";
-import { defaultWindow, displayScale, plotSamples, PotentialUnit, shownRegions, shownWaterLines } from "../diagram/diagram-model";
+import { defaultWindow, displayScale, PotentialUnit, shownRegions, shownWaterLines } from "../diagram/diagram-model";
 import { escapeXml, formatActivity, renderDiagramSvg, sampleText } from "../diagram/diagram-svg";
 import { boundaryEquations, equationText } from "../diagram/boundary-equations";
 import { ligandEdges } from "../diagram/ligand-edges";
@@ -395,7 +395,6 @@ export class DiagramPane {
     this.showTemperatureSpread(temperatures, celsius);
 
     // the water: typed ligand totals, or each row's from a column with the median for the diagram
-    const inputs = read?.samples ?? [];
     const resolved = resolveWater(waterInput.settings, read?.rowTotals ?? []);
     const ligands = hasLigands(resolved.diagram) || resolved.fromColumns.length > 0;
     let system: MetalSystem;

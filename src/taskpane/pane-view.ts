@@ -109,7 +109,10 @@ export class DiagramView {
 
   private showKey(key: readonly KeyEntry[]): void {
     byId("region-key").innerHTML = key
-      .map((k) => `<li value="${k.number}" data-formula="${escapeXml(k.formula)}">${escapeXml(k.formula)}${k.marked ? "" : " (too small to mark at this zoom)"}</li>`)
+      .map(
+        (k) =>
+          `<li value="${k.number}" data-formula="${escapeXml(k.formula)}">${escapeXml(k.formula)}${k.marked ? "" : " (too small to mark at this zoom)"}</li>`,
+      )
       .join("");
   }
 
@@ -123,7 +126,14 @@ export class DiagramView {
   private key(event: KeyboardEvent): void {
     const layer = event.target instanceof Element ? event.target.closest(".rc-samples") : null;
     if (!layer || this.order.length === 0) return;
-    const moves: Record<string, number> = { ArrowRight: 1, ArrowDown: 1, ArrowLeft: -1, ArrowUp: -1, PageDown: 20, PageUp: -20 };
+    const moves: Record<string, number> = {
+      ArrowRight: 1,
+      ArrowDown: 1,
+      ArrowLeft: -1,
+      ArrowUp: -1,
+      PageDown: 20,
+      PageUp: -20,
+    };
     let next = this.current;
     if (event.key in moves) next = this.current < 0 ? 0 : this.current + moves[event.key];
     else if (event.key === "Home") next = 0;

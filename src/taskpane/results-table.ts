@@ -5,9 +5,20 @@
 import type { PlottedSample } from "../diagram/diagram-model";
 import { escapeXml } from "../diagram/diagram-svg";
 
-export const RESULT_HEADERS = ["row", "sample", "reading as logged", "T °C", "E vs SHE (V)", "species", "regime", "water margin (V)", "dissolved metal (µg/L)"] as const;
+export const RESULT_HEADERS = [
+  "row",
+  "sample",
+  "reading as logged",
+  "T °C",
+  "E vs SHE (V)",
+  "species",
+  "regime",
+  "water margin (V)",
+  "dissolved metal (µg/L)",
+] as const;
 
-const number = (v: number | null | undefined, digits: number) => (v === null || v === undefined || !Number.isFinite(v) ? "" : Number(v.toPrecision(digits)).toString());
+const number = (v: number | null | undefined, digits: number) =>
+  v === null || v === undefined || !Number.isFinite(v) ? "" : Number(v.toPrecision(digits)).toString();
 
 export function resultCells(s: PlottedSample): string[] {
   return [
@@ -26,11 +37,22 @@ export function resultCells(s: PlottedSample): string[] {
 const csvField = (text: string) => (/[",\n\r]|^\s|\s$/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
 
 export function resultsCsv(samples: readonly PlottedSample[]): string {
-  return [RESULT_HEADERS.join(","), ...samples.map((s) => resultCells(s).map(csvField).join(","))].join("\r\n") + "\r\n";
+  return (
+    [RESULT_HEADERS.join(","), ...samples.map((s) => resultCells(s).map(csvField).join(","))].join("\r\n") + "\r\n"
+  );
 }
 
 export function resultsTsv(samples: readonly PlottedSample[]): string {
-  return [RESULT_HEADERS.join("\t"), ...samples.map((s) => resultCells(s).map((c) => c.replace(/[\t\r\n]+/g, " ")).join("\t"))].join("\n") + "\n";
+  return (
+    [
+      RESULT_HEADERS.join("\t"),
+      ...samples.map((s) =>
+        resultCells(s)
+          .map((c) => c.replace(/[\t\r\n]+/g, " "))
+          .join("\t"),
+      ),
+    ].join("\n") + "\n"
+  );
 }
 
 /** Table rows; at most `limit` rows are written (the CSV holds them all). */
@@ -39,8 +61,16 @@ export function resultsHtml(samples: readonly PlottedSample[], limit = 500): str
   const head = `<thead><tr>${RESULT_HEADERS.map((h) => `<th scope="col">${escapeXml(h)}</th>`).join("")}</tr></thead>`;
   const rows = samples
     .slice(0, limit)
-    .map((s) => `<tr>${resultCells(s).map((c, i) => `<td${numeric.has(i) ? ' class="num"' : ""}>${escapeXml(c)}</td>`).join("")}</tr>`)
+    .map(
+      (s) =>
+        `<tr>${resultCells(s)
+          .map((c, i) => `<td${numeric.has(i) ? ' class="num"' : ""}>${escapeXml(c)}</td>`)
+          .join("")}</tr>`,
+    )
     .join("");
-  const more = samples.length > limit ? `<tfoot><tr><td colspan="${RESULT_HEADERS.length}">${samples.length - limit} more rows in the CSV.</td></tr></tfoot>` : "";
+  const more =
+    samples.length > limit
+      ? `<tfoot><tr><td colspan="${RESULT_HEADERS.length}">${samples.length - limit} more rows in the CSV.</td></tr></tfoot>`
+      : "";
   return head + `<tbody>${rows}</tbody>` + more;
 }

@@ -69,7 +69,11 @@ function cellValue(cell: unknown, factor = 1): CellScalar {
   return isBlank(text) ? "" : text;
 }
 
-function column(rows: readonly (readonly unknown[])[], index: number, read: (cell: unknown) => CellScalar): CellScalar[][] {
+function column(
+  rows: readonly (readonly unknown[])[],
+  index: number,
+  read: (cell: unknown) => CellScalar,
+): CellScalar[][] {
   return rows.map((r) => [read(r[index])]);
 }
 
@@ -92,10 +96,16 @@ function temperatureValue(unit: "C" | "F") {
 }
 
 /** The ligand columns for the functions: each ligand's argument column and the first error per row. */
-function ligandColumns(plan: AnswerPlan, rows: readonly (readonly unknown[])[], pH: CellScalar[][], temperature: CellScalar | CellScalar[][]) {
+function ligandColumns(
+  plan: AnswerPlan,
+  rows: readonly (readonly unknown[])[],
+  pH: CellScalar[][],
+  temperature: CellScalar | CellScalar[][],
+) {
   const args: Partial<Record<LigandName, CellScalar | CellScalar[][]>> = {};
   const errors: (CellError | null)[] = rows.map(() => null);
-  for (const [ligand, total] of Object.entries(plan.typed) as [LigandName, number][]) if (total > 0) args[ligand] = total;
+  for (const [ligand, total] of Object.entries(plan.typed) as [LigandName, number][])
+    if (total > 0) args[ligand] = total;
   for (const l of plan.ligands) {
     const values = column(rows, l.column, (c) => cellValue(c, l.factor));
     if (l.kind === "alkalinity") {
@@ -107,14 +117,18 @@ function ligandColumns(plan: AnswerPlan, rows: readonly (readonly unknown[])[], 
   return { args, errors };
 }
 
-const at = (input: CellScalar | CellScalar[][] | undefined, r: number): CellScalar => (Array.isArray(input) ? input[r][0] : input);
+const at = (input: CellScalar | CellScalar[][] | undefined, r: number): CellScalar =>
+  Array.isArray(input) ? input[r][0] : input;
 
 /** The answers of `rows` (cells as the host gives them), one per row, in order. */
 export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown[])[]): SampleAnswer[] {
   if (rows.length === 0) return [];
   const pH = column(rows, plan.phColumn, (c) => cellValue(c));
   const reading = column(rows, plan.potentialColumn, readingValue(plan.unit));
-  const temperature = plan.temperatureColumn >= 0 ? column(rows, plan.temperatureColumn, temperatureValue(plan.temperatureUnit)) : plan.celsius;
+  const temperature =
+    plan.temperatureColumn >= 0
+      ? column(rows, plan.temperatureColumn, temperatureValue(plan.temperatureUnit))
+      : plan.celsius;
   const isRhe = plan.electrode.trim().toUpperCase() === "RHE";
   const eShe = toSHEAt(reading, plan.electrode, temperature, isRhe ? pH : undefined);
   const potential = eShe.map(([e]) => [passOn(e)]);
@@ -127,12 +141,14 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
   const dissolved = dissolvedAt(el, pH, potential, temperature, "ug/L", plan.activity, carbonate, chloride, sulfur);
   return rows.map((_, r): SampleAnswer => {
     // a blank cell in the temperature column is a missing measurement, not 25 °C (as in the command line)
-    if (Array.isArray(temperature) && temperature[r][0] === "") return { error: "temperature is blank: a missing measurement, so the row has no answer" };
+    if (Array.isArray(temperature) && temperature[r][0] === "")
+      return { error: "temperature is blank: a missing measurement, so the row has no answer" };
     const cells = [eShe[r][0], errors[r] ?? "", margin[r][0], species[r][0], regime[r][0]];
     const failed = cells.find((c): c is CellError => c instanceof CellError);
     if (failed) return { error: failed.message };
     const [e, , m, s, g] = cells;
-    if (typeof e !== "number" || typeof m !== "number" || typeof s !== "string" || s === "" || typeof g !== "string") return { error: "a required cell is blank" };
+    if (typeof e !== "number" || typeof m !== "number" || typeof s !== "string" || s === "" || typeof g !== "string")
+      return { error: "a required cell is blank" };
     const d = dissolved[r][0];
     const water: LigandTotals = {};
     for (const ligand of ["carbonate", "chloride", "sulfur"] as const) {
@@ -140,7 +156,15 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
       if (typeof v === "number" && v > 0) water[ligand] = v;
     }
     const t = at(temperature, r);
-    return { eSHE: e, margin: m, species: s, regime: g as Regime, dissolved: typeof d === "number" ? d : null, celsius: typeof t === "number" ? t : plan.celsius, water };
+    return {
+      eSHE: e,
+      margin: m,
+      species: s,
+      regime: g as Regime,
+      dissolved: typeof d === "number" ? d : null,
+      celsius: typeof t === "number" ? t : plan.celsius,
+      water,
+    };
   });
 }
 
@@ -149,7 +173,8 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
  * src/tables units): alkalinity units go through REDOX.DIC as mg/L CaCO3; DIC, chloride and sulfate are totals.
  */
 export function rowLigand(ligand: LigandName, column: WaterColumn): RowLigand {
-  if (ligand === "carbonate" && isAlkalinityUnit(column.unit)) return { ligand, column: column.index, kind: "alkalinity", factor: alkalinityFactor(column.unit) };
+  if (ligand === "carbonate" && isAlkalinityUnit(column.unit))
+    return { ligand, column: column.index, kind: "alkalinity", factor: alkalinityFactor(column.unit) };
   const ownIon: FormulaParts = ligand === "carbonate" ? { C: 1 } : ligand === "chloride" ? { Cl: 1 } : { S: 1, O: 4 };
   return { ligand, column: column.index, kind: "total", factor: molalFactor(column.unit, ownIon, molarMass) };
 }
@@ -157,6 +182,7 @@ export function rowLigand(ligand: LigandName, column: WaterColumn): RowLigand {
 /** g/mol of formula parts from the element records. */
 function molarMass(parts: FormulaParts): number {
   let sum = 0;
-  for (const [symbol, count] of Object.entries(parts)) sum += count * (getDatabase().element(symbol)?.atomicWeight ?? NaN);
+  for (const [symbol, count] of Object.entries(parts))
+    sum += count * (getDatabase().element(symbol)?.atomicWeight ?? NaN);
   return sum;
 }

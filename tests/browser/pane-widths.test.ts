@@ -71,7 +71,8 @@ describe.each([320, 350, 400, 800])("the pane %i px wide with the demo data", (w
       for (const view of ["#fit-samples", "#full-range"]) {
         await page.click(view);
         const m = await measureLayout(page);
-        if (m.overlaps > 0 || m.outside > 0) problems.push(`${metal} ${view}: ${m.overlaps} overlapping pairs, ${m.outside} across the frame`);
+        if (m.overlaps > 0 || m.outside > 0)
+          problems.push(`${metal} ${view}: ${m.overlaps} overlapping pairs, ${m.outside} across the frame`);
       }
     }
     expect(problems).toEqual([]);
@@ -88,7 +89,9 @@ describe("resizing the pane", () => {
     await openAt(350);
     const narrow = await measureLayout(page);
     await page.setViewportSize({ width: 600, height: 900 });
-    await expect.poll(async () => (await measureLayout(page)).svgWidth, { timeout: 5000 }).toBeGreaterThan(narrow.svgWidth + 200);
+    await expect
+      .poll(async () => (await measureLayout(page)).svgWidth, { timeout: 5000 })
+      .toBeGreaterThan(narrow.svgWidth + 200);
     const wide = await measureLayout(page);
     expect(wide.pageWidth).toBeLessThanOrEqual(600);
     expect(wide.plotHeight).toBeGreaterThan(narrow.plotHeight);

@@ -14,24 +14,34 @@ import { fitWindow, isClustered, zoomWindow } from "../../src/diagram/view-windo
 describe("label plan", () => {
   it("random tilings of a strip: placed labels never overlap and each fits inside its own piece", () => {
     fc.assert(
-      fc.property(fc.array(fc.double({ min: 4, max: 120, noNaN: true }), { minLength: 2, maxLength: 12 }), fc.array(fc.integer({ min: 10, max: 90 }), { minLength: 12, maxLength: 12 }), (widths, textWidths) => {
-        let x = 0;
-        const pieces = widths.map((w, i) => {
-          const pixels: Pixel[] = [[x, 0], [x + w, 0], [x + w, 60], [x, 60]];
-          x += w;
-          return { key: `S${i}`, pixels, width: (size: number) => (textWidths[i] * size) / 13 };
-        });
-        const plans = planLabels(pieces);
-        expect(plans.length).toBe(pieces.length); // every piece is labelled, numbered or keyed
-        const boxes = plans.flatMap((p) => {
-          if (p.kind === "key-only") return [];
-          const width = p.kind === "formula" ? pieces[p.piece].width(p.size) : String(p.number).length * p.size * 0.6;
-          const box = labelBox(p.x, p.y, width, p.size);
-          expect(roomAt(pieces[p.piece].pixels, box.width, box.height, p.x, p.y)).toBeGreaterThanOrEqual(-1e-6);
-          return [box];
-        });
-        for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(boxesOverlap(boxes[i], boxes[j])).toBe(false);
-      }),
+      fc.property(
+        fc.array(fc.double({ min: 4, max: 120, noNaN: true }), { minLength: 2, maxLength: 12 }),
+        fc.array(fc.integer({ min: 10, max: 90 }), { minLength: 12, maxLength: 12 }),
+        (widths, textWidths) => {
+          let x = 0;
+          const pieces = widths.map((w, i) => {
+            const pixels: Pixel[] = [
+              [x, 0],
+              [x + w, 0],
+              [x + w, 60],
+              [x, 60],
+            ];
+            x += w;
+            return { key: `S${i}`, pixels, width: (size: number) => (textWidths[i] * size) / 13 };
+          });
+          const plans = planLabels(pieces);
+          expect(plans.length).toBe(pieces.length); // every piece is labelled, numbered or keyed
+          const boxes = plans.flatMap((p) => {
+            if (p.kind === "key-only") return [];
+            const width = p.kind === "formula" ? pieces[p.piece].width(p.size) : String(p.number).length * p.size * 0.6;
+            const box = labelBox(p.x, p.y, width, p.size);
+            expect(roomAt(pieces[p.piece].pixels, box.width, box.height, p.x, p.y)).toBeGreaterThanOrEqual(-1e-6);
+            return [box];
+          });
+          for (let i = 0; i < boxes.length; i++)
+            for (let j = i + 1; j < boxes.length; j++) expect(boxesOverlap(boxes[i], boxes[j])).toBe(false);
+        },
+      ),
       { numRuns: 200 },
     );
   });
@@ -69,12 +79,29 @@ describe("boundary equations of the pure-water diagram", () => {
 describe("views", () => {
   it("fits clustered samples with margins and minimum spans, and zooms about the centre", () => {
     const full = { pHMin: -2, pHMax: 16, eMin: -2, eMax: 2 };
-    const fitted = fitWindow([{ pH: 7.0, E: 0.3 }, { pH: 7.6, E: 0.5 }], "V")!;
+    const fitted = fitWindow(
+      [
+        { pH: 7.0, E: 0.3 },
+        { pH: 7.6, E: 0.5 },
+      ],
+      "V",
+    )!;
     expect(fitted.pHMin).toBeLessThanOrEqual(6.3);
     expect(fitted.pHMax).toBeGreaterThanOrEqual(8.3);
     expect(fitted.eMax - fitted.eMin).toBeGreaterThanOrEqual(0.4);
     expect(isClustered(fitted, full)).toBe(true);
-    expect(isClustered(fitWindow([{ pH: -1, E: -1.8 }, { pH: 15, E: 1.8 }], "V")!, full)).toBe(false);
+    expect(
+      isClustered(
+        fitWindow(
+          [
+            { pH: -1, E: -1.8 },
+            { pH: 15, E: 1.8 },
+          ],
+          "V",
+        )!,
+        full,
+      ),
+    ).toBe(false);
     const z = zoomWindow(full, 0.5);
     expect([z.pHMin, z.pHMax, z.eMin, z.eMax]).toEqual([2.5, 11.5, -1, 1]);
   });

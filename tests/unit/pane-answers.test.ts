@@ -30,14 +30,18 @@ beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), "redox-answers-"));
   const output = join(dir, "results.csv");
   const streams = { stdout: new PassThrough(), stderr: new PassThrough() };
-  const result = await runCommand([DEMO, "--metal", metals.join(","), "--output", output, "--no-svg", "--dissolved-unit", "ug/L"], streams);
+  const result = await runCommand(
+    [DEMO, "--metal", metals.join(","), "--output", output, "--no-svg", "--dissolved-unit", "ug/L"],
+    streams,
+  );
   expect([0, 1]).toContain(result.code); // 1: some demo rows hold deliberately bad cells
   cli = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
 }, 120_000);
 
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-const cellOf = (v: unknown) => (typeof v === "number" ? v : typeof v === "string" && v.trim() !== "" && Number.isFinite(Number(v)) ? Number(v) : v);
+const cellOf = (v: unknown) =>
+  typeof v === "number" ? v : typeof v === "string" && v.trim() !== "" && Number.isFinite(Number(v)) ? Number(v) : v;
 const REGIMES = ["immunity", "passivation", "corrosion"];
 const close = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(b));
 /** The command line writes potentials to 0.1 mV and other numbers to four significant figures. */
@@ -95,12 +99,16 @@ describe("pane, command line and worksheet functions on every demo row", () => {
         if (cellOf(row[m.temperature]) === "") {
           // a blank temperature in a column is a missing measurement: no answer in the pane or the command line
           // (a worksheet cell given alone would be an omitted argument instead, so the sheet is not asked)
-          if (!("error" in pane) || REGIMES.includes(line[`${metal}_regime`])) differences.push(`row ${table.rowNumbers[r]}: blank temperature answered`);
+          if (!("error" in pane) || REGIMES.includes(line[`${metal}_regime`]))
+            differences.push(`row ${table.rowNumbers[r]}: blank temperature answered`);
           return;
         }
         if ("error" in pane) {
           // a row the pane does not draw has no answer in the sheet or the command line either
-          if (REGIMES.includes(line[`${metal}_regime`]) || REGIMES.includes(String(sheet.regime))) differences.push(`row ${table.rowNumbers[r]}: pane error ${pane.error}, command line ${line[`${metal}_regime`]}`);
+          if (REGIMES.includes(line[`${metal}_regime`]) || REGIMES.includes(String(sheet.regime)))
+            differences.push(
+              `row ${table.rowNumbers[r]}: pane error ${pane.error}, command line ${line[`${metal}_regime`]}`,
+            );
           return;
         }
         const same =
@@ -115,8 +123,12 @@ describe("pane, command line and worksheet functions on every demo row", () => {
           asWritten(pane.margin, Number(line.water_margin_V)) &&
           (pane.dissolved === null
             ? typeof sheet.dissolved !== "number" && Number.isNaN(Number(line[`${metal}_dissolved_ug_L`]))
-            : close(pane.dissolved, sheet.dissolved as number) && asWritten(pane.dissolved, Number(line[`${metal}_dissolved_ug_L`])));
-        if (!same) differences.push(`row ${table.rowNumbers[r]}: pane ${pane.species}/${pane.regime}, sheet ${String(sheet.species)}/${String(sheet.regime)}, command line ${line[`${metal}_species`]}/${line[`${metal}_regime`]}`);
+            : close(pane.dissolved, sheet.dissolved as number) &&
+              asWritten(pane.dissolved, Number(line[`${metal}_dissolved_ug_L`])));
+        if (!same)
+          differences.push(
+            `row ${table.rowNumbers[r]}: pane ${pane.species}/${pane.regime}, sheet ${String(sheet.species)}/${String(sheet.regime)}, command line ${line[`${metal}_species`]}/${line[`${metal}_regime`]}`,
+          );
         compared++;
       });
       expect(differences).toEqual([]);
@@ -127,24 +139,51 @@ describe("pane, command line and worksheet functions on every demo row", () => {
 
 describe("a log with a measured DIC column", () => {
   it("pane and command line read the DIC column alike (mmol/L) and give the same answers", async () => {
-    const text = ["site,pH,Eh (V),Temp C,DIC (mmol/L)", "A,6.8,0.35,12,1.9", "B,7.9,0.42,18,3.2", "C,8.6,-0.1,9,0.6", "D,7.2,0.05,15,", "E,6.2,0.55,22,4.4"].join("\n");
+    const text = [
+      "site,pH,Eh (V),Temp C,DIC (mmol/L)",
+      "A,6.8,0.35,12,1.9",
+      "B,7.9,0.42,18,3.2",
+      "C,8.6,-0.1,9,0.6",
+      "D,7.2,0.05,15,",
+      "E,6.2,0.55,22,4.4",
+    ].join("\n");
     const file = join(dir, "dic.csv");
     const output = join(dir, "dic-results.csv");
     writeFileSync(file, text);
-    const result = await runCommand([file, "--metal", "Cu,Pb,Fe", "--output", output, "--no-svg"], { stdout: new PassThrough(), stderr: new PassThrough() });
+    const result = await runCommand([file, "--metal", "Cu,Pb,Fe", "--output", output, "--no-svg"], {
+      stdout: new PassThrough(),
+      stderr: new PassThrough(),
+    });
     expect(result.code).toBe(0);
-    const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
+    const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<
+      string,
+      string
+    >[];
     const t = tableFromText(text, "dic");
     const headers = t.headers as string[];
     const dic = matchWaterColumns(headers, matchHeaders(headers).mapping).dic!;
     expect(dic.index).toBe(4);
     for (const metal of ["Cu", "Pb", "Fe"]) {
       const answers = answerSamples(
-        { metal, phColumn: 1, potentialColumn: 2, temperatureColumn: 3, temperatureUnit: "C", celsius: 25, electrode: "SHE", unit: "V", activity: 1e-6, ligands: [rowLigand("carbonate", dic)], typed: {} },
+        {
+          metal,
+          phColumn: 1,
+          potentialColumn: 2,
+          temperatureColumn: 3,
+          temperatureUnit: "C",
+          celsius: 25,
+          electrode: "SHE",
+          unit: "V",
+          activity: 1e-6,
+          ligands: [rowLigand("carbonate", dic)],
+          typed: {},
+        },
         t.rows,
       );
       answers.forEach((a, r) => {
-        expect("error" in a ? a.error : `${a.species}/${a.regime}`, `${metal} row ${r}`).toBe(`${lines[r][`${metal}_species`]}/${lines[r][`${metal}_regime`]}`);
+        expect("error" in a ? a.error : `${a.species}/${a.regime}`, `${metal} row ${r}`).toBe(
+          `${lines[r][`${metal}_species`]}/${lines[r][`${metal}_regime`]}`,
+        );
       });
     }
   });

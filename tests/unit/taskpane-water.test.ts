@@ -14,7 +14,7 @@ import { dicAt } from "../../src/functions/carbonate-functions";
 import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/tables";
 import { formatTotals, PURE_WATER, resolveWater, roundTotal, rowTotal, waterCaption, WaterSettings } from "../../src/taskpane/ligand-inputs";
 import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/diagram/diagram-model";
-import { diagramLayout, renderDiagram, renderDiagramSvg, sampleText } from "../../src/diagram/diagram-svg";
+import { diagramLayout, renderDiagram, sampleText } from "../../src/diagram/diagram-svg";
 import { makeAxes } from "../../src/diagram/axes";
 import { touchingGroups } from "../../src/diagram/label-placement";
 import { readSamples } from "../../src/taskpane/sample-table";
