@@ -6,35 +6,18 @@ import path from "node:path";
 import zlib from "node:zlib";
 import { loadBundle } from "../tests/bundle/harness";
 import { spawnSync } from "node:child_process";
-import { benchEngine, BenchRow, fmt } from "./engine";
-import { benchLigands } from "./ligands";
+import { benchDiagrams, benchStability, BenchRow } from "./engine";
 import { benchPaneRender } from "./pane-render";
 
-/** (c′) REDOX.SPECIES as the spreadsheet runs it: the built bundle, called with a 100 k-row range. */
-function bundleWrapperRow(): BenchRow {
-  const name = "(c′) REDOX.SPECIES in the built bundle, 100,000-row range, steady state";
+/** The stability functions as the spreadsheet runs them: the built bundle's wrappers over ranges. */
+function bundleStabilityRows(): BenchRow[] {
   let bundle;
   try {
     bundle = loadBundle();
   } catch (error) {
-    return { name, figure: `bundle not loadable (${(error as Error).message.slice(0, 40)})`, target: "≥ 1 M rows/s", met: null };
+    return [{ name: "stability functions in the built bundle", figure: `bundle not loadable (${(error as Error).message.slice(0, 40)})`, target: "—", met: null }];
   }
-  const species = bundle.functions.get("SPECIES");
-  if (!species) return { name, figure: "SPECIES not registered", target: "≥ 1 M rows/s", met: false };
-  const m = 100_000;
-  const pH = Array.from({ length: m }, (_, i) => [2 + ((i * 7919) % 1000) / 100]);
-  const E = Array.from({ length: m }, (_, i) => [-1 + ((i * 104729) % 2000) / 1000]);
-  const T = Array.from({ length: m }, (_, i) => [15 + 5 * (i % 5)]);
-  // steady state: three warm-up calls (the JIT compiles the loop), then the best of five
-  for (let k = 0; k < 3; k++) species("Fe", pH, E, T);
-  let fastest = Infinity;
-  for (let k = 0; k < 5; k++) {
-    const start = performance.now();
-    species("Fe", pH, E, T);
-    fastest = Math.min(fastest, performance.now() - start);
-  }
-  const rate = m / (fastest / 1000);
-  return { name, figure: `${fmt(rate)} rows/s (${fastest.toFixed(1)} ms)`, target: "≥ 1 M rows/s", met: rate >= 1e6 };
+  return benchStability((name) => bundle.functions.get(name) as ((...args: unknown[]) => unknown) | undefined);
 }
 
 function bundleRow(): BenchRow {
@@ -45,7 +28,7 @@ function bundleRow(): BenchRow {
 }
 
 async function main(): Promise<void> {
-  const rows: BenchRow[] = [...benchEngine(), bundleWrapperRow(), ...benchLigands(), ...benchPaneRender(10_000), bundleRow()];
+  const rows: BenchRow[] = [...bundleStabilityRows(), ...benchDiagrams(), ...benchPaneRender(10_000), bundleRow()];
   const width = Math.max(...rows.map((r) => r.name.length));
   const figureWidth = Math.max(...rows.map((r) => r.figure.length));
   console.log(`Redox Cells benchmark — node ${process.version}, ${new Date().toISOString()}`);

@@ -55,7 +55,8 @@ async function main(): Promise<void> {
   const first = header.length + 1;
   const E = letter(first);
   const DIC = letter(first + 2);
-  // activity of dissolved metal species (the functions' default, written out so the carbonate can follow it)
+  // activity of dissolved metal species (the functions' default, written out so the carbonate can follow it);
+  // chloride, sulfur and ionic strength are written as 0 (absent, ideal solution) so the option can follow them
   const activity = "1E-6";
 
   /** Result columns: header and formula for sheet row r (formulas without the leading "="). */
@@ -67,9 +68,9 @@ async function main(): Promise<void> {
     ["DIC_mol_kg", (r) => `REDOX.DIC(${alkalinity}${r},${pH}${r},${temp}${r})`],
     ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
     ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
-    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},1,${temp}${r},${activity},${DIC}${r})`],
-    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},-1,${temp}${r},${activity},${DIC}${r})`],
-    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},"ug/L",${activity},${DIC}${r})`],
+    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,1)`],
+    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,-1)`],
+    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,0,"ug/L")`],
   ];
 
   const workbook = new ExcelJS.Workbook();
@@ -128,9 +129,9 @@ async function main(): Promise<void> {
     "  DIC_mol_kg           REDOX.DIC — dissolved inorganic carbon, mol/kg, from the alkalinity (mg/L as CaCO3), pH and temperature",
     "  pipe_species         REDOX.SPECIES — dominant species of the pipe metal",
     "  pipe_regime          REDOX.REGIME — immunity, passivation or corrosion",
-    "  boundary_above_V     REDOX.BOUNDARY(…, 1, …) — nearest stability boundary above the sample",
-    "  boundary_below_V     REDOX.BOUNDARY(…, -1, …) — nearest stability boundary below",
-    "  pipe_dissolved_ug_L  REDOX.DISSOLVED — dissolved metal in equilibrium with the stable solid, µg/L (#N/A where none is stable)",
+    "  boundary_above_V     REDOX.BOUNDARY(…, 1) — nearest stability boundary above the sample (direction last)",
+    "  boundary_below_V     REDOX.BOUNDARY(…, -1) — nearest stability boundary below",
+    "  pipe_dissolved_ug_L  REDOX.DISSOLVED — dissolved metal in equilibrium with the most stable solid, µg/L (#N/A where no solid can form)",
     "",
     "Some cells are blank or mistyped on purpose (a decimal comma, '7.4.1', 'n/a', '1O.4', '612 mV', pH 17.2): their rows show",
     "blank results or #VALUE! (hover the error indicator for the message), as a real log would. A blank temperature is a missing",
@@ -139,8 +140,8 @@ async function main(): Promise<void> {
     "The result cells hold the values computed by Redox Cells when the workbook was generated, so the file shows them in any",
     "spreadsheet program. With the add-in loaded, press Ctrl+Alt+F9 to recalculate them.",
     "",
-    "Carbonate is treated at its fixed total by predominance: in each region its predominant form carries the whole total",
-    "(an approximation within about a pH unit of the carbonate boundaries); ideal dilute water.",
+    "Carbonate is treated exactly at its fixed total: its activity as HCO3- is the total times the alpha-fraction at the",
+    "sample's pH and temperature; ideal dilute water (no ionic strength given).",
     "",
     "Thermodynamics says which state is stable, not how fast a metal corrodes. For lead and copper in drinking water, confirm",
     "by laboratory analysis and defer to local codes, regulators and licensed corrosion professionals.",

@@ -17,5 +17,5 @@ export function buildLigandSystem(db: Database, element: string, options: System
     if (!(value >= 0 && value <= MAX_LIGAND_TOTAL)) throw new SystemError(`${name}: total ${value} mol/kg is outside 0–${MAX_LIGAND_TOTAL}`);
   }
   if (!(options.celsius >= 0 && options.celsius <= 100)) return buildSystem(db, element, options); // lets buildSystem report the range
-  return buildSystem(db, element, options, ligandCells(db, totals, options.celsius));
+  return { ...buildSystem(db, element, options, ligandCells(db, totals, options.celsius)), ligandTotals: totals };
 }

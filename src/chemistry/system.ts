@@ -18,6 +18,7 @@ import { envelopeRegions } from "./envelope";
 import { clipPolygon, HalfPlane, insideAll, Point, rectangle } from "./halfplane";
 import { formationTable } from "./formation";
 import { ELECTRON, gibbsAt } from "./thermo";
+import type { LigandTotals } from "./ligand-cells";
 
 export type Regime = "immunity" | "passivation" | "corrosion";
 
@@ -77,6 +78,8 @@ export interface MetalSystem {
   readonly cells: readonly PlaneCell[];
   /** Index of the metal itself. */
   readonly metalIndex: number;
+  /** The ligand totals the system was built for (absent in pure water), so points on it use the same water. */
+  readonly ligandTotals?: LigandTotals;
 }
 
 export interface SystemOptions {
@@ -226,50 +229,6 @@ export function dominantSpecies(system: MetalSystem, pH: number, E: number): num
     }
   }
   return best;
-}
-
-/**
- * Batch kernel: dominant species indices for columns of pH and E (typed arrays in, indices out). The system is
- * built once; each row is a scan over the species planes.
- */
-export function dominantSpeciesBatch(system: MetalSystem, pH: Float64Array, E: Float64Array, out: Int32Array): Int32Array {
-  const rows = pH.length;
-  if (system.cells.length === 1) {
-    const cell = system.cells[0];
-    const { a, b, c } = cell;
-    const active = activeSpecies(cell);
-    // the active species' planes, packed contiguously
-    const m = active.length;
-    const pa = new Float64Array(m);
-    const pb = new Float64Array(m);
-    const pc = new Float64Array(m);
-    for (let k = 0; k < m; k++) {
-      pa[k] = a[active[k]];
-      pb[k] = b[active[k]];
-      pc[k] = c[active[k]];
-    }
-    for (let r = 0; r < rows; r++) {
-      const p = pH[r];
-      const e = E[r];
-      if (!(p >= PRUNE_PH_MIN && p <= PRUNE_PH_MAX && e >= -PRUNE_E_LIMIT && e <= PRUNE_E_LIMIT) || m === 0) {
-        out[r] = dominantSpecies(system, p, e);
-        continue;
-      }
-      let best = 0;
-      let bestG = pa[0] + pb[0] * p + pc[0] * e;
-      for (let k = 1; k < m; k++) {
-        const g = pa[k] + pb[k] * p + pc[k] * e;
-        if (g < bestG) {
-          bestG = g;
-          best = k;
-        }
-      }
-      out[r] = active[best];
-    }
-    return out;
-  }
-  for (let r = 0; r < rows; r++) out[r] = dominantSpecies(system, pH[r], E[r]);
-  return out;
 }
 
 /** Index of a species by formula, or −1. */

@@ -260,9 +260,9 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       element,
       species: fns.species(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur),
       regime: fns.regime(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur),
-      above: fns.boundary(element, pH, potential, 1, temperature, plan.activity, carbonate, chloride, sulfur),
-      below: fns.boundary(element, pH, potential, -1, temperature, plan.activity, carbonate, chloride, sulfur),
-      dissolved: fns.dissolved(element, pH, potential, temperature, plan.dissolvedUnit, plan.activity, carbonate, chloride, sulfur),
+      above: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, undefined, 1),
+      below: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, undefined, -1),
+      dissolved: fns.dissolved(element, pH, potential, temperature, carbonate, chloride, sulfur, undefined, plan.dissolvedUnit),
     };
   });
 

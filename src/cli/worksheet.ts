@@ -14,33 +14,34 @@ export interface WorksheetFunctions {
   toShe(reading: CellInput, electrode: CellInput, temperature?: CellInput, pH?: CellInput): CellOutput[][];
   /** REDOX.WATERMARGIN(pH, potential, [temperature], [overpotential]) */
   waterMargin(pH: CellInput, potential: CellInput, temperature?: CellInput, overpotential?: CellInput): CellOutput[][];
-  /** REDOX.SPECIES(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur]) */
-  species(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput): CellOutput[][];
-  /** REDOX.REGIME(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur]) */
-  regime(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput): CellOutput[][];
-  /** REDOX.BOUNDARY(element, pH, potential, [direction], [temperature], [activity], [carbonate], [chloride], [sulfur]) */
+  /** REDOX.SPECIES(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength]) */
+  species(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput, ionicStrength?: CellInput): CellOutput[][];
+  /** REDOX.REGIME(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength]) */
+  regime(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput, ionicStrength?: CellInput): CellOutput[][];
+  /** REDOX.BOUNDARY(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength], [direction]) */
   boundary(
     element: CellInput,
     pH: CellInput,
     potential: CellInput,
-    direction?: CellInput,
     temperature?: CellInput,
     activity?: CellInput,
     carbonate?: CellInput,
     chloride?: CellInput,
     sulfur?: CellInput,
+    ionicStrength?: CellInput,
+    direction?: CellInput,
   ): CellOutput[][];
-  /** REDOX.DISSOLVED(element, pH, potential, [temperature], [unit], [activity], [carbonate], [chloride], [sulfur]) */
+  /** REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [ionicStrength], [unit]) */
   dissolved(
     element: CellInput,
     pH: CellInput,
     potential: CellInput,
     temperature?: CellInput,
-    unit?: CellInput,
-    activity?: CellInput,
     carbonate?: CellInput,
     chloride?: CellInput,
     sulfur?: CellInput,
+    ionicStrength?: CellInput,
+    unit?: CellInput,
   ): CellOutput[][];
   /** REDOX.DIC(alkalinity, pH, [temperature]) */
   dic(alkalinity: CellInput, pH: CellInput, temperature?: CellInput): CellOutput[][];

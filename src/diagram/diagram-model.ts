@@ -9,9 +9,12 @@
  */
 import { clipPolygon, HalfPlane, Point, polygonArea } from "../chemistry/halfplane";
 import { getElectrodes } from "../chemistry/electrodes";
-import type { LigandTotals } from "../chemistry/ligand-cells";
+import { hasLigands, type LigandTotals } from "../chemistry/ligand-cells";
 import { diagramRegions, Region } from "../chemistry/predominance";
-import { dominantSpecies, MetalSystem, Regime } from "../chemistry/system";
+import { tracedRegions } from "../chemistry/region-tracing";
+import { getDatabase } from "../chemistry/database";
+import { dominantInWater } from "../chemistry/point-engine";
+import { MetalSystem, Regime } from "../chemistry/system";
 import { waterLine } from "../chemistry/water";
 import type { AxisWindow } from "./axes";
 
@@ -76,7 +79,8 @@ export function shownRegions(system: MetalSystem, window: AxisWindow, scale: Dis
     scale.toSHE(window.pHMax, window.eMax),
   ];
   const sheWindow = { pHMin: window.pHMin, pHMax: window.pHMax, eMin: Math.min(...corners) - 1e-6, eMax: Math.max(...corners) + 1e-6 };
-  const regions: Region[] = diagramRegions(system, sheWindow);
+  // with ligands the regions are traced from the point engine, so they agree with REDOX.SPECIES (region-tracing.ts)
+  const regions: Region[] = system.ligandTotals && hasLigands(system.ligandTotals) ? tracedRegions(getDatabase(), system, sheWindow) : diagramRegions(system, sheWindow);
   const clip: HalfPlane[] = [
     { a: -window.eMax, b: 0, c: 1 }, // E ≤ eMax
     { a: window.eMin, b: 0, c: -1 }, // E ≥ eMin
@@ -167,8 +171,7 @@ export function plotSamples(
   const hSlope = waterLine(1, system.celsius, "H2") - h0;
   return samples.map((s) => {
     const own = systemOf ? systemOf(s) : system;
-    const index = dominantSpecies(own, s.pH, s.eSHE);
-    const species = own.species[index];
+    const species = dominantInWater(getDatabase(), own, s.pH, s.eSHE, s.ligands); // exactly what REDOX.SPECIES answers
     const plotted: PlottedSample = {
       row: s.row,
       id: s.id,

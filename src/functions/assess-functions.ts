@@ -6,14 +6,14 @@
  * columns (one output row per input row).
  */
 import { getDatabase } from "../chemistry/database";
-import { dissolvedAtPoint, nearestBoundary } from "../chemistry/predominance";
-import { dominantSpecies } from "../chemistry/system";
+import { pointBoundary } from "../chemistry/point-boundary";
+import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
 import { waterMargin } from "../chemistry/water";
 import { mapCells } from "./broadcast";
 import { CellError, CellInput, CellOutput, isBlank, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
-import { carbonateArg, chlorideArg, sulfurArg } from "./ligand-args";
-import { DISSOLVED_UNITS, systemInWater, unitArg } from "./stability-functions";
+import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";
+import { DISSOLVED_UNITS, engineIn, unitArg } from "./stability-functions";
 
 export const ASSESS_COLUMNS = ["species", "regime", "boundary above (V)", "boundary below (V)", "water margin (V)", "dissolved", "controlling solid"] as const;
 const WIDTH = ASSESS_COLUMNS.length;
@@ -25,32 +25,33 @@ interface Water {
   carbonate: number;
   chloride: number;
   sulfur: number;
+  ionicStrength: number;
 }
 
-/**
- * Equilibrium dissolved metal (mol/kg) and the solid controlling it, or #N/A. The one place the dissolved columns
- * come from, so that a chemistry function returning {total, controllingSolid} replaces the body in one line.
- */
+/** Equilibrium dissolved metal (mol/kg) and the controlling solid (the point engine, as REDOX.DISSOLVED), or #N/A. */
 function dissolvedWithSolid(element: string, pH: number, E: number, water: Water): { total: number; controllingSolid: string } | CellError {
-  const system = systemInWater(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur);
-  const found = dissolvedAtPoint(system, pH, E);
-  if (!found) return notAvailable("a dissolved species is dominant here: no solid is stable");
-  return { total: found.total, controllingSolid: system.species[found.solid].formula };
+  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.ionicStrength);
+  const { total, solid } = dissolvedAtPoint(engine, pH, E);
+  const controllingSolid = engine.table.species[solid].formula;
+  if (!(total <= MAX_DISSOLVED)) return notAvailable(`no solid forms here: ${controllingSolid}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);
+  return { total, controllingSolid };
 }
 
-/** The seven answers for one sample, in ASSESS_COLUMNS order. */
+/** The seven answers for one sample, in ASSESS_COLUMNS order (the same engine calls as the single functions). */
 function assessRow(element: string, pH: number, E: number, water: Water, unit: string): CellOutput[] {
-  const system = systemInWater(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur);
-  const dominant = system.species[dominantSpecies(system, pH, E)];
+  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.ionicStrength);
+  const dominant = engine.table.species[engine.dominant(pH, E)];
   const boundary = (direction: 1 | -1): CellOutput =>
-    nearestBoundary(system, pH, E, direction)?.E ?? notAvailable(`no boundary ${direction > 0 ? "above" : "below"} this point between −3 and +3 V`);
+    pointBoundary(engine, pH, E, direction)?.E ?? notAvailable(`no boundary ${direction > 0 ? "above" : "below"} this point between −3 and +3 V`);
+  const above = boundary(1);
+  const below = boundary(-1);
   const dissolved = dissolvedWithSolid(element, pH, E, water);
   const weight = getDatabase().element(element)?.atomicWeight ?? NaN;
   return [
     dominant.formula,
     dominant.regime,
-    boundary(1),
-    boundary(-1),
+    above,
+    below,
     waterMargin(pH, E, water.celsius, 0),
     dissolved instanceof CellError ? dissolved : dissolved.total * DISSOLVED_UNITS[unit](weight),
     dissolved instanceof CellError ? dissolved : dissolved.controllingSolid,
@@ -84,7 +85,7 @@ function headerRow(unit: CellInput): CellOutput[] {
   return ASSESS_COLUMNS.map((c) => (c === "dissolved" ? `dissolved (${name})` : c));
 }
 
-/** REDOX.ASSESS(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [unit], [header]). */
+/** REDOX.ASSESS(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength], [unit], [header]). */
 export function assessAt(
   element: CellInput,
   pH: CellInput,
@@ -94,18 +95,19 @@ export function assessAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  ionicStrength?: CellInput,
   unit?: CellInput,
   header?: CellInput,
 ): CellOutput[][] {
-  const inputs = [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, unit];
+  const inputs = [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, unit];
   const wantHeader = readHeader(header);
   const problem = wantHeader instanceof CellError ? wantHeader : widthProblem(inputs);
   if (problem) return [[toHostError(problem)]];
   const rows: CellOutput[][] = [];
   const cells = mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, unitArg],
+    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg, unitArg],
     inputs,
-    (el, p, e, t, a, co3, cl, s, u) => rows.push(assessRow(el, p, e, { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s }, u)) - 1,
+    (el, p, e, t, a, co3, cl, s, i, u) => rows.push(assessRow(el, p, e, { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, ionicStrength: i }, u)) - 1,
   );
   // a blank row stays blank, a row with a bad cell shows its error in every column, others their seven answers
   const out = cells.map(([cell]) => (typeof cell === "number" ? rows[cell].map(finishCell) : new Array<CellOutput>(WIDTH).fill(cell)));

@@ -11,6 +11,7 @@
 /* eslint-disable @typescript-eslint/no-explicit-any */
 import { fromSHEAt, toSHEAt } from "./electrode-functions";
 import { ehAt, neutralPHAt, peAt, slopeAt, waterLineAt, waterMarginAt } from "./water-functions";
+import { ionicStrengthAt } from "./ionic-strength-functions";
 import { boundaryFrom, coupleAt, dissolvedAt, regimeAt, speciesAt, speciesTable } from "./stability-functions";
 import { dicAt } from "./carbonate-functions";
 import { assessAt } from "./assess-functions";
@@ -122,13 +123,14 @@ export function slope(temperature?: any[][]): any[][] {
  * @param {any[][]} potential Potential in volts vs SHE, −3 to +3 (convert meter readings, also in mV, with REDOX.TOSHE).
  * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species, above 0 and at most 10. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals by predominance: in each region the ligand's predominant form carries its whole total (an approximation, off by up to 0.3 log units next to a ligand boundary).
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @returns {any[][]} Formula of the dominant species.
  */
-export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][]): any[][] {
-  return speciesAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur);
+export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][]): any[][] {
+  return speciesAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength);
 }
 
 /**
@@ -139,13 +141,14 @@ export function species(element: any[][], pH: any[][], potential: any[][], tempe
  * @param {any[][]} potential Potential in volts vs SHE.
  * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals by predominance: in each region the ligand's predominant form carries its whole total (an approximation, off by up to 0.3 log units next to a ligand boundary).
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @returns {any[][]} immunity, passivation or corrosion.
  */
-export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][]): any[][] {
-  return regimeAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur);
+export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][]): any[][] {
+  return regimeAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength);
 }
 
 /**
@@ -154,16 +157,17 @@ export function regime(element: any[][], pH: any[][], potential: any[][], temper
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [direction] 1 for the boundary above (default), -1 for the one below.
  * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals by predominance: in each region the ligand's predominant form carries its whole total (an approximation, off by up to 0.3 log units next to a ligand boundary).
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
+ * @param {any[][]} [direction] 1 for the boundary above (default), -1 for the one below.
  * @returns {any[][]} Potential of the boundary in volts vs SHE.
  */
-export function boundary(element: any[][], pH: any[][], potential: any[][], direction?: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][]): any[][] {
-  return boundaryFrom(element, pH, potential, direction, temperature, activity, carbonate, chloride, sulfur);
+export function boundary(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], direction?: any[][]): any[][] {
+  return boundaryFrom(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, direction);
 }
 
 /**
@@ -181,21 +185,32 @@ export function couple(oxidized: any[][], reduced: any[][], pH: any[][], tempera
 }
 
 /**
- * Total dissolved metal (free ion, hydroxo, carbonato and chloro complexes) in equilibrium with the solid that is stable at the point (ideal dilute solution); #N/A where a dissolved species is dominant. A thermodynamic estimate, not a substitute for laboratory analysis of lead or copper in drinking water.
+ * Total dissolved metal (free ion, hydroxo, carbonato and chloro complexes) in equilibrium with the controlling solid: the solid, the metal included, that is most stable at the point. A number wherever a solid can form; #N/A where even the most stable solid would dissolve (more than 1 mol/kg). Does not depend on a threshold activity. A thermodynamic estimate, not a substitute for laboratory analysis of lead or copper in drinking water.
  * @customfunction DISSOLVED
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
  * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
- * @param {any[][]} [unit] mol/kg (default), mg/L or ug/L.
- * @param {any[][]} [activity] Activity threshold deciding which species is dominant. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals by predominance: in each region the ligand's predominant form carries its whole total (an approximation, off by up to 0.3 log units next to a ligand boundary).
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
+ * @param {any[][]} [unit] mol/kg (default), mg/L or ug/L.
  * @returns {any[][]} Dissolved metal in the chosen unit.
  */
-export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], unit?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][]): any[][] {
-  return dissolvedAt(element, pH, potential, temperature, unit, activity, carbonate, chloride, sulfur);
+export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], unit?: any[][]): any[][] {
+  return dissolvedAt(element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, unit);
+}
+
+/**
+ * Ionic strength in mol/kg estimated from specific conductance (I ≈ 1.6E-5 × µS/cm, Russell 1976) or total dissolved solids (I ≈ 2.5E-5 × mg/L, Langelier 1936), for the ionicStrength argument. Empirical, about ±30 % in fresh waters.
+ * @customfunction IONICSTRENGTH
+ * @param {any[][]} value Specific conductance in µS/cm at 25 °C, or TDS in mg/L.
+ * @param {any[][]} basis "uS/cm" (conductance) or "mg/L" (TDS).
+ * @returns {any[][]} Ionic strength in mol/kg.
+ */
+export function ionicstrength(value: any[][], basis: any[][]): any[][] {
+  return ionicStrengthAt(value, basis);
 }
 
 /**
@@ -232,12 +247,13 @@ export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): an
  * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none.
+ * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it); blank = ideal dilute solution.
  * @param {any[][]} [unit] Unit of the dissolved metal: mol/kg (default), mg/L or ug/L.
  * @param {any[][]} [header] TRUE for a header row above the answers.
  * @returns {any[][]} Seven columns per sample row.
  */
-export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], unit?: any[][], header?: any[][]): any[][] {
-  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, unit, header);
+export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], unit?: any[][], header?: any[][]): any[][] {
+  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, unit, header);
 }
 
 /**
@@ -281,6 +297,7 @@ if (typeof CustomFunctions !== "undefined") {
   CustomFunctions.associate("BOUNDARY", boundary);
   CustomFunctions.associate("COUPLE", couple);
   CustomFunctions.associate("DISSOLVED", dissolved);
+  CustomFunctions.associate("IONICSTRENGTH", ionicstrength);
   CustomFunctions.associate("SPECIESTABLE", speciestable);
   CustomFunctions.associate("DIC", dic);
   CustomFunctions.associate("ASSESS", assess);

@@ -5,72 +5,46 @@
  */
 import { getDatabase, Species } from "../chemistry/database";
 import { formationGibbsAt } from "../chemistry/formation";
-import { nearestBoundary, dissolvedAtPoint } from "../chemistry/predominance";
+import { pointBoundary } from "../chemistry/point-boundary";
+import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
+import { PointEngine, pointEngine } from "../chemistry/point-engine";
+import { speciesTable as metalSpeciesTable } from "../chemistry/species-tables";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
-import { SystemCache } from "../chemistry/system-cache";
+import type { SystemSpecies } from "../chemistry/system";
 import { ownEntry } from "../chemistry/own-entry";
-import { dominantSpecies, MetalSystem, SystemSpecies } from "../chemistry/system";
-import { mapCells, numberArg, textArg } from "./broadcast";
+import { mapCells, textArg } from "./broadcast";
 import { CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
-import { ligandKey, LigandTotals } from "../chemistry/ligand-cells";
-import { buildLigandSystem } from "../chemistry/ligand-system";
-import { carbonateArg, chlorideArg, sulfurArg } from "./ligand-args";
+import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";
 
-let cache: SystemCache | undefined;
+let lastElement = "";
+let lastEngine: PointEngine | null = null;
 
-/**
- * The last few systems used, scanned before the bounded cache: a column usually repeats a handful of (element,
- * temperature, activity) conditions, and comparing three values is cheaper than building a cache key per row.
- */
-const RECENT = 16;
-const recentElement: string[] = new Array(RECENT).fill("");
-const recentCelsius: number[] = new Array(RECENT).fill(NaN);
-const recentActivity: number[] = new Array(RECENT).fill(NaN);
-const recentSystem: (MetalSystem | null)[] = new Array(RECENT).fill(null);
-let recentNext = 0;
-
-/** The system for (element, T, activity), built once and reused. */
-function systemFor(element: string, celsius: number, activity: number): MetalSystem {
-  for (let k = 0; k < RECENT; k++) {
-    if (recentCelsius[k] === celsius && recentActivity[k] === activity && recentElement[k] === element) return recentSystem[k]!;
+/** The point engine of an element with the row's water set (the engine keeps what depends only on T). */
+export function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, ionicStrength: number): PointEngine {
+  if (element !== lastElement || !lastEngine) {
+    lastEngine = pointEngine(getDatabase(), element);
+    lastElement = element;
   }
-  cache ??= new SystemCache(getDatabase());
-  const system = cache.get(element, celsius, activity);
-  recentElement[recentNext] = element;
-  recentCelsius[recentNext] = celsius;
-  recentActivity[recentNext] = activity;
-  recentSystem[recentNext] = system;
-  recentNext = (recentNext + 1) % RECENT;
-  return system;
+  lastEngine.setWater(celsius, activity, carbonate, chloride, sulfur, ionicStrength);
+  return lastEngine;
 }
 
-const directionArg = numberArg("direction", { optional: true, defaultValue: 1 });
+const directionArg = textArg<1 | -1>(
+  "direction",
+  (text) => (text === "1" ? 1 : text === "-1" ? -1 : valueError(`direction: expected 1 (above) or -1 (below), got ${text}`)),
+  { optional: true, defaultValue: 1 },
+);
 
-/**
- * The system for a water with ligand totals (mol/kg, 0 = absent). With none present this is systemFor itself (the
- * ligand-free path); otherwise the ligand cells are built once per condition through the same cache.
- */
-export function systemInWater(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number): MetalSystem {
-  if (carbonate === 0 && chloride === 0 && sulfur === 0) return systemFor(element, celsius, activity);
-  const totals: LigandTotals = { carbonate, chloride, sulfur };
-  cache ??= new SystemCache(getDatabase());
-  return cache.get(element, celsius, activity, ligandKey(totals), () => buildLigandSystem(getDatabase(), element, { celsius, activity }, totals));
-}
+/** The point arguments every stability function shares, in the agreed order. */
+const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg] as const;
 
 /** Reads the point arguments shared by SPECIES and REGIME and answers with `describe` of the dominant species. */
-function dominantAt(
-  describe: (species: SystemSpecies) => string,
-  inputs: readonly CellInput[],
-): CellOutput[][] {
-  return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
-    inputs,
-    (el, p, e, t, a, co3, cl, s) => {
-      const system = systemInWater(el, t, a, co3, cl, s);
-      return describe(system.species[dominantSpecies(system, p, e)]);
-    },
-  );
+function dominantAt(describe: (species: SystemSpecies) => string, inputs: readonly CellInput[]): CellOutput[][] {
+  return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, i) => {
+    const engine = engineIn(el, t, a, co3, cl, s, i);
+    return describe(engine.table.species[engine.dominant(p, e)]);
+  });
 }
 
 export function speciesAt(
@@ -82,8 +56,9 @@ export function speciesAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur]);
+  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength]);
 }
 
 export function regimeAt(
@@ -95,27 +70,28 @@ export function regimeAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur]);
+  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength]);
 }
 
 export function boundaryFrom(
   element: CellInput,
   pH: CellInput,
   potential: CellInput,
-  direction?: CellInput,
   temperature?: CellInput,
   activity?: CellInput,
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  ionicStrength?: CellInput,
+  direction?: CellInput,
 ): CellOutput[][] {
   return mapCells(
-    [elementArg, pHArg, potentialArg(), directionArg, temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
-    [element, pH, potential, direction, temperature, activity, carbonate, chloride, sulfur],
-    (el, p, e, d, t, a, co3, cl, s) => {
-      if (d !== 1 && d !== -1) return valueError(`direction: expected 1 (above) or -1 (below), got ${d}`);
-      const crossing = nearestBoundary(systemInWater(el, t, a, co3, cl, s), p, e, d);
+    [...POINT_ARGS, directionArg],
+    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, direction],
+    (el, p, e, t, a, co3, cl, s, i, d) => {
+      const crossing = pointBoundary(engineIn(el, t, a, co3, cl, s, i), p, e, d);
       return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
     },
   );
@@ -168,21 +144,23 @@ export function dissolvedAt(
   pH: CellInput,
   potential: CellInput,
   temperature?: CellInput,
-  unit?: CellInput,
-  activity?: CellInput,
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  ionicStrength?: CellInput,
+  unit?: CellInput,
 ): CellOutput[][] {
   return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, unitArg, activityArg, carbonateArg, chlorideArg, sulfurArg],
-    [element, pH, potential, temperature, unit, activity, carbonate, chloride, sulfur],
-    (el, p, e, t, u, a, co3, cl, s) => {
-      const system = systemInWater(el, t, a, co3, cl, s);
-      const result = dissolvedAtPoint(system, p, e);
-      if (!result) return notAvailable("a dissolved species is dominant here: no solid is stable");
+    [elementArg, pHArg, potentialArg(), temperatureArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg, unitArg],
+    [element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, unit],
+    (el, p, e, t, co3, cl, s, i, u) => {
+      const engine = engineIn(el, t, 1, co3, cl, s, i);
+      const { total, solid } = dissolvedAtPoint(engine, p, e);
+      if (!(total <= MAX_DISSOLVED)) {
+        return notAvailable(`no solid forms here: ${engine.table.species[solid].formula}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);
+      }
       const weight = getDatabase().element(el)?.atomicWeight ?? NaN;
-      return result.total * DISSOLVED_UNITS[u](weight);
+      return total * DISSOLVED_UNITS[u](weight);
     },
   );
 }
@@ -198,10 +176,10 @@ export function speciesTable(element: CellInput, temperature?: CellInput): CellO
   const [el, t] = only.split("|");
   const celsius = Number(t);
   const db = getDatabase();
-  const system = systemFor(el, celsius, 1e-6);
+  const table = metalSpeciesTable(db, el);
   const header: CellOutput[] = ["formula", "state", "name", `ΔG°f(${celsius} °C) kJ/mol`, "source"];
   const rows: CellOutput[][] = [header];
-  for (const s of system.species) {
+  for (const s of table.species.filter((_, i) => table.needs[i] === 0)) {
     const g = formationGibbsAt(db, s.species, celsius);
     rows.push([s.formula, STATE_WORDS[s.species.state], s.species.name, g === null ? "" : Math.round(g / 10) / 100, s.species.source]);
   }

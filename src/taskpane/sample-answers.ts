@@ -138,7 +138,8 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
   const el = plan.metal;
   const species = speciesAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur);
   const regime = regimeAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur);
-  const dissolved = dissolvedAt(el, pH, potential, temperature, "ug/L", plan.activity, carbonate, chloride, sulfur);
+  // REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [ionicStrength], [unit])
+  const dissolved = dissolvedAt(el, pH, potential, temperature, carbonate, chloride, sulfur, undefined, "ug/L");
   return rows.map((_, r): SampleAnswer => {
     // a blank cell in the temperature column is a missing measurement, not 25 °C (as in the command line)
     if (Array.isArray(temperature) && temperature[r][0] === "")

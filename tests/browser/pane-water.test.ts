@@ -111,12 +111,12 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
     expect(regimes).toEqual(new Set(regions.map((r) => r.formula)));
   });
 
-  it("names the water and the approximation; hover text carries the row's water", async () => {
+  it("names the water and the method; hover text carries the row's water", async () => {
     expect(await page.textContent("#diagram-title")).toBe("Lead in water with carbonate, sulfur and chloride");
     const caption = (await page.textContent("#diagram-caption")) ?? "";
     expect(caption).toMatch(/Water: DIC [\d.]+, S 0\.2, Cl 0\.5 mmol\/kg/);
     expect(caption).toMatch(/median of the rows' alkalinity/);
-    expect(caption).toMatch(/full total where its own form predominates/);
+    expect(caption).toMatch(/speciated\s*exactly\s*at\s*every\s*point/);
     await page.focus("#diagram .rc-samples");
     await page.keyboard.press("ArrowRight");
     await expect.poll(() => page.textContent("#point-info")).toMatch(/, water DIC [\d.]+, S 0\.2, Cl 0\.5 mmol\/kg; /);

@@ -1,0 +1,118 @@
+/**
+ * Exact speciation of a ligand at fixed total at one point (pH, E, T, ionic strength): the activity of its pivot
+ * species from the mass balance over all its dissolved species (Stumm, W., Morgan, J.J., Aquatic Chemistry, 3rd ed.,
+ * 1996, ch. 3 (α-fractions) and ch. 8 (redox speciation)):
+ *
+ *   each species j (one ligand atom) is in equilibrium with the pivot P:  a_j = a_P·exp(−F·g_j/RT),
+ *   g_j = [ΔG°r,j(T) − c_H,j·RT ln10·pH ... ]/F  the formation of j from P, H2O, H+, e− (volts);
+ *   total = Σ_j a_j/γ_j   ⇒   ln a_P = ln total − ln Σ_j exp(−F·g_j/RT − ln γ_j)
+ *
+ * For carbonate (HCO3− pivot, CO2(aq) and CO3²−) this is the α-fraction of HCO3− at the pH; for sulfur (SO4²− pivot;
+ * HSO4−, H2S(aq), HS−, S²−) the distribution over its redox forms at pH and E. Where elemental sulfur would exceed
+ * unit activity (a_S(s) = a_P·exp(−F·g_S/RT) > 1) it is saturated: a_P is capped at exp(F·g_S/RT) and the rest
+ * of the total is taken as the solid. Ligand bound in complexes of the trace metal is neglected (metal totals are
+ * far below ligand totals in waters).
+ */
+import { FARADAY } from "./constants";
+import { LigandTable } from "./species-tables";
+
+// Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
+const { abs, exp, log, max, min } = Math;
+const INF = 1 / 0;
+/** Log-gap below which a minor form is taken as absent for the straightness of ln a_P (e^−30 ≈ 1e-13). */
+const MIXING_GAP = 30;
+const NOT_A_NUMBER = 0 / 0;
+
+export class LigandAtPoint {
+  private celsius = NOT_A_NUMBER;
+  private f = 0;
+  /** Per species at the current temperature: g_j = g[j] + b[j]·pH + e[j]·E, volts. */
+  private readonly g: Float64Array;
+  private readonly b: Float64Array;
+  private readonly e: Float64Array;
+  private readonly u: Float64Array;
+  /** d ln a_P / dE at the last point (for boundary tracing). */
+  slopeE = 0;
+  /** Whether the solid was saturated at the last point. */
+  saturated = false;
+  /**
+   * Distance in E (V, either way) over which ln a_P stays linear in E to e^−30 from the last point: one form carries
+   * the total (or the solid saturates) and no saturation edge is crossed. Where it is 0 the forms mix (a bend).
+   */
+  straightFor = 0;
+
+  constructor(private readonly table: LigandTable) {
+    const n = table.species.length;
+    this.g = new Float64Array(n);
+    this.b = new Float64Array(n);
+    this.e = new Float64Array(n);
+    this.u = new Float64Array(n);
+  }
+
+  /**
+   * This speciation at `celsius` (columns redone only on change); dT = T − T0, shape = dT − T·ln(T/T0), k(T) and
+   * f = F/RT come from the caller, which has them for the temperature already.
+   */
+  at(celsius: number, dT: number, shape: number, k: number, f: number): this {
+    if (celsius !== this.celsius) this.setTemperature(celsius, dT, shape, k, f);
+    return this;
+  }
+
+  private setTemperature(celsius: number, dT: number, shape: number, k: number, f: number): void {
+    const t = this.table;
+    const inverseF = 1 / FARADAY;
+    for (let j = 0; j < t.g0.length; j++) {
+      this.g[j] = (t.g0[j] - t.s[j] * dT + t.cp[j] * shape) * inverseF;
+      this.b[j] = -t.proton[j] * k;
+      this.e[j] = -t.electron[j];
+    }
+    this.f = f;
+    this.celsius = celsius;
+  }
+
+  /** ln a(pivot) at (pH, E) for a total (ln, mol/kg) and ln γ of a unit charge; sets slopeE and saturated. */
+  lnPivot(lnTotal: number, lnGamma1: number, pH: number, E: number): number {
+    const { g, b, e, u, f } = this;
+    const z2 = this.table.chargeSquared;
+    const solid = this.table.solidIndex;
+    let top = -INF;
+    for (let j = 0; j < g.length; j++) {
+      if (j === solid) continue;
+      u[j] = -f * (g[j] + b[j] * pH + e[j] * E) - z2[j] * lnGamma1;
+      if (u[j] > top) top = u[j];
+    }
+    let sum = 0;
+    let slope = 0;
+    let leader = -1;
+    for (let j = 0; j < g.length; j++) {
+      if (j === solid) continue;
+      const w = exp(u[j] - top);
+      if (u[j] === top) leader = j;
+      sum += w;
+      slope += w * e[j];
+    }
+    // ln a_P = ln total − LSE(u);  d/dE = f·Σ w_j·e_j / Σ w_j   (u_j = −f·g_j − …, dg_j/dE = e_j)
+    let ln = lnTotal - top - log(sum);
+    this.slopeE = (f * slope) / sum;
+    // how far the leading form keeps the others below e^−30 (their log-gap closes at f·|e_j − e_leader| per volt)
+    let straight = INF;
+    for (let j = 0; j < g.length; j++) {
+      if (j === solid || j === leader) continue;
+      const rate = f * abs(e[j] - e[leader]);
+      if (rate > 0) straight = min(straight, max(0, (top - u[j] - MIXING_GAP) / rate));
+    }
+    this.saturated = false;
+    if (solid >= 0) {
+      const cap = f * (g[solid] + b[solid] * pH + e[solid] * E); // a_S(s) = 1
+      const closing = abs(f * e[solid] - this.slopeE);
+      if (closing > 0) straight = min(straight, abs(cap - ln) / closing); // the saturation edge is a kink
+      if (ln > cap) {
+        ln = cap;
+        this.slopeE = f * e[solid];
+        this.saturated = true;
+      }
+    }
+    this.straightFor = straight;
+    return ln;
+  }
+}
