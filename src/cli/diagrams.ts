@@ -1,14 +1,13 @@
 /**
  * Diagram SVGs for the command line: keeps a bounded, reproducible sample of each metal's points while the file
  * streams, then draws one potential–pH diagram per metal with the samples on it through the task pane's
- * DOM-free renderer (src/taskpane/diagram-svg.ts), run in Node.
+ * DOM-free renderer (src/diagram), run in Node.
  */
 import { getDatabase } from "../chemistry/database";
 import { hasLigands, LIGAND_ORDER, type LigandTotals } from "../chemistry/ligand-cells";
 import { buildLigandSystem } from "../chemistry/ligand-system";
 import { SystemCache } from "../chemistry/system-cache";
-import { displayScale, plotSamples, shownRegions, shownWaterLines } from "../taskpane/diagram-model";
-import { renderDiagramSvg } from "../taskpane/diagram-svg";
+import { displayScale, plotSamples, renderDiagramSvg, shownRegions, shownWaterLines } from "../diagram";
 import type { SamplePoint } from "./evaluate";
 import { Reservoir } from "./reservoir";
 

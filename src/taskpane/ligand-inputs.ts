@@ -16,7 +16,10 @@ import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
 import type { Database } from "../chemistry/database";
 import { hasLigands, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
-import { alkalinityFactor, molalFactor, readNumber, type WaterColumn, type WaterColumnRole } from "../tables";
+import { alkalinityFactor, isAlkalinityUnit, molalFactor, readNumber, type WaterColumn, type WaterColumnRole } from "../tables";
+import { formatTotals, LIGAND_WORDS } from "../diagram/water-words";
+
+export { formatTotals };
 
 /** Where each ligand's total comes from. */
 export type LigandSource = { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: WaterColumn };
@@ -71,7 +74,8 @@ export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, 
   if (value === null) return { problem: `"${String(cell).trim().slice(0, 20)}" is not a number` };
   if (value < 0) return { problem: `${value} is negative` };
   let total: number;
-  if (ligand === "carbonate") {
+  if (ligand === "carbonate" && !isAlkalinityUnit(column.unit)) total = value * molalFactor(column.unit, { C: 1 }, (parts) => molarMass(db, parts));
+  else if (ligand === "carbonate") {
     const mgCaCO3 = value * alkalinityFactor(column.unit);
     if (mgCaCO3 === 0) return { problem: "alkalinity is 0" };
     try {
@@ -145,14 +149,6 @@ export function resolveWater(settings: WaterSettings, rows: readonly RowTotals[]
     return own;
   });
   return { diagram, perSample, fromColumns, fallbacks, unusable };
-}
-
-const LIGAND_WORDS: Readonly<Record<LigandName, string>> = { carbonate: "DIC", chloride: "Cl", sulfur: "S" };
-
-/** "DIC 1.35, Cl 2 mmol/kg" — totals in mmol/kg with three significant figures; "" without ligands. */
-export function formatTotals(totals: LigandTotals): string {
-  const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map((l) => `${LIGAND_WORDS[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`);
-  return parts.length === 0 ? "" : `${parts.join(", ")} mmol/kg`;
 }
 
 /** Names of the ligands present, for titles: "carbonate, chloride and sulfur". */
