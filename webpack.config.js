@@ -4,6 +4,8 @@
 //   taskpane.js + taskpane.html  (the shared-runtime page: it also loads functions.js and commands.js)
 //   commands.js + commands.html
 //   assets/ (icons named by manifest.xml)
+//   cli/redox-cells.cjs (+ cli/*.cjs chunks): the command line, prebuilt for Node so that bin/redox-cells.mjs starts
+//                                without a compiler; --help and --version load only the first, small file
 //
 // Office.js URL in the HTML pages (build-time choice, see DEVELOPERS.md):
 //   default                      https://appsforoffice.microsoft.com/lib/1/hosted/office.js (the official CDN)
@@ -96,7 +98,39 @@ class ReportSizesPlugin {
   }
 }
 
-module.exports = (env = {}, argv = {}) => {
+/**
+ * The command line for Node: one CommonJS file with its dependencies (zod, mathjs, the data files) and a
+ * lazily loaded chunk for the pipeline, so that --version and --help answer without loading the chemistry. Not
+ * minified: stack traces stay readable and the build stays quick.
+ */
+function cliConfig(mode) {
+  const pkg = JSON.parse(fs.readFileSync(path.resolve(__dirname, "package.json"), "utf8"));
+  const { DefinePlugin } = require("webpack");
+  return {
+    name: "cli",
+    mode,
+    devtool: false,
+    target: "node20",
+    entry: { "redox-cells": "./src/cli/main.ts" },
+    output: {
+      path: path.resolve(__dirname, "dist/cli"),
+      filename: "[name].cjs",
+      chunkFilename: "[name].cjs",
+      library: { type: "commonjs2" },
+      clean: true,
+    },
+    resolve: { extensions: [".ts", ".js"], extensionAlias: { ".js": [".ts", ".js"] } },
+    module: { rules: [{ test: /\.ts$/, exclude: /node_modules/, use: { loader: "ts-loader", options: { transpileOnly: true } } }] },
+    optimization: { minimize: false },
+    performance: { hints: false },
+    plugins: [new DefinePlugin({ __REDOX_CELLS_VERSION__: JSON.stringify(pkg.version) })],
+  };
+}
+
+// the dev server serves the add-in only
+module.exports = (env = {}, argv = {}) => (env.WEBPACK_SERVE ? addinConfig(env, argv) : [addinConfig(env, argv), cliConfig(argv.mode || "production")]);
+
+function addinConfig(env, argv) {
   const mode = argv.mode || "production";
   const serving = Boolean(env.WEBPACK_SERVE);
   const officeJs = officeJsUrl();
@@ -128,7 +162,8 @@ module.exports = (env = {}, argv = {}) => {
       // and the Node vm harness in tests/bundle): no window, self or document.
       globalObject: "globalThis",
       publicPath: "",
-      clean: true,
+      // dist/cli is the command line's, built by cliConfig
+      clean: { keep: /^cli[\\/]/ },
     },
     resolve: {
       extensions: [".ts", ".js"],
@@ -179,4 +214,4 @@ module.exports = (env = {}, argv = {}) => {
         }
       : undefined,
   };
-};
+}

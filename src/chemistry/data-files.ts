@@ -19,6 +19,16 @@ import ti from "../../data/species/ti.json";
 import ag from "../../data/species/ag.json";
 import cd from "../../data/species/cd.json";
 import mo from "../../data/species/mo.json";
+import as_ from "../../data/species/as.json";
+import se from "../../data/species/se.json";
+import sb from "../../data/species/sb.json";
+import hg from "../../data/species/hg.json";
+import u from "../../data/species/u.json";
+import v from "../../data/species/v.json";
+import w from "../../data/species/w.json";
+import bi from "../../data/species/bi.json";
+import au from "../../data/species/au.json";
+import pt from "../../data/species/pt.json";
 import carbonate from "../../data/species/carbonate.json";
 import sulfur from "../../data/species/sulfur.json";
 import chloride from "../../data/species/chloride.json";
@@ -42,6 +52,16 @@ export const DATA_FILES: readonly DataFile[] = [
   { path: "data/species/ag.json", content: ag },
   { path: "data/species/cd.json", content: cd },
   { path: "data/species/mo.json", content: mo },
+  { path: "data/species/as.json", content: as_ },
+  { path: "data/species/se.json", content: se },
+  { path: "data/species/sb.json", content: sb },
+  { path: "data/species/hg.json", content: hg },
+  { path: "data/species/u.json", content: u },
+  { path: "data/species/v.json", content: v },
+  { path: "data/species/w.json", content: w },
+  { path: "data/species/bi.json", content: bi },
+  { path: "data/species/au.json", content: au },
+  { path: "data/species/pt.json", content: pt },
   { path: "data/species/carbonate.json", content: carbonate },
   { path: "data/species/sulfur.json", content: sulfur },
   { path: "data/species/chloride.json", content: chloride },

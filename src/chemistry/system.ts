@@ -103,7 +103,8 @@ export function buildSystem(
   }
   if (!(options.activity > 0)) throw new SystemError("activity must be positive");
 
-  const metal = entry.species.find((s) => s.state === "s" && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
+  // the element in its reference state: a solid, or the liquid for mercury
+  const metal = entry.species.find((s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
   if (!metal) throw new SystemError(`the ${element} file lacks the metal ${element}(s)`);
 
   const ligandElements = new Set<string>();

@@ -7,7 +7,10 @@ import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { mapCells } from "../functions/broadcast";
 import { CellError, CellInput, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
 import { carbonateArg, chlorideArg, sulfurArg } from "../functions/ligand-args";
+import { readNumber, toCelsius, type TemperatureScale } from "../tables";
+import { numberField, textField, type CsvFormat, type NumberKind } from "./csv-format";
 import type { DissolvedUnit, PotentialUnitOption } from "./options";
+import type { InputRow } from "./record-reader";
 import { LIGAND_OUTPUT, type LigandInput } from "./water";
 import type { WorksheetFunctions } from "./worksheet";
 
@@ -26,8 +29,13 @@ export interface EvaluationPlan {
   readonly potentialColumn: number;
   readonly temperatureColumn: number | null;
   readonly metalColumn: number | null;
-  /** Fixed temperature °C (no column, or a blank cell in it); undefined = the functions' default. */
+  /**
+   * Fixed temperature °C given on the command line: every row's without a column, and a blank cell's in one.
+   * Undefined: the functions' default without a column, and a blank cell is a missing measurement (blank results).
+   */
   readonly fixedTemperature: number | undefined;
+  /** Scale of the temperature column's numbers (converted to °C for the functions). */
+  readonly temperatureScale: TemperatureScale;
   readonly electrode: string;
   readonly unit: PotentialUnitOption;
   readonly activity: number;
@@ -37,6 +45,10 @@ export interface EvaluationPlan {
   readonly keepInput: boolean;
   /** Columns feeding the [carbonate], [chloride], [sulfur] arguments (empty: pure water). */
   readonly ligands: readonly LigandInput[];
+  /** Delimiter, decimal mark, text neutralising and precision of the input and the results. */
+  readonly format: CsvFormat;
+  /** Whether the batch results carry the sample points for diagrams. */
+  readonly diagrams: boolean;
 }
 
 export const RESULT_SUFFIXES = ["species", "regime", "boundary_above_V", "boundary_below_V"] as const;
@@ -59,11 +71,7 @@ export function outputHeader(plan: EvaluationPlan): string[] {
   return header;
 }
 
-/** One data row as read: its fields and the line of the file it started on (for messages). */
-export interface InputRow {
-  readonly fields: readonly string[];
-  readonly line: number;
-}
+export type { InputRow };
 
 /** A point for a diagram: the sample's pH, E vs SHE, its regime and temperature, and the file line. */
 export interface SamplePoint {
@@ -99,41 +107,41 @@ export interface BatchResult {
   readonly points: SamplePoint[];
 }
 
-/** How a number is written: 10 significant digits, no trailing noise. */
-export function formatNumber(x: number): string {
-  return String(Number(x.toPrecision(10)));
-}
-
-/** A CSV field: quoted when it holds the delimiter, a quote, a line break, or leading or trailing space. */
-export function csvField(text: string): string {
-  return /[",\n\r]|^\s|\s$/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
-/** One CSV line, newline included. */
-export function csvLine(cells: readonly string[]): string {
-  return cells.map(csvField).join(",") + "\n";
-}
-
-/** A result cell as CSV text: numbers as formatNumber writes them (never quoted), error values as their code. */
-function cellText(value: CellOutput): string {
-  if (typeof value === "number") return formatNumber(value);
-  if (typeof value === "string") return csvField(value);
+/** A result cell as CSV text: numbers rounded by kind (never quoted), error values as their code. */
+function cellText(value: CellOutput, kind: NumberKind, format: CsvFormat): string {
+  if (typeof value === "number") return numberField(value, kind, format);
+  if (typeof value === "string") return textField(value, format);
   return value.code;
 }
 
-/** Numeric text as the worksheet functions read it (numberArg): the same pattern, then Number(). */
-const NUMERIC = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/;
+/** Echoed input is cut to this many characters in messages and the errors column. */
+export const ECHO_LIMIT = 200;
+
+/** Text cut to `limit` characters, with an ellipsis and the length left out. */
+export function clip(text: string, limit = ECHO_LIMIT): string {
+  return text.length <= limit ? text : `${text.slice(0, limit)}… (${(text.length - limit).toLocaleString("en-US")} more characters)`;
+}
 
 /**
- * A column of cells for the functions. Numeric text becomes the number the functions would read from it (they take
- * plain numbers without reading them again, once per function instead of six times); anything else goes as written,
- * so that the function's own message says what is wrong with it.
+ * A column of cells for the functions. Numeric text (with the file's decimal mark) becomes the number the functions
+ * would read from it, × factor or converted by `convert` (they take plain numbers without reading them again, once
+ * per function instead of six times); anything else goes as written, so that the function's own message says what
+ * is wrong with it.
  */
-function numericColumn(rows: readonly InputRow[], index: number, factor = 1, blank: CellScalar = ""): CellScalar[][] {
+function numericColumn(
+  rows: readonly InputRow[],
+  index: number,
+  format: CsvFormat,
+  factor = 1,
+  blank: CellScalar = "",
+  convert?: (x: number) => number,
+): CellScalar[][] {
   const out: CellScalar[][] = new Array(rows.length);
+  const mark = format.decimalMark;
   for (let r = 0; r < rows.length; r++) {
     const text = rows[r].fields[index] ?? "";
-    out[r] = [NUMERIC.test(text) ? (factor === 1 ? Number(text) : Number(text) * factor) : isBlank(text) ? blank : text];
+    const x = readNumber(text, mark);
+    out[r] = [x !== null ? (convert ? convert(x) : x * factor) : isBlank(text) ? blank : text];
   }
   return out;
 }
@@ -206,18 +214,14 @@ export function evaluateBatch(plan: EvaluationPlan, rows: readonly InputRow[], f
 
 function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): BatchResult {
   const n = rows.length;
-  const pH = numericColumn(rows, plan.phColumn);
+  const f = plan.format;
+  const pH = numericColumn(rows, plan.phColumn, f);
   // Readings in mV are divided by 1000 when they are numbers; anything else goes to the function as written.
-  const reading: CellInput =
-    plan.unit === "mV"
-      ? rows.map((r) => {
-          const text = r.fields[plan.potentialColumn] ?? "";
-          const t = text.trim();
-          return [/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t) ? Number(t) / 1000 : text];
-        })
-      : numericColumn(rows, plan.potentialColumn);
+  const reading: CellInput = numericColumn(rows, plan.potentialColumn, f, 1, "", plan.unit === "mV" ? (x) => x / 1000 : undefined);
   const fixedT = plan.fixedTemperature ?? "";
-  const temperature: CellInput = plan.temperatureColumn === null ? fixedT : numericColumn(rows, plan.temperatureColumn, 1, fixedT);
+  const scale = plan.temperatureScale;
+  const temperature: CellInput =
+    plan.temperatureColumn === null ? fixedT : numericColumn(rows, plan.temperatureColumn, f, 1, fixedT, scale === "C" ? undefined : (x) => toCelsius(x, scale));
   const isRhe = plan.electrode.trim().toUpperCase() === "RHE";
   const eShe = fns.toShe(reading, plan.electrode, temperature, isRhe ? pH : undefined);
   // A reading that failed to convert is an error cell the spreadsheet would pass on as it is.
@@ -235,12 +239,12 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   let carbonateErrors: (CellError | null)[] | null = null;
   for (const l of plan.ligands) {
     if (l.kind === "alkalinity") {
-      const dic = fns.dic(numericColumn(rows, l.column, l.factor), pH, temperature);
+      const dic = fns.dic(numericColumn(rows, l.column, f, l.factor), pH, temperature);
       carbonateErrors = dic.map(([d]) => (d instanceof CellError ? d : null));
       ligandArgs.carbonate = dic.map(([d]) => [d instanceof CellError ? "" : (d as number | string)]);
       ligandCells.push(dic);
     } else {
-      const column = numericColumn(rows, l.column, l.factor);
+      const column = numericColumn(rows, l.column, f, l.factor);
       ligandArgs[l.ligand] = column;
       // the output cell: the total as the functions read it ("" where blank)
       ligandCells.push(mapCells([LIGAND_ARG[l.ligand]], [column], (x) => x).map((cell, r) => (isBlank(column[r][0]) ? [""] : cell)));
@@ -265,6 +269,9 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   // a total converted from the column's unit is named in mol/kg by the functions: say where it came from
   const argNotes: Record<string, string> = {};
   for (const l of plan.ligands) if (l.kind === "total" && l.factor !== 1) argNotes[l.ligand] = ` (converted from ${l.unit})`;
+  if (scale !== "C") argNotes.temperature = ` (°C, converted from the column's ${scale === "F" ? "°F" : "K"})`;
+  const kinds = cellKinds(ligandCells.length, perTarget.length);
+  const missingTemperature = plan.temperatureColumn !== null && plan.fixedTemperature === undefined ? plan.temperatureColumn : null;
   const out: string[] = new Array(n);
   const messages: RowMessage[] = [];
   const regimes = new Map<string, Map<string, number>>();
@@ -272,16 +279,29 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   const points: SamplePoint[] = [];
   let errorRows = 0;
   let blankRows = 0;
-  const keep = plan.keepInput;
   const cellCount = 2 + ligandCells.length + 5 * perTarget.length;
 
+  const rowCells: CellOutput[] = new Array(cellCount);
   for (let r = 0; r < n; r++) {
     const row = rows[r];
+    if (isBlank(row.fields[plan.phColumn]) && row.fields.every(isBlank)) {
+      messages.push({ line: row.line, column: null, text: "a record of blank cells; its results are left blank", kind: "blank" });
+      out[r] = blankLine(plan, row, cellCount);
+      blankRows++;
+      continue;
+    }
+    if (missingTemperature !== null && isBlank(row.fields[missingTemperature])) {
+      const text = "blank: a missing measurement, this row's results are left blank (--temperature gives a default)";
+      messages.push({ line: row.line, column: plan.headers[missingTemperature], text, kind: "blank" });
+      out[r] = blankLine(plan, row, cellCount);
+      blankRows++;
+      continue;
+    }
     const e = eShe[r][0];
     const eError = e instanceof CellError ? e : null;
     // the spreadsheet passes an error in an argument cell straight through: the potential first, then the carbonate
     const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]);
-    const cells: CellOutput[] = new Array(cellCount);
+    const cells = rowCells; // reused: each row's line is written before the next row
     let k = 0;
     cells[k++] = e;
     cells[k++] = eError ?? margin[r][0];
@@ -303,7 +323,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       if (!(c instanceof CellError) || !SERIOUS.has(c.code)) continue;
       const [arg, rest] = splitMessage(c.message);
       const col = arg !== null && arg in argColumns ? argColumns[arg] : null;
-      const text = col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`;
+      const text = clip(col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`);
       problems ??= [];
       if (!problems.some((m) => m.column === col && m.text === text)) problems.push({ line: row.line, column: col, text, kind: "error" });
     }
@@ -341,18 +361,38 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
         if (typeof regime !== "string" || regime === "" || typeof species !== "string") continue;
         const counts = regimes.get(p.target.prefix)!;
         counts.set(regime, (counts.get(regime) ?? 0) + 1);
+        if (!plan.diagrams) continue;
         const symbol = p.target.symbol ?? String((p.element as CellScalar[][])[r][0]).trim();
         const point: SamplePoint = { symbol, pH: pHValue, E: e, regime, species, celsius, line: row.line };
         points.push(ligands ? { ...point, ligands } : point);
       }
     }
 
-    let line = "";
-    if (keep) for (const f of row.fields) line += csvField(f) + ",";
-    for (let i = 0; i < cellCount; i++) line += cellText(cells[i]) + ",";
-    line += problems === null ? "\n" : csvField(problems.map((m) => (m.column ? `${m.column}: ${m.text}` : m.text)).join("; ")) + "\n";
-    out[r] = line;
+    out[r] = outputLine(plan, row, cells, kinds, problems === null ? "" : problems.map((m) => (m.column ? `${clip(m.column)}: ${m.text}` : m.text)).join("; "));
   }
   for (const [prefix, counts] of regimes) if (counts.size === 0) regimes.delete(prefix);
   return { lines: out, messages, errorRows, blankRows, regimes, points };
+}
+
+/** How each result cell's number is rounded, in output order (see outputHeader). */
+function cellKinds(ligandColumns: number, targets: number): NumberKind[] {
+  const kinds: NumberKind[] = ["volts", "volts"];
+  for (let i = 0; i < ligandColumns; i++) kinds.push("amount");
+  for (let t = 0; t < targets; t++) kinds.push("amount", "amount", "volts", "volts", "amount");
+  return kinds;
+}
+
+/** One output line: the input fields (unless dropped), the result cells and the errors cell. */
+function outputLine(plan: EvaluationPlan, row: InputRow, cells: readonly CellOutput[], kinds: readonly NumberKind[], errors: string): string {
+  const f = plan.format;
+  const d = f.delimiter;
+  let line = "";
+  if (plan.keepInput) for (const field of row.fields) line += textField(field, f) + d;
+  for (let i = 0; i < cells.length; i++) line += (cells[i] === undefined ? "" : cellText(cells[i], kinds[i], f)) + d;
+  return line + (errors === "" ? "" : textField(clip(errors, 4 * ECHO_LIMIT), f)) + "\n";
+}
+
+/** A row of blank results (a blank record, or a missing temperature). */
+function blankLine(plan: EvaluationPlan, row: InputRow, cellCount: number): string {
+  return outputLine(plan, row, new Array<CellOutput>(cellCount).fill(""), [], "");
 }

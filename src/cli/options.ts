@@ -3,6 +3,8 @@
  * reads is declared and documented here.
  */
 import { parseArgs } from "node:util";
+import type { DecimalMark } from "../tables/numbers";
+import type { TemperatureScale } from "../tables/units";
 
 export const EXIT = {
   /** Every row was read; results written (blank input cells give blank results and do not count as errors). */
@@ -13,6 +15,12 @@ export const EXIT = {
   usage: 2,
   /** The input cannot be read (missing, unreadable, malformed CSV) or the output cannot be written. */
   io: 3,
+  /** The results are written and complete, but the diagrams could not be written. */
+  diagrams: 4,
+  /** Interrupted (Ctrl-C, SIGINT: 128 + 2); no results written, any previous ones left as they were. */
+  interrupted: 130,
+  /** Terminated (SIGTERM: 128 + 15); as interrupted. */
+  terminated: 143,
 } as const;
 
 export class UsageError extends Error {}
@@ -42,6 +50,14 @@ export interface CliOptions {
   pureWater: boolean;
   /** Fixed temperature °C, used when there is no temperature column (and for blank cells in it). */
   temperature?: number;
+  /** Scale of the temperature column's numbers; undefined = from its header. */
+  temperatureUnit?: TemperatureScale;
+  /** Decimal mark of the input (and results); undefined = detected. */
+  decimalMark?: DecimalMark;
+  /** Write text cells as they are, formula-like text included. */
+  rawText: boolean;
+  /** Write result numbers with every digit. */
+  fullPrecision: boolean;
   electrode?: string;
   unit?: PotentialUnitOption;
   activity: number;
@@ -79,20 +95,32 @@ Columns are found by their headers (case and punctuation ignored): pH ("pH"), th
 "Eh", "redox", "potential", …), temperature ("temp", "temperature", …), the metal of each row ("metal",
 "element", "pipe metal"), and the water: alkalinity ("alkalinity", "alk", "TA"), DIC ("DIC", "TIC"), chloride
 ("chloride", "Cl"), sulfate ("sulfate", "SO4"). The unit and electrode are read from the potential header when it names them
-("ORP_mV_AgCl_sat", "Eh (V)"); otherwise give --unit and --electrode. Lines starting with # are comments.
+("ORP_mV_AgCl_sat", "Eh (V)"); otherwise give --unit and --electrode. A silver chloride header must name its
+filling ("AgCl sat", "Ag/AgCl 3M"), or give --electrode. A temperature header naming °F or K ("Temp (°F)",
+"T_K") is converted to °C. Blank lines and lines starting with # before the header are skipped; after it every
+record is a row (a sample id may begin with #), and the results have one row per input record.
 
 Input and output
   -o, --output FILE          results CSV (default: <input>-results.csv next to the input; "-" = standard output)
       --svg-dir DIR          directory for the diagram SVGs (default: the output's directory)
       --no-svg               write no diagrams
-      --delimiter C          field separator: "," ";" "tab" (default: guessed from the header line)
+      --delimiter C          field separator: "," ";" "tab" (default: guessed from the header line); the
+                             results use the same one
+      --decimal comma|point  decimal mark of the numbers (default: a comma when the delimiter is ";" or tab
+                             and the data are written so, else a point); the results use the same one
       --no-keep-input        write only the result columns (default: input columns first, then results)
+      --raw-text             write text cells as they are (default: text starting with = + - @, tab or
+                             carriage return gets a leading ' so that a spreadsheet does not run it as a formula)
+      --full-precision       write result numbers with every digit (default: potentials to 0.1 mV, amounts
+                             to 4 significant figures)
 
 Columns (header text, or a 1-based column number)
       --ph-column COL        the pH column
       --potential-column COL the potential reading column
       --temperature-column COL
-                             the temperature column, °C; "none" to ignore one
+                             the temperature column; "none" to ignore one
+      --temperature-unit C|F|K
+                             scale of the temperature column (default: from its header, else °C)
       --metal-column COL     the column naming each row's metal ("Fe", "copper"); "none" to ignore one
       --alkalinity-column COL
                              total alkalinity, mg/L as CaCO3 (meq/L when the header says meq or mmol); each
@@ -110,8 +138,9 @@ Chemistry
   -e, --electrode NAME       reference electrode of the readings: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M,
                              AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M, RHE (default: from the header)
   -u, --unit V|mV            unit of the readings (default: from the header)
-  -t, --temperature C        temperature in °C when there is no temperature column, and for its blank cells
-                             (default 25)
+  -t, --temperature C        temperature in °C when there is no temperature column (default 25), and for the
+                             blank cells of one (default: none — a blank temperature is a missing measurement,
+                             that row's results are left blank and the row is reported)
   -a, --activity A           activity of dissolved metal species, 0 < A ≤ 10 (default 1e-6)
       --dissolved-unit U     ug/L (default), mg/L or mol/kg
       --overpotential V      widens the water window on both sides for the margin column (default 0)
@@ -120,7 +149,9 @@ Messages and progress
       --progress             show a progress bar on standard error even when it is not a terminal
       --no-progress          never show one (default: shown when standard error is a terminal)
       --max-messages N       print at most N cell messages (default 50; 0 = none); the rest are counted
-      --batch-size N         rows evaluated together (default 4096); memory grows with it
+      --batch-size N         rows evaluated together (default 256, what the engine's system cache holds, so a
+                             batch whose every row has its own water builds each system once, not once per
+                             function); memory grows with it
   -q, --quiet                no summary
   -h, --help                 this text
   -V, --version              the program's version
@@ -142,10 +173,15 @@ error code (#VALUE!, #NUM!) in the results that depend on it, a message on stand
 column, and its text in the errors column; the row is never dropped.
 
 Exit codes
-  0  all rows read (blank cells allowed)
-  1  results written, but some rows had bad cells
-  2  usage error (unknown option, no input, no pH or potential column, unknown metal or electrode)
-  3  the input cannot be read (missing file, malformed CSV) or the output cannot be written
+  0    all rows read (blank cells allowed)
+  1    results written, but some rows had bad cells
+  2    usage error (unknown option, no input, no pH or potential column, unknown metal or electrode, the
+       output is the input file)
+  3    the input cannot be read (missing file, malformed CSV) or the output cannot be written (full disk, …)
+  4    results written and complete, but the diagrams could not be written
+  130  interrupted (Ctrl-C); 143 terminated (SIGTERM)
+For 2, 3, 130 and 143 no results are written: the results go to a temporary file beside the output and replace
+it only when complete, so any previous results are left as they were.
 
 Examples
   redox-cells data/demo/sample-log.csv -o out/results.csv
@@ -158,6 +194,13 @@ and licensed corrosion professionals.
 `;
 
 const DEFAULT_MAX_MESSAGES = 50;
+
+/**
+ * Rows per batch: no more than the engine's system cache holds (SYSTEM_CACHE_SIZE, src/chemistry/system-cache.ts;
+ * a test keeps them tied), so that rows with waters of their own build each system once per batch and the other
+ * four functions find it cached. Not imported here: --help and --version load no chemistry.
+ */
+export const DEFAULT_BATCH_SIZE = 256;
 
 function numberOption(name: string, text: string | undefined, check: (x: number) => boolean, expected: string): number | undefined {
   if (text === undefined) return undefined;
@@ -172,6 +215,10 @@ export const OPTION_SPEC = {
   "svg-dir": { type: "string" },
   "no-svg": { type: "boolean" },
   delimiter: { type: "string" },
+  decimal: { type: "string" },
+  "raw-text": { type: "boolean" },
+  "full-precision": { type: "boolean" },
+  "temperature-unit": { type: "string" },
   "no-keep-input": { type: "boolean" },
   "ph-column": { type: "string" },
   "potential-column": { type: "string" },
@@ -243,6 +290,22 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     delimiter = d;
   }
 
+  let decimalMark: DecimalMark | undefined;
+  if (v.decimal !== undefined) {
+    const key = v.decimal.trim().toLowerCase();
+    if (key === "comma" || key === ",") decimalMark = ",";
+    else if (key === "point" || key === "." || key === "dot") decimalMark = ".";
+    else throw new UsageError(`--decimal: expected comma or point, got "${v.decimal.slice(0, 40)}"`);
+    if (decimalMark === "," && delimiter === ",") throw new UsageError("--decimal comma needs a delimiter other than the comma (--delimiter ';' or tab)");
+  }
+
+  let temperatureUnit: TemperatureScale | undefined;
+  if (v["temperature-unit"] !== undefined) {
+    const key = v["temperature-unit"].trim().toUpperCase().replace(/^°/, "");
+    if (key !== "C" && key !== "F" && key !== "K") throw new UsageError(`--temperature-unit: expected C, F or K, got "${v["temperature-unit"].slice(0, 40)}"`);
+    temperatureUnit = key;
+  }
+
   const metals = (v.metal ?? []).flatMap((m) => m.split(",")).map((m) => m.trim()).filter((m) => m !== "");
   const columnOption = (text: string | undefined): string | null | undefined =>
     text === undefined ? undefined : text.trim().toLowerCase() === "none" ? null : text;
@@ -269,12 +332,16 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,
     dissolvedUnit,
     overpotential: numberOption("overpotential", v.overpotential, (x) => x >= 0 && x <= 3, "a number of volts from 0 to 3") ?? 0,
+    temperatureUnit,
     delimiter,
+    decimalMark,
+    rawText: v["raw-text"] ?? false,
+    fullPrecision: v["full-precision"] ?? false,
     keepInput: !v["no-keep-input"],
     progress: v["no-progress"] ? false : v.progress ? true : "auto",
     maxMessages: numberOption("max-messages", v["max-messages"], (x) => Number.isInteger(x) && x >= 0, "a whole number ≥ 0") ?? DEFAULT_MAX_MESSAGES,
     quiet: v.quiet ?? false,
-    batchSize: numberOption("batch-size", v["batch-size"], (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000, "a whole number from 1 to 1000000") ?? 4096,
+    batchSize: numberOption("batch-size", v["batch-size"], (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000, "a whole number from 1 to 1000000") ?? DEFAULT_BATCH_SIZE,
   };
   return { kind: "run", options };
 }

@@ -1,40 +1,33 @@
 /**
- * The command line's pipeline: read the header, decide the column mapping, then stream the CSV in batches
- * through the worksheet functions and out to the results CSV, with bounded memory (csv-parse streaming, waits for
- * the output to drain), a progress bar, messages naming line and column, diagram SVGs and a summary.
+ * The command line's pipeline: check the paths, find the input's format, read the header and decide the column
+ * mapping, then stream the records in batches through the worksheet functions into a temporary results file that
+ * replaces the output only when complete (safe-output.ts), with bounded memory, a progress bar, messages naming
+ * line and column, diagram SVGs and a summary.
  */
-import { once } from "node:events";
-import { closeSync, createReadStream, createWriteStream, mkdirSync, openSync, readFileSync, readSync, statSync, writeFileSync } from "node:fs";
-import { dirname, join } from "node:path";
+import { createReadStream, statSync } from "node:fs";
 import type { Writable } from "node:stream";
-import { parse } from "csv-parse";
-import { getDatabase } from "../chemistry/database";
-import { getElectrodes } from "../chemistry/electrodes";
-import { EMPTY_MAPPING, electrodeHint, headerTokens, matchHeaders } from "../taskpane/header-match";
-import { DiagramSamples, diagramCelsius, diagramTotals, renderDiagram, totalsText } from "./diagrams";
-import { csvLine, EvaluationPlan, evaluateBatch, InputRow, MetalTarget, outputHeader, RowMessage } from "./evaluate";
+import { DiagramSamples } from "./diagrams";
+import { DEFAULT_FORMAT, textLine, type CsvFormat } from "./csv-format";
+import { clip, evaluateBatch, outputHeader, type EvaluationPlan, type RowMessage } from "./evaluate";
+import { probeInput } from "./input-probe";
 import { CliOptions, EXIT, HELP, parseCommandLine, UsageError } from "./options";
+import { duplicateHeaders, planFromHeader } from "./plan";
 import { ProgressBar } from "./progress";
-import { planWater } from "./water";
+import { MalformedCsvError, RecordSplitter, type InputRow } from "./record-reader";
+import { writeDiagrams } from "./run-diagrams";
+import { SafeOutput, sameFile, type StreamOpener } from "./safe-output";
+import { summaryText, type RunSummary } from "./summary";
+import { version } from "./version";
 import { worksheetFunctions, WorksheetFunctions } from "./worksheet";
+
+export { findColumn, planFromHeader } from "./plan";
+export { summaryText, type RunSummary } from "./summary";
 
 export interface CliStreams {
   stdout: Writable;
   stderr: Writable & { isTTY?: boolean; columns?: number };
-}
-
-export interface RunSummary {
-  input: string;
-  output: string;
-  rows: number;
-  errorRows: number;
-  blankRows: number;
-  messages: number;
-  seconds: number;
-  /** Regime counts per column prefix ("Fe", "metal"). */
-  regimes: Record<string, Record<string, number>>;
-  svgFiles: string[];
-  header: string[];
+  /** Opens the temporary results file (tests give one that fails, as a full disk does). */
+  openOutput?: StreamOpener;
 }
 
 export interface RunResult {
@@ -43,15 +36,10 @@ export interface RunResult {
 }
 
 const PROGRAM = "redox-cells";
-
-function version(): string {
-  try {
-    const pkg = JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version?: string };
-    return pkg.version ?? "unknown";
-  } catch {
-    return "unknown";
-  }
-}
+/** A record longer than this is refused (an unclosed quote would otherwise read the whole file into memory). */
+const MAX_RECORD_CHARS = 64 * 1024 * 1024;
+/** Results text gathered before one write. */
+const WRITE_CHARS = 1 << 20;
 
 /** Entry point: parses argv, runs, returns the exit code. Never throws. */
 export async function runCli(argv: readonly string[], streams: CliStreams, fns: WorksheetFunctions = worksheetFunctions): Promise<number> {
@@ -63,10 +51,7 @@ export async function runCommand(argv: readonly string[], streams: CliStreams, f
   try {
     command = parseCommandLine(argv);
   } catch (error) {
-    if (error instanceof UsageError) {
-      streams.stderr.write(`${PROGRAM}: ${error.message}\nTry '${PROGRAM} --help'.\n`);
-      return { code: EXIT.usage, summary: null };
-    }
+    if (error instanceof UsageError) return usage(streams, error);
     throw error;
   }
   if (command.kind === "help") {
@@ -80,337 +65,249 @@ export async function runCommand(argv: readonly string[], streams: CliStreams, f
   return runWithOptions(command.options, streams, fns);
 }
 
-/** The field separator: the one of tab, semicolon and comma that occurs most, outside quotes, on the header line. */
-export function guessDelimiter(headerLine: string): string {
-  const counts: Record<string, number> = { "\t": 0, ",": 0, ";": 0 };
-  let quoted = false;
-  for (const ch of headerLine) {
-    if (ch === '"') quoted = !quoted;
-    else if (!quoted && ch in counts) counts[ch]++;
-  }
-  let best = ",";
-  for (const d of ["\t", ";", ","]) if (counts[d] > counts[best]) best = d;
-  return best;
-}
-
-/** The first line that is neither blank nor a # comment, from the first 64 KiB of the file. */
-function firstDataLine(path: string): string {
-  const fd = openSync(path, "r");
-  try {
-    const buffer = Buffer.alloc(65536);
-    const n = readSync(fd, buffer, 0, buffer.length, 0);
-    const text = buffer.subarray(0, n).toString("utf8").replace(/^\uFEFF/, "");
-    for (const line of text.split(/\r?\n/)) {
-      if (line.trim() === "" || line.trim().startsWith("#")) continue;
-      return line;
-    }
-    return "";
-  } finally {
-    closeSync(fd);
-  }
-}
-
-/** A column named on the command line: header text (exact, else ignoring case and punctuation) or a 1-based number. */
-export function findColumn(headers: readonly string[], choice: string): number | string {
-  if (/^\d+$/.test(choice.trim())) {
-    const n = Number(choice);
-    if (n >= 1 && n <= headers.length) return n - 1;
-    return `column ${n} does not exist (the table has ${headers.length} columns)`;
-  }
-  const exact = headers.indexOf(choice);
-  if (exact >= 0) return exact;
-  const wanted = headerTokens(choice).join(" ");
-  const index = headers.findIndex((h) => headerTokens(h).join(" ") === wanted);
-  if (index >= 0) return index;
-  return `no column is headed "${choice}" (headers: ${headers.map((h) => `"${h}"`).join(", ")})`;
-}
-
-/** The unit a potential header names ("ORP_mV", "Eh (V)"), or null. */
-function unitFromHeader(header: string): "V" | "mV" | null {
-  const tokens = headerTokens(header);
-  if (tokens.includes("mv")) return "mV";
-  if (tokens.includes("v") || tokens.includes("volt") || tokens.includes("volts")) return "V";
-  return null;
-}
-
-/**
- * Decides everything about the columns from the header row and the options; UsageError when it cannot. Columns
- * are found by the task pane's header matching (src/taskpane/header-match.ts), so a file maps the same way in
- * both; a column named on the command line wins.
- */
-export function planFromHeader(headers: string[], options: CliOptions): EvaluationPlan {
-  const auto = matchHeaders(headers).mapping;
-  const pick = (option: string | null | undefined, automatic: number, what: string): number | null => {
-    if (option === null) return null;
-    if (option === undefined) return automatic >= 0 ? automatic : null;
-    const found = findColumn(headers, option);
-    if (typeof found === "string") throw new UsageError(`${what}: ${found}`);
-    return found;
-  };
-  const list = headers.map((h) => `"${h}"`).join(", ");
-  const ph = pick(options.phColumn, auto.pH, "--ph-column");
-  if (ph === null) throw new UsageError(`no pH column found among ${list}; name it with --ph-column`);
-  const potential = pick(options.potentialColumn, auto.potential, "--potential-column");
-  if (potential === null) throw new UsageError(`no potential column found among ${list}; name it with --potential-column`);
-  const temperatureColumn = pick(options.temperatureColumn, auto.temperature, "--temperature-column");
-  const metalColumn = pick(options.metalColumn === "auto" ? undefined : options.metalColumn, auto.metal, "--metal-column");
-  const potentialHeader = headers[potential];
-  const ligands = planWater(
-    headers,
-    options,
-    { ...EMPTY_MAPPING, pH: ph, potential, temperature: temperatureColumn ?? -1, metal: metalColumn ?? -1, id: auto.id, site: auto.site },
-    (option, what) => pick(option, -1, what) as number,
-  );
-
-  const electrodeName = options.electrode ?? electrodeHint(headerTokens(potentialHeader));
-  if (electrodeName === null) {
-    throw new UsageError(`the header "${potentialHeader}" does not say which reference electrode the readings are against; give --electrode (e.g. SHE, SCE, AgCl-sat)`);
-  }
-  const found = getElectrodes().lookup(electrodeName);
-  if ("error" in found) throw new UsageError(`--electrode: ${found.error}`);
-  const unit = options.unit ?? unitFromHeader(potentialHeader);
-  if (unit === null) throw new UsageError(`the header "${potentialHeader}" does not say whether the readings are in V or mV; give --unit V or --unit mV`);
-
-  const db = getDatabase();
-  const targets: MetalTarget[] = [];
-  for (const m of options.metals) {
-    const symbol = db.resolveMetal(m);
-    if (!symbol) throw new UsageError(`--metal: "${m}" is not a metal in the database (${db.metals().join(", ")})`);
-    if (!targets.some((t) => t.symbol === symbol)) targets.push({ prefix: symbol, symbol });
-  }
-  if (metalColumn !== null) targets.push({ prefix: "metal", symbol: null });
-  if (targets.length === 0) throw new UsageError("no metal to evaluate: give --metal Fe,Cu,… or a column naming each row's metal (--metal-column)");
-
-  return {
-    headers,
-    phColumn: ph,
-    potentialColumn: potential,
-    temperatureColumn,
-    metalColumn,
-    fixedTemperature: options.temperature,
-    electrode: found.electrode.id,
-    unit,
-    activity: options.activity,
-    dissolvedUnit: options.dissolvedUnit,
-    overpotential: options.overpotential,
-    targets,
-    keepInput: options.keepInput,
-    ligands,
-  };
+function usage(streams: CliStreams, error: UsageError): RunResult {
+  streams.stderr.write(`${PROGRAM}: ${clip(error.message, 1000)}\nTry '${PROGRAM} --help'.\n`);
+  return { code: EXIT.usage, summary: null };
 }
 
 function formatMessage(m: RowMessage): string {
-  const where = m.column !== null ? `line ${m.line}, column "${m.column}"` : `line ${m.line}`;
-  return `${PROGRAM}: ${m.kind === "error" ? "error" : "note"}: ${where}: ${m.text}\n`;
+  const where = m.column !== null ? `line ${m.line}, column "${clip(m.column, 60)}"` : `line ${m.line}`;
+  return `${PROGRAM}: ${m.kind === "error" ? "error" : "note"}: ${where}: ${clip(m.text, 400)}\n`;
 }
 
-export async function runWithOptions(options: CliOptions, streams: CliStreams, fns: WorksheetFunctions = worksheetFunctions): Promise<RunResult> {
-  const started = Date.now();
-  const err = streams.stderr;
+/** Failure of a run: a message on standard error, an exit code, and no results written. */
+class RunFailure extends Error {
+  constructor(
+    readonly code: number,
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
+const cannotRead = (options: CliOptions, error: unknown): RunFailure => new RunFailure(EXIT.io, `cannot read the input "${clip(options.input, 200)}": ${reason(error)}`);
+const cannotWrite = (options: CliOptions, error: unknown): RunFailure => new RunFailure(EXIT.io, `cannot write the output "${clip(options.output, 200)}": ${reason(error)}`);
+
+/** The input's size; refuses a missing input and an output that is the input. */
+function checkPaths(options: CliOptions): number {
   let size: number;
   try {
     const stat = statSync(options.input);
     if (!stat.isFile()) throw new Error("not a file");
     size = stat.size;
   } catch (error) {
-    err.write(`${PROGRAM}: cannot read the input "${options.input}": ${reason(error)}\n`);
-    return { code: EXIT.io, summary: null };
+    throw cannotRead(options, error);
   }
+  if (options.output !== "-" && sameFile(options.input, options.output)) {
+    throw new RunFailure(EXIT.usage, `the output "${clip(options.output, 200)}" is the input file; give another -o (the input is left untouched)`);
+  }
+  return size;
+}
 
-  let delimiter: string;
+export async function runWithOptions(options: CliOptions, streams: CliStreams, fns: WorksheetFunctions = worksheetFunctions): Promise<RunResult> {
+  const started = Date.now();
+  let output: SafeOutput | null = null;
   try {
-    delimiter = options.delimiter ?? guessDelimiter(firstDataLine(options.input));
-  } catch (error) {
-    err.write(`${PROGRAM}: cannot read the input "${options.input}": ${reason(error)}\n`);
-    return { code: EXIT.io, summary: null };
-  }
-
-  const source = createReadStream(options.input);
-  const parser = source.pipe(
-    parse({
-      delimiter,
-      bom: true,
-      comment: "#",
-      comment_no_infix: true,
-      skip_empty_lines: true,
-      skip_records_with_empty_values: true,
-      relax_column_count: true,
-      info: true,
-    }),
-  );
-  let sourceError: unknown = null;
-  source.on("error", (e) => {
-    sourceError = e;
-    parser.destroy(e);
-  });
-
-  const showProgress = options.progress === true || (options.progress === "auto" && err.isTTY === true);
-  const progress = showProgress ? new ProgressBar(err, size) : null;
-  const toStdout = options.output === "-";
-  let out: Writable | null = null;
-  let outError: unknown = null;
-  const diagrams = new DiagramSamples();
-  const regimes: Record<string, Record<string, number>> = {};
-  let plan: EvaluationPlan | null = null;
-  let header: string[] = [];
-  let rows = 0;
-  let errorRows = 0;
-  let blankRows = 0;
-  let messageCount = 0;
-  let batch: InputRow[] = [];
-
-  const say = (text: string): void => {
-    progress?.clear();
-    err.write(text);
-  };
-
-  const flush = async (): Promise<void> => {
-    if (batch.length === 0 || !plan || !out) return;
-    const result = evaluateBatch(plan, batch, fns);
-    batch = [];
-    errorRows += result.errorRows;
-    blankRows += result.blankRows;
-    for (const m of result.messages) {
-      if (messageCount < options.maxMessages) say(formatMessage(m));
-      messageCount++;
-    }
-    for (const [prefix, counts] of result.regimes) {
-      const into = (regimes[prefix] ??= {});
-      for (const [regime, n] of counts) into[regime] = (into[regime] ?? 0) + n;
-    }
-    for (const p of result.points) diagrams.add(p);
-    let chunk = "";
-    for (const line of result.lines) chunk += line;
-    if (outError) throw outError;
-    if (!out.write(chunk)) await drained(out);
-    if (outError) throw outError;
-  };
-
-  try {
-    for await (const item of parser as AsyncIterable<{ record: string[]; info: { lines: number } }>) {
-      const { record, info } = item;
-      if (plan === null) {
-        header = record.map((h) => h.trim());
-        try {
-          plan = planFromHeader(header, options);
-        } catch (error) {
-          source.destroy();
-          if (error instanceof UsageError) {
-            err.write(`${PROGRAM}: ${error.message}\nTry '${PROGRAM} --help'.\n`);
-            return { code: EXIT.usage, summary: null };
-          }
-          throw error;
-        }
-        try {
-          if (toStdout) out = streams.stdout;
-          else {
-            mkdirSync(dirname(options.output), { recursive: true });
-            out = createWriteStream(options.output);
-            await once(out, "open");
-          }
-          out.on("error", (e) => {
-            outError = e;
-          });
-        } catch (error) {
-          source.destroy();
-          err.write(`${PROGRAM}: cannot write the output "${options.output}": ${reason(error)}\n`);
-          return { code: EXIT.io, summary: null };
-        }
-        out.write(csvLine(outputHeader(plan)));
-        continue;
-      }
-      // a record spanning several lines (quoted line breaks) is named by its first line
-      const width = header.length;
-      const fields = record.length === width ? record : record.length > width ? record.slice(0, width) : [...record, ...new Array<string>(width - record.length).fill("")];
-      batch.push({ fields, line: info.lines - countLineBreaks(record) });
-      rows++;
-      if (batch.length >= options.batchSize) {
-        await flush();
-        progress?.update(source.bytesRead, rows);
-      }
-    }
-    await flush();
-  } catch (error) {
-    progress?.clear();
-    if (outError || (error as { code?: string })?.code === "EPIPE") {
-      err.write(`${PROGRAM}: cannot write the output "${options.output}": ${reason(outError ?? error)}\n`);
-    } else {
-      err.write(`${PROGRAM}: cannot read the input "${options.input}": ${reason(sourceError ?? error)}\n`);
-    }
-    if (out && !toStdout) (out as Writable).destroy();
-    return { code: EXIT.io, summary: null };
-  }
-  progress?.update(size, rows, true);
-  progress?.clear();
-
-  if (plan === null || out === null) {
-    err.write(`${PROGRAM}: the input "${options.input}" has no header row\n`);
-    return { code: EXIT.io, summary: null };
-  }
-  if (!toStdout) {
-    const closing = out as Writable;
-    closing.end();
+    const size = checkPaths(options);
+    let format: CsvFormat;
     try {
-      await once(closing, "finish");
+      format = { ...DEFAULT_FORMAT, ...probeInput(options.input, options.delimiter, options.decimalMark), rawText: options.rawText, fullPrecision: options.fullPrecision };
     } catch (error) {
-      err.write(`${PROGRAM}: cannot write the output "${options.output}": ${reason(error)}\n`);
-      return { code: EXIT.io, summary: null };
+      throw cannotRead(options, error);
     }
-    if (outError) {
-      err.write(`${PROGRAM}: cannot write the output "${options.output}": ${reason(outError)}\n`);
-      return { code: EXIT.io, summary: null };
+    const run = new StreamedRun(options, streams, fns, format, size);
+    const plan = await run.stream(async () => {
+      if (options.output === "-") return streams.stdout;
+      try {
+        output = await SafeOutput.open(options.output, streams.openOutput);
+      } catch (error) {
+        throw cannotWrite(options, error);
+      }
+      return output.stream;
+    });
+    if (output !== null) {
+      try {
+        await (output as SafeOutput).commit();
+      } catch (error) {
+        throw cannotWrite(options, error);
+      }
     }
+    return finish(options, streams, run, plan, started);
+  } catch (error) {
+    (output as SafeOutput | null)?.abort();
+    if (error instanceof UsageError) return usage(streams, error);
+    if (error instanceof RunFailure) {
+      streams.stderr.write(`${PROGRAM}: ${error.message}\n`);
+      if (error.code === EXIT.usage) streams.stderr.write(`Try '${PROGRAM} --help'.\n`);
+      return { code: error.code, summary: null };
+    }
+    throw error;
   }
-  if (messageCount > options.maxMessages) err.write(`${PROGRAM}: … ${messageCount - options.maxMessages} more messages not shown (the errors column has them all)\n`);
+}
 
-  // diagrams
-  const svgFiles: string[] = [];
+/** After the results are in place: the message count, the diagrams and the summary. */
+async function finish(options: CliOptions, streams: CliStreams, run: StreamedRun, plan: EvaluationPlan, started: number): Promise<RunResult> {
+  const err = streams.stderr;
+  if (run.messageCount > options.maxMessages) err.write(`${PROGRAM}: … ${run.messageCount - options.maxMessages} more messages not shown (the errors column has the errors)\n`);
+  let svgFiles: string[] = [];
+  let diagramFailure: string | null = null;
   if (options.svgDir !== null) {
     try {
-      mkdirSync(options.svgDir, { recursive: true });
-      for (const symbol of diagrams.symbols()) {
-        const points = diagrams.points(symbol);
-        const total = diagrams.count(symbol);
-        const celsius = plan.temperatureColumn === null ? (plan.fixedTemperature ?? 25) : diagramCelsius(points, plan.fixedTemperature ?? 25);
-        const ligands = diagramTotals(points);
-        const caption = [
-          `${total.toLocaleString("en-US")} samples from ${baseName(options.input)}${points.length < total ? ` (${points.length.toLocaleString("en-US")} drawn, chosen at random)` : ""}.`,
-          plan.temperatureColumn === null
-            ? `Drawn at ${celsius} °C.`
-            : `Drawn at ${celsius} °C, the samples' median; each sample's result columns use its own temperature.`,
-        ];
-        if (plan.ligands.length > 0) {
-          caption.push(
-            totalsText(ligands) === ""
-              ? "Drawn in pure water (no sample has ligand totals); each sample's result columns use its own water."
-              : `Drawn in water with the samples' median totals (${totalsText(ligands)}); each sample's result columns use its own water.`,
-          );
-        }
-        const svg = renderDiagram({ element: symbol, celsius, activity: plan.activity, samples: points, caption, ligands });
-        const file = join(options.svgDir, `diagram-${symbol}.svg`);
-        writeFileSync(file, svg, "utf8");
-        svgFiles.push(file);
-      }
+      svgFiles = writeDiagrams(options, plan, run.diagrams);
     } catch (error) {
-      err.write(`${PROGRAM}: cannot write the diagrams to "${options.svgDir}": ${reason(error)}\n`);
-      return { code: EXIT.io, summary: null };
+      diagramFailure = `the results are complete, but the diagrams cannot be written to "${clip(options.svgDir, 200)}": ${reason(error)}`;
     }
   }
-
   const summary: RunSummary = {
     input: options.input,
     output: options.output,
-    rows,
-    errorRows,
-    blankRows,
-    messages: messageCount,
+    rows: run.rows,
+    errorRows: run.errorRows,
+    blankRows: run.blankRows,
+    messages: run.messageCount,
     seconds: (Date.now() - started) / 1000,
-    regimes,
+    regimes: run.regimes,
     svgFiles,
     header: outputHeader(plan),
   };
-  if (!options.quiet) (toStdout ? err : streams.stdout).write(summaryText(summary));
-  return { code: errorRows > 0 ? EXIT.rowErrors : EXIT.ok, summary };
+  if (!options.quiet) (options.output === "-" ? err : streams.stdout).write(summaryText(summary));
+  if (diagramFailure !== null) {
+    err.write(`${PROGRAM}: ${diagramFailure}\n`);
+    return { code: EXIT.diagrams, summary };
+  }
+  return { code: run.errorRows > 0 ? EXIT.rowErrors : EXIT.ok, summary };
+}
+
+/** One pass over the input: records → batches → results lines, with counts, messages and diagram samples. */
+class StreamedRun {
+  rows = 0;
+  errorRows = 0;
+  blankRows = 0;
+  messageCount = 0;
+  readonly regimes: Record<string, Record<string, number>> = {};
+  readonly diagrams: DiagramSamples | null;
+  private readonly progress: ProgressBar | null;
+
+  constructor(
+    private readonly options: CliOptions,
+    private readonly streams: CliStreams,
+    private readonly fns: WorksheetFunctions,
+    private readonly format: CsvFormat,
+    private readonly size: number,
+  ) {
+    const show = options.progress === true || (options.progress === "auto" && streams.stderr.isTTY === true);
+    this.progress = show ? new ProgressBar(streams.stderr, size) : null;
+    this.diagrams = options.svgDir === null ? null : new DiagramSamples();
+  }
+
+  private say(text: string): void {
+    this.progress?.clear();
+    this.streams.stderr.write(text);
+  }
+
+  /** Reads every record; `openOutput` is called once the header is planned. Returns the plan. */
+  async stream(openOutput: (plan: EvaluationPlan) => Promise<Writable>): Promise<EvaluationPlan> {
+    const { options, format } = this;
+    const splitter = new RecordSplitter(format.delimiter);
+    const source = createReadStream(options.input, { encoding: "utf8", highWaterMark: 1 << 20 });
+    let plan: EvaluationPlan | null = null;
+    let out: Writable | null = null;
+    let pending: InputRow[] = [];
+    const state = { failed: null as unknown };
+    try {
+      for await (const chunk of source as AsyncIterable<string>) {
+        splitter.push(chunk, pending);
+        if (splitter.pending > MAX_RECORD_CHARS) throw new MalformedCsvError(`a record runs past ${MAX_RECORD_CHARS / 1048576} MiB (an unclosed quote?)`);
+        if (plan === null && pending.length > 0) {
+          plan = this.planOf(pending.shift()!);
+          out = await openOutput(plan);
+          out.on("error", (e) => (state.failed ??= e));
+          await this.write(out, textLine(outputHeader(plan), format), state);
+        }
+        if (plan !== null && out !== null && pending.length >= options.batchSize) pending = await this.flush(plan, out, pending, state, false);
+        this.progress?.update(source.bytesRead, this.rows);
+      }
+      splitter.end(pending);
+    } catch (error) {
+      source.destroy();
+      if (error instanceof UsageError || error instanceof RunFailure) throw error;
+      if (state.failed !== null || (error as { code?: string })?.code === "EPIPE") throw cannotWrite(options, state.failed ?? error);
+      throw cannotRead(options, error);
+    }
+    if (plan === null && pending.length > 0) {
+      plan = this.planOf(pending.shift()!);
+      out = await openOutput(plan);
+      out.on("error", (e) => (state.failed ??= e));
+      await this.write(out, textLine(outputHeader(plan), format), state);
+    }
+    if (plan === null || out === null) throw new RunFailure(EXIT.io, `the input "${clip(options.input, 200)}" has no header row`);
+    await this.flush(plan, out, pending, state, true);
+    this.progress?.update(this.size, this.rows, true);
+    this.progress?.clear();
+    return plan;
+  }
+
+  private planOf(header: InputRow): EvaluationPlan {
+    const headers = header.fields.map((h) => h.trim());
+    const plan = planFromHeader(headers, this.options, this.format);
+    for (const note of duplicateHeaders(headers)) this.say(`${PROGRAM}: note: line ${header.line}: ${note}\n`);
+    return plan;
+  }
+
+  /** Evaluates and writes the rows in batches; all of them when `all`, else whole batches (the rest is returned). */
+  private async flush(plan: EvaluationPlan, out: Writable, rows: InputRow[], state: { failed: unknown }, all: boolean): Promise<InputRow[]> {
+    const size = this.options.batchSize;
+    let start = 0;
+    // batches' lines are written together, about 1 MiB at a time (one write per batch costs more than the batch)
+    let text = "";
+    while (rows.length - start >= size || (all && start < rows.length)) {
+      const batch = rows.slice(start, start + size).map((r) => this.fitted(plan, r));
+      start += batch.length;
+      text += this.evaluate(plan, batch);
+      if (text.length >= WRITE_CHARS) {
+        await this.write(out, text, state);
+        text = "";
+      }
+    }
+    if (text !== "") await this.write(out, text, state);
+    return rows.slice(start);
+  }
+
+  /** A record with as many fields as the header: padded with blanks, or cut with a note. */
+  private fitted(plan: EvaluationPlan, row: InputRow): InputRow {
+    const width = plan.headers.length;
+    const n = row.fields.length;
+    this.rows++;
+    if (n === width) return row;
+    if (n < width) return { line: row.line, fields: [...row.fields, ...new Array<string>(width - n).fill("")] };
+    const extra = row.fields.slice(width);
+    if (extra.some((f) => f.trim() !== "")) this.message({ line: row.line, column: null, text: `${n} fields, the header has ${width}; the fields after column ${width} are not written`, kind: "blank" });
+    return { line: row.line, fields: row.fields.slice(0, width) };
+  }
+
+  private message(m: RowMessage): void {
+    if (this.messageCount < this.options.maxMessages) this.say(formatMessage(m));
+    this.messageCount++;
+  }
+
+  private evaluate(plan: EvaluationPlan, batch: InputRow[]): string {
+    const result = evaluateBatch(plan, batch, this.fns);
+    this.errorRows += result.errorRows;
+    this.blankRows += result.blankRows;
+    for (const m of result.messages) this.message(m);
+    for (const [prefix, counts] of result.regimes) {
+      const into = (this.regimes[prefix] ??= {});
+      for (const [regime, n] of counts) into[regime] = (into[regime] ?? 0) + n;
+    }
+    if (this.diagrams) for (const p of result.points) this.diagrams.add(p);
+    return result.lines.join("");
+  }
+
+  private async write(out: Writable, text: string, state: { failed: unknown }): Promise<void> {
+    if (state.failed) throw cannotWrite(this.options, state.failed);
+    if (!out.write(text)) await drained(out);
+    if (state.failed) throw cannotWrite(this.options, state.failed);
+  }
 }
 
 /** Resolves when the stream has drained or failed (the failure is reported through its error listener). */
@@ -428,42 +325,14 @@ function drained(stream: Writable): Promise<void> {
   });
 }
 
-function countLineBreaks(record: readonly string[]): number {
-  let n = 0;
-  for (const f of record) for (let i = f.indexOf("\n"); i >= 0; i = f.indexOf("\n", i + 1)) n++;
-  return n;
-}
-
-function baseName(path: string): string {
-  const i = Math.max(path.lastIndexOf("/"), path.lastIndexOf("\\"));
-  return path.slice(i + 1);
-}
-
-function reason(error: unknown): string {
+export function reason(error: unknown): string {
   if (error && typeof error === "object" && "code" in error && typeof (error as { code: unknown }).code === "string") {
     const e = error as { code: string; message?: string };
     if (e.code === "ENOENT") return "no such file";
     if (e.code === "EACCES") return "permission denied";
     if (e.code === "EISDIR") return "it is a directory";
-    return e.message ?? e.code;
+    if (e.code === "ENOSPC") return "no space left on the device (the disk is full); any previous results are left as they were";
+    return clip(e.message ?? e.code, 300);
   }
-  return error instanceof Error ? error.message : String(error);
-}
-
-const REGIMES = ["immunity", "passivation", "corrosion"];
-
-export function summaryText(s: RunSummary): string {
-  const lines: string[] = [];
-  const rate = s.seconds > 0 ? Math.round(s.rows / s.seconds) : s.rows;
-  lines.push(`${PROGRAM}: ${s.rows.toLocaleString("en-US")} rows from ${s.input} in ${s.seconds.toFixed(1)} s (${rate.toLocaleString("en-US")} rows/s)`);
-  lines.push(`  results:  ${s.output === "-" ? "standard output" : s.output}`);
-  if (s.errorRows > 0) lines.push(`  rows with bad cells: ${s.errorRows} (error codes in their result cells, reasons in the errors column)`);
-  if (s.blankRows > 0) lines.push(`  rows with blank inputs: ${s.blankRows} (results left blank)`);
-  const prefixes = Object.keys(s.regimes);
-  if (prefixes.length > 0) {
-    lines.push(`  ${"".padEnd(8)}${REGIMES.map((r) => r.padStart(12)).join("")}`);
-    for (const p of prefixes) lines.push(`  ${p.padEnd(8)}${REGIMES.map((r) => String(s.regimes[p][r] ?? 0).padStart(12)).join("")}`);
-  }
-  if (s.svgFiles.length > 0) lines.push(`  diagrams: ${s.svgFiles.join(", ")}`);
-  return lines.join("\n") + "\n";
+  return clip(error instanceof Error ? error.message : String(error), 300);
 }

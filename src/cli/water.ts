@@ -9,13 +9,12 @@
  *   so) converted with the atomic weights of the element records. A sulfate column counts as total sulfur (in oxic
  *   water sulfate carries practically all of it). Dilute water: 1 L taken as 1 kg (common practice).
  *
- * Headers are matched by the pane's water-column matching (src/taskpane/header-match.ts); DIC columns here.
+ * Headers and units are read by src/tables (the pane's rules; one unit table for both).
  * Nothing is rounded: each distinct total is its own system, as in the worksheet.
  */
-import { CACO3_GRAMS_PER_EQUIVALENT } from "../chemistry/alkalinity";
 import { getDatabase } from "../chemistry/database";
 import type { LigandName } from "../chemistry/ligand-cells";
-import { headerTokens, waterColumnAt, type ColumnMapping, type WaterColumnRole, type WaterUnit, matchWaterColumns } from "../taskpane/header-match";
+import { alkalinityFactor, matchWaterColumns, molalFactor, waterColumnAt, WATER_UNITS, type ColumnMapping, type FormulaParts, type WaterColumnRole, type WaterUnit } from "../tables";
 import { UsageError, type CliOptions } from "./options";
 
 /** One ligand argument fed from a column. */
@@ -32,52 +31,26 @@ export interface LigandInput {
 /** Output column of the total actually passed to the functions. */
 export const LIGAND_OUTPUT: Readonly<Record<LigandName, string>> = { carbonate: "DIC_mol_kg", chloride: "chloride_mol_kg", sulfur: "sulfur_mol_kg" };
 
-function has(tokens: readonly string[], ...words: string[]): boolean {
-  return words.some((w) => tokens.includes(w));
-}
-
-/** A header naming dissolved inorganic carbon: "DIC", "TIC", "dissolved inorganic carbon (mmol/L)". */
-export function isDicHeader(header: string): boolean {
-  const t = headerTokens(header);
-  return has(t, "dic", "tic") || (has(t, "inorganic") && has(t, "carbon"));
-}
-
-/** Header says mol/kg (or molal), not a milli- or micro- unit. */
-function saysMolPerKg(tokens: readonly string[]): boolean {
-  return has(tokens, "molal") || (tokens.includes("mol") && tokens.includes("kg"));
-}
-
-function molarMass(symbol: string): number {
-  const weight = getDatabase().element(symbol)?.atomicWeight;
-  if (weight === undefined) throw new Error(`no atomic weight for ${symbol} in the element records`);
-  return weight;
-}
-
-function dicInput(column: number, header: string): LigandInput {
-  const t = headerTokens(header);
-  if (has(t, "mmol", "mm")) return { ligand: "carbonate", column, kind: "total", factor: 1e-3, unit: "mmol/L DIC" };
-  if (has(t, "umol")) return { ligand: "carbonate", column, kind: "total", factor: 1e-6, unit: "µmol/L DIC" };
-  if (has(t, "mg", "ppm")) return { ligand: "carbonate", column, kind: "total", factor: 1e-3 / molarMass("C"), unit: "mg/L DIC as C" };
-  return { ligand: "carbonate", column, kind: "total", factor: 1, unit: "mol/kg DIC" };
-}
-
-function alkalinityInput(column: number, unit: WaterUnit): LigandInput {
-  return unit === "meq/L"
-    ? { ligand: "carbonate", column, kind: "alkalinity", factor: CACO3_GRAMS_PER_EQUIVALENT, unit: "meq/L alkalinity" }
-    : { ligand: "carbonate", column, kind: "alkalinity", factor: 1, unit: "mg/L alkalinity as CaCO3" };
-}
-
-function totalInput(ligand: "chloride" | "sulfur", column: number, header: string, unit: WaterUnit): LigandInput {
-  if (saysMolPerKg(headerTokens(header))) return { ligand, column, kind: "total", factor: 1, unit: "mol/kg" };
-  if (unit === "mmol/L") return { ligand, column, kind: "total", factor: 1e-3, unit: "mmol/L" };
-  if (ligand === "chloride") {
-    return unit === "ug/L"
-      ? { ligand, column, kind: "total", factor: 1e-6 / molarMass("Cl"), unit: "µg/L chloride" }
-      : { ligand, column, kind: "total", factor: 1e-3 / molarMass("Cl"), unit: "mg/L chloride" };
+/** g/mol of formula parts from the element records. */
+function molarMass(parts: FormulaParts): number {
+  let sum = 0;
+  for (const [symbol, count] of Object.entries(parts)) {
+    const weight = getDatabase().element(symbol)?.atomicWeight;
+    if (weight === undefined) throw new Error(`no atomic weight for ${symbol} in the element records`);
+    sum += count * weight;
   }
-  return unit === "mg/L S"
-    ? { ligand, column, kind: "total", factor: 1e-3 / molarMass("S"), unit: "mg/L sulfur as S" }
-    : { ligand, column, kind: "total", factor: 1e-3 / (molarMass("S") + 4 * molarMass("O")), unit: "mg/L sulfate as SO4" };
+  return sum;
+}
+
+const OWN_ION: Readonly<Record<WaterColumnRole, FormulaParts>> = { alkalinity: {}, chloride: { Cl: 1 }, sulfate: { S: 1, O: 4 }, dic: { C: 1 } };
+const WHAT: Readonly<Record<WaterColumnRole, string>> = { alkalinity: "alkalinity", chloride: "chloride", sulfate: "sulfate", dic: "DIC" };
+const LIGAND_OF: Readonly<Record<WaterColumnRole, LigandName>> = { alkalinity: "carbonate", chloride: "chloride", sulfate: "sulfur", dic: "carbonate" };
+
+/** The input for a column serving `role`, in the unit its header names (units.ts). */
+function inputFor(role: WaterColumnRole, column: number, unit: WaterUnit): LigandInput {
+  const words = `${WHAT[role]} in ${WATER_UNITS[unit].words}`;
+  if (role === "alkalinity") return { ligand: "carbonate", column, kind: "alkalinity", factor: alkalinityFactor(unit), unit: words };
+  return { ligand: LIGAND_OF[role], column, kind: "total", factor: molalFactor(unit, OWN_ION[role], molarMass), unit: words };
 }
 
 /**
@@ -92,32 +65,31 @@ export function planWater(
 ): LigandInput[] {
   if (options.pureWater) return [];
   const auto = matchWaterColumns(headers, mapping);
-  const taken = new Set(Object.values(mapping).filter((i) => i >= 0));
-  const autoDic = headers.findIndex((h, i) => !taken.has(i) && isDicHeader(h));
   const choose = (option: string | null | undefined, automatic: number, what: string): number | null => {
     if (option === null) return null;
     if (option === undefined) return automatic >= 0 ? automatic : null;
     return find(option, what);
   };
+  const unitOf = (role: WaterColumnRole, column: number): WaterUnit => waterColumnAt(role, headers, column).unit;
   const inputs: LigandInput[] = [];
 
-  const dic = choose(options.dicColumn, autoDic, "--dic-column");
+  const dic = choose(options.dicColumn, auto.dic?.index ?? -1, "--dic-column");
   const alkalinity = choose(options.alkalinityColumn, auto.alkalinity?.index ?? -1, "--alkalinity-column");
   if (dic !== null && alkalinity !== null && options.dicColumn !== undefined && options.alkalinityColumn !== undefined) {
     throw new UsageError("--dic-column and --alkalinity-column both give the carbonate; name one of them (or set the other to none)");
   }
   // a measured DIC wins over one derived from alkalinity, unless the alkalinity column was named
-  if (dic !== null && options.alkalinityColumn === undefined) inputs.push(dicInput(dic, headers[dic]));
-  else if (alkalinity !== null) inputs.push(alkalinityInput(alkalinity, waterColumnAt("alkalinity", headers, alkalinity).unit));
-  else if (dic !== null) inputs.push(dicInput(dic, headers[dic]));
+  if (dic !== null && options.alkalinityColumn === undefined) inputs.push(inputFor("dic", dic, unitOf("dic", dic)));
+  else if (alkalinity !== null) inputs.push(inputFor("alkalinity", alkalinity, unitOf("alkalinity", alkalinity)));
+  else if (dic !== null) inputs.push(inputFor("dic", dic, unitOf("dic", dic)));
 
-  const roles: Array<["chloride" | "sulfur", WaterColumnRole, string | null | undefined, string]> = [
-    ["chloride", "chloride", options.chlorideColumn, "--chloride-column"],
-    ["sulfur", "sulfate", options.sulfurColumn, "--sulfur-column"],
+  const roles: Array<[WaterColumnRole, string | null | undefined, string]> = [
+    ["chloride", options.chlorideColumn, "--chloride-column"],
+    ["sulfate", options.sulfurColumn, "--sulfur-column"],
   ];
-  for (const [ligand, role, option, what] of roles) {
+  for (const [role, option, what] of roles) {
     const column = choose(option, auto[role]?.index ?? -1, what);
-    if (column !== null) inputs.push(totalInput(ligand, column, headers[column], waterColumnAt(role, headers, column).unit));
+    if (column !== null) inputs.push(inputFor(role, column, unitOf(role, column)));
   }
   const used = inputs.map((i) => i.column);
   const clash = used.find((c, k) => used.indexOf(c) !== k);

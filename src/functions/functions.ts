@@ -112,7 +112,7 @@ export function slope(temperature?: any[][]): any[][] {
 /**
  * Dominant (thermodynamically stable) form of a metal at a pH and potential, e.g. Fe2O3(s), Cu2+, Zn(s), and with ligands PbCO3(s), Cu2S(s). Thermodynamics only: what can form, not how fast.
  * @customfunction SPECIES
- * @param {any[][]} element Metal symbol or name: Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo.
+ * @param {any[][]} element Element symbol or name: Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo, V, W, Bi, Au, Pt, Hg, As, Sb, Se, U.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE (convert meter readings with REDOX.TOSHE).
  * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.

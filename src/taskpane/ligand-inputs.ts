@@ -12,11 +12,11 @@
  * - Column totals are rounded to 0.01 in log10 (2.3 %, finer than an alkalinity titration or an ion
  *   chromatograph resolves — common practice) so rows share systems; the rounded total is the one shown and used.
  */
-import { AlkalinityError, CACO3_GRAMS_PER_EQUIVALENT, dicFromAlkalinity } from "../chemistry/alkalinity";
+import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
 import type { Database } from "../chemistry/database";
 import { hasLigands, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
-import type { WaterColumn, WaterColumnRole } from "./header-match";
+import { alkalinityFactor, molalFactor, readNumber, type WaterColumn, type WaterColumnRole } from "../tables";
 
 /** Where each ligand's total comes from. */
 export type LigandSource = { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: WaterColumn };
@@ -47,7 +47,7 @@ function numberIn(cell: unknown): number | null {
   if (typeof cell === "number") return Number.isFinite(cell) ? cell : null;
   if (typeof cell !== "string") return null;
   const text = cell.trim();
-  return /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(text) ? Number(text) : null;
+  return readNumber(text);
 }
 
 /** Molar mass (g/mol) from the element records. */
@@ -72,7 +72,7 @@ export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, 
   if (value < 0) return { problem: `${value} is negative` };
   let total: number;
   if (ligand === "carbonate") {
-    const mgCaCO3 = column.unit === "meq/L" ? value * CACO3_GRAMS_PER_EQUIVALENT : value;
+    const mgCaCO3 = value * alkalinityFactor(column.unit);
     if (mgCaCO3 === 0) return { problem: "alkalinity is 0" };
     try {
       total = dicFromAlkalinity(mgCaCO3, pH, celsius, db);
@@ -80,9 +80,7 @@ export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, 
       if (error instanceof AlkalinityError) return { problem: error.message };
       throw error;
     }
-  } else if (column.unit === "mmol/L") total = value / 1000;
-  else if (ligand === "chloride") total = (column.unit === "ug/L" ? value / 1000 : value) / 1000 / molarMass(db, { Cl: 1 });
-  else total = value / 1000 / molarMass(db, column.unit === "mg/L S" ? { S: 1 } : { S: 1, O: 4 });
+  } else total = value * molalFactor(column.unit, ligand === "chloride" ? { Cl: 1 } : { S: 1, O: 4 }, (parts) => molarMass(db, parts));
   if (total === 0) return 0;
   if (!(total > 0 && total <= MAX_LIGAND_TOTAL)) return { problem: `gives ${total.toPrecision(3)} mol/kg, outside 0–${MAX_LIGAND_TOTAL}` };
   return roundTotal(total);

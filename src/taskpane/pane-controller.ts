@@ -12,7 +12,7 @@ import type { AxisWindow } from "./axes";
 import { defaultWindow, displayScale, plotSamples, PotentialUnit, shownRegions, shownWaterLines } from "./diagram-model";
 import { formatActivity, renderDiagramSvg, sampleText } from "./diagram-svg";
 import type { PlottedSample, SampleInput } from "./diagram-model";
-import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "./header-match";
+import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "../tables";
 import { LIGAND_COLUMN, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
 import { CANVAS_SAMPLES, SampleCanvas } from "./sample-canvas";
 import type { HostAdapter, PaneSettings } from "./host";

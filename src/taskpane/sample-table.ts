@@ -7,7 +7,7 @@
 import { getElectrodes } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
 import type { LigandName } from "../chemistry/ligand-cells";
-import { ColumnMapping, findHeaderRow, WaterColumn } from "./header-match";
+import { ColumnMapping, findHeaderRow, POINT_NUMBER, toCelsius, WaterColumn } from "../tables";
 import type { PotentialUnit, SampleInput } from "./diagram-model";
 import { RowTotals, rowTotal } from "./ligand-inputs";
 
@@ -50,7 +50,7 @@ export interface ReadResult {
   readonly rowTotals: RowTotals[];
 }
 
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+const NUMBER = POINT_NUMBER;
 
 type Parsed = { value: number } | { blank: true } | { error: string };
 
@@ -117,7 +117,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     let hasTemperature = false;
     if ("error" in temperature) reasons.push(`temperature ${temperature.error}`);
     else if ("value" in temperature) {
-      celsius = options.temperatureUnit === "F" ? ((temperature.value - 32) * 5) / 9 : temperature.value;
+      celsius = toCelsius(temperature.value, options.temperatureUnit);
       if (celsius < 0 || celsius > 100) reasons.push(`temperature ${temperature.value} °${options.temperatureUnit} is outside 0…100 °C`);
       else hasTemperature = true;
     }

@@ -5,7 +5,7 @@
  */
 import type { HostAdapter, PaneSettings } from "./host";
 import { SETTINGS_KEY } from "./host";
-import { parseDelimited } from "./delimited-text";
+import { parseDelimited } from "../tables";
 import { SampleTable, tableFromBlock } from "./sample-table";
 
 /** The demo log, emitted by the bundler as a file next to the page. */

@@ -6,7 +6,7 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { ExcelAdapter } from "../../src/taskpane/excel-adapter";
 import { SETTINGS_KEY } from "../../src/taskpane/host";
-import { matchHeaders } from "../../src/taskpane/header-match";
+import { matchHeaders } from "../../src/tables";
 import { readSamples, SampleTable } from "../../src/taskpane/sample-table";
 import { FakeWorkbook } from "./excel-fake";
 

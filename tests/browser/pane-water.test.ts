@@ -20,7 +20,7 @@ import { median } from "../../src/taskpane/sample-table";
 import { CANVAS_SAMPLES } from "../../src/taskpane/sample-canvas";
 import { regimeAt } from "../../src/functions/stability-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
-import { parseDelimited } from "../../src/taskpane/delimited-text";
+import { parseDelimited } from "../../src/tables";
 import { syntheticSamples } from "../../bench/pane-render";
 
 const DEMO_TEXT = readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8");

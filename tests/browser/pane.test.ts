@@ -19,7 +19,7 @@ import { diagramLayout } from "../../src/taskpane/diagram-svg";
 import { formulaSegments, segmentsText } from "../../src/taskpane/formula-markup";
 import { MARKER_FILLS } from "../../src/taskpane/palette";
 import { regimeAt } from "../../src/functions/stability-functions";
-import { parseDelimited } from "../../src/taskpane/delimited-text";
+import { parseDelimited } from "../../src/tables";
 
 const DEMO_TEXT = readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8");
 

@@ -1,8 +1,7 @@
 // The redox-cells command line: a generated 200 000-row CSV (row count, columns, a sample of values against direct
 // calls of the worksheet functions, messages for bad cells), blank cells, delimiters and quoting, output to
-// standard output, --help, and the exit codes through the real bin/redox-cells.mjs.
+// standard output, --help, and the exit codes (in process; the spawned bin is in cli-bin.test.ts).
 
-import { spawnSync } from "node:child_process";
 import { mkdtempSync, readFileSync, rmSync, writeFileSync, createReadStream } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -16,10 +15,9 @@ import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../../src/functi
 import { waterMarginAt } from "../../src/functions/water-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
 import { getDatabase } from "../../src/chemistry/database";
-import { formatNumber } from "../../src/cli/evaluate";
+import { DEFAULT_FORMAT, numberField, type NumberKind } from "../../src/cli/csv-format";
 import { HELP, OPTION_SPEC } from "../../src/cli/options";
 import { runCommand } from "../../src/cli/run";
-import { REPO_ROOT } from "../bundle/harness";
 import { SYNTHETIC_HEADER, writeSyntheticLog } from "./synthetic-log";
 
 /** Collects what the program writes. */
@@ -59,10 +57,13 @@ const RESULT_COLUMNS = [
 ];
 
 /** What a result cell of the CSV should hold for a worksheet function's answer. */
-function expectedText(value: CellOutput): string {
+function expectedText(value: CellOutput, kind: NumberKind = "amount"): string {
   if (value instanceof CellError) return value.code;
-  return typeof value === "number" ? formatNumber(value) : value;
+  return typeof value === "number" ? numberField(value, kind, DEFAULT_FORMAT) : value;
 }
+
+/** A total (mol/kg) as the results write it: 4 significant figures. */
+const formatNumber = (x: number): string => numberField(x, "amount", DEFAULT_FORMAT);
 
 describe("a generated 200 000-row log", () => {
   const ROWS = 200_000;
@@ -120,14 +121,14 @@ describe("a generated 200 000-row log", () => {
       const e = toSHEAt(reading, "AgCl-sat", t)[0][0];
       const ePassed = typeof e === "number" ? e : "";
       const expected = [
-        e,
-        waterMarginAt(pH, ePassed, t)[0][0],
-        speciesAt(metal, pH, ePassed, t)[0][0],
-        regimeAt(metal, pH, ePassed, t)[0][0],
-        boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, 1)[0][0],
-        boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, -1)[0][0],
-        dissolvedAt(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, "ug/L")[0][0],
-      ].map(expectedText);
+        expectedText(e, "volts"),
+        expectedText(waterMarginAt(pH, ePassed, t)[0][0], "volts"),
+        expectedText(speciesAt(metal, pH, ePassed, t)[0][0]),
+        expectedText(regimeAt(metal, pH, ePassed, t)[0][0]),
+        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, 1)[0][0], "volts"),
+        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, -1)[0][0], "volts"),
+        expectedText(dissolvedAt(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, "ug/L")[0][0]),
+      ];
       const got = record.slice(SYNTHETIC_HEADER.length, SYNTHETIC_HEADER.length + 7);
       expect(got, `row ${index + 1}`).toEqual(expected);
       compared++;
@@ -161,8 +162,10 @@ describe("small files", () => {
     const r = await run([input, "-o", join(dir, "blank-out.csv"), "--metal", "Cu,iron", "--no-svg", "--quiet"]);
     expect(r.code).toBe(0);
     expect(r.stderr).toContain(`line 4, column "pH": blank; this row's results are left blank`);
-    expect(r.stderr).toContain(`line 5, column "Eh (V)": blank`);
-    const rows = parseSync(readFileSync(join(dir, "blank-out.csv"), "utf8")) as string[][];
+    // a blank temperature is a missing measurement: blank results, reported
+    expect(r.stderr).toContain(`line 5, column "temp": blank: a missing measurement`);
+    // the results use the input's delimiter
+    const rows = parseSync(readFileSync(join(dir, "blank-out.csv"), "utf8"), { delimiter: ";" }) as string[][];
     expect(rows[0]).toEqual([
       "site", "pH", "Eh (V)", "temp", "E_SHE_V", "water_margin_V",
       "Cu_species", "Cu_regime", "Cu_boundary_above_V", "Cu_boundary_below_V", "Cu_dissolved_ug_L",
@@ -182,7 +185,7 @@ describe("small files", () => {
     expect(r.stderr).toContain(`line 4, column "pH": expected a number, got the text "x"`);
     const rows = parseSync(readFileSync(join(dir, "quoted-out.csv"), "utf8")) as string[][];
     expect(rows[1][3]).toBe("two\nlines");
-    expect(Number(rows[1][4])).toBeCloseTo(Number(expectedText(toSHEAt(0.2, "SCE")[0][0])), 12);
+    expect(rows[1][4]).toBe(expectedText(toSHEAt(0.2, "SCE")[0][0], "volts"));
   });
 
   it("writes to standard output with -o - and keeps the summary off it", async () => {
@@ -191,7 +194,7 @@ describe("small files", () => {
     expect(r.code).toBe(0);
     const rows = parseSync(r.stdout) as string[][];
     expect(rows).toHaveLength(2);
-    expect(rows[1][3]).toBe(expectedText(toSHEAt(0.2, "SHE")[0][0]));
+    expect(rows[1][3]).toBe(expectedText(toSHEAt(0.2, "SHE")[0][0], "volts"));
     expect(rows[1][5]).toBe(expectedText(speciesAt("Zn", 7, 0.2)[0][0]));
     expect(r.stderr).toContain("1 rows from");
   });
@@ -223,7 +226,7 @@ describe("small files", () => {
     const r = await run(["--help"]);
     expect(r.code).toBe(0);
     for (const name of Object.keys(OPTION_SPEC)) expect(HELP, name).toContain(`--${name}`);
-    for (const code of ["0", "1", "2", "3"]) expect(HELP).toMatch(new RegExp(`^  ${code}  `, "m"));
+    for (const code of ["0", "1", "2", "3", "4", "130"]) expect(HELP).toMatch(new RegExp(`^  ${code}  `, "m"));
   });
 });
 
@@ -272,8 +275,8 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
       expect(row.sulfur_mol_kg).toBe(sulfur === "" ? "" : formatNumber(sulfur));
       expect(row.metal_species).toBe(expectedText(speciesAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
       expect(row.metal_regime).toBe(expectedText(regimeAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
-      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, 1)[0][0]));
-      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, -1)[0][0]));
+      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, 1)[0][0], "volts"));
+      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, -1)[0][0], "volts"));
       expect(row.metal_dissolved_ug_L).toBe(expectedText(dissolvedAt(metal, pH, e, t, dic, chloride, sulfur, undefined, "ug/L")[0][0]));
       if (row.metal_species !== expectedText(speciesAt(metal, pH, e, t)[0][0])) carbonateMattered = true;
     });
@@ -330,31 +333,30 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
   });
 });
 
-describe("exit codes through bin/redox-cells.mjs", () => {
-  const bin = join(REPO_ROOT, "bin/redox-cells.mjs");
-  const exec = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: "utf8", cwd: REPO_ROOT, timeout: 120_000 });
-
-  it("0 for --help, 2 for a usage error, 3 for an unreadable input, 1 for bad cells", () => {
-    const help = exec(["--help"]);
-    expect(help.status).toBe(0);
+describe("exit codes, in process (the spawned bin is tested in cli-bin.test.ts)", () => {
+  it("0 for --help, 2 for a usage error, 3 for an unreadable input, 1 for bad cells", async () => {
+    const help = await run(["--help"]);
+    expect(help.code).toBe(0);
     expect(help.stdout).toContain("Usage");
 
-    const usage = exec(["--no-such-option", "x.csv"]);
-    expect(usage.status).toBe(2);
+    const usage = await run(["--no-such-option", "x.csv"]);
+    expect(usage.code).toBe(2);
     expect(usage.stderr).toContain("Try 'redox-cells --help'");
 
-    const missing = exec([join(dir, "does-not-exist.csv"), "-m", "Fe"]);
-    expect(missing.status).toBe(3);
+    const missing = await run([join(dir, "does-not-exist.csv"), "-m", "Fe"]);
+    expect(missing.code).toBe(3);
     expect(missing.stderr).toContain("no such file");
 
     const malformed = join(dir, "malformed.csv");
     writeFileSync(malformed, 'pH,Eh_V,metal\n7,0.2,Fe\n"7,0.3,Fe\n');
-    expect(exec([malformed, "-o", join(dir, "m-out.csv"), "--no-svg"]).status).toBe(3);
+    const m = await run([malformed, "-o", join(dir, "m-out.csv"), "--no-svg"]);
+    expect(m.code).toBe(3);
+    expect(m.stderr).toContain("line 3: a quoted field is not closed");
 
     const badCells = join(dir, "bad-cells.csv");
     writeFileSync(badCells, "pH,Eh (V),metal\n7,0.2,Fe\n7,oops,Fe\n");
-    const bad = exec([badCells, "-o", join(dir, "bad-out.csv"), "--no-svg"]);
-    expect(bad.status).toBe(1);
+    const bad = await run([badCells, "-o", join(dir, "bad-out.csv"), "--no-svg"]);
+    expect(bad.code).toBe(1);
     expect(bad.stderr).toContain(`line 3, column "Eh (V)": expected a number, got the text "oops"`);
-  }, 300_000);
+  });
 });

@@ -172,3 +172,26 @@ describe("planes with a ligand: a metal sulfide formed from sulfate is a redox b
     }
   });
 });
+
+/**
+ * Lead carbonates, a documented disagreement not yet resolved in the data: NBS cerussite (log Ks −12.82 with NBS
+ * Pb2+) with Taylor & Lopata's hydrocerussite (log K −18.77) put the cerussite/hydrocerussite equilibrium
+ * 3 PbCO3(s) + H2O = Pb3(CO3)2(OH)2(s) + CO2(g) at pCO2 ≈ 10^-1.5 atm, so hydrocerussite is found below that —
+ * in nearly every drinking water. The pair common in drinking-water lead work (cerussite −13.13, hydrocerussite
+ * −17.46 for Pb3(CO3)2(OH)2 + 2H+ = 3Pb2+ + 2CO3 2- + 2H2O; Schock 1980, J. AWWA 72, 695, from memory) gives
+ * 10^-3.8 atm, close to the air's 10^-3.4: cerussite in most carbonated waters. This pins both figures so that
+ * the choice, when it is made, changes this test knowingly.
+ */
+describe("lead carbonates: the cerussite/hydrocerussite equilibrium pCO2", () => {
+  const lk = (r: Record<string, number>) => reactionLogK(db, r, 25);
+  const logKCO2 = lk({ "CO32-": -1, "H+": -2, "CO2(g)": 1, "H2O(l)": 1 });
+  it("with the records: log pCO2 = −1.5 ± 0.1 (NBS cerussite with Taylor & Lopata 1984 hydrocerussite)", () => {
+    const logP = lk({ "PbCO3(s)": -3, "H2O(l)": -1, "Pb3(CO3)2(OH)2(s)": 1, "CO2(g)": 1 });
+    expect(Math.abs(logP - -1.54)).toBeLessThanOrEqual(0.1);
+  });
+  it("with Schock's 1980 pair and the records' carbonic acid: log pCO2 = −3.8 ± 0.1, more than 2 log units lower", () => {
+    const logP = 3 * -13.13 - -17.46 + logKCO2;
+    expect(Math.abs(logP - -3.8)).toBeLessThanOrEqual(0.1);
+    expect(lk({ "PbCO3(s)": -3, "H2O(l)": -1, "Pb3(CO3)2(OH)2(s)": 1, "CO2(g)": 1 }) - logP).toBeGreaterThan(2);
+  });
+});

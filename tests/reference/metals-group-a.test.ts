@@ -16,7 +16,7 @@ import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import { BARD, BM, checkConstants, checkDisagreements, checkPotentials, ConstantCase, CRC, Disagreement, NBS, PotentialCase } from "./compilation-checks";
-import { buildSystem, pairBoundary } from "../../src/chemistry/system";
+import { buildSystem, dominantSpecies, pairBoundary } from "../../src/chemistry/system";
 import { FARADAY, GAS_CONSTANT, LN10, T0, nernstFactor } from "../../src/chemistry/constants";
 
 const db = getDatabase();
@@ -234,6 +234,7 @@ const constants: ConstantCase[] = [
   { label: "Cr3+ + 2H2O = Cr(OH)2+ + 2H+", reaction: { "Cr3+": -1, "H2O(l)": -2, "Cr(OH)2+": 1, "H+": 2 }, logK: -9.7, source: BM, independent: false },
   { label: "Cr3+ + 4H2O = Cr(OH)4- + 4H+", reaction: { "Cr3+": -1, "H2O(l)": -4, "Cr(OH)4-": 1, "H+": 4 }, logK: -27.4, source: BM, independent: false },
   { label: "Al3+ + 2H2O = Al(OH)2+ + 2H+", reaction: { "Al3+": -1, "H2O(l)": -2, "Al(OH)2+": 1, "H+": 2 }, logK: -9.3, source: BM, independent: false },
+  { label: "NiO(s) + H2O = HNiO2- + H+ (Ni(OH)2 + H2O = Ni(OH)3- + H+ in base: log*Ks10 10.8 + log*β13 −29.0)", reaction: { "NiO(s)": -1, "H2O(l)": -1, "HNiO2-": 1, "H+": 1 }, logK: -18.2, source: BM, independent: false },
 ];
 
 checkConstants("group A metals: hydrolysis and solubility constants within 0.5 log units of Baes & Mesmer", constants, METALS);
@@ -245,7 +246,15 @@ checkConstants("group A metals: hydrolysis and solubility constants within 0.5 l
 const constantDisagreements: (ConstantCase & { follows: number; followsSource: string })[] = [
   { label: "Cu2+ + 3H2O = Cu(OH)3- + 3H+, log*β13 (as HCuO2- + H2O)", reaction: { "Cu2+": -1, "H2O(l)": -2, "HCuO2-": 1, "H+": 3 }, logK: -26.9, source: BM, independent: true, follows: -26.33, followsSource: `${NBS}, ΔG°f(HCuO2-) = −258.5 kJ/mol` },
   { label: "Ni(OH)2 + 2H+ = Ni2+ + 2H2O, log*Ks10", reaction: { "Ni(OH)2(s)": -1, "H+": -2, "Ni2+": 1, "H2O(l)": 2 }, logK: 10.8, source: BM, independent: true, follows: 12.73, followsSource: `${NBS}, ΔG°f(Ni(OH)2) = −447.2 kJ/mol` },
-  { label: "Ni2+ + 3H2O = Ni(OH)3- + 3H+, log*β13 (as HNiO2- + H2O)", reaction: { "Ni2+": -1, "H2O(l)": -2, "HNiO2-": 1, "H+": 3 }, logK: -29.0, source: BM, independent: true, follows: -29.9, followsSource: `${NBS}, ΔG°f(HNiO2-) = −349.2 kJ/mol` },
+  {
+    label: "Ni2+ + 3H2O = Ni(OH)3- + 3H+, log*β13 (as HNiO2- + H2O)",
+    reaction: { "Ni2+": -1, "H2O(l)": -2, "HNiO2-": 1, "H+": 3 },
+    logK: -29.0,
+    source: BM,
+    independent: true,
+    follows: -30.64,
+    followsSource: "HNiO2- anchored on NBS NiO through Baes & Mesmer's solubility in base (log K −18.2), NBS NiO being 1.6 log units more soluble than their Ni(OH)2",
+  },
   { label: "Al3+ + 4H2O = Al(OH)4- + 4H+, log*β14", reaction: { "Al3+": -1, "H2O(l)": -4, "Al(OH)4-": 1, "H+": 4 }, logK: -23.0, source: BM, independent: true, follows: -22.46, followsSource: `${NBS}, ΔG°f(Al(OH)4-) = −1305.3 kJ/mol` },
   { label: "Al(OH)3 (gibbsite) + 3H+ = Al3+ + 3H2O, log*Ks10", reaction: { "Al(OH)3(s)": -1, "H+": -3, "Al3+": 1, "H2O(l)": 3 }, logK: 8.2, source: BM, independent: true, follows: 7.27, followsSource: `Robie & Hemingway 1995 gibbsite with ${NBS} Al3+` },
 ];
@@ -371,6 +380,12 @@ const atlasDisagreements: AtlasDisagreement[] = [
     metal: "Cu", pair: ["Cu2+", "CuO(s)"], equation: "log(Cu2+) = 7.89 − 2 pH", kind: "vertical", pH0: 7.89 / 2, logCoefPH: -1 / 2, h: 2, source: ATLAS,
     predicted: (7.35 - 7.89) / 2, why: "tenorite log*Ks10 7.35 (NBS 1982) against 7.89 (Atlas)",
   },
+  {
+    // 2CrO4 2- + 10H+ + 6e- = Cr2O3 + 5H2O: NBS Cr2O3 −1058.1 against the Atlas's −1046.8 kJ/mol, NBS CrO4 2- −727.75
+    // against Latimer's −736.8 kJ/mol (−176.1 kcal, from memory): E° 1.362 V here, 1.311 V in the Atlas
+    metal: "Cr", pair: ["CrO42-", "Cr2O3(s)"], equation: "E = 1.311 − 0.0985 pH + 0.0197 log(CrO4 2-)", kind: "line", e0: 1.311, hPerN: 10 / 6, logCoef: 0.0197, source: ATLAS,
+    predicted: (-(-1058.1 - -1046.8) + 2 * (-727.75 - -736.8)) * 1000 / (6 * FARADAY), why: "Cr2O3 (NBS −1058.1, Atlas −1046.8 kJ/mol) and CrO4 2- (NBS −727.75, Latimer −736.8 kJ/mol), 6 e−",
+  },
 ];
 
 describe("group A metals: Atlas lines where the Atlas used other data", () => {
@@ -392,4 +407,71 @@ describe("group A metals: Atlas lines where the Atlas used other data", () => {
       }
     });
   }
+});
+
+/**
+ * Nickel in base (data correction): with NBS HNiO2- nickel corroded from pH 11.45 at 1e-6 (=REDOX.SPECIES("Ni",
+ * 11.8, -0.3) gave HNiO2-); with HNiO2- from Baes & Mesmer's solubility in base it is passive (NiO) there, and the
+ * NiO/HNiO2- line lies at pH 12.2 as in the Atlas.
+ */
+describe("group A metals: nickel passive in base up to about pH 12.2", () => {
+  const system = buildSystem(db, "Ni", { celsius: 25, activity: 1e-6 });
+  it(`Ni at pH 11.8, −0.3 V is NiO(s), passivation (${ATLAS}, nickel diagram at 1e-6: passive to about pH 12.2)`, () => {
+    const s = system.species[dominantSpecies(system, 11.8, -0.3)];
+    expect(s.formula).toBe("NiO(s)");
+    expect(s.regime).toBe("passivation");
+  });
+  it(`NiO / HNiO2- at 1e-6: pH 12.2 within 0.3 (${ATLAS}; ${BM})`, () => {
+    const boundary = pairBoundary(system, "NiO(s)", "HNiO2-");
+    expect(boundary?.kind).toBe("vertical");
+    if (boundary?.kind === "vertical") expect(Math.abs(boundary.pH - 12.2)).toBeLessThanOrEqual(0.3);
+  });
+});
+
+/**
+ * The Cu+ band (README's statement): in acid, Cu+ has a region where the Cu2+/Cu+ line lies above the Cu+/Cu line.
+ * At 1e-6 that happens when the disproportionation constant of 2Cu+ = Cu2+ + Cu falls below 10^6: with these data
+ * log K = 6.04 at 25 °C, so the band opens at about 26 °C, 11 mV wide at 30 °C and 93 mV at 60 °C. The widths are
+ * the data's (pinned, so that README cannot drift from them); the constant is compared with the CRC's potentials.
+ */
+describe("group A metals: the Cu+ band as README states it", () => {
+  const width = (celsius: number) => {
+    const system = buildSystem(db, "Cu", { celsius, activity: 1e-6 });
+    const upper = pairBoundary(system, "Cu2+", "Cu+");
+    const lower = pairBoundary(system, "Cu+", "Cu(s)");
+    if (upper?.kind !== "line" || lower?.kind !== "line") throw new Error("copper couples are not lines");
+    return upper.intercept - lower.intercept;
+  };
+  it(`2Cu+ = Cu2+ + Cu: log K ${"6.22"} within 0.25 (${CRC}: E° Cu+/Cu 0.521 V, Cu2+/Cu+ 0.153 V)`, () => {
+    expect(Math.abs(reactionLogK(db, { "Cu+": -2, "Cu2+": 1, "Cu(s)": 1 }, 25) - 6.22)).toBeLessThanOrEqual(0.25);
+  });
+  it("no band at 25 °C; 11 ± 2 mV at 30 °C; 93 ± 5 mV at 60 °C (data's figures, as README states)", () => {
+    expect(width(25)).toBeLessThan(0);
+    expect(Math.abs(width(30) - 0.0113)).toBeLessThanOrEqual(0.002);
+    expect(Math.abs(width(60) - 0.093)).toBeLessThanOrEqual(0.005);
+  });
+});
+
+/**
+ * Zinc's neutral complex Zn(OH)2(aq), a documented choice: Baes & Mesmer give only an upper limit, log *β2 ≤ −16.9.
+ * Taken at that limit, zincite's solubility as the neutral complex would be 10^(log*Ks10 − 16.9) = 10^-5.4 mol/kg at
+ * every pH — above 1e-6, so zinc would have no passive window at the default activity. The database leaves the
+ * complex out (data/species/zn.json) and zinc is passive (ZnO) from pH 8.8 to 10.9 at 1e-6; this pins both.
+ */
+describe("group A metals: zinc without Zn(OH)2(aq), and what including it would do", () => {
+  const system = buildSystem(db, "Zn", { celsius: 25, activity: 1e-6 });
+  it("Zn(OH)2(aq) is not in the database (the upper limit of Baes & Mesmer 1976 is not taken as a value)", () => {
+    expect(db.species("Zn(OH)2(aq)")).toBeUndefined();
+  });
+  it(`at the limit log *β2 = −16.9 (${BM}) the neutral complex alone would exceed 1e-6 over zincite`, () => {
+    const logKs = reactionLogK(db, { "ZnO(s)": -1, "H+": -2, "Zn2+": 1, "H2O(l)": 1 }, 25);
+    expect(logKs - 16.9).toBeGreaterThan(-6);
+  });
+  it("without it, zinc is passive at 1e-6 between the Zn2+/ZnO and ZnO/Zn(OH)3- lines, pH 8.8 to 10.9 (data's figures, as README states)", () => {
+    const acid = pairBoundary(system, "Zn2+", "ZnO(s)");
+    const base = pairBoundary(system, "ZnO(s)", "Zn(OH)3-");
+    expect(acid?.kind === "vertical" && Math.abs(acid.pH - 8.77) < 0.05).toBe(true);
+    expect(base?.kind === "vertical" && Math.abs(base.pH - 10.86) < 0.05).toBe(true);
+    expect(system.species[dominantSpecies(system, 9.8, 0)].formula).toBe("ZnO(s)");
+  });
 });

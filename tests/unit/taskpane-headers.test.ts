@@ -1,13 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { findHeaderRow, headerTokens, matchHeaders } from "../../src/taskpane/header-match";
-import { parseDelimited } from "../../src/taskpane/delimited-text";
+import { findHeaderRow, headerTokens, matchHeaders } from "../../src/tables";
+import { parseDelimited } from "../../src/tables";
 
 describe("header matching on realistic spellings", () => {
   it("the invented demo log's header (snake case with units and electrode)", () => {
     const headers = "site,pipe_material,pipe_metal,sample_id,date,pH,ORP_mV_AgCl_sat,temp_C,alkalinity_mg_L_CaCO3,Fe_ug_L,Cu_ug_L,Pb_ug_L,note".split(",");
     const { mapping, hints } = matchHeaders(headers, "Pb", "lead");
     expect(mapping).toEqual({ pH: 5, potential: 6, temperature: 7, dissolved: 11, metal: 2, id: 3, site: 0 });
-    expect(hints).toEqual({ potentialUnit: "mV", electrode: "AgCl-sat", temperatureUnit: "C", dissolvedUnit: "ug/L" });
+    expect(hints).toEqual({ potentialUnit: "mV", electrode: "AgCl-sat", temperatureUnit: "C", temperatureScale: "C", dissolvedUnit: "ug/L" });
   });
 
   it("a field sheet with spaces, brackets and symbols", () => {

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { readFileSync } from "fs";
 import { median, readNumber, readSamples } from "../../src/taskpane/sample-table";
-import { matchHeaders } from "../../src/taskpane/header-match";
-import { parseDelimited } from "../../src/taskpane/delimited-text";
+import { matchHeaders } from "../../src/tables";
+import { parseDelimited } from "../../src/tables";
 import { toSHE } from "../../src/chemistry/electrodes";
 
 describe("reading samples", () => {

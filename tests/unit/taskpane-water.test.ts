@@ -11,14 +11,14 @@ import { buildLigandSystem } from "../../src/chemistry/ligand-system";
 import { buildSystem } from "../../src/chemistry/system";
 import { regimeAt, speciesAt } from "../../src/functions/stability-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
-import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/taskpane/header-match";
+import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/tables";
 import { formatTotals, PURE_WATER, resolveWater, roundTotal, rowTotal, waterCaption, WaterSettings } from "../../src/taskpane/ligand-inputs";
 import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/taskpane/diagram-model";
 import { diagramLayout, renderDiagramSvg, sampleText } from "../../src/taskpane/diagram-svg";
 import { makeAxes } from "../../src/taskpane/axes";
 import { touchingGroups } from "../../src/taskpane/label-placement";
 import { readSamples } from "../../src/taskpane/sample-table";
-import { EMPTY_MAPPING } from "../../src/taskpane/header-match";
+import { EMPTY_MAPPING } from "../../src/tables";
 
 const db = getDatabase();
 

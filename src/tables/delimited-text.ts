@@ -2,8 +2,9 @@
  * Pasted or opened tables: CSV (comma or semicolon) or TSV text → rows of cells. Quoted fields may hold the
  * delimiter, doubled quotes and line breaks (RFC 4180). Lines starting with "#" before the header are comments.
  * The delimiter is the one of tab, comma and semicolon that occurs most often, outside quotes, on the first
- * non-comment line. (csv-parse would need a Buffer polyfill in the browser; this is the small part we use.)
+ * non-comment line (delimiter.ts). (csv-parse would need a Buffer polyfill in the browser; this is the small part we use.)
  */
+import { guessDelimiter } from "./delimiter";
 
 export interface ParsedText {
   readonly rows: string[][];
@@ -11,18 +12,6 @@ export interface ParsedText {
   readonly lines: number[];
   readonly delimiter: string;
   readonly comments: string[];
-}
-
-function guessDelimiter(line: string): string {
-  const counts: Record<string, number> = { "\t": 0, ",": 0, ";": 0 };
-  let quoted = false;
-  for (const ch of line) {
-    if (ch === '"') quoted = !quoted;
-    else if (!quoted && ch in counts) counts[ch]++;
-  }
-  let best = ",";
-  for (const d of ["\t", ";", ","]) if (counts[d] > counts[best]) best = d;
-  return best;
 }
 
 export function parseDelimited(text: string): ParsedText {

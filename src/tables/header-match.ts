@@ -5,8 +5,10 @@
  * "Dissolved lead, mg/L", "Pb_ug_L"; "metal", "pipe_metal". Pure functions: no host, no DOM.
  *
  * Headers also hint at the potential's unit (mV or V) and reference electrode ("vs SCE", "AgCl sat", "Eh" is vs
- * SHE by definition — common practice) and at a temperature in °F; the pane offers these as defaults.
+ * SHE by definition — common practice) and at a temperature in °F or K; the pane offers these as defaults and the
+ * command line uses them.
  */
+import { type TemperatureScale, type WaterUnit } from "./units";
 
 export type ColumnRole = "pH" | "potential" | "temperature" | "id" | "site" | "dissolved" | "metal";
 
@@ -20,8 +22,10 @@ export interface HeaderHints {
   potentialUnit: "V" | "mV" | null;
   /** Reference electrode named by the potential header (a name the electrode records know), or null. */
   electrode: string | null;
-  /** Temperature in Fahrenheit? */
+  /** Temperature in Fahrenheit? (°C otherwise, also for a kelvin header: see temperatureScale.) */
   temperatureUnit: "C" | "F" | null;
+  /** The temperature scale the header names: °C (also when it names none), °F or K; null without a column. */
+  temperatureScale: TemperatureScale | null;
   /** Unit of the dissolved-metal column. */
   dissolvedUnit: "ug/L" | "mg/L" | "mol/kg" | null;
 }
@@ -60,9 +64,16 @@ function isPotential(tokens: readonly string[]): boolean {
 }
 
 function isTemperature(tokens: readonly string[]): boolean {
-  if (has(tokens, "temp", "temperature", "degc", "degf", "celsius", "fahrenheit")) return true;
-  // "T", "T (C)", "t_c", "T °C"
-  return tokens[0] === "t" && tokens.length <= 3 && tokens.slice(1).every((t) => t === "c" || t === "f" || t === "degc" || t === "degf");
+  if (has(tokens, "temp", "temperature", "degc", "degf", "celsius", "fahrenheit", "kelvin")) return true;
+  // "T", "T (C)", "t_c", "T °C", "T (K)"
+  return tokens[0] === "t" && tokens.length <= 3 && tokens.slice(1).every((t) => ["c", "f", "k", "degc", "degf"].includes(t));
+}
+
+/** The scale a temperature header names: °F ("°F", "fahrenheit", "F"), K ("K", "kelvin"), else °C. */
+export function temperatureScale(tokens: readonly string[]): TemperatureScale {
+  if (has(tokens, "degf", "fahrenheit", "f")) return "F";
+  if (has(tokens, "kelvin", "k")) return "K";
+  return "C";
 }
 
 function isId(tokens: readonly string[]): boolean {
@@ -94,8 +105,14 @@ function potentialUnit(tokens: readonly string[]): "V" | "mV" | null {
   return null;
 }
 
-/** The electrode a potential header names, as an electrode-record name. */
-export function electrodeHint(tokens: readonly string[]): string | null {
+/** The name a bare silver chloride header gives: an ambiguous name of the electrode records (which filling?). */
+export const BARE_SILVER_CHLORIDE = "Ag/AgCl";
+
+/**
+ * The electrode a potential header names, as an electrode-record name; BARE_SILVER_CHLORIDE when it names silver
+ * chloride without its filling (saturated, 3.5 M, 3 M, 1 M and seawater fillings read several mV apart).
+ */
+export function electrodeNamed(tokens: readonly string[]): string | null {
   if (has(tokens, "she", "nhe") || tokens.includes("eh")) return "SHE";
   if (has(tokens, "sce", "calomel")) return "SCE";
   if (has(tokens, "rhe")) return "RHE";
@@ -107,9 +124,19 @@ export function electrodeHint(tokens: readonly string[]): string | null {
     if (tokens.includes("3") || tokens.includes("3m")) return "AgCl-3M";
     if (tokens.includes("1") || tokens.includes("1m")) return "AgCl-1M";
     if (has(tokens, "sea", "seawater")) return "AgCl-sea";
-    return "AgCl-sat";
+    return BARE_SILVER_CHLORIDE;
   }
+  if (has(tokens, "hgo")) return "HgO-1M";
   return null;
+}
+
+/**
+ * The electrode the pane offers as its default for a potential header: as electrodeNamed, with saturated KCl
+ * offered (visibly, in its electrode menu) for a bare silver chloride header. The command line refuses that case.
+ */
+export function electrodeHint(tokens: readonly string[]): string | null {
+  const named = electrodeNamed(tokens);
+  return named === BARE_SILVER_CHLORIDE ? "AgCl-sat" : named;
 }
 
 function dissolvedUnit(tokens: readonly string[]): HeaderHints["dissolvedUnit"] {
@@ -148,7 +175,8 @@ export function matchHeaders(headers: readonly unknown[], metal = "", metalName 
     hints: {
       potentialUnit: potentialUnit(potentialTokens),
       electrode: mapping.potential >= 0 ? electrodeHint(potentialTokens) : null,
-      temperatureUnit: mapping.temperature < 0 ? null : has(temperatureTokens, "degf", "fahrenheit", "f") ? "F" : "C",
+      temperatureUnit: mapping.temperature < 0 ? null : temperatureScale(temperatureTokens) === "F" ? "F" : "C",
+      temperatureScale: mapping.temperature < 0 ? null : temperatureScale(temperatureTokens),
       dissolvedUnit: mapping.dissolved >= 0 ? dissolvedUnit(tokens[mapping.dissolved]) : null,
     },
   };
@@ -170,20 +198,13 @@ export function findHeaderRow(rows: readonly (readonly unknown[])[], maxRows = 1
 }
 
 /**
- * Columns describing the water rather than the sample's reading: total alkalinity, chloride and sulfate, with the
- * unit their header names. The pane can take each row's ligand totals from them (ligand-inputs.ts). Matched apart
- * from the main roles so a sample log's mapping is unchanged by them.
+ * Columns describing the water rather than the sample's reading: total alkalinity, chloride, sulfate and dissolved
+ * inorganic carbon, with the unit their header names (units.ts). The pane and the command line take each row's
+ * ligand totals from them. Matched apart from the main roles so a sample log's mapping is unchanged by them.
  */
-export type WaterColumnRole = "alkalinity" | "chloride" | "sulfate";
+export type WaterColumnRole = "alkalinity" | "chloride" | "sulfate" | "dic";
 
-export const WATER_COLUMN_ROLES: readonly WaterColumnRole[] = ["alkalinity", "chloride", "sulfate"];
-
-/**
- * Units of the water columns. Alkalinity: mg/L as CaCO3 (the utility unit, the default) or meq/L (also written
- * mmol/L: the acid capacity to pH 4.3). Chloride: mg/L (default), µg/L or mmol/L as Cl. Sulfate: mg/L as SO4
- * (default), mg/L as S, or mmol/L.
- */
-export type WaterUnit = "mg/L CaCO3" | "meq/L" | "mg/L" | "ug/L" | "mmol/L" | "mg/L SO4" | "mg/L S";
+export const WATER_COLUMN_ROLES: readonly WaterColumnRole[] = ["alkalinity", "chloride", "sulfate", "dic"];
 
 export interface WaterColumn {
   readonly index: number;
@@ -208,10 +229,23 @@ function isSulfate(tokens: readonly string[]): boolean {
   return at >= 0 && tokens[at + 1] === "4";
 }
 
+/** A header naming dissolved inorganic carbon: "DIC", "TIC", "dissolved inorganic carbon (mmol/L)". */
+function isDic(tokens: readonly string[]): boolean {
+  return has(tokens, "dic", "tic") || (has(tokens, "inorganic") && has(tokens, "carbon"));
+}
+
+/** Header says mol/kg (or molal), not a milli- or micro- unit. */
+function saysMolPerKg(tokens: readonly string[]): boolean {
+  return has(tokens, "molal") || (tokens.includes("mol") && tokens.includes("kg"));
+}
+
 function waterUnit(role: WaterColumnRole, tokens: readonly string[]): WaterUnit {
   const millimoles = has(tokens, "mmol", "mm", "mmol/l");
   if (role === "alkalinity") return has(tokens, "meq", "mval") || millimoles ? "meq/L" : "mg/L CaCO3";
   if (millimoles) return "mmol/L";
+  if (has(tokens, "umol")) return "umol/L";
+  if (saysMolPerKg(tokens)) return "mol/kg";
+  if (role === "dic") return has(tokens, "mg", "ppm") ? "mg/L C" : "mol/kg";
   if (role === "chloride") return has(tokens, "ug", "ppb") ? "ug/L" : "mg/L";
   // sulfate "as S" (SO4-S): the token "s" after "as", or "so 4 s"
   const asS = tokens.some((t, i) => t === "s" && (tokens[i - 1] === "as" || (tokens[i - 1] === "4" && tokens[i - 2] === "so")));
@@ -226,7 +260,7 @@ export function matchWaterColumns(headers: readonly unknown[], mapping: ColumnMa
   const tokens = headers.map((h) => headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)));
   const taken = new Set(Object.values(mapping).filter((i) => i >= 0));
   const out: WaterColumns = {};
-  const tests: Record<WaterColumnRole, (t: readonly string[]) => boolean> = { alkalinity: isAlkalinity, chloride: isChloride, sulfate: isSulfate };
+  const tests: Record<WaterColumnRole, (t: readonly string[]) => boolean> = { alkalinity: isAlkalinity, chloride: isChloride, sulfate: isSulfate, dic: isDic };
   for (const role of WATER_COLUMN_ROLES) {
     const index = tokens.findIndex((t, i) => !taken.has(i) && t.length > 0 && tests[role](t));
     if (index < 0) continue;
@@ -241,14 +275,3 @@ export function waterColumnAt(role: WaterColumnRole, headers: readonly unknown[]
   const h = headers[index];
   return { index, unit: waterUnit(role, headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h))) };
 }
-
-/** Words for a water unit, for the pane's menus and captions. */
-export const WATER_UNIT_WORDS: Readonly<Record<WaterUnit, string>> = {
-  "mg/L CaCO3": "mg/L as CaCO3",
-  "meq/L": "meq/L",
-  "mg/L": "mg/L",
-  "ug/L": "µg/L",
-  "mmol/L": "mmol/L",
-  "mg/L SO4": "mg/L as SO4",
-  "mg/L S": "mg/L as S",
-};

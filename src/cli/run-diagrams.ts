@@ -1,0 +1,65 @@
+/**
+ * The diagram SVGs of a run: one per metal, drawn at the samples' median temperature and water, each written to
+ * a temporary file and renamed into place, so a failed write leaves no partial diagram.
+ */
+import { mkdirSync, renameSync, unlinkSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+import { DiagramSamples, diagramCelsius, diagramTotals, renderDiagram, totalsText } from "./diagrams";
+import type { EvaluationPlan } from "./evaluate";
+import type { CliOptions } from "./options";
+
+function baseName(path: string): string {
+  const i = Math.max(path.lastIndexOf("/"), path.lastIndexOf("\\"));
+  return path.slice(i + 1);
+}
+
+/** The caption lines under a diagram's legend. */
+function captionOf(options: CliOptions, plan: EvaluationPlan, drawn: number, total: number, celsius: number, totals: string): string[] {
+  const caption = [
+    `${total.toLocaleString("en-US")} samples from ${baseName(options.input)}${drawn < total ? ` (${drawn.toLocaleString("en-US")} drawn, chosen at random)` : ""}.`,
+    plan.temperatureColumn === null ? `Drawn at ${celsius} °C.` : `Drawn at ${celsius} °C, the samples' median; each sample's result columns use its own temperature.`,
+  ];
+  if (plan.ligands.length > 0) {
+    caption.push(
+      totals === ""
+        ? "Drawn in pure water (no sample has ligand totals); each sample's result columns use its own water."
+        : `Drawn in water with the samples' median totals (${totals}); each sample's result columns use its own water.`,
+    );
+  }
+  return caption;
+}
+
+/** Writes `text` to `file` through a temporary file beside it. */
+function writeWhole(file: string, text: string): void {
+  const temporary = `${file}.${process.pid}.partial`;
+  try {
+    writeFileSync(temporary, text, "utf8");
+    renameSync(temporary, file);
+  } catch (error) {
+    try {
+      unlinkSync(temporary);
+    } catch {
+      // not created
+    }
+    throw error;
+  }
+}
+
+/** Draws and writes every metal's diagram; returns the files written. Throws on a failed write. */
+export function writeDiagrams(options: CliOptions, plan: EvaluationPlan, diagrams: DiagramSamples | null): string[] {
+  if (options.svgDir === null || diagrams === null) return [];
+  mkdirSync(options.svgDir, { recursive: true });
+  const files: string[] = [];
+  const fixed = plan.fixedTemperature ?? 25;
+  for (const symbol of diagrams.symbols()) {
+    const points = diagrams.points(symbol);
+    const celsius = plan.temperatureColumn === null ? fixed : diagramCelsius(points, fixed);
+    const ligands = diagramTotals(points);
+    const caption = captionOf(options, plan, points.length, diagrams.count(symbol), celsius, totalsText(ligands));
+    const svg = renderDiagram({ element: symbol, celsius, activity: plan.activity, samples: points, caption, ligands });
+    const file = join(options.svgDir, `diagram-${symbol}.svg`);
+    writeWhole(file, svg);
+    files.push(file);
+  }
+  return files;
+}

@@ -1,0 +1,95 @@
+// src/tables: the shared reading of sample logs — DIC and kelvin headers, the electrode a header names, decimal
+// commas, the delimiter guess, and the one unit table (conversion factors from the element records' atomic
+// weights: IUPAC standard atomic weights as data/elements.json carries them).
+import { describe, expect, it } from "vitest";
+import { getDatabase } from "../../src/chemistry/database";
+import {
+  BARE_SILVER_CHLORIDE,
+  electrodeHint,
+  electrodeNamed,
+  guessDecimalMark,
+  guessDelimiter,
+  headerTokens,
+  matchHeaders,
+  matchWaterColumns,
+  molalFactor,
+  alkalinityFactor,
+  readNumber,
+  toCelsius,
+  waterColumnAt,
+} from "../../src/tables";
+
+const weight = (parts: Readonly<Record<string, number>>) =>
+  Object.entries(parts).reduce((sum, [symbol, n]) => sum + n * getDatabase().element(symbol)!.atomicWeight, 0);
+
+describe("header matching", () => {
+  it("finds DIC columns with their units, after alkalinity, chloride and sulfate", () => {
+    const headers = ["pH", "Eh (V)", "Alk (mg/L CaCO3)", "DIC mmol/L", "Cl mg/L", "SO4 mg/L"];
+    const water = matchWaterColumns(headers, matchHeaders(headers).mapping);
+    expect(water.dic).toEqual({ index: 3, unit: "mmol/L" });
+    expect(water.alkalinity?.index).toBe(2);
+    expect(waterColumnAt("dic", ["DIC (mg/L as C)"], 0).unit).toBe("mg/L C");
+    expect(waterColumnAt("dic", ["dissolved inorganic carbon"], 0).unit).toBe("mol/kg");
+    expect(waterColumnAt("chloride", ["chloride mol/kg"], 0).unit).toBe("mol/kg");
+    expect(waterColumnAt("chloride", ["Cl (umol/L)"], 0).unit).toBe("umol/L");
+  });
+
+  it("reads the temperature scale: °F, K, else °C", () => {
+    expect(matchHeaders(["pH", "ORP", "Water temp °F"]).hints.temperatureScale).toBe("F");
+    expect(matchHeaders(["pH", "ORP", "T (K)"]).hints.temperatureScale).toBe("K");
+    expect(matchHeaders(["pH", "ORP", "temperature_kelvin"]).hints.temperatureScale).toBe("K");
+    expect(matchHeaders(["pH", "ORP", "temp_C"]).hints.temperatureScale).toBe("C");
+    expect(matchHeaders(["pH", "ORP"]).hints.temperatureScale).toBeNull();
+  });
+
+  it("a bare silver chloride header names no filling; the pane's default stays saturated KCl", () => {
+    expect(electrodeNamed(headerTokens("ORP (mV) vs Ag/AgCl"))).toBe(BARE_SILVER_CHLORIDE);
+    expect(electrodeHint(headerTokens("ORP (mV) vs Ag/AgCl"))).toBe("AgCl-sat");
+    expect(electrodeNamed(headerTokens("ORP_mV_AgCl_3M"))).toBe("AgCl-3M");
+    expect(electrodeNamed(headerTokens("E vs HgO"))).toBe("HgO-1M");
+  });
+});
+
+describe("delimiters and decimal marks", () => {
+  it("guesses the delimiter from the header line, ignoring quoted ones", () => {
+    expect(guessDelimiter("a;b;c")).toBe(";");
+    expect(guessDelimiter('"a;b";c,d,e')).toBe(",");
+    expect(guessDelimiter("a\tb\tc")).toBe("\t");
+  });
+
+  it("a decimal comma only with ';' or tab, and only when the data say so", () => {
+    expect(guessDecimalMark(";", ["7,25", "201,5", "A"])).toBe(",");
+    expect(guessDecimalMark(";", ["7.25", "201.5", "1,5"])).toBe(".");
+    expect(guessDecimalMark(",", ["7,25"])).toBe(".");
+    expect(guessDecimalMark("\t", ["15", "20"])).toBe(".");
+  });
+
+  it("reads numbers with either mark; thousands separators are not numbers", () => {
+    expect(readNumber("7,25", ",")).toBe(7.25);
+    expect(readNumber("-1,5E-3", ",")).toBe(-0.0015);
+    expect(readNumber("7,25", ".")).toBeNull();
+    expect(readNumber("1.234,5", ",")).toBeNull();
+    expect(readNumber(" 7.25 ")).toBe(7.25);
+    expect(readNumber("")).toBeNull();
+  });
+});
+
+describe("the unit table", () => {
+  it("converts temperature scales (°F: (x − 32)·5/9; K: x − 273.15)", () => {
+    expect(toCelsius(59, "F")).toBeCloseTo(15, 12);
+    expect(toCelsius(288.15, "K")).toBeCloseTo(15, 12);
+    expect(toCelsius(15, "C")).toBe(15);
+  });
+
+  it("gives mol/kg per unit from the atomic weights, 1 L as 1 kg", () => {
+    expect(molalFactor("mg/L", { Cl: 1 }, weight)).toBeCloseTo(1e-3 / weight({ Cl: 1 }), 15);
+    expect(molalFactor("ug/L", { Cl: 1 }, weight)).toBeCloseTo(1e-6 / weight({ Cl: 1 }), 18);
+    expect(molalFactor("mg/L SO4", { S: 1, O: 4 }, weight)).toBeCloseTo(1e-3 / weight({ S: 1, O: 4 }), 15);
+    expect(molalFactor("mg/L S", { S: 1, O: 4 }, weight)).toBeCloseTo(1e-3 / weight({ S: 1 }), 15);
+    expect(molalFactor("mmol/L", { Cl: 1 }, weight)).toBe(1e-3);
+    expect(molalFactor("mol/kg", { Cl: 1 }, weight)).toBe(1);
+    // 1 meq/L of alkalinity is 50.04 mg/L as CaCO3 (CaCO3 100.087 g/mol, 2 eq/mol — common practice)
+    expect(alkalinityFactor("meq/L")).toBeCloseTo(50.0435, 4);
+    expect(() => molalFactor("meq/L", {}, weight)).toThrow();
+  });
+});
