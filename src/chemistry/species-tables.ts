@@ -83,8 +83,9 @@ export function speciesTable(db: Database, element: string): SpeciesTable {
 function buildSpeciesTable(db: Database, element: string): SpeciesTable {
   const entry = db.system(element);
   if (!entry || entry.kind !== "metal") throw new Error(`no data for the metal ${element}`);
+  // the element in its reference state: a solid, or the liquid for mercury
   const metal = entry.species.find((s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
-  if (!metal) throw new Error(`the ${element} file lacks the metal ${element} (solid or liquid)`);
+  if (!metal) throw new Error(`the ${element} file lacks the metal ${element}(s)`);
   const basis = [metal, db.require("H2O(l)"), db.require("H+"), ELECTRON, db.require(CARBONATE_PIVOT), db.require(SULFUR_PIVOT), db.require(CHLORIDE_PIVOT)] as const;
   const formationOf = formationTable(db, basis);
   const rows: { s: SystemSpecies; needs: number; coefficients: readonly number[]; props: ReactionProperties }[] = [];

@@ -86,10 +86,10 @@ and one potential–pH diagram SVG per metal with the samples drawn on it.
 
 Real waters: when the file has alkalinity or DIC, chloride or sulfate columns, each row's totals go to the
 [carbonate], [chloride] and [sulfur] arguments of those functions (mol/kg; mass units are converted with the
-atomic weights of the element records, 1 L taken as 1 kg). Each ligand is taken at its full total where its own
-form predominates (an approximation within about a pH unit of its own boundaries). A blank cell there means the
-ligand is absent in that row, as in the worksheet. Every distinct total builds its own system (1–20 ms each), so
-files with a total per row run far slower than pure water; --pure-water ignores these columns.
+atomic weights of the element records, 1 L taken as 1 kg). Each ligand is speciated exactly at the row's pH and
+potential from its total. A blank cell there means the ligand is absent in that row, as in the worksheet. A water
+of its own per row costs no system build (about 10 000 rows/s of CPU time with every water column varying, against
+about 16 000 for pure water); --pure-water ignores these columns.
 
 Columns are found by their headers (case and punctuation ignored): pH ("pH"), the potential reading ("ORP",
 "Eh", "redox", "potential", …), temperature ("temp", "temperature", …), the metal of each row ("metal",
