@@ -62,9 +62,9 @@ async function main(): Promise<void> {
     ["DIC_mol_kg", (r) => `REDOX.DIC(${alkalinity}${r},${pH}${r},${temp}${r})`],
     ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
     ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
-    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},,,,1)`],
-    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},,,,-1)`],
-    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},,,,"ug/L")`],
+    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},,,,,1)`],
+    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},,,,,-1)`],
+    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},,,,,"ug/L")`],
   ];
 
   const workbook = new ExcelJS.Workbook();

@@ -1,12 +1,12 @@
 /**
  * Coefficient tables of a metal's species, worked out once per database and element: every species (the metal's
- * own and the carbonate, sulfur and chloride species containing it) is formed from the basis
+ * own and the carbonate, sulfur, chloride and phosphate species containing it) is formed from the basis
  *
- *   metal, H2O, H+, e−, HCO3−, SO4²−, Cl−
+ *   metal, H2O, H+, e−, HCO3−, SO4²−, Cl−, HPO4²−
  *
  * by an exact balance (rationals, reaction.ts), and its reaction's ΔG°r(25 °C), ΔS°r and ΔCp°r are kept, so a point
  * at any temperature and in any water needs only arithmetic on these numbers (point-engine.ts). The ligands' own
- * species get the same treatment from their pivot (HCO3−, SO4²−) for the ligand speciation (ligand-speciation.ts).
+ * species get the same treatment from their pivot (HCO3−, SO4²−, HPO4²−) for the ligand speciation (ligand-speciation.ts).
  */
 import { Database, Species } from "./database";
 import { formationTable } from "./formation";
@@ -17,11 +17,13 @@ import { ELECTRON, ReactionProperties } from "./thermo";
 export const NEEDS_CARBONATE = 1;
 export const NEEDS_SULFUR = 2;
 export const NEEDS_CHLORIDE = 4;
+export const NEEDS_PHOSPHATE = 8;
 
 /** The pivot (basis) species of each ligand. */
 export const CARBONATE_PIVOT = "HCO3-";
 export const SULFUR_PIVOT = "SO42-";
 export const CHLORIDE_PIVOT = "Cl-";
+export const PHOSPHATE_PIVOT = "HPO42-";
 
 /** Reaction properties as numbers: ΔG°r(T) = g0 − s·(T − T0) + cp·[(T − T0) − T·ln(T/T0)]. */
 export interface ReactionColumns {
@@ -36,12 +38,13 @@ export interface SpeciesTable extends ReactionColumns {
   readonly metalIndex: number;
   /** Metal atoms per formula unit. */
   readonly x: Float64Array;
-  /** Basis coefficients (products positive) of H+, e−, HCO3−, SO4²−, Cl−. */
+  /** Basis coefficients (products positive) of H+, e−, HCO3−, SO4²−, Cl−, HPO4²−. */
   readonly proton: Float64Array;
   readonly electron: Float64Array;
   readonly carbonate: Float64Array;
   readonly sulfur: Float64Array;
   readonly chloride: Float64Array;
+  readonly phosphate: Float64Array;
   /** NEEDS_* bits. */
   readonly needs: Uint8Array;
   /** 1 for dissolved species. */
@@ -67,7 +70,7 @@ function putReaction(columns: ReactionColumns, i: number, p: ReactionProperties)
   columns.cp[i] = p.dS === null ? 0 : p.dCp;
 }
 
-const LIGAND_ELEMENTS: Readonly<Record<string, number>> = { C: NEEDS_CARBONATE, S: NEEDS_SULFUR, Cl: NEEDS_CHLORIDE };
+const LIGAND_ELEMENTS: Readonly<Record<string, number>> = { C: NEEDS_CARBONATE, S: NEEDS_SULFUR, Cl: NEEDS_CHLORIDE, P: NEEDS_PHOSPHATE };
 
 const tables = new WeakMap<Database, Map<string, SpeciesTable>>();
 
@@ -86,7 +89,7 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
   // the element in its reference state: a solid, or the liquid for mercury
   const metal = entry.species.find((s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
   if (!metal) throw new Error(`the ${element} file lacks the metal ${element}(s)`);
-  const basis = [metal, db.require("H2O(l)"), db.require("H+"), ELECTRON, db.require(CARBONATE_PIVOT), db.require(SULFUR_PIVOT), db.require(CHLORIDE_PIVOT)] as const;
+  const basis = [metal, db.require("H2O(l)"), db.require("H+"), ELECTRON, db.require(CARBONATE_PIVOT), db.require(SULFUR_PIVOT), db.require(CHLORIDE_PIVOT), db.require(PHOSPHATE_PIVOT)] as const;
   const formationOf = formationTable(db, basis);
   const rows: { s: SystemSpecies; needs: number; coefficients: readonly number[]; props: ReactionProperties }[] = [];
   for (const s of db.allSpecies()) {
@@ -109,7 +112,7 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     element,
     species: rows.map((r) => r.s),
     metalIndex: rows.findIndex((r) => r.s.species === metal),
-    g0: col(), s: col(), cp: col(), x: col(), proton: col(), electron: col(), carbonate: col(), sulfur: col(), chloride: col(),
+    g0: col(), s: col(), cp: col(), x: col(), proton: col(), electron: col(), carbonate: col(), sulfur: col(), chloride: col(), phosphate: col(),
     needs: new Uint8Array(n),
     dissolved: new Uint8Array(n),
     chargeSquared: col(),
@@ -123,6 +126,7 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     table.carbonate[i] = c[4];
     table.sulfur[i] = c[5];
     table.chloride[i] = c[6];
+    table.phosphate[i] = c[7];
     table.needs[i] = r.needs;
     table.dissolved[i] = r.s.dissolved ? 1 : 0;
     table.chargeSquared[i] = r.s.dissolved ? r.s.species.charge ** 2 : 0;

@@ -14,18 +14,18 @@ import type { SystemSpecies } from "../chemistry/system";
 import { mapCells, numberArg, textArg } from "./broadcast";
 import { CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
-import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";
+import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 
 let lastElement = "";
 let lastEngine: PointEngine | null = null;
 
 /** The point engine of an element with the row's water set (the engine keeps what depends only on T). */
-function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, ionicStrength: number): PointEngine {
+function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, phosphate: number, ionicStrength: number): PointEngine {
   if (element !== lastElement || !lastEngine) {
     lastEngine = pointEngine(getDatabase(), element);
     lastElement = element;
   }
-  lastEngine.setWater(celsius, activity, carbonate, chloride, sulfur, ionicStrength);
+  lastEngine.setWater(celsius, activity, carbonate, chloride, sulfur, ionicStrength, phosphate);
   return lastEngine;
 }
 
@@ -36,12 +36,12 @@ const directionArg = textArg<1 | -1>(
 );
 
 /** The point arguments every stability function shares, in the agreed order. */
-const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg] as const;
+const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg] as const;
 
 /** Reads the point arguments shared by SPECIES and REGIME and answers with `describe` of the dominant species. */
 function dominantAt(describe: (species: SystemSpecies) => string, inputs: readonly CellInput[]): CellOutput[][] {
-  return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, i) => {
-    const engine = engineIn(el, t, a, co3, cl, s, i);
+  return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, po4, i) => {
+    const engine = engineIn(el, t, a, co3, cl, s, po4, i);
     return describe(engine.table.species[engine.dominant(p, e)]);
   });
 }
@@ -55,9 +55,10 @@ export function speciesAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength]);
+  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength]);
 }
 
 export function regimeAt(
@@ -69,9 +70,10 @@ export function regimeAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength]);
+  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength]);
 }
 
 export function boundaryFrom(
@@ -83,14 +85,15 @@ export function boundaryFrom(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
   direction?: CellInput,
 ): CellOutput[][] {
   return mapCells(
     [...POINT_ARGS, directionArg],
-    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, direction],
-    (el, p, e, t, a, co3, cl, s, i, d) => {
-      const crossing = pointBoundary(engineIn(el, t, a, co3, cl, s, i), p, e, d);
+    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, direction],
+    (el, p, e, t, a, co3, cl, s, po4, i, d) => {
+      const crossing = pointBoundary(engineIn(el, t, a, co3, cl, s, po4, i), p, e, d);
       return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
     },
   );
@@ -146,14 +149,15 @@ export function dissolvedAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
   unit?: CellInput,
 ): CellOutput[][] {
   return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg, unitArg],
-    [element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, unit],
-    (el, p, e, t, co3, cl, s, i, u) => {
-      const engine = engineIn(el, t, 1, co3, cl, s, i);
+    [elementArg, pHArg, potentialArg(), temperatureArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg, unitArg],
+    [element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, unit],
+    (el, p, e, t, co3, cl, s, po4, i, u) => {
+      const engine = engineIn(el, t, 1, co3, cl, s, po4, i);
       const { total, solid } = dissolvedAtPoint(engine, p, e);
       if (!(total <= MAX_DISSOLVED)) {
         return notAvailable(`no solid forms here: ${engine.table.species[solid].formula}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);

@@ -14,7 +14,7 @@ export interface PaneSettings {
   metal?: string;
   activity?: number;
   /** Ligand totals as typed (text, blank = absent) and the header of a column chosen instead. */
-  water?: Partial<Record<"carbonate" | "chloride" | "sulfur", { total?: string; column?: string }>>;
+  water?: Partial<Record<"carbonate" | "chloride" | "sulfur" | "phosphate", { total?: string; column?: string }>>;
 }
 
 export interface PictureRequest {

@@ -125,9 +125,9 @@ describe("a generated 200 000-row log", () => {
         expectedText(waterMarginAt(pH, ePassed, t)[0][0], "volts"),
         expectedText(speciesAt(metal, pH, ePassed, t)[0][0]),
         expectedText(regimeAt(metal, pH, ePassed, t)[0][0]),
-        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, 1)[0][0], "volts"),
-        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, -1)[0][0], "volts"),
-        expectedText(dissolvedAt(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, "ug/L")[0][0]),
+        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, undefined, 1)[0][0], "volts"),
+        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, undefined, -1)[0][0], "volts"),
+        expectedText(dissolvedAt(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, "ug/L")[0][0]),
       ];
       const got = record.slice(SYNTHETIC_HEADER.length, SYNTHETIC_HEADER.length + 7);
       expect(got, `row ${index + 1}`).toEqual(expected);
@@ -275,9 +275,9 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
       expect(row.sulfur_mol_kg).toBe(sulfur === "" ? "" : formatNumber(sulfur));
       expect(row.metal_species).toBe(expectedText(speciesAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
       expect(row.metal_regime).toBe(expectedText(regimeAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
-      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, 1)[0][0], "volts"));
-      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, -1)[0][0], "volts"));
-      expect(row.metal_dissolved_ug_L).toBe(expectedText(dissolvedAt(metal, pH, e, t, dic, chloride, sulfur, undefined, "ug/L")[0][0]));
+      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, undefined, 1)[0][0], "volts"));
+      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, undefined, -1)[0][0], "volts"));
+      expect(row.metal_dissolved_ug_L).toBe(expectedText(dissolvedAt(metal, pH, e, t, dic, chloride, sulfur, undefined, undefined, "ug/L")[0][0]));
       if (row.metal_species !== expectedText(speciesAt(metal, pH, e, t)[0][0])) carbonateMattered = true;
     });
     // the water changes at least one answer here (lead carbonates at pH 7.2 with 80 mg/L alkalinity)

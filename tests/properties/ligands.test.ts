@@ -115,10 +115,10 @@ describe("point engine properties with ligands", () => {
       fc.property(fc.constantFrom(...metals), hostile, hostile, hostile, point, (metal, co3, cl, s, { pH, E }) => {
         const wrap = (v: unknown) => (Array.isArray(v) ? v : [[v]]) as any[][];
         const outputs = [
-          species([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(co3)),
-          regime([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(s)),
-          boundary([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(cl)),
-          dissolved([[metal]], [[pH]], [[E]], undefined, wrap(co3), wrap(cl), wrap(s), wrap(cl), [["mg/L"]]),
+          species([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(s), wrap(co3)),
+          regime([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(cl), wrap(s)),
+          boundary([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(co3), wrap(cl)),
+          dissolved([[metal]], [[pH]], [[E]], undefined, wrap(co3), wrap(cl), wrap(s), wrap(co3), wrap(cl), [["mg/L"]]),
         ];
         for (const out of outputs) {
           for (const row of out) {
