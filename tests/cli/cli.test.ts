@@ -297,6 +297,28 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
     expect(noChloride.code).toBe(0);
   });
 
+  it("an orthophosphate column feeds [phosphate]: mg/L as PO4 by default, as P when the header says PO4-P", async () => {
+    const header = (phosphate: string) => `site,pH,ORP_mV_AgCl_sat,temp_C,pipe_metal,DIC mmol/L,${phosphate}\n`;
+    const body = "A,7.5,350,15,Pb,1,1\nB,7.5,350,15,Pb,1,\n";
+    for (const [name, phosphateHeader, perMg] of [
+      ["po4.csv", "Orthophosphate (mg/L as PO4)", 1e-3 / (weight("P") + 4 * weight("O"))],
+      ["po4p.csv", "PO4-P mg/L", 1e-3 / weight("P")],
+    ] as const) {
+      const input = write(name, header(phosphateHeader) + body);
+      const out = `${name}.out.csv`;
+      const r = await run([input, "-o", join(dir, out), "--no-svg", "--quiet"]);
+      expect(r.code).toBe(0);
+      const rows = read(out);
+      expect(rows[0].phosphate_mol_kg).toBe(formatNumber(perMg));
+      expect(rows[1].phosphate_mol_kg).toBe("");
+      const e = toSHEAt(0.35, "AgCl-sat", 15)[0][0] as number;
+      expect(rows[0].metal_dissolved_ug_L).toBe(expectedText(dissolvedAt("Pb", 7.5, e, 15, 1e-3, undefined, undefined, perMg, undefined, "ug/L")[0][0]));
+      expect(rows[1].metal_dissolved_ug_L).toBe(expectedText(dissolvedAt("Pb", 7.5, e, 15, 1e-3, undefined, undefined, undefined, undefined, "ug/L")[0][0]));
+      // orthophosphate lowers equilibrium lead (hydroxypyromorphite instead of cerussite)
+      expect(Number(rows[0].metal_dissolved_ug_L)).toBeLessThan(Number(rows[1].metal_dissolved_ug_L) / 3);
+    }
+  });
+
   it("a DIC column (mmol/L) is used before the alkalinity; named columns and units from the header", async () => {
     const input = write("dic.csv", "pH,Eh_V,metal,alk,DIC mmol/L,total S mol/kg\n7.5,-0.3,Fe,100,2.1,0.0004\n");
     const r = await run([input, "-o", join(dir, "dic-out.csv"), "--no-svg", "--quiet", "--sulfur-column", "total S mol/kg"]);
