@@ -1,5 +1,5 @@
 // A small parser and evaluator for the worksheet formulas the demo workbook uses: numbers, text in double quotes,
-// A1 cell references on the same sheet, + − * /, comparisons, parentheses, IF() and calls of the add-in's
+// A1 cell references on the same sheet, + − * /, comparisons, parentheses, IF(), omitted arguments and calls of the add-in's
 // functions (REDOX.NAME). The spreadsheet's own rules that matter here are kept: an error in an argument is passed
 // on without calling the function; text that is not a number in arithmetic gives #VALUE!; a blank cell counts as
 // 0 in arithmetic and as "" in a comparison.
@@ -10,7 +10,9 @@ export type Node =
   | { kind: "ref"; column: string; row: number }
   | { kind: "call"; name: string; args: Node[] }
   | { kind: "binary"; op: string; left: Node; right: Node }
-  | { kind: "negate"; operand: Node };
+  | { kind: "negate"; operand: Node }
+  /** An argument left out between commas (REDOX.BOUNDARY(A1,B1,C1,,,1)): the function gets a blank. */
+  | { kind: "omitted" };
 
 export class FormulaSyntaxError extends Error {}
 
@@ -111,7 +113,8 @@ export function parseFormula(formula: string): Node {
       const args: Node[] = [];
       if (peek()?.type !== ")") {
         for (;;) {
-          args.push(comparison());
+          const next = peek()?.type;
+          args.push(next === "," || next === ")" ? { kind: "omitted" } : comparison());
           if (peek()?.type === ",") p++;
           else break;
         }
@@ -173,6 +176,8 @@ export function evaluate(node: Node, ctx: EvaluationContext): Value {
   switch (node.kind) {
     case "number":
       return node.value;
+    case "omitted":
+      return null;
     case "text":
       return node.value;
     case "ref":

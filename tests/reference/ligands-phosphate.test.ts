@@ -20,7 +20,7 @@ const water = (w: Partial<{ celsius: number; carbonate: number; chloride: number
   celsius: 25, activity: 1e-6, carbonate: 0, chloride: 0, sulfur: 0, ionicStrength: 0, phosphate: 0, ...w,
 });
 
-const ACIDS = [
+const ACIDS: { step: string; reaction: Record<string, number>; pK: number; dH: number }[] = [
   { step: "H3PO4 = H+ + H2PO4-", reaction: { "H3PO4(aq)": -1, "H+": 1, "H2PO4-": 1 }, pK: 2.15, dH: -8.0 },
   { step: "H2PO4- = H+ + HPO4 2-", reaction: { "H2PO4-": -1, "H+": 1, "HPO42-": 1 }, pK: 7.2, dH: 4.2 },
   { step: "HPO4 2- = H+ + PO4 3-", reaction: { "HPO42-": -1, "H+": 1, "PO43-": 1 }, pK: 12.35, dH: 14.7 },
