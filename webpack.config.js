@@ -1,4 +1,3 @@
-/* eslint-env node */
 // Bundles the add-in into dist/:
 //   functions.js + functions.json (metadata generated from the JSDoc in src/functions/functions.ts) + functions.html
 //   taskpane.js + taskpane.html  (the shared-runtime page: it also loads functions.js and commands.js)
@@ -22,6 +21,7 @@ const zlib = require("zlib");
 const HtmlWebpackPlugin = require("html-webpack-plugin");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const CustomFunctionsMetadataPlugin = require("custom-functions-metadata-plugin");
+const { ErrorCellsMetadataPlugin } = require("./scripts/error-cells-metadata-plugin");
 
 const OFFICE_JS_CDN = "https://appsforoffice.microsoft.com/lib/1/hosted/office.js";
 const OFFICE_JS_LOCAL = "/office-js/office.js";
@@ -184,6 +184,7 @@ function addinConfig(env, argv) {
         input: "./src/functions/functions.ts",
         output: "functions.json",
       }),
+      new ErrorCellsMetadataPlugin("functions.json"),
       // The shared runtime loads taskpane.html once and keeps it: that page carries all three bundles.
       page("taskpane", ["functions", "commands", "taskpane"]),
       page("functions", ["functions"]),

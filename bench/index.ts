@@ -1,5 +1,5 @@
 /**
- * `npm run bench`: throughput figures against the budgets of GUIDE §6. Prints a table; never fails on time.
+ * `npm run bench`: throughput figures against DEVELOPERS.md's budgets. Prints a table; never fails on time.
  */
 import fs from "node:fs";
 import path from "node:path";

@@ -1,12 +1,12 @@
 /**
- * Task pane drawing in the browser: the built standalone page in headless Chromium (GUIDE §7), 10 k synthetic
+ * Task pane drawing in the browser: the built standalone page in headless Chromium (DEVELOPERS.md), 10 k synthetic
  * samples pasted, time from "Draw" to the next painted frame with every marker drawn (SVG circles, or the canvas
  * layer the pane uses for large sets). Prints the figure; never fails on time.
  *
  *   npx webpack --mode production --output-path /tmp/pane-dist   (or npm run build)
  *   REDOX_DIST=/tmp/pane-dist npx tsx bench/pane-browser.ts
  */
-import { openStandalonePane } from "../tests/browser/serve-dist";
+import { openStandalonePane } from "../tests/support/serve-dist";
 import { syntheticSamples } from "./pane-render";
 
 async function main(): Promise<void> {

@@ -1,5 +1,5 @@
 /**
- * Task pane drawing figure (GUIDE §6: 10 k samples < 0.5 s): the samples' species, regime and water margin on the
+ * Task pane drawing figure (DEVELOPERS.md: 10 k samples < 0.5 s): the samples' species, regime and water margin on the
  * engine's system, then the whole SVG as text (src/taskpane/diagram-svg.ts), in Node. The browser's own parse and
  * paint of that SVG is measured by bench/pane-browser.ts.
  *

@@ -1,8 +1,10 @@
 // Writes data/demo/demo-workbook.xlsx: the INVENTED demo log (data/demo/sample-log.csv) on a sheet, with REDOX
 // formulas filled down in result columns — potential vs SHE (REDOX.TOSHE), water margin, dissolved inorganic carbon
 // from the alkalinity (REDOX.DIC), and for the pipe metal of each site in that water the dominant species, regime,
-// nearest boundaries above and below, and dissolved metal. A second sheet
-// says what the workbook is. Open it in Excel with the Redox Cells add-in loaded; formulas recalculate on load.
+// nearest boundaries above and below, and dissolved metal. Every formula cell also carries its result, computed here
+// by the add-in's own sources (src/functions) through the same formula evaluator the workbook test uses, so the file
+// opens with values in any spreadsheet program; with the add-in loaded, recalculating (Ctrl+Alt+F9) recomputes them.
+// A second sheet says what the workbook is.
 //
 // Usage: npx tsx scripts/generate-demo-workbook.ts [input.csv] [output.xlsx]
 
@@ -10,6 +12,9 @@ import { readFileSync } from "node:fs";
 import { resolve } from "node:path";
 import ExcelJS from "exceljs";
 import { parse } from "csv-parse/sync";
+import * as addin from "../src/functions/functions";
+import { CellError } from "../src/functions/cell-values";
+import { evaluate, isError, parseFormula, type Value } from "./workbook-formula";
 
 const input = resolve(process.argv[2] ?? "data/demo/sample-log.csv");
 const output = resolve(process.argv[3] ?? "data/demo/demo-workbook.xlsx");
@@ -53,7 +58,8 @@ async function main(): Promise<void> {
   const first = header.length + 1;
   const E = letter(first);
   const DIC = letter(first + 2);
-  // activity of dissolved metal species (the functions' default, written out so the carbonate can follow it)
+  // activity of dissolved metal species (the functions' default, written out so the carbonate can follow it);
+  // chloride, sulfur and ionic strength are written as 0 (absent, ideal solution) so the option can follow them
   const activity = "1E-6";
   const dissolvedColumn = letter(first + 7);
   // what-if: 1 mg/L orthophosphate as PO4 = 1e-3 / 94.97 mol/kg as P (1 L taken as 1 kg)
@@ -64,23 +70,23 @@ async function main(): Promise<void> {
 
   /** Result columns: header and formula for sheet row r (formulas without the leading "="). */
   const results: Array<[string, (r: number) => string]> = [
-    // readings are in mV against a saturated Ag/AgCl electrode; TOSHE takes volts
-    ["E_SHE_V", (r) => `IF(${orp}${r}="","",REDOX.TOSHE(${orp}${r}/1000,"AgCl-sat",${temp}${r}))`],
+    // readings are in mV against a saturated Ag/AgCl electrode, as logged
+    ["E_SHE_V", (r) => `REDOX.TOSHE(${orp}${r},"AgCl-sat",${temp}${r},,"mV")`],
     ["water_margin_V", (r) => `REDOX.WATERMARGIN(${pH}${r},${E}${r},${temp}${r})`],
     // the water: dissolved inorganic carbon (mol/kg) from the alkalinity at the sample's pH and temperature
     ["DIC_mol_kg", (r) => `REDOX.DIC(${alkalinity}${r},${pH}${r},${temp}${r})`],
     ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
     ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
-    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},,,,,1)`],
-    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},,,,,-1)`],
-    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},,,,,"ug/L")`],
+    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,0,1)`],
+    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,0,-1)`],
+    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,0,0,"ug/L")`],
     // lead and copper rows against the threshold typed in row 1; other metals blank
     [
       "vs_threshold",
       (r) =>
         `IF(${dissolvedColumn}${r}="","",IF(${metal}${r}="Pb",IF(${dissolvedColumn}${r}>${thresholdLead},"above","below"),IF(${metal}${r}="Cu",IF(${dissolvedColumn}${r}>${thresholdCopper},"above","below"),"")))`,
     ],
-    ["what_if_1mg_PO4_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},,,${whatIfPhosphate},,"ug/L")`],
+    ["what_if_1mg_PO4_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,${whatIfPhosphate},0,"ug/L")`],
   ];
   if (results.length !== RESULT_COUNT) throw new Error("RESULT_COUNT is out of date");
 
@@ -89,7 +95,8 @@ async function main(): Promise<void> {
   // fixed dates so that regenerating gives the same workbook contents
   workbook.created = new Date("2026-01-01T00:00:00Z");
   workbook.modified = new Date("2026-01-01T00:00:00Z");
-  workbook.calcProperties.fullCalcOnLoad = true;
+  // keep the cached results on opening: without the add-in a recalculation would turn every formula into #NAME?
+  workbook.calcProperties.fullCalcOnLoad = false;
 
   const sheet = workbook.addWorksheet("Sample log", { views: [{ state: "frozen", xSplit: 4, ySplit: 2 }] });
   sheet.getCell("A1").value =
@@ -107,14 +114,18 @@ async function main(): Promise<void> {
   });
 
   rows.forEach((fields, k) => {
-    const r = FIRST_ROW + k;
-    const row = sheet.getRow(r);
+    const row = sheet.getRow(FIRST_ROW + k);
     header.forEach((h, i) => {
       const value = cellValue(fields[i] ?? "", h);
       if (value !== null) row.getCell(i + 1).value = value;
     });
+  });
+  const cached = cachedResults(sheet, first, results);
+  rows.forEach((_fields, k) => {
+    const r = FIRST_ROW + k;
     results.forEach(([, formula], j) => {
-      row.getCell(first + j).value = { formula: formula(r) } as ExcelJS.CellFormulaValue;
+      const address = `${letter(first + j)}${r}`;
+      sheet.getCell(address).value = { formula: formula(r), result: cached(address) } as ExcelJS.CellFormulaValue;
     });
   });
   sheet.getColumn(col("date")).numFmt = "yyyy-mm-dd";
@@ -131,8 +142,8 @@ async function main(): Promise<void> {
     "",
     "INVENTED DATA: the Brackenholm Water Cooperative, its sites and samples are fictional, made up to show the functions at work.",
     "",
-    "Sheet 'Sample log': one row per sample. ORP is in mV against a saturated Ag/AgCl electrode; the result columns convert it",
-    `to volts vs SHE with REDOX.TOSHE and evaluate the pipe metal named in column ${metal} (pipe_metal) at the sample's pH and temperature,`,
+    "Sheet 'Sample log': one row per sample, data from row 3. ORP is in mV against a saturated Ag/AgCl electrode; the result columns convert it",
+    `to volts vs SHE with REDOX.TOSHE(…, "mV") and evaluate the pipe metal named in column ${metal} (pipe_metal) at the sample's pH and temperature,`,
     "in the sample's own water: its dissolved inorganic carbon from the alkalinity goes to the functions' carbonate argument.",
     "  water_margin_V       REDOX.WATERMARGIN — distance from the water-stability window (positive inside)",
     "  DIC_mol_kg           REDOX.DIC — dissolved inorganic carbon, mol/kg, from the alkalinity (mg/L as CaCO3), pH and temperature",
@@ -149,7 +160,11 @@ async function main(): Promise<void> {
     "treatment options; they do not show compliance (see docs/lead-and-copper.md in the project).",
     "",
     "Some cells are blank or mistyped on purpose (a decimal comma, '7.4.1', 'n/a', '1O.4', '612 mV', pH 17.2): their rows show",
-    "blank results or #VALUE! / #NUM!, as a real log would. A blank alkalinity leaves that sample's water without carbonate.",
+    "blank results or #VALUE! (hover the error indicator for the message), as a real log would. A blank temperature is a missing",
+    "measurement: that row's results are blank. A blank alkalinity leaves that sample's water without carbonate.",
+    "",
+    "The result cells hold the values computed by Redox Cells when the workbook was generated, so the file shows them in any",
+    "spreadsheet program. With the add-in loaded, press Ctrl+Alt+F9 to recalculate them.",
     "",
     "Carbonate is treated exactly at its fixed total: its activity as HCO3- is the total times the alpha-fraction at the",
     "sample's pH and temperature; ideal dilute water (no ionic strength given).",
@@ -165,6 +180,43 @@ async function main(): Promise<void> {
 
   await workbook.xlsx.writeFile(output);
   console.log(`wrote ${rows.length} rows × ${results.length} formula columns to ${output}`);
+}
+
+/** A result as a workbook cell stores it: number, text, or an error code. */
+function stored(value: Value | CellError): ExcelJS.CellValue {
+  if (value instanceof CellError || isError(value)) return { error: value.code as ExcelJS.CellErrorValue["error"] };
+  if (value === null) return "";
+  return value as number | string | boolean;
+}
+
+/**
+ * The result of every formula cell, evaluated through the add-in's sources: add-in calls receive each argument as
+ * the spreadsheet passes it (a single cell as a 1×1 range, an omitted one as null).
+ */
+function cachedResults(sheet: ExcelJS.Worksheet, first: number, results: Array<[string, (r: number) => string]>): (address: string) => ExcelJS.CellValue {
+  const functions = addin as unknown as Record<string, (...args: unknown[]) => unknown[][]>;
+  const memo = new Map<string, Value>();
+  const formulaAt = (column: string, row: number): string | null => {
+    const j = [...Array(results.length).keys()].find((i) => letter(first + i) === column);
+    return j === undefined || row < FIRST_ROW ? null : results[j][1](row);
+  };
+  const context = {
+    cell(column: string, row: number): Value {
+      const address = `${column}${row}`;
+      if (memo.has(address)) return memo.get(address)!;
+      const formula = formulaAt(column, row);
+      const raw = sheet.getCell(address).value;
+      const value: Value = formula ? evaluate(parseFormula(formula), context) : raw === null || raw === undefined ? null : raw instanceof Date ? raw.getTime() : (raw as number | string);
+      memo.set(address, value);
+      return value;
+    },
+    callAddin(name: string, args: (Value | undefined)[]): Value {
+      const fn = functions[name.replace(/^REDOX\./, "").toLowerCase()];
+      if (typeof fn !== "function") return { code: "#NAME?" };
+      return fn(...args.map((a) => (a === undefined ? null : [[a]])))[0][0] as Value;
+    },
+  };
+  return (address) => stored(context.cell(address.replace(/\d+$/, ""), Number(address.replace(/^[A-Z]+/, ""))));
 }
 
 main().catch((error: unknown) => {

@@ -26,7 +26,8 @@ export function waterDielectric(celsius: number): number {
 /** Density of liquid water at 1 atm, g/cm³ (Kell 1975, 0–150 °C). */
 export function waterDensity(celsius: number): number {
   const t = celsius;
-  const numerator = 999.83952 + t * (16.945176 + t * (-7.9870401e-3 + t * (-46.170461e-6 + t * (105.56302e-9 + t * -280.54253e-12))));
+  const numerator =
+    999.83952 + t * (16.945176 + t * (-7.9870401e-3 + t * (-46.170461e-6 + t * (105.56302e-9 + t * -280.54253e-12))));
   return numerator / (1 + 16.87985e-3 * t) / 1000;
 }
 

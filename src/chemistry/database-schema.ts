@@ -50,7 +50,6 @@ export const systemFileSchema = z
   .strict();
 
 export type SpeciesRecord = z.infer<typeof speciesRecordSchema>;
-export type SystemFile = z.infer<typeof systemFileSchema>;
 
 export const elementRecordSchema = z
   .object({

@@ -6,6 +6,7 @@
 import { ElementRecord, elementsFileSchema, SpeciesRecord, systemFileSchema } from "./database-schema";
 import { DATA_FILES, ELEMENTS_FILE } from "./data-files";
 import { parseFormula, PhaseState } from "./formula";
+import { ownEntry } from "./own-entry";
 
 /** A species as the engine uses it: SI units (J/mol), parsed composition, full source citation. */
 export interface Species {
@@ -92,9 +93,9 @@ export class Database {
     for (const symbol of Object.keys(elements)) {
       if (!this.elementRecords.has(symbol)) throw new DatabaseError(`${where}: element ${symbol} is not in data/elements.json`);
     }
-    const source = references[record.source];
+    const source = ownEntry(references, record.source);
     if (!source) throw new DatabaseError(`${where}: source key "${record.source}" is not in the file's references`);
-    if (record.cpSource && !references[record.cpSource]) {
+    if (record.cpSource && !ownEntry(references, record.cpSource)) {
       throw new DatabaseError(`${where}: cpSource key "${record.cpSource}" is not in the file's references`);
     }
     if (this.byFormula.has(record.formula)) throw new DatabaseError(`${where}: formula ${record.formula} appears twice in the database`);
@@ -107,7 +108,7 @@ export class Database {
       dHf: record.dHf === null ? null : record.dHf * 1000,
       S: record.S,
       Cp: record.Cp,
-      source: record.cpSource ? `${source}; Cp°: ${references[record.cpSource]}` : source,
+      source: record.cpSource ? `${source}; Cp°: ${ownEntry(references, record.cpSource)}` : source,
       note: record.note,
       system,
       elements,

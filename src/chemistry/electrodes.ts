@@ -14,6 +14,7 @@
 import { z } from "zod";
 import electrodesData from "../../data/electrodes.json";
 import { kelvin, nernstFactor, T0 } from "./constants";
+import { ownEntry } from "./own-entry";
 
 const celsiusRange = z
   .tuple([z.number().finite(), z.number().finite()])
@@ -99,7 +100,7 @@ export class ElectrodeTable {
     }
     const data = parsed.data;
     const cite = (key: string, where: string): string => {
-      const text = data.references[key];
+      const text = ownEntry(data.references, key);
       if (!text) throw new ElectrodeError(`${path}: ${where}: source key "${key}" is not in references`);
       return text;
     };

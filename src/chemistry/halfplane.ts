@@ -51,25 +51,6 @@ export function polygonArea(polygon: readonly Point[]): number {
   return twice / 2;
 }
 
-/** Area-weighted centroid; the vertex mean for degenerate polygons. */
-export function polygonCentroid(polygon: readonly Point[]): Point {
-  const area = polygonArea(polygon);
-  if (Math.abs(area) < 1e-15) {
-    const n = polygon.length || 1;
-    return [polygon.reduce((s, p) => s + p[0], 0) / n, polygon.reduce((s, p) => s + p[1], 0) / n];
-  }
-  let cx = 0;
-  let cy = 0;
-  for (let i = 0, n = polygon.length; i < n; i++) {
-    const p = polygon[i];
-    const q = polygon[(i + 1) % n];
-    const cross = p[0] * q[1] - q[0] * p[1];
-    cx += (p[0] + q[0]) * cross;
-    cy += (p[1] + q[1]) * cross;
-  }
-  return [cx / (6 * area), cy / (6 * area)];
-}
-
 /** Whether a point satisfies every half-plane (with a small tolerance). */
 export function insideAll(halfPlanes: readonly HalfPlane[], pH: number, E: number, tolerance = 1e-12): boolean {
   for (const h of halfPlanes) if (h.a + h.b * pH + h.c * E > tolerance) return false;

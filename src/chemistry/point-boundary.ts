@@ -50,7 +50,13 @@ function speciesPast(engine: PointEngine, pH: number, E: number, d: 1 | -1): num
 }
 
 /** Distance (in direction d) to the nearest crossing of the tangent lines of `here` by another species; the taker. */
-function tangentCrossing(engine: PointEngine, here: number, pH: number, E: number, d: 1 | -1): { distance: number; next: number } {
+function tangentCrossing(
+  engine: PointEngine,
+  here: number,
+  pH: number,
+  E: number,
+  d: 1 | -1,
+): { distance: number; next: number } {
   const gHere = engine.g(here, pH, E);
   const sHere = d * engine.slopeE(here);
   let distance = INF;
@@ -105,7 +111,14 @@ export function pointBoundary(engine: PointEngine, pH: number, E: number, d: 1 |
  * BOUNDARY_TOLERANCE apart around it, which closes the bracket at once when the estimate is good; every third step
  * is a bisection, so the bracket always shrinks.
  */
-function bisect(engine: PointEngine, pH: number, inside: number, outside: number, here: number, d: 1 | -1): PointCrossing {
+function bisect(
+  engine: PointEngine,
+  pH: number,
+  inside: number,
+  outside: number,
+  here: number,
+  d: 1 | -1,
+): PointCrossing {
   let other = engine.dominant(pH, outside);
   const half = BOUNDARY_TOLERANCE / 2;
   for (let step = 1; abs(outside - inside) > BOUNDARY_TOLERANCE && step < 200; step++) {

@@ -57,7 +57,12 @@ export function dissolvedAtPoint(engine: PointEngine, pH: number, E: number): Di
 }
 
 /** Each dissolved species' molality (mol/kg of species) in equilibrium with `solid`, for checks and tables. */
-export function dissolvedParts(engine: PointEngine, solid: number, pH: number, E: number): { species: number; molality: number }[] {
+export function dissolvedParts(
+  engine: PointEngine,
+  solid: number,
+  pH: number,
+  E: number,
+): { species: number; molality: number }[] {
   engine.ligandsAt(pH, E);
   const gSolid = engine.g(solid, pH, E, true);
   const t = engine.table;
@@ -65,7 +70,10 @@ export function dissolvedParts(engine: PointEngine, solid: number, pH: number, E
   for (let i = 0; i < engine.size; i++) {
     if (!t.dissolved[i] || !engine.available(i)) continue;
     const x = t.x[i];
-    parts.push({ species: i, molality: exp(x * engine.fOverRT * (gSolid - engine.g(i, pH, E, true)) - engine.lnGamma(i)) });
+    parts.push({
+      species: i,
+      molality: exp(x * engine.fOverRT * (gSolid - engine.g(i, pH, E, true)) - engine.lnGamma(i)),
+    });
   }
   return parts;
 }

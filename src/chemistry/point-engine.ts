@@ -16,7 +16,15 @@ import { debyeHuckelA, lnGammaWithA } from "./activity-coefficients";
 import { LigandAtPoint } from "./ligand-speciation";
 import { LIGAND_BASIS, LigandTotals } from "./ligand-cells";
 import type { SystemSpecies } from "./system";
-import { ligandTable, NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_PHOSPHATE, NEEDS_SULFUR, SpeciesTable, speciesTable } from "./species-tables";
+import {
+  ligandTable,
+  NEEDS_CARBONATE,
+  NEEDS_CHLORIDE,
+  NEEDS_PHOSPHATE,
+  NEEDS_SULFUR,
+  SpeciesTable,
+  speciesTable,
+} from "./species-tables";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { log } = Math;
@@ -93,7 +101,15 @@ export class PointEngine {
    * Sets the water for the next points; work that depends only on T (or T, threshold and I) is redone on change.
    * `phosphate` (total orthophosphate, mol/kg as P) comes last so that callers without it need not change.
    */
-  setWater(celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, ionicStrength: number, phosphate = 0): void {
+  setWater(
+    celsius: number,
+    activity: number,
+    carbonate: number,
+    chloride: number,
+    sulfur: number,
+    ionicStrength: number,
+    phosphate = 0,
+  ): void {
     if (celsius !== this.celsius) this.setTemperature(celsius);
     if (this.stale || activity !== this.activity || ionicStrength !== this.ionicStrength) {
       this.activity = activity;
@@ -108,7 +124,11 @@ export class PointEngine {
       }
       this.stale = false;
     }
-    this.present = (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0) | (phosphate > 0 ? NEEDS_PHOSPHATE : 0);
+    this.present =
+      (carbonate > 0 ? NEEDS_CARBONATE : 0) |
+      (sulfur > 0 ? NEEDS_SULFUR : 0) |
+      (chloride > 0 ? NEEDS_CHLORIDE : 0) |
+      (phosphate > 0 ? NEEDS_PHOSPHATE : 0);
     this.lnCarbonate = carbonate > 0 ? log(carbonate) : 0;
     this.lnSulfur = sulfur > 0 ? log(sulfur) : 0;
     this.lnPhosphate = phosphate > 0 ? log(phosphate) : 0;
@@ -148,9 +168,18 @@ export class PointEngine {
   /** Exact ligand activities at (pH, E) into lnC, lnS, lnCl, lnP (HPO4²− from the α-fractions of orthophosphate). */
   ligandsAt(pH: number, E: number): void {
     const present = this.present;
-    if (present & NEEDS_CARBONATE) this.lnC = this.carbonateSpeciation.at(this.celsius, this.dT, this.shape, this.k, this.f).lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
-    if (present & NEEDS_SULFUR) this.lnS = this.sulfurSpeciation.at(this.celsius, this.dT, this.shape, this.k, this.f).lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
-    if (present & NEEDS_PHOSPHATE) this.lnP = this.phosphateSpeciation.at(this.celsius, this.dT, this.shape, this.k, this.f).lnPivot(this.lnPhosphate, this.lnGamma1, pH, E);
+    if (present & NEEDS_CARBONATE)
+      this.lnC = this.carbonateSpeciation
+        .at(this.celsius, this.dT, this.shape, this.k, this.f)
+        .lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
+    if (present & NEEDS_SULFUR)
+      this.lnS = this.sulfurSpeciation
+        .at(this.celsius, this.dT, this.shape, this.k, this.f)
+        .lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
+    if (present & NEEDS_PHOSPHATE)
+      this.lnP = this.phosphateSpeciation
+        .at(this.celsius, this.dT, this.shape, this.k, this.f)
+        .lnPivot(this.lnPhosphate, this.lnGamma1, pH, E);
     this.lnCl = this.lnChloride;
   }
 
@@ -177,7 +206,10 @@ export class PointEngine {
   g(i: number, pH: number, E: number, unit = false): number {
     const t = this.table;
     let g = (unit ? this.aUnit[i] : this.aThreshold[i]) + this.b[i] * pH + this.c[i] * E;
-    if (t.needs[i]) g += this.r[i] * (t.carbonate[i] * this.lnC + t.sulfur[i] * this.lnS + t.chloride[i] * this.lnCl + t.phosphate[i] * this.lnP);
+    if (t.needs[i])
+      g +=
+        this.r[i] *
+        (t.carbonate[i] * this.lnC + t.sulfur[i] * this.lnS + t.chloride[i] * this.lnCl + t.phosphate[i] * this.lnP);
     return g;
   }
 
@@ -242,13 +274,26 @@ export function pointEngine(db: Database, element: string): PointEngine {
  */
 export function dominantInWater(
   db: Database,
-  system: { readonly element: string; readonly celsius: number; readonly activity: number; readonly ligandTotals?: LigandTotals },
+  system: {
+    readonly element: string;
+    readonly celsius: number;
+    readonly activity: number;
+    readonly ligandTotals?: LigandTotals;
+  },
   pH: number,
   E: number,
   ligands?: LigandTotals,
 ): SystemSpecies {
   const water = ligands ?? system.ligandTotals ?? {};
   const engine = pointEngine(db, system.element);
-  engine.setWater(system.celsius, system.activity, water.carbonate ?? 0, water.chloride ?? 0, water.sulfur ?? 0, 0, water.phosphate ?? 0);
+  engine.setWater(
+    system.celsius,
+    system.activity,
+    water.carbonate ?? 0,
+    water.chloride ?? 0,
+    water.sulfur ?? 0,
+    0,
+    water.phosphate ?? 0,
+  );
   return engine.table.species[engine.dominant(pH, E)];
 }

@@ -7,7 +7,7 @@ import { envelopeRegions } from "./envelope";
 import { clipPolygon, intervalOnVertical, Point, polygonArea, rectangle } from "./halfplane";
 import { cellAt, dominantSpecies, MetalSystem, PlaneCell, PRUNE_PH_MAX, PRUNE_PH_MIN } from "./system";
 
-/** Potentials searched for boundaries, V vs SHE (GUIDE §3: #N/A when none in −3…+3 V). */
+/** Potentials searched for boundaries, V vs SHE (docs/method.md, Domain: #N/A when none in −3…+3 V). */
 export const BOUNDARY_SEARCH_LOW = -3;
 export const BOUNDARY_SEARCH_HIGH = 3;
 
@@ -183,7 +183,7 @@ export function diagramRegions(system: MetalSystem, window: DiagramWindow): Regi
 
 /**
  * Total dissolved metal (mol/kg, ideal activities) in equilibrium with the solid `solid` at (pH, E):
- * for each dissolved species i,  ln a_i = x_i·F·(g_S − g_i°)/(RT)  and the total is Σ x_i·a_i.
+ * for each dissolved species i,  ln a_i = x_i·F·(g_S − g_i°)/(RT), total Σ x_i·a_i (docs/method.md, Dissolved metal).
  */
 export function dissolvedTotal(system: MetalSystem, solid: number, pH: number, E: number): { total: number; parts: { species: number; molality: number }[] } {
   const cell = cellAt(system, pH, E);

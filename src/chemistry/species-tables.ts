@@ -70,7 +70,12 @@ function putReaction(columns: ReactionColumns, i: number, p: ReactionProperties)
   columns.cp[i] = p.dS === null ? 0 : p.dCp;
 }
 
-const LIGAND_ELEMENTS: Readonly<Record<string, number>> = { C: NEEDS_CARBONATE, S: NEEDS_SULFUR, Cl: NEEDS_CHLORIDE, P: NEEDS_PHOSPHATE };
+const LIGAND_ELEMENTS: Readonly<Record<string, number>> = {
+  C: NEEDS_CARBONATE,
+  S: NEEDS_SULFUR,
+  Cl: NEEDS_CHLORIDE,
+  P: NEEDS_PHOSPHATE,
+};
 
 const tables = new WeakMap<Database, Map<string, SpeciesTable>>();
 
@@ -87,9 +92,20 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
   const entry = db.system(element);
   if (!entry || entry.kind !== "metal") throw new Error(`no data for the metal ${element}`);
   // the element in its reference state: a solid, or the liquid for mercury
-  const metal = entry.species.find((s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
+  const metal = entry.species.find(
+    (s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1,
+  );
   if (!metal) throw new Error(`the ${element} file lacks the metal ${element}(s)`);
-  const basis = [metal, db.require("H2O(l)"), db.require("H+"), ELECTRON, db.require(CARBONATE_PIVOT), db.require(SULFUR_PIVOT), db.require(CHLORIDE_PIVOT), db.require(PHOSPHATE_PIVOT)] as const;
+  const basis = [
+    metal,
+    db.require("H2O(l)"),
+    db.require("H+"),
+    ELECTRON,
+    db.require(CARBONATE_PIVOT),
+    db.require(SULFUR_PIVOT),
+    db.require(CHLORIDE_PIVOT),
+    db.require(PHOSPHATE_PIVOT),
+  ] as const;
   const formationOf = formationTable(db, basis);
   const rows: { s: SystemSpecies; needs: number; coefficients: readonly number[]; props: ReactionProperties }[] = [];
   for (const s of db.allSpecies()) {
@@ -104,7 +120,12 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     const formation = unknown ? null : formationOf(s);
     if (!formation) continue;
     const regime: Regime = s === metal ? "immunity" : s.state === "aq" ? "corrosion" : "passivation";
-    rows.push({ s: { species: s, formula: s.formula, metalAtoms: s.elements[element], dissolved: s.state === "aq", regime }, needs, coefficients: formation.coefficients, props: formation.properties });
+    rows.push({
+      s: { species: s, formula: s.formula, metalAtoms: s.elements[element], dissolved: s.state === "aq", regime },
+      needs,
+      coefficients: formation.coefficients,
+      props: formation.properties,
+    });
   }
   const n = rows.length;
   const col = () => new Float64Array(n);
@@ -112,7 +133,16 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     element,
     species: rows.map((r) => r.s),
     metalIndex: rows.findIndex((r) => r.s.species === metal),
-    g0: col(), s: col(), cp: col(), x: col(), proton: col(), electron: col(), carbonate: col(), sulfur: col(), chloride: col(), phosphate: col(),
+    g0: col(),
+    s: col(),
+    cp: col(),
+    x: col(),
+    proton: col(),
+    electron: col(),
+    carbonate: col(),
+    sulfur: col(),
+    chloride: col(),
+    phosphate: col(),
     needs: new Uint8Array(n),
     dissolved: new Uint8Array(n),
     chargeSquared: col(),
@@ -146,7 +176,16 @@ export function ligandTable(db: Database, members: readonly string[]): LigandTab
   const species = members.map((f) => db.require(f));
   const formationOf = formationTable(db, [species[0], db.require("H2O(l)"), db.require("H+"), ELECTRON]);
   const n = species.length;
-  const built = { species, g0: new Float64Array(n), s: new Float64Array(n), cp: new Float64Array(n), proton: new Float64Array(n), electron: new Float64Array(n), chargeSquared: new Float64Array(n), solidIndex: species.findIndex((s) => s.state === "s") };
+  const built = {
+    species,
+    g0: new Float64Array(n),
+    s: new Float64Array(n),
+    cp: new Float64Array(n),
+    proton: new Float64Array(n),
+    electron: new Float64Array(n),
+    chargeSquared: new Float64Array(n),
+    solidIndex: species.findIndex((s) => s.state === "s"),
+  };
   species.forEach((s, i) => {
     const formation = formationOf(s);
     if (!formation) throw new Error(`${s.formula} cannot be formed from ${species[0].formula}, H2O, H+ and e-`);

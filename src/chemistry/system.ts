@@ -1,5 +1,5 @@
 /**
- * A metal–water system at one temperature and activity, as a set of species planes (GUIDE §2).
+ * A metal–water system at one temperature and activity, as a set of species planes (docs/method.md, Species planes).
  *
  * Each species is written as formed from the metal and water (and, where it carries a ligand, from that ligand's
  * basis species):  x M + y H2O → MxOyHz^q + (2y − z) H+ + n e−. Per metal atom, in volts (Gibbs energy / F):
@@ -7,7 +7,7 @@
  *   g(pH, E) = [ΔG°r(T) + RT ln a] / (xF) − ((2y − z)/x)·k(T)·pH − (n/x)·E,     k = RT ln10 / F
  *
  * with a the activity of a dissolved species (1 for solids). The metal has g = 0. The dominant species at a point
- * is the one with the lowest g; two species share a boundary where their g are equal.
+ * is the one with the lowest g; two share a boundary where their g are equal (Pourbaix 1974; Garrels & Christ 1965).
  *
  * Ligands (issue: real waters) split the plane into cells in each of which one basis species of every ligand
  * predominates; within a cell every plane is linear. Without ligands there is one cell covering everything.
@@ -63,7 +63,7 @@ export interface PlaneCell {
 /** Full scans a cell answers before it finds its active species (pruning costs about as much as 50–100 scans). */
 export const PRUNE_AFTER_QUERIES = 64;
 
-/** The pH domain the worksheet functions accept (GUIDE §3), and a potential span far beyond any use. */
+/** The pH domain the worksheet functions accept (docs/method.md, Domain), and a potential span far beyond any use. */
 export const PRUNE_PH_MIN = -2;
 export const PRUNE_PH_MAX = 16;
 export const PRUNE_E_LIMIT = 1000;

@@ -24,7 +24,7 @@ export interface ReactionProperties {
   readonly dG0: number;
   /** ΔS°r, J/(mol·K); null when a species lacks S° (then ΔG°r is taken as independent of T). */
   readonly dS: number | null;
-  /** ΔCp°r, J/(mol·K); 0 when a species lacks Cp° (as GUIDE §2 and the records' notes say). */
+  /** ΔCp°r, J/(mol·K); 0 when a species lacks Cp° (docs/method.md, Temperature; the records' notes). */
   readonly dCp: number;
   /** True when some Cp° was missing and ΔCp°r was set to 0. */
   readonly cpMissing: boolean;
@@ -59,10 +59,4 @@ export function gibbsAt(props: ReactionProperties, kelvinT: number): number {
   if (props.dS === null) return props.dG0;
   const dT = kelvinT - T0;
   return props.dG0 - props.dS * dT + props.dCp * (dT - kelvinT * Math.log(kelvinT / T0));
-}
-
-/** ΔS°r at temperature T (kelvin): ΔS°r(T0) + ΔCp°r·ln(T/T0). */
-export function entropyAt(props: ReactionProperties, kelvinT: number): number | null {
-  if (props.dS === null) return null;
-  return props.dS + props.dCp * Math.log(kelvinT / T0);
 }

@@ -2,7 +2,7 @@
  * Water: the two lines that bound its stability, the ion product Kw(T) and neutral pH.
  *
  * Both lines and Kw come from the species records of data/species/water.json through the same reaction
- * thermodynamics as every other couple (GUIDE §2, constant ΔCp°r):
+ * thermodynamics as every other couple (docs/method.md, Temperature: constant ΔCp°r):
  *
  *   oxygen line     O2(g) + 4 H+ + 4 e− = 2 H2O(l)   E = E°(T) − k(T)·pH + (k(T)/4)·log10 p(O2)
  *   hydrogen line   2 H+ + 2 e− = H2(g)               E = E°(T) − k(T)·pH − (k(T)/2)·log10 p(H2)

@@ -12,7 +12,7 @@ import { renderDiagramSvg } from "../taskpane/diagram-svg";
 import type { SamplePoint } from "./evaluate";
 import { Reservoir } from "./reservoir";
 
-/** Points drawn per diagram at most (the pane's budget is 10 k samples, GUIDE §6). */
+/** Points drawn per diagram at most (the pane's budget is 10 k samples, DEVELOPERS.md Speed budgets). */
 export const POINTS_PER_DIAGRAM = 10_000;
 
 export class DiagramSamples {

@@ -98,7 +98,7 @@ export interface BatchResult {
   /** Output rows in file order, each a CSV line ending in a newline. */
   readonly lines: string[];
   readonly messages: RowMessage[];
-  /** Rows with at least one #VALUE! or #NUM! result. */
+  /** Rows with at least one #VALUE! result, or an #N/A caused by an input cell. */
   readonly errorRows: number;
   /** Rows whose results are blank because a required cell is blank. */
   readonly blankRows: number;
@@ -152,7 +152,8 @@ function textColumn(rows: readonly InputRow[], index: number): CellScalar[][] {
   return out;
 }
 
-const SERIOUS = new Set(["#VALUE!", "#NUM!"]);
+/** #VALUE! is always the input's fault; #N/A only when its message names an input (no DIC for that alkalinity). */
+const SERIOUS = new Set(["#VALUE!"]);
 const LIGAND_ARG = { carbonate: carbonateArg, chloride: chlorideArg, sulfur: sulfurArg, phosphate: phosphateArg } as const;
 
 /**
@@ -320,8 +321,9 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     // messages: one per distinct problem in the row
     let problems: RowMessage[] | null = null;
     for (const c of cells) {
-      if (!(c instanceof CellError) || !SERIOUS.has(c.code)) continue;
+      if (!(c instanceof CellError)) continue;
       const [arg, rest] = splitMessage(c.message);
+      if (!SERIOUS.has(c.code) && !(c.code === "#N/A" && arg !== null && Object.prototype.hasOwnProperty.call(argColumns, arg))) continue;
       const col = arg !== null && arg in argColumns ? argColumns[arg] : null;
       const text = clip(col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`);
       problems ??= [];

@@ -1,6 +1,6 @@
 /**
  * mulberry32, a small public-domain 32-bit seeded generator: the same seed gives the same sequence on every run,
- * for reservoir sampling, invented demo data, synthetic test logs and benchmarks. Uniform in [0, 1).
+ * for reservoir sampling, demo data, test logs and benchmarks. Uniform in [0, 1) (T. Ettinger 2017; from memory).
  */
 export function mulberry32(seed: number): () => number {
   let a = seed >>> 0;

@@ -2,19 +2,23 @@
  * The one coercion and broadcasting layer every worksheet function goes through.
  *
  * Each argument may be a single cell or a range (rows of cells). Ranges broadcast like arrays do: along each
- * dimension the sizes must agree or be 1, and the result takes the common shape (so it spills). A blank cell in a
- * required argument gives a blank result in that position; a blank or omitted optional argument takes its default.
- * Every failure becomes an error value naming the argument; nothing here throws, and no NaN or Infinity reaches a
- * cell.
+ * dimension the sizes must agree or be 1, and the result takes the common shape (so it spills). Blank means
+ * missing: a blank cell in a required argument, or in a measured optional argument given as a cell or range
+ * (temperature), gives a blank result in that position; defaults apply only to omitted arguments (and to blank
+ * cells of options that are not measurements, such as activity). Every failure becomes #VALUE! or #N/A naming the
+ * argument; nothing here throws, and no NaN or Infinity reaches a cell. An error cell inside a range (Excel passes it
+ * in because functions.json sets allowErrorForDataTypeAny) gives an error in that position only.
  */
-import { CellError, CellInput, CellOutput, CellScalar, isBlank, numError, toHostError, valueError } from "./cell-values";
+import { basicValueOf, CellError, CellInput, CellOutput, CellScalar, inputErrorCode, isBlank, notAvailable, toHostError, valueError } from "./cell-values";
 
 /** How one argument is read from a cell. */
 export interface ArgSpec<T> {
   /** The argument's name as the function help shows it ("pH", "temperature"). */
   readonly name: string;
-  /** Optional arguments take `defaultValue` when blank or omitted. */
+  /** Optional arguments take `defaultValue` when omitted (and, unless `measured`, when blank). */
   readonly optional: boolean;
+  /** A measurement: a blank cell given for it is a missing value (blank result), never the default. */
+  readonly measured?: boolean;
   readonly defaultValue?: T;
   /** Reads a non-blank cell. */
   parse(value: Exclude<CellScalar, null | undefined>): T | CellError;
@@ -34,9 +38,13 @@ export function numberArg(
     defaultValue?: number;
     /** Shown in range messages: "°C", "bar". */
     unit?: string;
+    /** A measurement: a blank cell given for it gives a blank result (see ArgSpec.measured). */
+    measured?: boolean;
+    /** The whole message for a number outside [min, max], when the generic one would not say what to do. */
+    outOfRange?: (x: number) => string;
   } = {},
 ): ArgSpec<number> {
-  const { min, max, minExclusive = false, optional = false, defaultValue, unit = "" } = options;
+  const { min, max, minExclusive = false, optional = false, defaultValue, unit = "", measured = false, outOfRange } = options;
   const suffix = unit ? ` ${unit}` : "";
   const rangeText = (): string => {
     const low = min === undefined ? "" : `${minExclusive ? "above" : "at least"} ${min}${suffix}`;
@@ -49,6 +57,7 @@ export function numberArg(
   return {
     name,
     optional,
+    measured,
     defaultValue,
     accepts: { low, high },
     parse(value) {
@@ -56,9 +65,9 @@ export function numberArg(
       if (typeof value === "number") x = value;
       else if (typeof value === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(value)) x = Number(value);
       else return valueError(`${name}: expected a number, got ${describe(value)}`);
-      if (!isFiniteNumber(x)) return numError(`${name}: expected a finite number`);
-      if (min !== undefined && (minExclusive ? x <= min : x < min)) return numError(`${name}: ${x} is out of range (${rangeText()})`);
-      if (max !== undefined && x > max) return numError(`${name}: ${x} is out of range (${rangeText()})`);
+      if (!isFiniteNumber(x)) return valueError(`${name}: expected a finite number, got ${x}`);
+      const below = min !== undefined && (minExclusive ? x <= min : x < min);
+      if (below || (max !== undefined && x > max)) return valueError(outOfRange ? outOfRange(x) : `${name}: ${x} is out of range (${rangeText()})`);
       return x;
     },
   };
@@ -147,7 +156,8 @@ export function mapCells<A extends unknown[]>(
       varying.push(i);
       continue;
     }
-    const parsed = parseCell(specs[i], cellAt(inputs[i], 0, 0));
+    // a top-level blank is an omitted argument; a blank inside an array is a cell the user pointed at
+    const parsed = parseCell(specs[i], cellAt(inputs[i], 0, 0), isArray(inputs[i]));
     if (parsed === BLANK) constantBlank = true;
     else if (parsed instanceof CellError) {
       if (constantError < 0) constantError = i;
@@ -177,7 +187,7 @@ export function mapCells<A extends unknown[]>(
             continue;
           }
           const i = varying[k];
-          const parsed = parseCell(specs[i], value);
+          const parsed = parseCell(specs[i], value, true);
           if (parsed === BLANK) blank = true;
           else if (typeof parsed === "object" && parsed instanceof CellError) {
             if (errorIndex < 0 || i < errorIndex) errorIndex = i; // the first error in argument order wins over blanks
@@ -199,15 +209,24 @@ export function mapCells<A extends unknown[]>(
   }
 }
 
-function parseCell<T>(spec: ArgSpec<T>, value: unknown): Parsed<T> {
+/** Reads one cell; `given` is false only for an omitted argument (a top-level blank). */
+function parseCell<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<T> {
   if (isBlank(value)) {
-    if (spec.optional) return spec.defaultValue as T;
+    if (spec.optional && !(given && spec.measured)) return spec.defaultValue as T;
     return BLANK;
   }
-  if (typeof value !== "number" && typeof value !== "string" && typeof value !== "boolean") {
-    return valueError(`${spec.name}: the cell holds an error or an unreadable value`);
-  }
+  if (typeof value !== "number" && typeof value !== "string" && typeof value !== "boolean") return parseObject(spec, value, given);
   return spec.parse(value);
+}
+
+/** An error cell keeps its meaning (#N/A stays "no value"); a rich value is read by its plain value. */
+function parseObject<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<T> {
+  const code = inputErrorCode(value);
+  if (code === "#N/A") return notAvailable(`${spec.name}: the cell holds #N/A (no value)`);
+  if (code !== null) return valueError(`${spec.name}: the cell holds the error ${code.slice(0, 12)}; correct that cell`);
+  const basic = basicValueOf(value);
+  if (basic !== undefined) return parseCell(spec, basic, given);
+  return valueError(`${spec.name}: the cell holds an unreadable value`);
 }
 
 function safeCompute<A extends unknown[]>(compute: (...args: A) => CellOutput, args: A): CellOutput {
@@ -220,7 +239,7 @@ function safeCompute<A extends unknown[]>(compute: (...args: A) => CellOutput, a
 
 function finish(value: CellOutput): CellOutput {
   if (value instanceof CellError) return toHostError(value);
-  if (typeof value === "number" && !isFiniteNumber(value)) return toHostError(numError("the result is not a finite number"));
+  if (typeof value === "number" && !isFiniteNumber(value)) return toHostError(notAvailable("no finite answer exists at this input"));
   return value;
 }
 

@@ -4,7 +4,7 @@
  */
 import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
 import { mapCells, numberArg } from "./broadcast";
-import { CellInput, CellOutput, numError } from "./cell-values";
+import { CellInput, CellOutput, notAvailable } from "./cell-values";
 import { pHArg, temperatureArg } from "./common-args";
 
 /** Total alkalinity, mg/L as CaCO3: ≥ 0; 100 000 mg/L (2 eq/L) is far beyond any natural or process water. */
@@ -15,7 +15,8 @@ export function dicAt(alkalinity: CellInput, pH: CellInput, temperature?: CellIn
     try {
       return dicFromAlkalinity(alk, p, t);
     } catch (error) {
-      if (error instanceof AlkalinityError) return numError(`alkalinity, pH: ${error.message}`);
+      // valid inputs with no DIC (below the end point, or more hydroxide than alkalinity): no answer exists
+      if (error instanceof AlkalinityError) return notAvailable(`alkalinity, pH: ${error.message}`);
       throw error;
     }
   });

@@ -1,5 +1,5 @@
 /**
- * Argument readers shared by the worksheet functions (GUIDE §3 ranges and defaults).
+ * Argument readers shared by the worksheet functions (ranges and defaults: docs/method.md, Domain).
  */
 import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import { getDatabase } from "../chemistry/database";
@@ -11,12 +11,26 @@ export const DEFAULT_ACTIVITY = 1e-6;
 export const DEFAULT_CELSIUS = 25;
 
 export const pHArg = numberArg("pH", { min: -2, max: 16 });
-export const potentialArg = (name = "potential") => numberArg(name, { unit: "V" });
+
+/** Largest potential magnitude accepted, V: beyond ±3 V no aqueous redox couple exists, so it is a reading in mV. */
+export const MAX_POTENTIAL = 3;
+
+/** What a potential beyond ±3 V most likely is, and what to do (a reading in mV typed where volts are expected). */
+export function potentialMessage(name: string, x: number): string {
+  return `${name}: ${x} is outside −3…+3 V: a reading in mV? Divide by 1000 or use REDOX.TOSHE(…, "mV")`;
+}
+
+/** A potential in V vs SHE, −3 to +3 V. */
+export const potentialArg = (name = "potential") =>
+  numberArg(name, { min: -MAX_POTENTIAL, max: MAX_POTENTIAL, unit: "V", outOfRange: (x) => potentialMessage(name, x) });
+
+/** Temperature in °C; omitted → 25 °C, a blank cell → a missing measurement (blank result). */
 export const temperatureArg = numberArg("temperature", {
   min: MIN_CELSIUS,
   max: MAX_CELSIUS,
   unit: "°C",
   optional: true,
+  measured: true,
   defaultValue: DEFAULT_CELSIUS,
 });
 export const activityArg = numberArg("activity", { min: 0, minExclusive: true, max: 10, optional: true, defaultValue: DEFAULT_ACTIVITY });

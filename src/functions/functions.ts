@@ -2,7 +2,9 @@
  * The worksheet functions as the spreadsheet sees them (namespace REDOX, set in manifest.xml). The metadata plugin
  * reads the JSDoc below to write functions.json; each declaration only delegates to its implementation module.
  * Every argument may be one cell or a range; ranges of the same shape (or single cells) broadcast and the result
- * spills. Blank input gives a blank result; problems give #VALUE!, #NUM! or #N/A with a message naming the argument.
+ * spills. A blank cell is a missing value and gives a blank result; defaults apply to omitted arguments. Problems
+ * give #VALUE! (wrong or out-of-range input) or #N/A (no answer) with a message naming the argument — the only two
+ * codes whose message Excel shows.
  *
  * Structure: imports, declarations, then the association block at the end.
  */
@@ -12,6 +14,8 @@ import { ehAt, neutralPHAt, peAt, slopeAt, waterLineAt, waterMarginAt } from "./
 import { ionicStrengthAt } from "./ionic-strength-functions";
 import { boundaryFrom, coupleAt, dissolvedAt, regimeAt, speciesAt, speciesTable } from "./stability-functions";
 import { dicAt } from "./carbonate-functions";
+import { assessAt } from "./assess-functions";
+import { electrodeList, metalList, versionTable } from "./list-functions";
 
 /**
  * Potential of a water stability line, V vs SHE: the O2/H2O line (gas "O2", default) above which water is oxidised
@@ -32,7 +36,7 @@ export function waterline(pH: any[][], temperature?: any[][], gas?: any[][], pre
  * window (distance to the nearer line), negative outside (how far beyond the line crossed).
  * @customfunction WATERMARGIN
  * @param {any[][]} pH pH of the solution, −2 to 16.
- * @param {any[][]} potential Potential in V vs SHE.
+ * @param {any[][]} potential Potential in V vs SHE, −3 to +3.
  * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
  * @param {any[][]} [overpotential] Extra width in V added beyond each line, 0 or more (default 0; about 0.6 V describes where water decomposes in practice).
  * @returns {any[][]} Margin in V.
@@ -44,27 +48,29 @@ export function watermargin(pH: any[][], potential: any[][], temperature?: any[]
 /**
  * Converts a reading against a reference electrode to the standard hydrogen scale (V vs SHE).
  * @customfunction TOSHE
- * @param {any[][]} reading Measured potential in V against the reference electrode.
+ * @param {any[][]} reading Measured potential against the reference electrode, in V (or mV with unit "mV").
  * @param {any[][]} electrode Reference electrode: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M or RHE (case-insensitive; common spellings accepted).
  * @param {any[][]} [temperature] Temperature of the reference electrode in °C (default 25).
  * @param {any[][]} [pH] pH of the solution, −2 to 16; needed only for RHE.
+ * @param {any[][]} [unit] Unit of the reading: "V" (default) or "mV". The result is always in V vs SHE.
  * @returns {any[][]} Potential in V vs SHE.
  */
-export function toshe(reading: any[][], electrode: any[][], temperature?: any[][], pH?: any[][]): any[][] {
-  return toSHEAt(reading, electrode, temperature, pH);
+export function toshe(reading: any[][], electrode: any[][], temperature?: any[][], pH?: any[][], unit?: any[][]): any[][] {
+  return toSHEAt(reading, electrode, temperature, pH, unit);
 }
 
 /**
  * Converts a potential on the standard hydrogen scale to the reading against a reference electrode.
  * @customfunction FROMSHE
- * @param {any[][]} potential Potential in V vs SHE.
+ * @param {any[][]} potential Potential in V vs SHE, −3 to +3.
  * @param {any[][]} electrode Reference electrode: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M or RHE (case-insensitive; common spellings accepted).
  * @param {any[][]} [temperature] Temperature of the reference electrode in °C (default 25).
  * @param {any[][]} [pH] pH of the solution, −2 to 16; needed only for RHE.
- * @returns {any[][]} Potential in V against the electrode.
+ * @param {any[][]} [unit] Unit of the result: "V" (default) or "mV".
+ * @returns {any[][]} The reading against the electrode, in V or mV.
  */
-export function fromshe(potential: any[][], electrode: any[][], temperature?: any[][], pH?: any[][]): any[][] {
-  return fromSHEAt(potential, electrode, temperature, pH);
+export function fromshe(potential: any[][], electrode: any[][], temperature?: any[][], pH?: any[][], unit?: any[][]): any[][] {
+  return fromSHEAt(potential, electrode, temperature, pH, unit);
 }
 
 /**
@@ -114,7 +120,7 @@ export function slope(temperature?: any[][]): any[][] {
  * @customfunction SPECIES
  * @param {any[][]} element Element symbol or name: Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo, V, W, Bi, Au, Pt, Hg, As, Sb, Se, U.
  * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} potential Potential in volts vs SHE (convert meter readings with REDOX.TOSHE).
+ * @param {any[][]} potential Potential in volts vs SHE, −3 to +3 (convert meter readings, also in mV, with REDOX.TOSHE).
  * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species, above 0 and at most 10. Default 1e-6.
  * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
@@ -223,7 +229,7 @@ export function speciestable(element: any[][], temperature?: any[][]): any[][] {
 }
 
 /**
- * Total dissolved inorganic carbon (mol/kg) from total alkalinity and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. #NUM! below the alkalinity end point (pH 4.5), where alkalinity does not determine DIC.
+ * Total dissolved inorganic carbon (mol/kg) from total alkalinity and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. #N/A below the alkalinity end point (pH 4.5), where alkalinity does not determine DIC.
  * @customfunction DIC
  * @param {any[][]} alkalinity Total alkalinity in mg/L as CaCO3, 0 or more.
  * @param {any[][]} pH pH, from -2 to 16.
@@ -232,6 +238,54 @@ export function speciestable(element: any[][], temperature?: any[][]): any[][] {
  */
 export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): any[][] {
   return dicAt(alkalinity, pH, temperature);
+}
+
+/**
+ * One row per sample: dominant species, regime, nearest boundary above and below (V vs SHE), water margin (V), equilibrium dissolved metal and the solid controlling it — what SPECIES, REGIME, BOUNDARY, WATERMARGIN and DISSOLVED give for that row. Give single cells or columns; the answer spills. Thermodynamics only: what can form, not how fast.
+ * @customfunction ASSESS
+ * @param {any[][]} element Metal symbol or name (REDOX.METALS lists them).
+ * @param {any[][]} pH pH, from -2 to 16.
+ * @param {any[][]} potential Potential in volts vs SHE, −3 to +3 (convert meter readings with REDOX.TOSHE).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25; a blank cell is a missing measurement.
+ * @param {any[][]} [activity] Activity of dissolved metal species deciding the dominant species. Default 1e-6.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none.
+ * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
+ * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none.
+ * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it); blank = ideal dilute solution.
+ * @param {any[][]} [unit] Unit of the dissolved metal: mol/kg (default), mg/L or ug/L.
+ * @param {any[][]} [header] TRUE for a header row above the answers.
+ * @returns {any[][]} Seven columns per sample row.
+ */
+export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], unit?: any[][], header?: any[][]): any[][] {
+  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, unit, header);
+}
+
+/**
+ * The supported metals by symbol, one per row (for a Data Validation list).
+ * @customfunction METALS
+ * @returns {any[][]} Metal symbols; the list spills down.
+ */
+export function metals(): any[][] {
+  return metalList();
+}
+
+/**
+ * The reference electrode names the conversions accept, one per row (for a Data Validation list).
+ * @customfunction ELECTRODES
+ * @returns {any[][]} Electrode names; the list spills down.
+ */
+export function electrodes(): any[][] {
+  return electrodeList();
+}
+
+/**
+ * The add-in version and a fingerprint of the thermodynamic and electrode data it answers from, for audit trails.
+ * @customfunction VERSION
+ * @returns {any[][]} Two rows: add-in and data.
+ */
+export function version(): any[][] {
+  return versionTable();
 }
 
 if (typeof CustomFunctions !== "undefined") {
@@ -251,4 +305,8 @@ if (typeof CustomFunctions !== "undefined") {
   CustomFunctions.associate("IONICSTRENGTH", ionicstrength);
   CustomFunctions.associate("SPECIESTABLE", speciestable);
   CustomFunctions.associate("DIC", dic);
+  CustomFunctions.associate("ASSESS", assess);
+  CustomFunctions.associate("METALS", metals);
+  CustomFunctions.associate("ELECTRODES", electrodes);
+  CustomFunctions.associate("VERSION", version);
 }

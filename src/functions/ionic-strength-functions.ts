@@ -16,7 +16,9 @@ const BASES: ReadonlyMap<string, IonicStrengthBasis> = new Map([
 
 const basisArg = textArg<IonicStrengthBasis>("basis", (text) => {
   const found = BASES.get(text.toLowerCase().replace(/\s+/g, ""));
-  return found ?? valueError(`basis: "${text}" is not "uS/cm" (specific conductance) or "mg/L" (total dissolved solids)`);
+  return (
+    found ?? valueError(`basis: "${text}" is not "uS/cm" (specific conductance) or "mg/L" (total dissolved solids)`)
+  );
 });
 
 const measuredArg = numberArg("value", { min: 0 });
@@ -24,7 +26,10 @@ const measuredArg = numberArg("value", { min: 0 });
 export function ionicStrengthAt(value: CellInput, basis: CellInput): CellOutput[][] {
   return mapCells([measuredArg, basisArg], [value, basis], (x, b) => {
     const I = ionicStrengthFrom(x, b);
-    if (I > MAX_IONIC_STRENGTH) return valueError(`value: ${x} ${b} gives I = ${I.toPrecision(3)} mol/kg, above the ${MAX_IONIC_STRENGTH} mol/kg the Davies equation holds to`);
+    if (I > MAX_IONIC_STRENGTH)
+      return valueError(
+        `value: ${x} ${b} gives I = ${I.toPrecision(3)} mol/kg, above the ${MAX_IONIC_STRENGTH} mol/kg the Davies equation holds to`,
+      );
     return I;
   });
 }

@@ -7,18 +7,19 @@ import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
 import { ArgSpec, numberArg } from "./broadcast";
 import { CellError, valueError } from "./cell-values";
 
-/** A number argument whose out-of-range values are #VALUE! (the user's input), its message followed by `hint`. */
-function rangeAsValueError(spec: ArgSpec<number>, hint = ""): ArgSpec<number> {
+/** A number argument whose error messages (#VALUE!, the user's input) end with `hint`. */
+function withHint(spec: ArgSpec<number>, hint: string): ArgSpec<number> {
   return {
     ...spec,
     parse(value) {
       const parsed = spec.parse(value);
-      return parsed instanceof CellError && parsed.code === "#NUM!" ? valueError(parsed.message + hint) : parsed;
+      return parsed instanceof CellError ? valueError(parsed.message + hint) : parsed;
     },
   };
 }
 
-const totalArg = (name: string) => rangeAsValueError(numberArg(name, { min: 0, max: MAX_LIGAND_TOTAL, unit: "mol/kg", optional: true, defaultValue: 0 }));
+const totalArg = (name: string) =>
+  numberArg(name, { min: 0, max: MAX_LIGAND_TOTAL, unit: "mol/kg", optional: true, defaultValue: 0 });
 
 export const carbonateArg = totalArg("carbonate");
 export const chlorideArg = totalArg("chloride");
@@ -26,7 +27,7 @@ export const sulfurArg = totalArg("sulfur");
 /** Total orthophosphate, mol/kg as P (REDOX functions take it between sulfur and ionicStrength). */
 export const phosphateArg = totalArg("phosphate");
 
-export const ionicStrengthArg = rangeAsValueError(
+export const ionicStrengthArg = withHint(
   numberArg("ionicStrength", { min: 0, max: MAX_IONIC_STRENGTH, unit: "mol/kg", optional: true, defaultValue: 0 }),
   `: the Davies equation holds up to about ${MAX_IONIC_STRENGTH} mol/kg (REDOX.IONICSTRENGTH estimates I from conductivity or TDS)`,
 );

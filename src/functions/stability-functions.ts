@@ -1,6 +1,6 @@
 /**
  * Worksheet functions over a metal's stability system: SPECIES, REGIME, BOUNDARY, COUPLE, DISSOLVED and
- * SPECIESTABLE (GUIDE §3). Thin adapters: argument reading and broadcasting come from broadcast.ts, the answers
+ * SPECIESTABLE (README). Thin adapters: argument reading and broadcasting come from broadcast.ts, the answers
  * from src/chemistry.
  */
 import { getDatabase, Species } from "../chemistry/database";
@@ -11,7 +11,8 @@ import { PointEngine, pointEngine } from "../chemistry/point-engine";
 import { speciesTable as metalSpeciesTable } from "../chemistry/species-tables";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
 import type { SystemSpecies } from "../chemistry/system";
-import { mapCells, numberArg, textArg } from "./broadcast";
+import { ownEntry } from "../chemistry/own-entry";
+import { mapCells, textArg } from "./broadcast";
 import { CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
@@ -20,7 +21,7 @@ let lastElement = "";
 let lastEngine: PointEngine | null = null;
 
 /** The point engine of an element with the row's water set (the engine keeps what depends only on T). */
-function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, phosphate: number, ionicStrength: number): PointEngine {
+export function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, phosphate: number, ionicStrength: number): PointEngine {
   if (element !== lastElement || !lastEngine) {
     lastEngine = pointEngine(getDatabase(), element);
     lastElement = element;
@@ -124,19 +125,19 @@ function couple(ox: Species, red: Species, pH: number, celsius: number, activity
 }
 
 /** Units for dissolved totals: factor from mol/kg given the metal's atomic weight (g/mol). */
-const DISSOLVED_UNITS: Record<string, (atomicWeight: number) => number> = {
+export const DISSOLVED_UNITS: Record<string, (atomicWeight: number) => number> = {
   "mol/kg": () => 1,
   "mg/l": (w) => w * 1e3,
   "ug/l": (w) => w * 1e6,
 };
 const UNIT_ALIASES: Record<string, string> = { "µg/l": "ug/l", "μg/l": "ug/l", ppb: "ug/l", ppm: "mg/l", molal: "mol/kg", "mol/l": "mol/kg" };
 
-const unitArg = textArg(
+export const unitArg = textArg(
   "unit",
   (text) => {
     const key = text.toLowerCase().replace(/\s+/g, "");
-    const unit = UNIT_ALIASES[key] ?? key;
-    return unit in DISSOLVED_UNITS ? unit : valueError(`unit: "${text}" is not one of mol/kg, mg/L, ug/L`);
+    const unit = ownEntry(UNIT_ALIASES, key) ?? key;
+    return ownEntry(DISSOLVED_UNITS, unit) ? unit : valueError(`unit: "${text}" is not one of mol/kg, mg/L, ug/L`);
   },
   { optional: true, defaultValue: "mol/kg" },
 );

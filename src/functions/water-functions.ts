@@ -1,13 +1,14 @@
 /**
  * Worksheet functions for water and the redox scale: WATERLINE, WATERMARGIN, PE, EH, NEUTRALPH and SLOPE
- * (GUIDE §3). Thin adapters: arguments are read and broadcast by broadcast.ts, the answers come from
+ * (README). Thin adapters: arguments are read and broadcast by broadcast.ts, the answers come from
  * src/chemistry/water.ts, pe.ts and constants.ts. Temperatures in °C, potentials in V vs SHE.
  */
 import { kelvin, nernstFactor } from "../chemistry/constants";
+import { ownEntry } from "../chemistry/own-entry";
 import { ehFromPe, peFromEh } from "../chemistry/pe";
 import { neutralPH, WaterGas, waterLine, waterMargin } from "../chemistry/water";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellInput, CellOutput, numError, valueError } from "./cell-values";
+import { CellInput, CellOutput, notAvailable, valueError } from "./cell-values";
 import { pHArg, potentialArg, temperatureArg } from "./common-args";
 
 const GAS_NAMES: Readonly<Record<string, WaterGas>> = { o2: "O2", oxygen: "O2", h2: "H2", hydrogen: "H2" };
@@ -15,7 +16,7 @@ const GAS_NAMES: Readonly<Record<string, WaterGas>> = { o2: "O2", oxygen: "O2", 
 /** "O2" (default) or "H2", case-insensitive; "oxygen" and "hydrogen" too. */
 export const gasArg = textArg<WaterGas>(
   "gas",
-  (text) => GAS_NAMES[text.toLowerCase().replace(/\(g\)$/, "")] ?? valueError(`gas: expected "O2" or "H2", got "${text.slice(0, 24)}"`),
+  (text) => ownEntry(GAS_NAMES, text.toLowerCase().replace(/\(g\)$/, "")) ?? valueError(`gas: expected "O2" or "H2", got "${text.slice(0, 24)}"`),
   { optional: true, defaultValue: "O2" },
 );
 /** Partial pressure of the gas in bar, > 0, default 1. */
@@ -40,7 +41,7 @@ export function waterMarginAt(pH: CellInput, potential: CellInput, temperature?:
 export function peAt(potential: CellInput, temperature?: CellInput): CellOutput[][] {
   return mapCells([potentialArg(), temperatureArg], [potential, temperature], (e, t) => {
     const x = peFromEh(e, t);
-    return Number.isFinite(x) ? x : numError(`potential: ${e} V is too large to express as pe`);
+    return Number.isFinite(x) ? x : notAvailable(`potential: ${e} V has no finite pe`);
   });
 }
 
@@ -48,7 +49,7 @@ export function peAt(potential: CellInput, temperature?: CellInput): CellOutput[
 export function ehAt(pe: CellInput, temperature?: CellInput): CellOutput[][] {
   return mapCells([peArg, temperatureArg], [pe, temperature], (x, t) => {
     const e = ehFromPe(x, t);
-    return Number.isFinite(e) ? e : numError(`pe: ${x} is too large to express as a potential`);
+    return Number.isFinite(e) ? e : valueError(`pe: ${x} is too large to express as a potential`);
   });
 }
 

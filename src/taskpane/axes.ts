@@ -55,7 +55,7 @@ export function makeAxes(window: AxisWindow, area: PlotArea): Axes {
 
 /**
  * Tick values on [min, max]: multiples of a "nice" step (1, 2, 2.5 or 5 × 10^k) chosen so that about `target`
- * ticks fall inside. Values are rounded to the step's decimals so labels print cleanly.
+ * ticks fall inside (after Heckbert 1990, Graphics Gems, "nice numbers"); values are rounded to the step's decimals.
  */
 export function niceTicks(min: number, max: number, target = 7): number[] {
   if (!(max > min) || !Number.isFinite(min) || !Number.isFinite(max)) return [];

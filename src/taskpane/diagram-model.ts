@@ -9,8 +9,9 @@
  */
 import { clipPolygon, HalfPlane, Point, polygonArea } from "../chemistry/halfplane";
 import { getElectrodes } from "../chemistry/electrodes";
-import type { LigandTotals } from "../chemistry/ligand-cells";
+import { hasLigands, type LigandTotals } from "../chemistry/ligand-cells";
 import { diagramRegions, Region } from "../chemistry/predominance";
+import { tracedRegions } from "../chemistry/region-tracing";
 import { getDatabase } from "../chemistry/database";
 import { dominantInWater } from "../chemistry/point-engine";
 import { MetalSystem, Regime } from "../chemistry/system";
@@ -78,7 +79,8 @@ export function shownRegions(system: MetalSystem, window: AxisWindow, scale: Dis
     scale.toSHE(window.pHMax, window.eMax),
   ];
   const sheWindow = { pHMin: window.pHMin, pHMax: window.pHMax, eMin: Math.min(...corners) - 1e-6, eMax: Math.max(...corners) + 1e-6 };
-  const regions: Region[] = diagramRegions(system, sheWindow);
+  // with ligands the regions are traced from the point engine, so they agree with REDOX.SPECIES (region-tracing.ts)
+  const regions: Region[] = system.ligandTotals && hasLigands(system.ligandTotals) ? tracedRegions(getDatabase(), system, sheWindow) : diagramRegions(system, sheWindow);
   const clip: HalfPlane[] = [
     { a: -window.eMax, b: 0, c: 1 }, // E ≤ eMax
     { a: window.eMin, b: 0, c: -1 }, // E ≥ eMin

@@ -1,7 +1,7 @@
 /**
  * Where to write a region's label: the point of a convex polygon (pixel coordinates) where a text box of the
  * given size has the most room — the box's distance to the nearest edge is largest. For a point box this is the
- * polygon's pole of inaccessibility (the centre of its largest inscribed circle).
+ * polygon's pole of inaccessibility, the centre of its largest inscribed circle (Garcia-Castellanos & Lombardo 2007).
  *
  * For an edge with inward unit normal n through vertex v, a box of half-size (w, h) centred at p stays inside
  * when  n·(p − v) ≥ |n_x|·w + |n_y|·h.  The room at p is the smallest such margin over all edges: a minimum of

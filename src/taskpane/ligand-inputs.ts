@@ -167,13 +167,13 @@ export function ligandNames(totals: LigandTotals): string {
 }
 
 /**
- * The caption line naming the water and the method's approximation in one sentence; "" without ligands.
+ * The caption line naming the water and the method in one sentence; "" without ligands.
  */
 export function waterCaption(water: ResolvedWater): string {
   if (!hasLigands(water.diagram)) return "";
   const per = water.fromColumns.map((l) => `${LIGAND_WORDS[l]} is the median of the rows' ${LIGAND_COLUMN[l]} values and each sample uses its own`);
   return (
     `Water: ${formatTotals(water.diagram)}${per.length > 0 ? ` (${per.join("; ")})` : ""}; ` +
-    "each ligand is taken at its full total where its own form predominates (approximate within about a pH unit of its boundaries), ideal solution."
+    "each ligand is speciated exactly at every point from its total, ideal solution."
   );
 }

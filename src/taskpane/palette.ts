@@ -1,5 +1,5 @@
 /**
- * Colours of the diagram, by regime (GUIDE §5): cool neutrals for immunity, greens and teals for passivation, warm
+ * Diagram colours, by regime (docs/method.md): cool neutrals for immunity, greens and teals for passivation, warm
  * ochres to brick for corrosion, several lightness steps per regime so neighbouring species differ. The three
  * families differ in lightness and blue–yellow balance, which stays distinct under the common red–green colour
  * deficiencies; every region also carries a pattern of its regime and its formula, so colour is never the only cue.

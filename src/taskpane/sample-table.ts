@@ -75,8 +75,8 @@ export function median(values: readonly number[]): number {
 }
 
 const NO_TOTALS: RowTotals = Object.freeze({});
-const PH_RANGE = [-2, 16] as const; // GUIDE §3
-const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (GUIDE §3)
+const PH_RANGE = [-2, 16] as const; // docs/method.md, Domain
+const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (docs/method.md, Domain)
 
 export function readSamples(table: SampleTable, options: ReadOptions): ReadResult {
   const { mapping } = options;

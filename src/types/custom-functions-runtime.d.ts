@@ -4,6 +4,7 @@
 
 declare namespace CustomFunctions {
   /** Binds a function to the id it has in functions.json. */
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- functions of any parameter types must fit
   function associate(id: string, functionObject: (...args: any[]) => unknown): void;
 
   /** Error codes the spreadsheet shows in a cell. */

@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { readFileSync } from "fs";
 import { join } from "path";
 import type { Page } from "playwright-core";
-import { OpenPane, openStandalonePane, ROOT } from "./serve-dist";
+import { OpenPane, openStandalonePane, ROOT } from "../support/serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildLigandSystem } from "../../src/chemistry/ligand-system";
 import { toSHE } from "../../src/chemistry/electrodes";
@@ -110,12 +110,12 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
     expect(regimes).toEqual(new Set(regions.map((r) => r.formula)));
   });
 
-  it("names the water and the approximation; hover text carries the row's water", async () => {
+  it("names the water and the method; hover text carries the row's water", async () => {
     expect(await page.textContent("#diagram .rc-title")).toBe("Lead in water with carbonate, sulfur and chloride");
     const caption = (await page.textContent("#diagram .rc-caption")) ?? "";
     expect(caption).toMatch(/Water: DIC [\d.]+, S 0\.2, Cl 0\.5 mmol\/kg/);
     expect(caption).toMatch(/median of the rows' alkalinity/);
-    expect(caption).toMatch(/full total where its own form predominates/);
+    expect(caption).toMatch(/speciated\s*exactly\s*at\s*every\s*point/);
     await page.locator("#diagram .rc-sample").first().focus();
     await expect.poll(() => page.textContent("#point-info")).toMatch(/; water DIC [\d.]+, S 0\.2, Cl 0\.5 mmol\/kg$/);
   });

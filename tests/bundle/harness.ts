@@ -165,3 +165,35 @@ export function safeString(value: unknown): string {
     return String(value);
   }
 }
+
+/** Whether a value (a cell or a 2-D range) holds an error cell. */
+function containsError(value: unknown): StandInError | null {
+  if (value instanceof StandInError) return value;
+  if (Array.isArray(value)) {
+    for (const row of value) {
+      if (Array.isArray(row)) for (const cell of row) if (cell instanceof StandInError) return cell;
+    }
+  }
+  return null;
+}
+
+/**
+ * Calls a function the way Excel does with error cells among the arguments, as the Office documentation describes
+ * ("Errors as custom function inputs", https://learn.microsoft.com/office/dev/add-ins/excel/custom-functions-errors):
+ * unless functions.json sets `allowErrorForDataTypeAny`, a function whose input holds an error is not evaluated and
+ * the formula shows that error (a spilled column fails as a whole); with it, parameters of type `any` receive the
+ * error cells in place (here as stand-in errors) and the function answers cell by cell.
+ */
+export function callAsSpreadsheet(bundle: Pick<LoadedBundle, "functions" | "metadata">, id: string, args: unknown[]): unknown {
+  const meta = bundle.metadata.functions.find((f) => f.id === id);
+  const fn = bundle.functions.get(id);
+  if (!meta || !fn) throw new Error(`no function ${id}`);
+  const allowed = (bundle.metadata as { allowErrorForDataTypeAny?: boolean }).allowErrorForDataTypeAny === true;
+  for (let i = 0; i < args.length; i++) {
+    const error = containsError(args[i]);
+    if (!error) continue;
+    const type = meta.parameters[i]?.type ?? "any";
+    if (!allowed || type !== "any") return error;
+  }
+  return fn(...args);
+}

@@ -2,7 +2,8 @@
 // only functions the built add-in declares (dist/functions.json, namespace REDOX) with an argument count the
 // declaration allows, and — evaluated through the BUILT bundle (tests/bundle/harness.ts) with its cell references
 // resolved to the row's values — gives the values the command line writes for the same rows of the demo log, the
-// sample's water (carbonate from its alkalinity, REDOX.DIC) included.
+// sample's water (carbonate from its alkalinity, REDOX.DIC) included — and every formula cell carries that value as
+// its cached result, so the file shows the answers where the add-in is not loaded.
 // Needs a build: `npm test` builds first; alone, build to a temporary directory and set REDOX_DIST.
 
 import { mkdtempSync, readFileSync, rmSync } from "node:fs";
@@ -15,7 +16,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { runCommand } from "../../src/cli/run";
 import { dissolvedAt } from "../../src/functions/stability-functions";
 import { callFunction, loadBundle, REPO_ROOT, StandInError, type LoadedBundle, type MetadataFunction } from "../bundle/harness";
-import { calls, evaluate, isError, parseFormula, type Node, type Value } from "./formula";
+import { calls, evaluate, isError, parseFormula, type Node, type Value } from "../../scripts/workbook-formula";
 
 const WORKBOOK = join(REPO_ROOT, "data/demo/demo-workbook.xlsx");
 const LOG = join(REPO_ROOT, "data/demo/sample-log.csv");
@@ -123,11 +124,11 @@ describe("demo workbook formulas", () => {
     };
     const context = {
       cell: cellValue,
-      callAddin(name: string, args: Value[]): Value {
+      callAddin(name: string, args: (Value | undefined)[]): Value {
         const fn = declared(name)!;
         const fnImpl = bundle.functions.get(fn.id)!;
         // the spreadsheet passes every declared parameter, a single cell as a 1×1 range, an omitted one as null
-        const passed = fn.parameters.map((p, i) => (i < args.length ? (p.dimensionality === "matrix" ? [[args[i]]] : args[i]) : null));
+        const passed = fn.parameters.map((p, i) => (i < args.length && args[i] !== undefined ? (p.dimensionality === "matrix" ? [[args[i]]] : args[i]) : null));
         const out = fnImpl(...passed) as unknown;
         const cell = Array.isArray(out) ? (out as unknown[][])[0][0] : out;
         return cell as Value;
@@ -188,6 +189,13 @@ describe("demo workbook formulas", () => {
       }
       const got = cellValue(f.column, f.row);
       compared++;
+      // the cached result the file carries is what the built add-in computes for the formula
+      const result = (sheet.getCell(f.address.split("!")[1]).value as { result?: unknown }).result;
+      const cachedText = result && typeof result === "object" && "error" in result ? (result as { error: string }).error : (result ?? ""); // an empty text result reads back as undefined
+      const gotText = isError(got) ? got.code : (got ?? "");
+      if (typeof gotText === "number" ? Math.abs(gotText - Number(cachedText)) > 1e-12 * Math.max(1, Math.abs(gotText)) : cachedText !== gotText) {
+        mismatches.push(`${f.address} (${sampleId}, ${columnName}): cached ${String(cachedText)}, add-in ${String(gotText)}`);
+      }
       if (isError(got)) {
         errorsSeen++;
         if (got.code !== expected) mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook ${got.code}, command line ${expected}`);

@@ -8,6 +8,7 @@ import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { loadBundle, LoadedBundle, REPO_ROOT, StandInError } from "../bundle/harness";
+import { demoFigures, figureBlocks, FIGURE_DOCUMENTS } from "../../scripts/demo-figures";
 
 const readme = readFileSync(join(REPO_ROOT, "README.md"), "utf8");
 let bundle: LoadedBundle;
@@ -69,11 +70,18 @@ describe("README function reference", () => {
     for (const f of bundle.metadata.functions) expect(readme).toContain(`\`${signature(f)}`);
   });
 
-  it("describes no function that functions.json lacks", () => {
+  it("gives every function of functions.json a heading, and no heading to a function it lacks", () => {
     const ids = new Set(bundle.metadata.functions.map((f) => f.id));
-    const headings = [...readme.matchAll(/^#### `REDOX\.([A-Z]+)\(/gm)].map((m) => m[1]);
-    expect(headings.length).toBeGreaterThanOrEqual(ids.size - 1); // PE and EH share one heading
-    for (const id of headings) expect(ids.has(id)).toBe(true);
+    // a heading may name several functions: "#### `REDOX.PE(…)` and `REDOX.EH(…)`"
+    const headings = [...readme.matchAll(/^#### .*$/gm)].flatMap((m) => [...m[0].matchAll(/`REDOX\.([A-Z]+)\(/g)].map((n) => n[1]));
+    expect(new Set(headings)).toEqual(ids);
+  });
+
+  it("says which error codes the functions answer with and why (Excel shows messages only for #VALUE! and #N/A)", () => {
+    expect(readme).toMatch(/custom message only with `#VALUE!` and `#N\/A`/);
+    expect(readme).toContain("allowErrorForDataTypeAny");
+    const reference = readme.split("## Function reference")[1].split("## Worked examples")[0];
+    expect(reference.replace(/`#NUM!` and the other codes appear bare/, "")).not.toContain("#NUM!");
   });
 });
 
@@ -111,6 +119,28 @@ describe("formula examples in the README and docs, evaluated through the built b
       });
     }
   }
+});
+
+describe("figures quoted about the demo data are the ones the code computes (scripts/demo-figures.ts)", () => {
+  let figures: Record<string, string>;
+  beforeAll(async () => {
+    figures = await demoFigures();
+  }, 120_000);
+
+  for (const document of FIGURE_DOCUMENTS) {
+    it(`${document}: every figure block matches; regenerate with npx tsx scripts/demo-figures.ts --write`, () => {
+      const blocks = figureBlocks(readFileSync(join(REPO_ROOT, document), "utf8"));
+      expect(blocks.size).toBeGreaterThan(0);
+      for (const [name, text] of blocks) expect(text, name).toBe(figures[name]);
+    });
+  }
+
+  it("the README's worked example uses a real row of the workbook (data start in row 3) and the docs the demo's counts", () => {
+    expect(figures["worked-row"]).toMatch(/is row 3 of the workbook/);
+    expect(readme).not.toMatch(/\b[A-Z]2\/1000|\(C2, F2/);
+    const blocks = [...FIGURE_DOCUMENTS].map((d) => [...figureBlocks(readFileSync(join(REPO_ROOT, d), "utf8")).keys()]).flat();
+    expect(blocks.sort()).toEqual(["mill-lane", "regimes-per-site", "worked-row"]);
+  });
 });
 
 describe("README essentials", () => {

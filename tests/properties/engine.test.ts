@@ -1,6 +1,6 @@
 /**
  * Properties of the stability engine that must hold for every metal, temperature, activity and point
- * (GUIDE §4): the dominant species is the argmin of the planes; a reported boundary really separates two species;
+ * (DEVELOPERS.md): the dominant species is the argmin of the planes; a reported boundary really separates two species;
  * the regions tile the diagram with no gap or overlap; the regime follows the species' state; on a solid–ion
  * boundary the dissolved total carries exactly the activity the boundary was drawn for.
  */

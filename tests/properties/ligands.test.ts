@@ -1,8 +1,8 @@
 /**
- * Properties of the point engine with ligands and ionic strength (GUIDE §4): the dominant species is the exact
+ * Properties of the point engine with ligands and ionic strength (DEVELOPERS.md): the dominant species is the exact
  * argmin of g over the species available in the water; a boundary reported changes the species 1 mV either side;
  * where a solid meets its ion the dissolved amount of that ion is the threshold; hostile water input gives error
- * values, never a throw, NaN or Infinity. The approximate ligand cells still drawn for diagrams keep their tiling.
+ * values, never a throw, NaN or Infinity. The ligand-cell systems kept for diagram geometry still tile the rectangle.
  */
 import fc from "fast-check";
 import { expectRegionsTile } from "./tiling";

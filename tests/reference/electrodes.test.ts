@@ -121,7 +121,7 @@ describe("reference electrodes vs SHE", () => {
     expect(lines.length).toBe(at25.length + otherTemperature.length);
   });
 
-  it("every electrode of GUIDE §3 is in the data, each citing its sources", () => {
+  it("every electrode of README's electrode table is in the data, each citing its sources", () => {
     const ids = ["SHE", "SCE", "AgCl-sat", "AgCl-3.5M", "AgCl-3M", "AgCl-1M", "AgCl-sea", "CSE", "MSE", "HgO-1M", "RHE"];
     expect(table.all().map((e) => e.id).sort()).toEqual([...ids].sort());
     for (const e of table.all()) {
@@ -179,9 +179,9 @@ describe("conversions", () => {
     expect(toSHEAt(0.1, "RHE", 25, 7)[0][0] as number).toBeCloseTo(0.1 - 0.414, 3);
   });
 
-  it("REDOX.TOSHE: temperature outside an electrode's range is #NUM! naming temperature", () => {
+  it("REDOX.TOSHE: temperature outside an electrode's range is #VALUE! naming temperature", () => {
     const out = toSHEAt(0.1, "SCE", 90)[0][0] as CellError;
-    expect(out.code).toBe("#NUM!");
+    expect(out.code).toBe("#VALUE!");
     expect(out.message).toMatch(/^temperature:.*SCE/);
   });
 

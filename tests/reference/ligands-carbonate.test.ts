@@ -115,11 +115,11 @@ describe("dissolved inorganic carbon from alkalinity (hand calculations)", () =>
   it("REDOX.DIC: values, broadcasting and error values, never a throw", () => {
     const out = dic([[100], [0], ["abc"], [-5], [null]], [[7.5], [12], [7], [7], [7]]);
     expect(out[0][0]).toBeCloseTo(dicFromAlkalinity(100, 7.5, 25), 15);
-    expect((out[1][0] as CellError).code).toBe("#NUM!"); // hydroxide exceeds a zero alkalinity
+    expect((out[1][0] as CellError).code).toBe("#N/A"); // hydroxide exceeds a zero alkalinity: no DIC exists
     expect((out[2][0] as CellError).code).toBe("#VALUE!");
-    expect((out[3][0] as CellError).code).toBe("#NUM!");
+    expect((out[3][0] as CellError).code).toBe("#VALUE!"); // negative alkalinity: out of range
     expect(out[4][0]).toBe("");
     const hot = dic([[100]], [[7.5]], [[150]]);
-    expect((hot[0][0] as CellError).code).toBe("#NUM!");
+    expect((hot[0][0] as CellError).code).toBe("#VALUE!");
   });
 });

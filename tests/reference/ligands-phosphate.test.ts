@@ -13,11 +13,21 @@ import { dissolved, species } from "../../src/functions/functions";
 
 const db = getDatabase();
 const logK = (r: Record<string, number>, celsius = 25) => reactionLogK(db, r, celsius);
-const NIST = "Smith & Martell, Critical Stability Constants vol. 4 (1976) and NIST Standard Reference Database 46 (from memory)";
+const NIST =
+  "Smith & Martell, Critical Stability Constants vol. 4 (1976) and NIST Standard Reference Database 46 (from memory)";
 /** mol/kg as P in 1 mg/L of orthophosphate as PO4 (P 30.974 + 4 O 15.999 g/mol; 1 L ≈ 1 kg, common practice). */
 const PER_MG_PO4 = 1e-3 / (30.974 + 4 * 15.999);
-const water = (w: Partial<{ celsius: number; carbonate: number; chloride: number; sulfur: number; phosphate: number }>) => ({
-  celsius: 25, activity: 1e-6, carbonate: 0, chloride: 0, sulfur: 0, ionicStrength: 0, phosphate: 0, ...w,
+const water = (
+  w: Partial<{ celsius: number; carbonate: number; chloride: number; sulfur: number; phosphate: number }>,
+) => ({
+  celsius: 25,
+  activity: 1e-6,
+  carbonate: 0,
+  chloride: 0,
+  sulfur: 0,
+  ionicStrength: 0,
+  phosphate: 0,
+  ...w,
 });
 
 const ACIDS: { step: string; reaction: Record<string, number>; pK: number; dH: number }[] = [
@@ -77,15 +87,60 @@ describe("exact phosphate speciation at the point against the α-fractions by ha
 
 /** Solubility products at 25 °C, zero ionic strength: the records must give them back within 0.02 log units. */
 const SOLUBILITY: { solid: string; reaction: Record<string, number>; logK: number; source: string }[] = [
-  { solid: "hydroxypyromorphite", reaction: { "Pb5(PO4)3OH(s)": -1, "Pb2+": 5, "PO43-": 3, "OH-": 1 }, logK: -76.8, source: "Nriagu 1974, Geochim. Cosmochim. Acta 38:887 (from memory)" },
-  { solid: "chloropyromorphite", reaction: { "Pb5(PO4)3Cl(s)": -1, "Pb2+": 5, "PO43-": 3, "Cl-": 1 }, logK: -84.4, source: "Nriagu 1973, Geochim. Cosmochim. Acta 37:367 (from memory)" },
-  { solid: "lead hydrogen phosphate", reaction: { "PbHPO4(s)": -1, "Pb2+": 1, "HPO42-": 1 }, logK: -11.43, source: "Nriagu 1972, Inorg. Chem. 11:2499 (from memory)" },
-  { solid: "lead orthophosphate", reaction: { "Pb3(PO4)2(s)": -1, "Pb2+": 3, "PO43-": 2 }, logK: -43.53, source: "value commonly quoted in lead phosphate work; published −43.5 to −44.5 (from memory)" },
-  { solid: "copper(II) phosphate", reaction: { "Cu3(PO4)2(s)": -1, "Cu2+": 3, "PO43-": 2 }, logK: -36.85, source: "Smith & Martell 1976 vol. 4 (from memory)" },
-  { solid: "hopeite", reaction: { "Zn3(PO4)2·4H2O(s)": -1, "Zn2+": 3, "PO43-": 2, "H2O(l)": 4 }, logK: -35.42, source: "Nriagu 1973, Geochim. Cosmochim. Acta 37:2357 (from memory)" },
-  { solid: "strengite", reaction: { "FePO4·2H2O(s)": -1, "Fe3+": 1, "PO43-": 1, "H2O(l)": 2 }, logK: -26.4, source: "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed. (from memory)" },
-  { solid: "vivianite", reaction: { "Fe3(PO4)2·8H2O(s)": -1, "Fe2+": 3, "PO43-": 2, "H2O(l)": 8 }, logK: -36.0, source: "Nriagu 1972, Geochim. Cosmochim. Acta 36:459 (from memory)" },
-  { solid: "variscite", reaction: { "AlPO4·2H2O(s)": -1, "Al3+": 1, "PO43-": 1, "H2O(l)": 2 }, logK: -22.1, source: "Lindsay 1979, Chemical Equilibria in Soils (from memory)" },
+  {
+    solid: "hydroxypyromorphite",
+    reaction: { "Pb5(PO4)3OH(s)": -1, "Pb2+": 5, "PO43-": 3, "OH-": 1 },
+    logK: -76.8,
+    source: "Nriagu 1974, Geochim. Cosmochim. Acta 38:887 (from memory)",
+  },
+  {
+    solid: "chloropyromorphite",
+    reaction: { "Pb5(PO4)3Cl(s)": -1, "Pb2+": 5, "PO43-": 3, "Cl-": 1 },
+    logK: -84.4,
+    source: "Nriagu 1973, Geochim. Cosmochim. Acta 37:367 (from memory)",
+  },
+  {
+    solid: "lead hydrogen phosphate",
+    reaction: { "PbHPO4(s)": -1, "Pb2+": 1, "HPO42-": 1 },
+    logK: -11.43,
+    source: "Nriagu 1972, Inorg. Chem. 11:2499 (from memory)",
+  },
+  {
+    solid: "lead orthophosphate",
+    reaction: { "Pb3(PO4)2(s)": -1, "Pb2+": 3, "PO43-": 2 },
+    logK: -43.53,
+    source: "value commonly quoted in lead phosphate work; published −43.5 to −44.5 (from memory)",
+  },
+  {
+    solid: "copper(II) phosphate",
+    reaction: { "Cu3(PO4)2(s)": -1, "Cu2+": 3, "PO43-": 2 },
+    logK: -36.85,
+    source: "Smith & Martell 1976 vol. 4 (from memory)",
+  },
+  {
+    solid: "hopeite",
+    reaction: { "Zn3(PO4)2·4H2O(s)": -1, "Zn2+": 3, "PO43-": 2, "H2O(l)": 4 },
+    logK: -35.42,
+    source: "Nriagu 1973, Geochim. Cosmochim. Acta 37:2357 (from memory)",
+  },
+  {
+    solid: "strengite",
+    reaction: { "FePO4·2H2O(s)": -1, "Fe3+": 1, "PO43-": 1, "H2O(l)": 2 },
+    logK: -26.4,
+    source: "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed. (from memory)",
+  },
+  {
+    solid: "vivianite",
+    reaction: { "Fe3(PO4)2·8H2O(s)": -1, "Fe2+": 3, "PO43-": 2, "H2O(l)": 8 },
+    logK: -36.0,
+    source: "Nriagu 1972, Geochim. Cosmochim. Acta 36:459 (from memory)",
+  },
+  {
+    solid: "variscite",
+    reaction: { "AlPO4·2H2O(s)": -1, "Al3+": 1, "PO43-": 1, "H2O(l)": 2 },
+    logK: -22.1,
+    source: "Lindsay 1979, Chemical Equilibria in Soils (from memory)",
+  },
 ];
 
 describe("metal phosphate records give back their published solubility products within 0.02", () => {
@@ -95,7 +150,9 @@ describe("metal phosphate records give back their published solubility products 
     });
   }
   it("hydroxypyromorphite in the acid form: log K = −62.8 for Pb5(PO4)3OH + H+ = 5Pb2+ + 3PO4 3- + H2O (Schock, Wagner & Oliphant 1996, from memory), within 0.05", () => {
-    expect(Math.abs(logK({ "Pb5(PO4)3OH(s)": -1, "H+": -1, "Pb2+": 5, "PO43-": 3, "H2O(l)": 1 }) - -62.79)).toBeLessThanOrEqual(0.05);
+    expect(
+      Math.abs(logK({ "Pb5(PO4)3OH(s)": -1, "H+": -1, "Pb2+": 5, "PO43-": 3, "H2O(l)": 1 }) - -62.79),
+    ).toBeLessThanOrEqual(0.05);
   });
 });
 
@@ -118,7 +175,9 @@ describe("equilibrium lead with orthophosphate", () => {
     // ln a(Pb2+) over the solid: x·F·(g_solid − g_Pb2+)/RT with g at unit activity
     const lnPb = engine.fOverRT * (engine.g(solid, pH, 0.3, true) - engine.g(i, pH, 0.3, true));
     expect(lnPb / Math.LN10).toBeCloseTo(logPb, 9);
-    expect(dissolvedEquilibrium(db, "Pb", pH, 0.3, water({ carbonate: 1e-3, phosphate: total })).controllingSolid).toBe("Pb5(PO4)3OH(s)");
+    expect(dissolvedEquilibrium(db, "Pb", pH, 0.3, water({ carbonate: 1e-3, phosphate: total })).controllingSolid).toBe(
+      "Pb5(PO4)3OH(s)",
+    );
   });
 
   // Published curve: Schock, M.R., Wagner, I., Oliphant, R.J., "The corrosion and solubility of lead in drinking
@@ -137,30 +196,56 @@ describe("equilibrium lead with orthophosphate", () => {
     });
   }
   it("more orthophosphate, less lead: 3 mg/L gives about (1/3)^(3/5) of the 1 mg/L value over hydroxypyromorphite", () => {
-    const at = (mg: number) => ug(dissolvedEquilibrium(db, "Pb", 7.5, 0.3, water({ carbonate: 4.8 / 12011, phosphate: mg * PER_MG_PO4 })).total);
+    const at = (mg: number) =>
+      ug(dissolvedEquilibrium(db, "Pb", 7.5, 0.3, water({ carbonate: 4.8 / 12011, phosphate: mg * PER_MG_PO4 })).total);
     expect(at(3) / at(1)).toBeCloseTo(3 ** -0.6, 1);
   });
   it("with chloride, chloropyromorphite controls where it is less soluble (Nriagu 1973: the least soluble lead phosphate)", () => {
-    const answer = dissolvedEquilibrium(db, "Pb", 7.5, 0.3, water({ carbonate: 1e-3, chloride: 1e-3, phosphate: PER_MG_PO4 }));
+    const answer = dissolvedEquilibrium(
+      db,
+      "Pb",
+      7.5,
+      0.3,
+      water({ carbonate: 1e-3, chloride: 1e-3, phosphate: PER_MG_PO4 }),
+    );
     expect(answer.controllingSolid).toBe("Pb5(PO4)3Cl(s)");
   });
 });
 
 describe("the phosphate argument of the worksheet functions", () => {
   it("REDOX.DISSOLVED takes orthophosphate between sulfur and ionicStrength", () => {
-    const before = dissolved([["Pb"]], [[7.5]], [[0.3]], [[25]], [[1e-3]], undefined, undefined, undefined, undefined, [["ug/L"]])[0][0] as number;
-    const after = dissolved([["Pb"]], [[7.5]], [[0.3]], [[25]], [[1e-3]], undefined, undefined, [[PER_MG_PO4]], undefined, [["ug/L"]])[0][0] as number;
+    const before = dissolved([["Pb"]], [[7.5]], [[0.3]], [[25]], [[1e-3]], undefined, undefined, undefined, undefined, [
+      ["ug/L"],
+    ])[0][0] as number;
+    const after = dissolved(
+      [["Pb"]],
+      [[7.5]],
+      [[0.3]],
+      [[25]],
+      [[1e-3]],
+      undefined,
+      undefined,
+      [[PER_MG_PO4]],
+      undefined,
+      [["ug/L"]],
+    )[0][0] as number;
     expect(after).toBeLessThan(before / 5);
   });
   it("REDOX.SPECIES with orthophosphate names hydroxypyromorphite at pH 8 (no dissolved lead species reaches the default 1e-6)", () => {
-    expect(species([["Pb"]], [[8]], [[0.3]], undefined, undefined, [[1e-3]], undefined, undefined, [[PER_MG_PO4]])[0][0]).toBe("Pb5(PO4)3OH(s)");
+    expect(
+      species([["Pb"]], [[8]], [[0.3]], undefined, undefined, [[1e-3]], undefined, undefined, [[PER_MG_PO4]])[0][0],
+    ).toBe("Pb5(PO4)3OH(s)");
   });
   it("a phosphate total out of range is #VALUE! naming the argument", () => {
-    const out = species([["Pb"]], [[8]], [[0.3]], undefined, undefined, undefined, undefined, undefined, [[-1]])[0][0] as { code?: string; message?: string };
+    const out = species([["Pb"]], [[8]], [[0.3]], undefined, undefined, undefined, undefined, undefined, [
+      [-1],
+    ])[0][0] as { code?: string; message?: string };
     expect(out.code).toBe("#VALUE!");
     expect(out.message).toMatch(/^phosphate/);
   });
   it("zinc: hopeite controls over smithsonite at pH 7.5 with 1 mg/L PO4 and DIC 1e-3 (Nriagu 1973 constant)", () => {
-    expect(dissolvedEquilibrium(db, "Zn", 7.5, 0.3, water({ carbonate: 1e-3, phosphate: PER_MG_PO4 })).controllingSolid).toBe("Zn3(PO4)2·4H2O(s)");
+    expect(
+      dissolvedEquilibrium(db, "Zn", 7.5, 0.3, water({ carbonate: 1e-3, phosphate: PER_MG_PO4 })).controllingSolid,
+    ).toBe("Zn3(PO4)2·4H2O(s)");
   });
 });

@@ -14,8 +14,23 @@ import { reactionLogK } from "../../src/chemistry/reaction";
 
 const db = getDatabase();
 const logK = (r: Record<string, number>, celsius = 25) => reactionLogK(db, r, celsius);
-const water = (w: Partial<{ celsius: number; activity: number; carbonate: number; chloride: number; sulfur: number; ionicStrength: number }>) => ({
-  celsius: 25, activity: 1e-6, carbonate: 0, chloride: 0, sulfur: 0, ionicStrength: 0, ...w,
+const water = (
+  w: Partial<{
+    celsius: number;
+    activity: number;
+    carbonate: number;
+    chloride: number;
+    sulfur: number;
+    ionicStrength: number;
+  }>,
+) => ({
+  celsius: 25,
+  activity: 1e-6,
+  carbonate: 0,
+  chloride: 0,
+  sulfur: 0,
+  ionicStrength: 0,
+  ...w,
 });
 
 describe("exact carbonate activity (α-fraction of HCO3− at the pH)", () => {
@@ -53,7 +68,9 @@ describe("exact sulfur activity over its redox forms", () => {
     { formula: "S2-", reaction: { "SO42-": -1, "H+": -8, "e-": -8, "S2-": 1, "H2O(l)": 4 }, h: 8, n: 8 },
   ];
   const ratio = (pH: number, E: number) =>
-    forms.map((f) => (f.h === 0 && f.n === 0 ? 1 : 10 ** (logK(f.reaction) - f.h * pH - (f.n * E) / k))).reduce((s, x) => s + x, 0);
+    forms
+      .map((f) => (f.h === 0 && f.n === 0 ? 1 : 10 ** (logK(f.reaction) - f.h * pH - (f.n * E) / k)))
+      .reduce((s, x) => s + x, 0);
   const logKSulfur = logK({ "SO42-": -1, "H+": -8, "e-": -6, "S(s)": 1, "H2O(l)": 4 });
   // the sulfate/sulfide boundary at pH 8 (equal SO4²− and HS−): E = k·(log K_HS − 9·pH)/8
   const pH = 8;
@@ -115,11 +132,12 @@ describe("DISSOLVED against an independent controlling-solid computation", () =>
   const K1 = 10 ** logK({ "CO2(aq)": -1, "H2O(l)": -1, "H+": 1, "HCO3-": 1 });
   const K2 = 10 ** logK({ "HCO3-": -1, "H+": 1, "CO32-": 1 });
   const h = 10 ** -pH;
-  const aCO3 = (dic * K2 / h) / (1 + h / K1 + K2 / h);
+  const aCO3 = (dic * K2) / h / (1 + h / K1 + K2 / h);
   const logCO3 = Math.log10(aCO3);
   const solids: Record<string, number> = {
     "PbCO3(s)": logK({ "PbCO3(s)": -1, "Pb2+": 1, "CO32-": 1 }) - logCO3,
-    "Pb3(CO3)2(OH)2(s)": (logK({ "Pb3(CO3)2(OH)2(s)": -1, "H+": -2, "Pb2+": 3, "CO32-": 2, "H2O(l)": 2 }) - 2 * pH - 2 * logCO3) / 3,
+    "Pb3(CO3)2(OH)2(s)":
+      (logK({ "Pb3(CO3)2(OH)2(s)": -1, "H+": -2, "Pb2+": 3, "CO32-": 2, "H2O(l)": 2 }) - 2 * pH - 2 * logCO3) / 3,
     "PbO(s)": logK({ "PbO(s)": -1, "H+": -2, "Pb2+": 1, "H2O(l)": 1 }) - 2 * pH,
   };
   const controlling = Object.entries(solids).sort((a, b) => a[1] - b[1])[0];
@@ -133,7 +151,9 @@ describe("DISSOLVED against an independent controlling-solid computation", () =>
   ];
   const protons = [1, 2, 3, 0, 0];
   const carbonates = [0, 0, 0, 1, 2];
-  const total = 10 ** logPb * (1 + complexes.reduce((s, r, i) => s + 10 ** (logK(r) - protons[i] * -pH + carbonates[i] * logCO3), 0));
+  const total =
+    10 ** logPb *
+    (1 + complexes.reduce((s, r, i) => s + 10 ** (logK(r) - protons[i] * -pH + carbonates[i] * logCO3), 0));
   it(`controlling solid ${controlling[0]}, total dissolved lead within 1e-9 relative`, () => {
     const answer = dissolvedEquilibrium(db, "Pb", pH, 0.3, water({ carbonate: dic }));
     expect(answer.controllingSolid).toBe(controlling[0]);

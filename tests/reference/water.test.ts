@@ -51,7 +51,7 @@ describe("water lines from the species data", () => {
   });
 
   it("E°(H+/H2) is zero at every temperature (hydrogen-electrode convention)", () => {
-    // source: common practice (IUPAC convention, GUIDE §2)
+    // source: common practice (IUPAC convention; docs/method.md, Temperature)
     for (const t of [0, 25, 60, 100]) expect(Math.abs(waterStandardPotential("H2", t))).toBeLessThan(1e-12);
   });
 
@@ -179,7 +179,7 @@ describe("water margin and the kinetic window", () => {
     expect(out[0].length).toBe(2);
     const bad = waterMarginAt(7, 0.5, 25, -0.1)[0][0];
     expect(bad).toBeInstanceOf(CellError);
-    expect((bad as CellError).code).toBe("#NUM!");
+    expect((bad as CellError).code).toBe("#VALUE!"); // out of range: Excel shows a message only with #VALUE! and #N/A
     expect((bad as CellError).message).toContain("overpotential");
   });
 });

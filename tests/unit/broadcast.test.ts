@@ -1,5 +1,5 @@
 // The shared coercion and broadcasting layer (src/functions/broadcast.ts): shapes, 1×1 / row / column broadcasting,
-// blanks, error precedence and messages that name the argument (GUIDE §3).
+// blanks, error precedence and messages that name the argument (docs/method.md, Domain).
 import { afterEach, describe, expect, it } from "vitest";
 import { mapCells, numberArg, textArg } from "../../src/functions/broadcast";
 import { CellError, CellOutput, valueError } from "../../src/functions/cell-values";
@@ -64,6 +64,45 @@ describe("blanks and defaults", () => {
   });
 });
 
+describe("blank means missing for measurements", () => {
+  const t = numberArg("temperature", { optional: true, measured: true, defaultValue: 25 });
+  const withT = (a: CellInput2, b?: CellInput2) => mapCells([x, t], [a, b], (p, q) => p + q);
+
+  it("an omitted measured argument takes its default", () => {
+    expect(withT(1)).toEqual([[26]]);
+    expect(withT(1, null)).toEqual([[26]]);
+  });
+
+  it("a blank cell given for a measured argument gives a blank result in that row only", () => {
+    expect(withT(1, [[null]])).toEqual([[""]]);
+    expect(withT([[1], [2], [3]], [[10], [""], [null]])).toEqual([[11], [""], [""]]);
+  });
+});
+
+describe("error cells passed in by the spreadsheet", () => {
+  class HostLikeError {
+    constructor(
+      readonly code: string,
+      readonly message?: string,
+    ) {}
+  }
+
+  it("an error cell in a range gives an error in that position only; #N/A stays #N/A", () => {
+    const out = add([[1], [new HostLikeError("#DIV/0!") as never], [new HostLikeError("#N/A") as never], [4]], 1);
+    expect(out[0][0]).toBe(2);
+    expect(err(out[1][0]).code).toBe("#VALUE!");
+    expect(err(out[1][0]).message).toBe("x: the cell holds the error #DIV/0!; correct that cell");
+    expect(err(out[2][0]).code).toBe("#N/A");
+    expect(err(out[2][0]).message).toMatch(/^x: the cell holds #N\/A/);
+    expect(out[3][0]).toBe(5);
+  });
+
+  it("rich cell values are read by their plain value; rich errors keep their code", () => {
+    expect(add([[{ type: "Double", basicValue: 3 } as never]], 1)).toEqual([[4]]);
+    expect(err(add([[{ type: "Error", basicValue: "#REF!", errorType: "Ref" } as never]], 1)[0][0]).message).toContain("#REF!");
+  });
+});
+
 describe("errors", () => {
   it("text for a number is #VALUE! naming the argument and quoting the text", () => {
     const e = err(add("abc", 1)[0][0]);
@@ -76,9 +115,9 @@ describe("errors", () => {
     expect(err(add(true, 1)[0][0]).message).toContain("logical value TRUE");
   });
 
-  it("a number out of range is #NUM! with the range in the message", () => {
+  it("a number out of range is #VALUE! with the range in the message (Excel shows no message with #NUM!)", () => {
     const e = err(add(1, 11)[0][0]);
-    expect(e.code).toBe("#NUM!");
+    expect(e.code).toBe("#VALUE!");
     expect(e.message).toBe("y: 11 is out of range (at least 0 and at most 10)");
   });
 
@@ -92,7 +131,7 @@ describe("errors", () => {
     const out = add([[1], ["z"], [3]], [[1], [1], [99]]);
     expect(out[0][0]).toBe(2);
     expect(err(out[1][0]).code).toBe("#VALUE!");
-    expect(err(out[2][0]).code).toBe("#NUM!");
+    expect(err(out[2][0]).message).toMatch(/^y: 99 is out of range/);
   });
 
   it("text arguments resolve through their reader", () => {
@@ -103,7 +142,7 @@ describe("errors", () => {
   });
 
   it("a cell holding something unreadable (an object) is #VALUE! naming the argument", () => {
-    expect(err(add([[{}]] as never, 1)[0][0]).message).toMatch(/^x: the cell holds an error/);
+    expect(err(add([[{}]] as never, 1)[0][0]).message).toMatch(/^x: the cell holds an unreadable value/);
   });
 
   it("a failure inside the computation becomes #VALUE!, never a throw", () => {
@@ -114,8 +153,8 @@ describe("errors", () => {
   });
 
   it("NaN and Infinity never reach a cell", () => {
-    expect(err(mapCells([x], [0], (v) => 1 / v)[0][0]).code).toBe("#NUM!");
-    expect(err(mapCells([x], [-1], (v) => Math.sqrt(v))[0][0]).code).toBe("#NUM!");
+    expect(err(mapCells([x], [0], (v) => 1 / v)[0][0]).code).toBe("#N/A");
+    expect(err(mapCells([x], [-1], (v) => Math.sqrt(v))[0][0]).code).toBe("#N/A");
   });
 });
 
@@ -137,7 +176,7 @@ describe("host error values", () => {
     expect(out).toBeInstanceOf(HostError);
     expect(out.code).toBe("#VALUE!");
     expect(out.message).toMatch(/^x:/);
-    const num = add(1, -5)[0][0] as unknown as HostError;
-    expect(num.code).toBe("#NUM!");
+    const range = add(1, -5)[0][0] as unknown as HostError;
+    expect(range.code).toBe("#VALUE!");
   });
 });

@@ -116,7 +116,7 @@ describe("the diagram's and each sample's water", () => {
     expect(r.perSample.every((t) => t.chloride === 5e-4)).toBe(true);
     expect(r.fallbacks).toEqual({ carbonate: 1 });
     expect(formatTotals(r.diagram)).toBe("DIC 2, Cl 0.5 mmol/kg");
-    expect(waterCaption(r)).toMatch(/^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' alkalinity values.*\); each ligand is taken at its full total/);
+    expect(waterCaption(r)).toMatch(/^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' alkalinity values.*\); each ligand is speciated exactly at every point/);
     const none = resolveWater(settings, [{ carbonate: { problem: "blank" } }]);
     expect(none.unusable).toEqual(["carbonate"]);
     expect(none.diagram).toEqual({ chloride: 5e-4 });

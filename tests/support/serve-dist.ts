@@ -1,6 +1,6 @@
 /**
  * Test helpers for the browser tests: a static server for the built pages on localhost (dist/ at /, Office.js
- * from node_modules at /office-js/), and Debian's Chromium launched through playwright-core (GUIDE §7 flags).
+ * from node_modules at /office-js/), and Debian's Chromium launched through playwright-core (DEVELOPERS.md flags).
  * The built pages load Office.js from its CDN by default; requests for it are answered from the local copy.
  */
 import { createServer, Server } from "http";

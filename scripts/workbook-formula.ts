@@ -1,8 +1,9 @@
 // A small parser and evaluator for the worksheet formulas the demo workbook uses: numbers, text in double quotes,
-// A1 cell references on the same sheet, + − * /, comparisons, parentheses, IF(), omitted arguments and calls of the add-in's
-// functions (REDOX.NAME). The spreadsheet's own rules that matter here are kept: an error in an argument is passed
-// on without calling the function; text that is not a number in arithmetic gives #VALUE!; a blank cell counts as
-// 0 in arithmetic and as "" in a comparison.
+// A1 cell references on the same sheet, + − * /, comparisons, parentheses, IF() and calls of the add-in's
+// functions (REDOX.NAME). The spreadsheet's own rules that matter here are kept: an error in an operand of
+// arithmetic is passed on; an error cell reaches an add-in function as an argument (functions.json sets
+// allowErrorForDataTypeAny), which answers for it; text that is not a number in arithmetic gives #VALUE!; a blank cell
+// counts as 0 in arithmetic and as "" in a comparison. Used by the demo workbook generator (cached results) and its test.
 
 export type Node =
   | { kind: "number"; value: number }
@@ -11,7 +12,7 @@ export type Node =
   | { kind: "call"; name: string; args: Node[] }
   | { kind: "binary"; op: string; left: Node; right: Node }
   | { kind: "negate"; operand: Node }
-  /** An argument left out between commas (REDOX.BOUNDARY(A1,B1,C1,,,1)): the function gets a blank. */
+  /** An argument left out: REDOX.TOSHE(G3, "AgCl-sat", H3, , "mV"). */
   | { kind: "omitted" };
 
 export class FormulaSyntaxError extends Error {}
@@ -158,8 +159,8 @@ export function isError(v: unknown): v is ErrorLike {
 export interface EvaluationContext {
   /** The value of a cell (a formula cell is evaluated by the caller). */
   cell(column: string, row: number): Value;
-  /** Calls an add-in function with single-cell arguments; returns its single result. */
-  callAddin(name: string, args: Value[]): Value;
+  /** Calls an add-in function with single-cell arguments (undefined: left out); returns its single result. */
+  callAddin(name: string, args: (Value | undefined)[]): Value;
 }
 
 function toNumber(v: Value): number | ErrorLike {
@@ -174,10 +175,10 @@ function toNumber(v: Value): number | ErrorLike {
 
 export function evaluate(node: Node, ctx: EvaluationContext): Value {
   switch (node.kind) {
-    case "number":
-      return node.value;
     case "omitted":
       return null;
+    case "number":
+      return node.value;
     case "text":
       return node.value;
     case "ref":
@@ -213,11 +214,8 @@ export function evaluate(node: Node, ctx: EvaluationContext): Value {
         const branch = truth ? node.args[1] : node.args[2];
         return branch === undefined ? truth : evaluate(branch, ctx);
       }
-      const args = node.args.map((a) => evaluate(a, ctx));
-      // the spreadsheet passes an error in an argument on without calling the function
-      const firstError = args.find(isError);
-      if (firstError) return firstError;
-      return ctx.callAddin(node.name, args);
+      // with allowErrorForDataTypeAny the spreadsheet hands error cells to the function, which names them
+      return ctx.callAddin(node.name, node.args.map((a) => (a.kind === "omitted" ? undefined : evaluate(a, ctx))));
     }
   }
 }
