@@ -32,7 +32,7 @@ export function engineIn(element: string, celsius: number, activity: number, car
 
 const directionArg = textArg<1 | -1>(
   "direction",
-  (text) => (text === "1" ? 1 : text === "-1" ? -1 : valueError(`direction: "${text}" is not 1 (above) or -1 (below)`)),
+  (text) => (text === "1" ? 1 : text === "-1" ? -1 : valueError(`direction: expected 1 (above) or -1 (below), got ${text}`)),
   { optional: true, defaultValue: 1 },
 );
 

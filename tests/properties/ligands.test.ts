@@ -25,13 +25,14 @@ const conditions = fc.record({
   carbonate: total,
   chloride: total,
   sulfur: total,
+  phosphate: total,
   ionicStrength: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 0.5, noNaN: true })),
 });
 const point = fc.record({ pH: fc.double({ min: -2, max: 16, noNaN: true }), E: fc.double({ min: -2.5, max: 2.5, noNaN: true }) });
-type Conditions = { metal: string; celsius: number; logActivity: number; carbonate: number; chloride: number; sulfur: number; ionicStrength: number };
+type Conditions = { metal: string; celsius: number; logActivity: number; carbonate: number; chloride: number; sulfur: number; phosphate: number; ionicStrength: number };
 const engineIn = (c: Conditions) => {
   const engine = pointEngine(db, c.metal);
-  engine.setWater(c.celsius, 10 ** c.logActivity, c.carbonate, c.chloride, c.sulfur, c.ionicStrength);
+  engine.setWater(c.celsius, 10 ** c.logActivity, c.carbonate, c.chloride, c.sulfur, c.ionicStrength, c.phosphate);
   return engine;
 };
 
