@@ -110,7 +110,8 @@ export function buildSystem(
 
   const ligandElements = new Set<string>();
   for (const cell of ligandCells) for (const l of cell.ligands) for (const e of Object.keys(l.species.elements)) if (e !== "H" && e !== "O") ligandElements.add(e);
-  const present = presentLigands(ligandElements.has("C") ? 1 : 0, ligandElements.has("Cl") ? 1 : 0, ligandElements.has("S") ? 1 : 0);
+  const has = (e: string) => (ligandElements.has(e) ? 1 : 0);
+  const present = presentLigands(has("C"), has("Cl"), has("S"), has("P"));
   const problem = temperatureProblem(db, element, options.celsius, present);
   if (problem) throw new SystemError(problem);
 

@@ -6,7 +6,7 @@
  */
 import { MAX_CELSIUS, MIN_CELSIUS } from "./constants";
 import { Database } from "./database";
-import { NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_SULFUR, speciesTable } from "./species-tables";
+import { NEEDS_CARBONATE, NEEDS_CHLORIDE, NEEDS_PHOSPHATE, NEEDS_SULFUR, speciesTable } from "./species-tables";
 
 /** Highest temperature a species without S° may be used at, °C (the range the data were fitted near, 1 bar). */
 export const CONSTANT_GIBBS_MAX_CELSIUS = 100;
@@ -15,6 +15,7 @@ const LIGAND_NAMES: readonly [number, string][] = [
   [NEEDS_CARBONATE, "carbonate"],
   [NEEDS_SULFUR, "sulfur"],
   [NEEDS_CHLORIDE, "chloride"],
+  [NEEDS_PHOSPHATE, "phosphate"],
 ];
 
 /** Formulas of the species of `element` lacking S° that take part in a water with the `present` ligand bits. */
@@ -38,6 +39,7 @@ export function temperatureProblem(db: Database, element: string, celsius: numbe
 }
 
 /** Ligand bits of a water from its totals. */
-export function presentLigands(carbonate = 0, chloride = 0, sulfur = 0): number {
-  return (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0);
+export function presentLigands(carbonate = 0, chloride = 0, sulfur = 0, phosphate = 0): number {
+  const bits = (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0);
+  return bits | (phosphate > 0 ? NEEDS_PHOSPHATE : 0);
 }

@@ -76,7 +76,7 @@ export function diagramTotals(points: readonly SamplePoint[]): LigandTotals {
 
 /** "DIC 1.73, chloride 0.56 mmol/kg" (three significant figures); "" for pure water. */
 export function totalsText(totals: LigandTotals): string {
-  const words = { carbonate: "DIC", chloride: "chloride", sulfur: "sulfur" } as const;
+  const words = { carbonate: "DIC", chloride: "chloride", sulfur: "sulfur", phosphate: "orthophosphate (as P)" } as const;
   const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map((l) => `${words[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`);
   return parts.length === 0 ? "" : `${parts.join(", ")} mmol/kg`;
 }

@@ -123,14 +123,15 @@ export function slope(temperature?: any[][]): any[][] {
  * @param {any[][]} potential Potential in volts vs SHE, −3 to +3 (convert meter readings, also in mV, with REDOX.TOSHE).
  * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species, above 0 and at most 10. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none. Speciated exactly over H3PO4, H2PO4-, HPO4 2- and PO4 3- at the pH; forms lead, copper, zinc, iron and aluminium phosphates.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @returns {any[][]} Formula of the dominant species.
  */
-export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][]): any[][] {
-  return speciesAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength);
+export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][]): any[][] {
+  return speciesAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength);
 }
 
 /**
@@ -141,14 +142,15 @@ export function species(element: any[][], pH: any[][], potential: any[][], tempe
  * @param {any[][]} potential Potential in volts vs SHE.
  * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none. Speciated exactly over H3PO4, H2PO4-, HPO4 2- and PO4 3- at the pH; forms lead, copper, zinc, iron and aluminium phosphates.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @returns {any[][]} immunity, passivation or corrosion.
  */
-export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][]): any[][] {
-  return regimeAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength);
+export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][]): any[][] {
+  return regimeAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength);
 }
 
 /**
@@ -159,15 +161,16 @@ export function regime(element: any[][], pH: any[][], potential: any[][], temper
  * @param {any[][]} potential Potential in volts vs SHE.
  * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none. Speciated exactly over H3PO4, H2PO4-, HPO4 2- and PO4 3- at the pH; forms lead, copper, zinc, iron and aluminium phosphates.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @param {any[][]} [direction] 1 for the boundary above (default), -1 for the one below.
  * @returns {any[][]} Potential of the boundary in volts vs SHE.
  */
-export function boundary(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], direction?: any[][]): any[][] {
-  return boundaryFrom(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, direction);
+export function boundary(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], direction?: any[][]): any[][] {
+  return boundaryFrom(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, direction);
 }
 
 /**
@@ -185,21 +188,22 @@ export function couple(oxidized: any[][], reduced: any[][], pH: any[][], tempera
 }
 
 /**
- * Total dissolved metal (free ion, hydroxo, carbonato and chloro complexes) in equilibrium with the controlling solid: the solid, the metal included, that is most stable at the point. A number wherever a solid can form; #N/A where even the most stable solid would dissolve (more than 1 mol/kg). Does not depend on a threshold activity. A thermodynamic estimate, not a substitute for laboratory analysis of lead or copper in drinking water.
+ * Total dissolved metal (free ion, hydroxo, carbonato and chloro complexes), lead and copper phosphates included, in equilibrium with the controlling solid: the solid, the metal included, that is most stable at the point. A number wherever a solid can form; #N/A where even the most stable solid would dissolve (more than 1 mol/kg). Does not depend on a threshold activity. A thermodynamic estimate, not a substitute for laboratory analysis of lead or copper in drinking water.
  * @customfunction DISSOLVED
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
  * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none. Speciated exactly over H3PO4, H2PO4-, HPO4 2- and PO4 3- at the pH; forms lead, copper, zinc, iron and aluminium phosphates.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @param {any[][]} [unit] mol/kg (default), mg/L or ug/L.
  * @returns {any[][]} Dissolved metal in the chosen unit.
  */
-export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], unit?: any[][]): any[][] {
-  return dissolvedAt(element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, unit);
+export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], unit?: any[][]): any[][] {
+  return dissolvedAt(element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, unit);
 }
 
 /**
@@ -247,13 +251,14 @@ export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): an
  * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it); blank = ideal dilute solution.
  * @param {any[][]} [unit] Unit of the dissolved metal: mol/kg (default), mg/L or ug/L.
  * @param {any[][]} [header] TRUE for a header row above the answers.
  * @returns {any[][]} Seven columns per sample row.
  */
-export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], unit?: any[][], header?: any[][]): any[][] {
-  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, unit, header);
+export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], unit?: any[][], header?: any[][]): any[][] {
+  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, unit, header);
 }
 
 /**

@@ -16,7 +16,7 @@ import { ownEntry } from "../chemistry/own-entry";
 import { mapCells, textArg } from "./broadcast";
 import { CellError, CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
-import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";
+import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 
 let lastElement = "";
 let lastEngine: PointEngine | null = null;
@@ -25,16 +25,25 @@ let lastEngine: PointEngine | null = null;
  * The point engine of an element with the row's water set (the engine keeps what depends only on T), or #VALUE!
  * naming the species without S° when the element cannot be answered above 100 °C (temperature-range.ts).
  */
-export function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, ionicStrength: number): PointEngine | CellError {
+export function engineIn(
+  element: string,
+  celsius: number,
+  activity: number,
+  carbonate: number,
+  chloride: number,
+  sulfur: number,
+  phosphate: number,
+  ionicStrength: number,
+): PointEngine | CellError {
   if (celsius > CONSTANT_GIBBS_MAX_CELSIUS) {
-    const problem = temperatureProblem(getDatabase(), element, celsius, presentLigands(carbonate, chloride, sulfur));
+    const problem = temperatureProblem(getDatabase(), element, celsius, presentLigands(carbonate, chloride, sulfur, phosphate));
     if (problem) return valueError(problem);
   }
   if (element !== lastElement || !lastEngine) {
     lastEngine = pointEngine(getDatabase(), element);
     lastElement = element;
   }
-  lastEngine.setWater(celsius, activity, carbonate, chloride, sulfur, ionicStrength);
+  lastEngine.setWater(celsius, activity, carbonate, chloride, sulfur, ionicStrength, phosphate);
   return lastEngine;
 }
 
@@ -45,12 +54,12 @@ const directionArg = textArg<1 | -1>(
 );
 
 /** The point arguments every stability function shares, in the agreed order. */
-const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg] as const;
+const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg] as const;
 
 /** Reads the point arguments shared by SPECIES and REGIME and answers with `describe` of the dominant species. */
 function dominantAt(describe: (species: SystemSpecies) => string, inputs: readonly CellInput[]): CellOutput[][] {
-  return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, i) => {
-    const engine = engineIn(el, t, a, co3, cl, s, i);
+  return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, po4, i) => {
+    const engine = engineIn(el, t, a, co3, cl, s, po4, i);
     if (engine instanceof CellError) return engine;
     return describe(engine.table.species[engine.dominant(p, e)]);
   });
@@ -65,9 +74,10 @@ export function speciesAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength]);
+  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength]);
 }
 
 export function regimeAt(
@@ -79,9 +89,10 @@ export function regimeAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength]);
+  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength]);
 }
 
 export function boundaryFrom(
@@ -93,14 +104,15 @@ export function boundaryFrom(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
   direction?: CellInput,
 ): CellOutput[][] {
   return mapCells(
     [...POINT_ARGS, directionArg],
-    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, direction],
-    (el, p, e, t, a, co3, cl, s, i, d) => {
-      const engine = engineIn(el, t, a, co3, cl, s, i);
+    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, direction],
+    (el, p, e, t, a, co3, cl, s, po4, i, d) => {
+      const engine = engineIn(el, t, a, co3, cl, s, po4, i);
       if (engine instanceof CellError) return engine;
       const crossing = pointBoundary(engine, p, e, d);
       return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
@@ -162,14 +174,15 @@ export function dissolvedAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
   unit?: CellInput,
 ): CellOutput[][] {
   return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg, unitArg],
-    [element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, unit],
-    (el, p, e, t, co3, cl, s, i, u) => {
-      const engine = engineIn(el, t, 1, co3, cl, s, i);
+    [elementArg, pHArg, potentialArg(), temperatureArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg, unitArg],
+    [element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, unit],
+    (el, p, e, t, co3, cl, s, po4, i, u) => {
+      const engine = engineIn(el, t, 1, co3, cl, s, po4, i);
       if (engine instanceof CellError) return engine;
       const { total, solid } = dissolvedAtPoint(engine, p, e);
       if (!(total <= MAX_DISSOLVED)) {

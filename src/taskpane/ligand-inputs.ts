@@ -1,5 +1,6 @@
 /**
- * The water the samples are drawn in: ligand totals (carbonate as dissolved inorganic carbon, chloride, sulfur) for
+ * The water the samples are drawn in: ligand totals (carbonate as dissolved inorganic carbon, chloride, sulfur,
+ * orthophosphate as P) for
  * the diagram and for each sample, either typed by the user (mol/kg, blank = absent) or taken row by row from the
  * log's alkalinity, chloride or sulfate column. Pure: no host, no DOM.
  *
@@ -31,10 +32,11 @@ export const PURE_WATER: WaterSettings = {
   carbonate: { kind: "typed", total: null },
   chloride: { kind: "typed", total: null },
   sulfur: { kind: "typed", total: null },
+  phosphate: { kind: "typed", total: null },
 };
 
 /** The column each ligand can be read from. */
-export const LIGAND_COLUMN: Readonly<Record<LigandName, WaterColumnRole>> = { carbonate: "alkalinity", chloride: "chloride", sulfur: "sulfate" };
+export const LIGAND_COLUMN: Readonly<Record<LigandName, WaterColumnRole>> = { carbonate: "alkalinity", chloride: "chloride", sulfur: "sulfate", phosphate: "phosphate" };
 
 /** A row's value for one ligand: a total in mol/kg, or why none could be read. */
 export type RowTotal = number | { readonly problem: string };
@@ -64,6 +66,9 @@ function molarMass(db: Database, parts: Record<string, number>): number {
   return sum;
 }
 
+/** The ion a ligand column in plain mass units weighs (orthophosphate columns say as PO4 or as P). */
+const OWN_ION: Readonly<Record<LigandName, Record<string, number>>> = { carbonate: { C: 1 }, chloride: { Cl: 1 }, sulfur: { S: 1, O: 4 }, phosphate: { P: 1, O: 4 } };
+
 /**
  * One row's total (mol/kg) of `ligand` from its column cell. `pH` and `celsius` are the row's own (alkalinity needs
  * them). Blank, unreadable, negative or out-of-range values give a problem instead.
@@ -84,7 +89,7 @@ export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, 
       if (error instanceof AlkalinityError) return { problem: error.message };
       throw error;
     }
-  } else total = value * molalFactor(column.unit, ligand === "chloride" ? { Cl: 1 } : { S: 1, O: 4 }, (parts) => molarMass(db, parts));
+  } else total = value * molalFactor(column.unit, OWN_ION[ligand], (parts) => molarMass(db, parts));
   if (total === 0) return 0;
   if (!(total > 0 && total <= MAX_LIGAND_TOTAL)) return { problem: `gives ${total.toPrecision(3)} mol/kg, outside 0–${MAX_LIGAND_TOTAL}` };
   return roundTotal(total);

@@ -532,7 +532,7 @@ export class DiagramPane {
   private showWater(resolved: ReturnType<typeof resolveWater>, ligands: boolean): void {
     const note = $("ligand-note");
     if (!ligands && resolved.unusable.length === 0) {
-      note.textContent = "A column choice reads each row's value: DIC from the row's alkalinity, pH and temperature; sulfate as total sulfur. The diagram is drawn at the median, each sample at its own row's water.";
+      note.textContent = "A column choice reads each row's value: DIC from the row's alkalinity, pH and temperature; sulfate as total sulfur; orthophosphate as PO4 (as P when the header says so). The diagram is drawn at the median, each sample at its own row's water.";
       return;
     }
     const parts: string[] = [];

@@ -108,6 +108,7 @@ describe("the diagram's and each sample's water", () => {
       carbonate: { kind: "column", column: { index: 3, unit: "mg/L CaCO3" } },
       chloride: { kind: "typed", total: 5e-4 },
       sulfur: { kind: "typed", total: null },
+      phosphate: { kind: "typed", total: null },
     };
     const r = resolveWater(settings, [{ carbonate: 1e-3 }, { carbonate: { problem: "blank" } }, { carbonate: 3e-3 }, { carbonate: 2e-3 }]);
     expect(r.diagram).toEqual({ carbonate: roundTotal(2e-3), chloride: 5e-4 }); // median of 1, 2, 3 mmol/kg
