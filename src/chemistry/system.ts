@@ -90,37 +90,37 @@ export interface SystemOptions {
 
 export class SystemError extends Error {}
 
-/** Builds the planes of a metal's system at (T, activity), with optional ligand cells from `ligandCells`. */
-export function buildSystem(
-  db: Database,
-  element: string,
-  options: SystemOptions,
-  ligandCells: readonly { region: readonly HalfPlane[]; ligands: readonly LigandBasis[] }[] = [{ region: [], ligands: [] }],
-): MetalSystem {
-  const entry = db.system(element);
-  if (!entry || entry.kind !== "metal") throw new SystemError(`no data for the metal ${element}`);
+/** A cell of the plane given by its half-planes and the ligand basis species held fixed inside it. */
+export type LigandCellSpec = { region: readonly HalfPlane[]; ligands: readonly LigandBasis[] };
+
+/** Elements beyond H and O a species carries other than `element` (its ligands). */
+function ligandElementsIn(species: Species, element: string): string[] {
+  return Object.keys(species.elements).filter((e) => e !== element && e !== "H" && e !== "O");
+}
+
+/** The temperature and activity the engine accepts (docs/method.md, Domain), else a SystemError. */
+function checkConditions(options: SystemOptions): void {
   if (!(options.celsius >= MIN_CELSIUS && options.celsius <= MAX_CELSIUS)) {
     throw new SystemError(`temperature ${options.celsius} °C is outside ${MIN_CELSIUS}–${MAX_CELSIUS} °C`);
   }
   if (!(options.activity > 0)) throw new SystemError("activity must be positive");
+}
 
-  // the element in its reference state: a solid, or the liquid for mercury
-  const metal = entry.species.find((s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
-  if (!metal) throw new SystemError(`the ${element} file lacks the metal ${element}(s)`);
-
+/** The ligand elements of the cells, after checking the data's temperature range covers each (temperature-range.ts). */
+function ligandElementsChecked(db: Database, element: string, celsius: number, ligandCells: readonly LigandCellSpec[]): Set<string> {
   const ligandElements = new Set<string>();
   for (const cell of ligandCells) for (const l of cell.ligands) for (const e of Object.keys(l.species.elements)) if (e !== "H" && e !== "O") ligandElements.add(e);
   const has = (e: string) => (ligandElements.has(e) ? 1 : 0);
-  const present = presentLigands(has("C"), has("Cl"), has("S"), has("P"));
-  const problem = temperatureProblem(db, element, options.celsius, present);
+  const problem = temperatureProblem(db, element, celsius, presentLigands(has("C"), has("Cl"), has("S"), has("P")));
   if (problem) throw new SystemError(problem);
+  return ligandElements;
+}
 
-  // Species of the metal: those in its own file, plus ligand-bearing species of it in ligand files.
-  const candidates = db.allSpecies().filter((s) => s.elements[element] !== undefined);
+/** Species of the metal: those in its own file, plus ligand-bearing species of it whose ligands are present. */
+function systemSpecies(db: Database, element: string, metal: Species, ligandElements: ReadonlySet<string>): SystemSpecies[] {
   const species: SystemSpecies[] = [];
-  for (const s of candidates) {
-    const extra = Object.keys(s.elements).filter((e) => e !== element && e !== "H" && e !== "O");
-    if (extra.some((e) => !ligandElements.has(e))) continue; // ligand not present in this water
+  for (const s of db.allSpecies().filter((x) => x.elements[element] !== undefined)) {
+    if (ligandElementsIn(s, element).some((e) => !ligandElements.has(e))) continue; // ligand not present in this water
     species.push({
       species: s,
       formula: s.formula,
@@ -129,53 +129,71 @@ export function buildSystem(
       regime: s === metal ? "immunity" : s.state === "aq" ? "corrosion" : "passivation",
     });
   }
-  const metalIndex = species.findIndex((s) => s.species === metal);
+  return species;
+}
 
-  const T = kelvin(options.celsius);
+/** What every cell's planes share: the species, the metal, water, H+ and the temperature terms. */
+interface PlaneContext {
+  db: Database;
+  species: readonly SystemSpecies[];
+  metal: Species;
+  metalIndex: number;
+  /** Ligand elements each species needs (beyond the metal, H and O), found once. */
+  needs: readonly string[][];
+  T: number;
+  lnActivity: number;
+}
+
+/**
+ * The planes g_i = a + b·pH + c·E of one cell, per metal atom in volts: a = [ΔG°r(T) + RT Σ ν ln a_ligand]/(xF)
+ * (+ RT ln a / (xF) when dissolved), b = −ν(H+)·k/x, c = −ν(e−)/x (Pourbaix 1974; Garrels & Christ 1965).
+ */
+function planeCell(ctx: PlaneContext, cell: LigandCellSpec): PlaneCell {
+  const { db, species, metalIndex, needs, T, lnActivity } = ctx;
   const k = nernstFactor(T);
   const rtOverF = (GAS_CONSTANT * T) / FARADAY;
-  const water = db.require("H2O(l)");
-  const proton = db.require("H+");
-  const lnActivity = Math.log(options.activity);
-
-  // ligand elements each species needs (beyond the metal, H and O), found once
-  const needs = species.map((entrySpecies) => Object.keys(entrySpecies.species.elements).filter((e) => e !== element && e !== "H" && e !== "O"));
-
-  const cells: PlaneCell[] = ligandCells.map((cell) => {
-    const n = species.length;
-    const a = new Float64Array(n);
-    const b = new Float64Array(n);
-    const c = new Float64Array(n);
-    const aUnit = new Float64Array(n);
-    const basis = [metal, water, proton, ELECTRON, ...cell.ligands.map((l) => l.species)] as const;
-    const available = new Set(cell.ligands.flatMap((l) => Object.keys(l.species.elements)));
-    const formationOf = formationTable(db, basis);
-    species.forEach((entrySpecies, i) => {
-      if (i === metalIndex) return; // the metal's plane is 0
-      if (needs[i].some((e) => !available.has(e))) {
-        a[i] = aUnit[i] = Infinity; // ligand absent in this cell
-        return;
-      }
-      const formation = formationOf(entrySpecies.species);
-      if (!formation) {
-        a[i] = aUnit[i] = Infinity;
-        return;
-      }
-      const { coefficients } = formation;
-      const x = entrySpecies.metalAtoms;
-      const dG = gibbsAt(formation.properties, T);
-      const cProton = coefficients[2];
-      const cElectron = coefficients[3];
-      let ligandTerm = 0;
-      cell.ligands.forEach((l, j) => (ligandTerm += coefficients[4 + j] * l.lnActivity));
-      aUnit[i] = (dG / FARADAY + rtOverF * ligandTerm) / x;
-      a[i] = aUnit[i] + (entrySpecies.dissolved ? (rtOverF * lnActivity) / x : 0);
-      b[i] = (-cProton * k) / x;
-      c[i] = -cElectron / x;
-    });
-    return { region: cell.region, a, b, c, aUnit, ligands: cell.ligands, active: null, queries: 0 };
+  const n = species.length;
+  const a = new Float64Array(n);
+  const b = new Float64Array(n);
+  const c = new Float64Array(n);
+  const aUnit = new Float64Array(n);
+  const basis = [ctx.metal, db.require("H2O(l)"), db.require("H+"), ELECTRON, ...cell.ligands.map((l) => l.species)] as const;
+  const available = new Set(cell.ligands.flatMap((l) => Object.keys(l.species.elements)));
+  const formationOf = formationTable(db, basis);
+  species.forEach((entrySpecies, i) => {
+    if (i === metalIndex) return; // the metal's plane is 0
+    const formation = needs[i].some((e) => !available.has(e)) ? null : formationOf(entrySpecies.species);
+    if (!formation) {
+      a[i] = aUnit[i] = Infinity; // ligand absent in this cell, or no formation reaction
+      return;
+    }
+    const { coefficients } = formation;
+    const x = entrySpecies.metalAtoms;
+    const dG = gibbsAt(formation.properties, T);
+    let ligandTerm = 0;
+    cell.ligands.forEach((l, j) => (ligandTerm += coefficients[4 + j] * l.lnActivity));
+    aUnit[i] = (dG / FARADAY + rtOverF * ligandTerm) / x;
+    a[i] = aUnit[i] + (entrySpecies.dissolved ? (rtOverF * lnActivity) / x : 0);
+    b[i] = (-coefficients[2] * k) / x;
+    c[i] = -coefficients[3] / x;
   });
+  return { region: cell.region, a, b, c, aUnit, ligands: cell.ligands, active: null, queries: 0 };
+}
 
+/** Builds the planes of a metal's system at (T, activity), with optional ligand cells from `ligandCells`. */
+export function buildSystem(db: Database, element: string, options: SystemOptions, ligandCells: readonly LigandCellSpec[] = [{ region: [], ligands: [] }]): MetalSystem {
+  const entry = db.system(element);
+  if (!entry || entry.kind !== "metal") throw new SystemError(`no data for the metal ${element}`);
+  checkConditions(options);
+  // the element in its reference state: a solid, or the liquid for mercury
+  const metal = entry.species.find((s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
+  if (!metal) throw new SystemError(`the ${element} file lacks the metal ${element}(s)`);
+  const ligandElements = ligandElementsChecked(db, element, options.celsius, ligandCells);
+  const species = systemSpecies(db, element, metal, ligandElements);
+  const metalIndex = species.findIndex((s) => s.species === metal);
+  const T = kelvin(options.celsius);
+  const ctx: PlaneContext = { db, species, metal, metalIndex, needs: species.map((s) => ligandElementsIn(s.species, element)), T, lnActivity: Math.log(options.activity) };
+  const cells = ligandCells.map((cell) => planeCell(ctx, cell));
   return { element, celsius: options.celsius, kelvin: T, activity: options.activity, species, cells, metalIndex };
 }
 
