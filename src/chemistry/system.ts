@@ -12,6 +12,7 @@
  * Ligands (issue: real waters) split the plane into cells in each of which one basis species of every ligand
  * predominates; within a cell every plane is linear. Without ligands there is one cell covering everything.
  */
+import { PH_MAX, PH_MIN } from "./domain";
 import { FARADAY, GAS_CONSTANT, kelvin, MAX_CELSIUS, MIN_CELSIUS, nernstFactor } from "./constants";
 import { Database, Species } from "./database";
 import { envelopeRegions } from "./envelope";
@@ -65,8 +66,8 @@ export interface PlaneCell {
 export const PRUNE_AFTER_QUERIES = 64;
 
 /** The pH domain the worksheet functions accept (docs/method.md, Domain), and a potential span far beyond any use. */
-export const PRUNE_PH_MIN = -2;
-export const PRUNE_PH_MAX = 16;
+export const PRUNE_PH_MIN = PH_MIN;
+export const PRUNE_PH_MAX = PH_MAX;
 export const PRUNE_E_LIMIT = 1000;
 
 export interface MetalSystem {

@@ -7,6 +7,7 @@
  * the reversible hydrogen electrode (E_ref = −k(T)·pH). Regions stay convex polygons under such a map, so they are
  * computed vs SHE over a window covering the shown one, mapped vertex by vertex and clipped to the shown window.
  */
+import { FULL_E_LIMIT, PH_MAX, PH_MIN } from "../chemistry/domain";
 import { clipPolygon, HalfPlane, Point, polygonArea } from "../chemistry/halfplane";
 import { getElectrodes } from "../chemistry/electrodes";
 import { hasLigands, type LigandTotals } from "../chemistry/ligand-cells";
@@ -56,9 +57,9 @@ export function displayScale(electrode: string, unit: PotentialUnit, celsius: nu
 /** Default shown window: pH −2…16 and −2…+2 V vs SHE at pH 7 expressed in the scale, rounded outwards. */
 export function defaultWindow(scale: DisplayScale): AxisWindow {
   const step = scale.unit === "mV" ? 100 : 0.1;
-  const low = scale.fromSHE(7, -2);
-  const high = scale.fromSHE(7, 2);
-  return { pHMin: -2, pHMax: 16, eMin: Math.floor(low / step) * step, eMax: Math.ceil(high / step) * step };
+  const low = scale.fromSHE(7, -FULL_E_LIMIT);
+  const high = scale.fromSHE(7, FULL_E_LIMIT);
+  return { pHMin: PH_MIN, pHMax: PH_MAX, eMin: Math.floor(low / step) * step, eMax: Math.ceil(high / step) * step };
 }
 
 export interface ShownRegion {

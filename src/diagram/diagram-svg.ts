@@ -5,6 +5,7 @@
  *
  * Pure string building — no document, no window — so the command line and the tests can use it as the pane does.
  */
+import { REGIMES } from "../chemistry/domain";
 import type { MetalSystem, Regime } from "../chemistry/system";
 import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./axes";
 import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
@@ -276,7 +277,7 @@ function chromeSvg(o: DiagramSvgOptions, area: PlotArea, title: string, subtitle
   const legendY = area.top + area.height + 50;
   const legend: string[] = [];
   let lx = area.left;
-  for (const regime of ["immunity", "passivation", "corrosion"] as const) {
+  for (const regime of REGIMES) {
     legend.push(
       `<rect x="${lx}" y="${legendY}" width="16" height="12" fill="${regionFill(regime, 0)}" stroke="${AXIS_TEXT}" stroke-width="0.5"/><rect x="${lx}" y="${legendY}" width="16" height="12" fill="url(#rc-pat-${regime})"/>` +
         `<path d="${markerPath(regime, lx + 24, legendY + 6, 4)}" fill="${MARKER_FILLS[regime]}" stroke="${MARKER_OUTLINE}"/><text x="${lx + 32}" y="${legendY + 10}">${regime}</text>`,

@@ -3,6 +3,7 @@
  * broadcast.ts; the electrode potentials come from src/chemistry/electrodes.ts. Readings may be in V (default) or
  * mV (`unit`); potentials vs SHE are always in V.
  */
+import { PH_MAX, PH_MIN } from "../chemistry/domain";
 import { Electrode, getElectrodes, inRange } from "../chemistry/electrodes";
 import { ownEntry } from "../chemistry/own-entry";
 import { mapCells, numberArg, textArg } from "./broadcast";
@@ -15,7 +16,7 @@ export const electrodeArg = textArg<Electrode>("electrode", (text) => {
   return "error" in found ? valueError(`electrode: ${found.error}`) : found.electrode;
 });
 /** pH of the solution, needed only by RHE; no default, and a blank cell is a missing measurement. */
-const electrodePHArg = numberArg("pH", { min: -2, max: 16, optional: true, measured: true });
+const electrodePHArg = numberArg("pH", { min: PH_MIN, max: PH_MAX, optional: true, measured: true });
 
 export type ReadingUnit = "V" | "mV";
 /** Volts per unit of a reading. */

@@ -5,7 +5,7 @@
  * and, in Excel, row selection and picture insertion.
  */
 import { getDatabase } from "../chemistry/database";
-import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
+import { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_ACTIVITY, MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/domain";
 import { SystemCache } from "../chemistry/system-cache";
 import { hasLigands, ligandKey, LIGAND_ORDER, LigandTotals } from "../chemistry/ligand-cells";
 import { buildLigandSystem } from "../chemistry/ligand-system";
@@ -270,7 +270,7 @@ export class DiagramPane {
     const electrode = select("electrode").value;
     const unit = select("unit").value as PotentialUnit;
     const activity = Number(input("activity").value);
-    if (!(activity > 0 && activity <= 10)) return this.status("Dissolved activity: a number above 0 and at most 10, e.g. 1e-6.");
+    if (!(activity > 0 && activity <= MAX_ACTIVITY)) return this.status(`Dissolved activity: a number above 0 and at most ${MAX_ACTIVITY}, e.g. ${DEFAULT_ACTIVITY.toExponential()}.`);
     const waterInput = readWater(this.table);
     if ("error" in waterInput) return this.status(waterInput.error);
     const rows = this.readRows({
@@ -278,7 +278,7 @@ export class DiagramPane {
       electrode,
       unit,
       temperatureUnit: this.temperatureUnit,
-      celsius: 25,
+      celsius: DEFAULT_CELSIUS,
       onlyMetal: input("only-metal").checked ? metal : undefined,
       waterColumns: Object.keys(waterInput.columns).length > 0 ? waterInput.columns : undefined,
     });

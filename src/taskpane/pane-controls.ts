@@ -2,6 +2,7 @@
  * The pane's settings controls and menus: metal, electrode, unit and activity (remembered per workbook), the
  * column menus, the axis limits, and the site menus (filter and colours).
  */
+import { DEFAULT_CELSIUS } from "../chemistry/domain";
 import type { Database } from "../chemistry/database";
 import { getElectrodes } from "../chemistry/electrodes";
 import type { AxisWindow } from "../diagram/axes";
@@ -33,7 +34,7 @@ export function fillSettingControls(db: Database, settings: PaneSettings): void 
   electrodes.value = settings.electrode ?? "SHE";
   select("unit").value = settings.unit ?? "V";
   if (settings.activity) input("activity").value = String(settings.activity);
-  input("temperature").value = "25";
+  input("temperature").value = String(DEFAULT_CELSIUS);
 }
 
 /** The settings as shown in the controls (metal, electrode, unit, activity), to remember. */

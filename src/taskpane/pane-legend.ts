@@ -3,6 +3,7 @@
  * its dashed lines, the kinetic band when shown, the thin white lines where a ligand's dominant form changes (named
  * by the two forms they separate), and the site colours when samples are coloured by site.
  */
+import { REGIMES } from "../chemistry/domain";
 import type { Regime } from "../chemistry/system";
 import { MARKER_FILLS, markerSvg } from "../diagram/markers";
 import { escapeXml } from "../diagram/diagram-svg";
@@ -40,7 +41,7 @@ const swatch = (style: string) => `<span class="swatch" style="${style}" aria-hi
 
 export function legendHtml(o: LegendOptions): string {
   const parts: string[] = [];
-  for (const regime of ["immunity", "passivation", "corrosion"] as const) {
+  for (const regime of REGIMES) {
     parts.push(
       item(swatch(`background:${regionFill(regime, 0)}`) + markerSvg(regime), REGIME_TEXT[regime], `legend-${regime}`),
     );

@@ -2,6 +2,7 @@
  * The pane's text panels beside the drawing: the rows' temperature spread, the rows not drawn, the results table
  * and the pure-water boundary equations.
  */
+import { FULL_E_LIMIT, PH_MAX, PH_MIN } from "../chemistry/domain";
 import type { Database } from "../chemistry/database";
 import { hasLigands, LigandTotals } from "../chemistry/ligand-cells";
 import type { MetalSystem } from "../chemistry/system";
@@ -60,11 +61,11 @@ export function showSkipped(read: ReturnType<typeof readSamples> | null, failed:
 export function showResults(db: Database, samples: readonly PlottedSample[], system: MetalSystem, pure: MetalSystem, celsius: number, totals: LigandTotals): string {
   $("results-table").innerHTML = resultsHtml(samples);
   const metal = system.element;
-  const equations = boundaryEquations(pure, { pHMin: -2, pHMax: 16, eMin: -2, eMax: 2 });
+  const equations = boundaryEquations(pure, { pHMin: PH_MIN, pHMax: PH_MAX, eMin: -FULL_E_LIMIT, eMax: FULL_E_LIMIT });
   const head = ["between", "and", "boundary (E in V vs SHE)"];
   const rows = equations.map((e) => [e.first, e.second, equationText(e)]);
   $("equations-note").textContent =
-    `${db.system(metal)?.title ?? metal} in pure water at ${celsius} °C, dissolved activity ${formatActivity(system.activity)}: each boundary drawn between pH −2 and 16 and −2…+2 V vs SHE.` +
+    `${db.system(metal)?.title ?? metal} in pure water at ${celsius} °C, dissolved activity ${formatActivity(system.activity)}: each boundary drawn between pH ${PH_MIN} and ${PH_MAX} and −${FULL_E_LIMIT}…+${FULL_E_LIMIT} V vs SHE.` +
     (hasLigands(totals) ? " (The drawing itself includes the water's ligands; these equations do not.)" : "");
   $("equations-table").innerHTML =
     `<thead><tr>${head.map((h) => `<th scope="col">${escapeXml(h)}</th>`).join("")}</tr></thead>` +

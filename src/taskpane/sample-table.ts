@@ -4,6 +4,7 @@
  * chosen electrode at the row's own temperature when it has one (the reference electrode sits in that water),
  * otherwise at the diagram's temperature. Pure: no host, no DOM.
  */
+import { PH_MAX, PH_MIN } from "../chemistry/domain";
 import { getElectrodes } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
 import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
@@ -78,7 +79,7 @@ export function median(values: readonly number[]): number {
 }
 
 const NO_TOTALS: RowTotals = Object.freeze({});
-const PH_RANGE = [-2, 16] as const; // docs/method.md, Domain
+const PH_RANGE = [PH_MIN, PH_MAX] as const; // docs/method.md, Domain
 const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (docs/method.md, Domain)
 
 export function readSamples(table: SampleTable, options: ReadOptions): ReadResult {

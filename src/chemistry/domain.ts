@@ -1,0 +1,21 @@
+/**
+ * The domain every layer shares (docs/method.md, Domain): the pH and temperature ranges accepted, the defaults of
+ * omitted arguments, and the regime names. Functions, diagram, pane and command line read them from here.
+ */
+import type { Regime } from "./system";
+
+export { MAX_CELSIUS, MIN_CELSIUS } from "./constants";
+
+/** pH accepted by the worksheet functions and drawn on the full diagram (docs/method.md, Domain). */
+export const PH_MIN = -2;
+export const PH_MAX = 16;
+/** Potential span of the full diagram, V vs SHE (common practice: water's stability field lies well inside). */
+export const FULL_E_LIMIT = 2;
+/** Activity of dissolved metal species when none is given (10⁻⁶, the usual corrosion threshold: common practice). */
+export const DEFAULT_ACTIVITY = 1e-6;
+/** Highest activity accepted for dissolved metal species. */
+export const MAX_ACTIVITY = 10;
+/** Temperature when none is given, °C (the standard reference temperature, 298.15 K). */
+export const DEFAULT_CELSIUS = 25;
+/** The corrosion regimes in their usual order: the metal stable, a solid compound stable, a dissolved species stable. */
+export const REGIMES: readonly Regime[] = ["immunity", "passivation", "corrosion"];
