@@ -15,12 +15,19 @@ export type CellInput = CellScalar | CellScalar[][];
 
 export type ErrorKind = "#VALUE!" | "#N/A";
 
-/** The error value we hand back when no host registry exists. */
+/**
+ * The error value we hand back when no host registry exists: its code, its message and, when one argument is at
+ * fault, that argument's name as the function help shows it (for callers such as the command line to read).
+ */
 export class CellError {
+  readonly argument?: string;
   constructor(
     readonly code: ErrorKind,
     readonly message: string,
-  ) {}
+    argument?: string,
+  ) {
+    if (argument !== undefined) this.argument = argument; // absent, not undefined, when no argument is at fault
+  }
 }
 
 /** A value our functions may put in a result cell. Blank results are the empty string. */
@@ -46,7 +53,7 @@ export function toHostError(error: CellError): CellOutput {
 }
 
 /** Wrong kind, unknown name or out-of-range input: #VALUE! with a message naming argument, value and expectation. */
-export const valueError = (message: string): CellError => new CellError("#VALUE!", message);
+export const valueError = (message: string, argument?: string): CellError => new CellError("#VALUE!", message, argument);
 /** No answer exists at valid input: #N/A with its reason. */
 export const notAvailable = (message: string): CellError => new CellError("#N/A", message);
 

@@ -1,16 +1,15 @@
 /**
  * Argument readers shared by the worksheet functions (ranges and defaults: docs/method.md, Domain).
  */
-import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
+import { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_ACTIVITY, MAX_CELSIUS, MIN_CELSIUS, PH_MAX, PH_MIN } from "../chemistry/domain";
 import { getDatabase } from "../chemistry/database";
 import { numberArg, textArg } from "./broadcast";
 import { valueError } from "./cell-values";
 
-/** Default activity of dissolved metal species: 10⁻⁶, the usual corrosion threshold (common practice). */
-export const DEFAULT_ACTIVITY = 1e-6;
-export const DEFAULT_CELSIUS = 25;
+/** Defaults of omitted arguments (src/chemistry/domain.ts), re-exported for the functions. */
+export { DEFAULT_ACTIVITY, DEFAULT_CELSIUS };
 
-export const pHArg = numberArg("pH", { min: -2, max: 16 });
+export const pHArg = numberArg("pH", { min: PH_MIN, max: PH_MAX });
 
 /** Largest potential magnitude accepted, V: beyond ±3 V no aqueous redox couple exists, so it is a reading in mV. */
 export const MAX_POTENTIAL = 3;
@@ -33,11 +32,11 @@ export const temperatureArg = numberArg("temperature", {
   measured: true,
   defaultValue: DEFAULT_CELSIUS,
 });
-export const activityArg = numberArg("activity", { min: 0, minExclusive: true, max: 10, optional: true, defaultValue: DEFAULT_ACTIVITY });
+export const activityArg = numberArg("activity", { min: 0, minExclusive: true, max: MAX_ACTIVITY, optional: true, defaultValue: DEFAULT_ACTIVITY });
 
 /** A metal by symbol or name ("Fe", "iron"), case-insensitive. */
 export const elementArg = textArg("element", (text) => {
   const db = getDatabase();
   const symbol = db.resolveMetal(text);
-  return symbol ?? valueError(`element: "${text}" is not a metal in the database (${db.metals().join(", ")})`);
+  return symbol ?? valueError(`element: "${text}" is not a metal in the database (${db.metals().join(", ")})`, "element");
 });

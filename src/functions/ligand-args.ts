@@ -13,7 +13,7 @@ function withHint(spec: ArgSpec<number>, hint: string): ArgSpec<number> {
     ...spec,
     parse(value) {
       const parsed = spec.parse(value);
-      return parsed instanceof CellError ? valueError(parsed.message + hint) : parsed;
+      return parsed instanceof CellError ? valueError(parsed.message + hint, parsed.argument) : parsed;
     },
   };
 }
