@@ -6,7 +6,8 @@
 import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { mapCells } from "../functions/broadcast";
 import { CellError, CellInput, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
-import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "../functions/ligand-args";
+import { carbonateArg, chlorideArg, sulfurArg } from "../functions/ligand-args";
+import { ionicStrengthArgument } from "../functions/ionic-strength-functions";
 import { IONIC_UNITS } from "../tables";
 import { ionicBasis, IONIC_OUTPUT, ionicWords, type IonicPlan } from "./ionic";
 import { readNumber, toCelsius, type TemperatureScale } from "../tables";
@@ -398,40 +399,23 @@ function usesIonic(plan: EvaluationPlan): boolean {
   return plan.ionic !== undefined && plan.ionic.kind !== "ideal";
 }
 
-interface IonicColumnCells {
-  /** The [ionicStrength] argument: a number for every row, or a column ("" = ideal). */
-  readonly argument: CellInput;
-  /** The output cells: the ionic strength passed ("" where the input cell is blank), or the error. */
-  readonly cells: CellOutput[][];
-  /** REDOX.IONICSTRENGTH's errors per row, passed on to every function (as a worksheet would). */
-  readonly errors: (CellError | null)[];
-  /** Where a converted number came from, for messages naming the argument. */
-  readonly note: { readonly arg: string; readonly text: string } | null;
-}
-
 /**
- * The [ionicStrength] of a batch: a fixed value, a stated ionic strength column (× its unit's factor), or a
- * conductivity or TDS column through REDOX.IONICSTRENGTH. Blank cells stay blank: that row is ideal.
+ * The [ionicStrength] of a batch: a fixed value, or a column through ionicStrengthArgument (a stated ionic strength
+ * × its unit's factor, or a conductivity or TDS reading through REDOX.IONICSTRENGTH). Blank cells: that row is ideal.
  */
-function ionicColumn(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): IonicColumnCells | null {
+function ionicColumn(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions) {
   const ionic = plan.ionic;
   if (ionic === undefined || ionic.kind === "ideal") return null;
-  const none = new Array<CellError | null>(rows.length).fill(null);
-  if (ionic.kind === "fixed") return { argument: ionic.value, cells: rows.map(() => [ionic.value]), errors: none, note: null };
+  if (ionic.kind === "fixed") {
+    const none = new Array<CellError | null>(rows.length).fill(null);
+    return { argument: ionic.value as CellInput, cells: rows.map((): CellOutput[] => [ionic.value]), errors: none, note: null };
+  }
   const { index, unit } = ionic.column;
   const { factor } = IONIC_UNITS[unit];
-  const raw = numericColumn(rows, index, plan.format, factor);
   const basis = ionicBasis(unit);
-  const converted = factor === 1 ? null : ` (converted from ${ionicWords(ionic.column)})`;
-  if (basis === null) {
-    const cells = mapCells([ionicStrengthArg], [raw], (x) => x).map((cell, r) => (isBlank(raw[r][0]) ? [""] : cell));
-    return { argument: raw, cells, errors: none, note: converted ? { arg: "ionicStrength", text: converted } : null };
-  }
-  const computed = fns.ionicStrength(raw, basis);
-  const cells = computed.map((cell, r) => (isBlank(raw[r][0]) ? [""] : cell));
-  const errors = cells.map(([c]) => (c instanceof CellError ? c : null));
-  const argument = cells.map(([c]) => [c instanceof CellError ? "" : (c as CellScalar)]);
-  return { argument, cells, errors, note: converted ? { arg: "value", text: converted } : null };
+  const column = ionicStrengthArgument(numericColumn(rows, index, plan.format, factor), basis, fns.ionicStrength);
+  const note = factor === 1 ? null : { arg: basis === null ? "ionicStrength" : "value", text: ` (converted from ${ionicWords(ionic.column)})` };
+  return { ...column, note };
 }
 
 /** How each result cell's number is rounded, in output order (see outputHeader). */
