@@ -6,7 +6,7 @@
 import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { mapCells } from "../functions/broadcast";
 import { CellError, CellInput, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
-import { carbonateArg, chlorideArg, sulfurArg } from "../functions/ligand-args";
+import { carbonateArg, chlorideArg, phosphateArg, sulfurArg } from "../functions/ligand-args";
 import { ionicStrengthArgument } from "../functions/ionic-strength-functions";
 import { IONIC_UNITS } from "../tables";
 import { ionicBasis, IONIC_OUTPUT, ionicWords, type IonicPlan } from "./ionic";
@@ -160,7 +160,7 @@ function textColumn(rows: readonly InputRow[], index: number): CellScalar[][] {
 
 /** #VALUE! is always the input's fault; #N/A only when its message names an input (no DIC for that alkalinity). */
 const SERIOUS = new Set(["#VALUE!"]);
-const LIGAND_ARG = { carbonate: carbonateArg, chloride: chlorideArg, sulfur: sulfurArg } as const;
+const LIGAND_ARG = { carbonate: carbonateArg, chloride: chlorideArg, sulfur: sulfurArg, phosphate: phosphateArg } as const;
 
 /**
  * Argument names of the worksheet functions → the input column that fed them. The functions name the argument
@@ -261,7 +261,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       ligandCells.push(mapCells([LIGAND_ARG[l.ligand]], [column], (x) => x).map((cell, r) => (isBlank(column[r][0]) ? [""] : cell)));
     }
   }
-  const { carbonate, chloride, sulfur } = ligandArgs;
+  const { carbonate, chloride, sulfur, phosphate } = ligandArgs;
   const ionic = ionicColumn(plan, rows, fns);
   const ionicStrength = ionic?.argument;
   if (ionic) ligandCells.push(ionic.cells);
@@ -271,11 +271,11 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     return {
       target: t,
       element,
-      species: fns.species(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, ionicStrength),
-      regime: fns.regime(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, ionicStrength),
-      above: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, ionicStrength, 1),
-      below: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, ionicStrength, -1),
-      dissolved: fns.dissolved(element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, plan.dissolvedUnit),
+      species: fns.species(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength),
+      regime: fns.regime(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength),
+      above: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength, 1),
+      below: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength, -1),
+      dissolved: fns.dissolved(element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, plan.dissolvedUnit),
     };
   });
 

@@ -3,6 +3,7 @@
  * reads is declared and documented here.
  */
 import { parseArgs } from "node:util";
+import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import type { DecimalMark } from "../tables/numbers";
 import type { TemperatureScale } from "../tables/units";
 
@@ -46,6 +47,7 @@ export interface CliOptions {
   dicColumn?: string | null;
   chlorideColumn?: string | null;
   sulfurColumn?: string | null;
+  phosphateColumn?: string | null;
   /** Ignore every ligand column: evaluate in pure water. */
   pureWater: boolean;
   /** Ionic strength column (header text or 1-based number), null = "none", undefined = found by header. */
@@ -144,8 +146,10 @@ Columns (header text, or a 1-based column number)
       --chloride-column COL  chloride, mg/L (µg/L, mmol/L or mol/kg when the header says so); "none" to ignore
       --sulfur-column COL    total sulfur: a sulfate column in mg/L as SO4 (mg/L as S, mmol/L or mol/kg when the
                              header says so); "none" to ignore one
-      --pure-water           ignore every alkalinity, DIC, chloride and sulfur column (the functions' defaults),
-                             and every ionic-strength source (as --ideal)
+      --phosphate-column COL orthophosphate, mg/L as PO4 (mg/L as P when the header says "as P" or "PO4-P";
+                             mmol/L or mol/kg as P likewise); "none" to ignore one
+      --pure-water           ignore every alkalinity, DIC, chloride, sulfur and phosphate column (the functions'
+                             defaults), and every ionic-strength source (as --ideal)
       --ionic-strength-column COL
                              the column giving each row's ionic strength: a conductivity (µS/cm; mS/cm, mS/m
                              when the header says so), a TDS (mg/L or ppm; g/L) or an ionic strength (mol/kg;
@@ -253,6 +257,7 @@ export const OPTION_SPEC = {
   "dic-column": { type: "string" },
   "chloride-column": { type: "string" },
   "sulfur-column": { type: "string" },
+  "phosphate-column": { type: "string" },
   "pure-water": { type: "boolean" },
   "ionic-strength-column": { type: "string" },
   "ionic-strength": { type: "string" },
@@ -353,11 +358,12 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     dicColumn: columnOption(v["dic-column"]),
     chlorideColumn: columnOption(v["chloride-column"]),
     sulfurColumn: columnOption(v["sulfur-column"]),
+    phosphateColumn: columnOption(v["phosphate-column"]),
     pureWater: v["pure-water"] ?? false,
     ionicStrengthColumn: columnOption(v["ionic-strength-column"]),
     ionicStrength: numberOption("ionic-strength", v["ionic-strength"], (x) => x >= 0 && x <= 0.5, "an ionic strength from 0 to 0.5 mol/kg (the Davies equation's range)"),
     ideal: v.ideal ?? false,
-    temperature: numberOption("temperature", v.temperature, (x) => x >= 0 && x <= 100, "a temperature from 0 to 100 °C"),
+    temperature: numberOption("temperature", v.temperature, (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS, `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`),
     electrode: v.electrode,
     unit,
     activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,

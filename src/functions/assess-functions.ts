@@ -12,7 +12,7 @@ import { waterMargin } from "../chemistry/water";
 import { mapCells } from "./broadcast";
 import { CellError, CellInput, CellOutput, isBlank, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
-import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";
+import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 import { DISSOLVED_UNITS, engineIn, unitArg } from "./stability-functions";
 
 export const ASSESS_COLUMNS = ["species", "regime", "boundary above (V)", "boundary below (V)", "water margin (V)", "dissolved", "controlling solid"] as const;
@@ -25,12 +25,15 @@ interface Water {
   carbonate: number;
   chloride: number;
   sulfur: number;
+  /** Total orthophosphate, mol/kg as P. */
+  phosphate: number;
   ionicStrength: number;
 }
 
 /** Equilibrium dissolved metal (mol/kg) and the controlling solid (the point engine, as REDOX.DISSOLVED), or #N/A. */
 function dissolvedWithSolid(element: string, pH: number, E: number, water: Water): { total: number; controllingSolid: string } | CellError {
-  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.ionicStrength);
+  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.phosphate, water.ionicStrength);
+  if (engine instanceof CellError) return engine;
   const { total, solid } = dissolvedAtPoint(engine, pH, E);
   const controllingSolid = engine.table.species[solid].formula;
   if (!(total <= MAX_DISSOLVED)) return notAvailable(`no solid forms here: ${controllingSolid}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);
@@ -39,7 +42,8 @@ function dissolvedWithSolid(element: string, pH: number, E: number, water: Water
 
 /** The seven answers for one sample, in ASSESS_COLUMNS order (the same engine calls as the single functions). */
 function assessRow(element: string, pH: number, E: number, water: Water, unit: string): CellOutput[] {
-  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.ionicStrength);
+  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.phosphate, water.ionicStrength);
+  if (engine instanceof CellError) return ASSESS_COLUMNS.map(() => engine); // e.g. above 100 °C without S° (temperature-range.ts)
   const dominant = engine.table.species[engine.dominant(pH, E)];
   const boundary = (direction: 1 | -1): CellOutput =>
     pointBoundary(engine, pH, E, direction)?.E ?? notAvailable(`no boundary ${direction > 0 ? "above" : "below"} this point between −3 and +3 V`);
@@ -85,7 +89,7 @@ function headerRow(unit: CellInput): CellOutput[] {
   return ASSESS_COLUMNS.map((c) => (c === "dissolved" ? `dissolved (${name})` : c));
 }
 
-/** REDOX.ASSESS(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength], [unit], [header]). */
+/** REDOX.ASSESS(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [unit], [header]). */
 export function assessAt(
   element: CellInput,
   pH: CellInput,
@@ -95,19 +99,21 @@ export function assessAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
   unit?: CellInput,
   header?: CellInput,
 ): CellOutput[][] {
-  const inputs = [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, unit];
+  const inputs = [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, unit];
   const wantHeader = readHeader(header);
   const problem = wantHeader instanceof CellError ? wantHeader : widthProblem(inputs);
   if (problem) return [[toHostError(problem)]];
   const rows: CellOutput[][] = [];
   const cells = mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg, unitArg],
+    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg, unitArg],
     inputs,
-    (el, p, e, t, a, co3, cl, s, i, u) => rows.push(assessRow(el, p, e, { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, ionicStrength: i }, u)) - 1,
+    (el, p, e, t, a, co3, cl, s, po4, i, u) =>
+      rows.push(assessRow(el, p, e, { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, phosphate: po4, ionicStrength: i }, u)) - 1,
   );
   // a blank row stays blank, a row with a bad cell shows its error in every column, others their seven answers
   const out = cells.map(([cell]) => (typeof cell === "number" ? rows[cell].map(finishCell) : new Array<CellOutput>(WIDTH).fill(cell)));

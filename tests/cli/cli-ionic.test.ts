@@ -46,12 +46,12 @@ async function results(name: string, text: string, args: string[] = []) {
 }
 
 const E = -0.307;
-const direct = (I: number | string) => speciesAt("Pb", 7, E, 25, 1e-6, undefined, undefined, undefined, I)[0][0];
+const direct = (I: number | string) => speciesAt("Pb", 7, E, 25, 1e-6, undefined, undefined, undefined, undefined, I)[0][0];
 
 describe("the test point sits between the ideal and the corrected boundary", () => {
   it("the boundary below Pb2+ at pH 7 is above the point ideal and below it at I = 0.016 (the worksheet functions)", () => {
-    const ideal = boundaryFrom("Pb", 7, 0, 25, 1e-6, undefined, undefined, undefined, 0, -1)[0][0] as number;
-    const corrected = boundaryFrom("Pb", 7, 0, 25, 1e-6, undefined, undefined, undefined, 0.016, -1)[0][0] as number;
+    const ideal = boundaryFrom("Pb", 7, 0, 25, 1e-6, undefined, undefined, undefined, undefined, 0, -1)[0][0] as number;
+    const corrected = boundaryFrom("Pb", 7, 0, 25, 1e-6, undefined, undefined, undefined, undefined, 0.016, -1)[0][0] as number;
     expect(typeof ideal).toBe("number");
     expect(ideal).toBeGreaterThan(E); // ideal: the point is below the boundary, in the metal's field
     expect(corrected).toBeLessThan(E);

@@ -53,8 +53,8 @@ describe("pane: ionic strength per sample", () => {
 
     const col = (i: number) => ROWS.map((r) => [r[i] as number | string]);
     const pane = {
-      species: speciesAt(col(6), col(1), col(2), 25, 1e-6, undefined, undefined, undefined, ionic.argument).map(([s], r) => ionic.errors[r]?.code ?? s),
-      regime: regimeAt(col(6), col(1), col(2), 25, 1e-6, undefined, undefined, undefined, ionic.argument).map(([s], r) => ionic.errors[r]?.code ?? s),
+      species: speciesAt(col(6), col(1), col(2), 25, 1e-6, undefined, undefined, undefined, undefined, ionic.argument).map(([s], r) => ionic.errors[r]?.code ?? s),
+      regime: regimeAt(col(6), col(1), col(2), 25, 1e-6, undefined, undefined, undefined, undefined, ionic.argument).map(([s], r) => ionic.errors[r]?.code ?? s),
     };
     expect(pane.species[0]).toBe("Pb2+");
     expect(pane.species[1]).toBe("Pb(s)");
@@ -63,7 +63,7 @@ describe("pane: ionic strength per sample", () => {
     ROWS.forEach((row, r) => {
       if (ionic.errors[r]) return;
       const I = used[r] === "" ? undefined : (used[r] as number);
-      expect(pane.species[r]).toBe(speciesAt(row[6] as string, row[1] as number, row[2] as number, 25, 1e-6, undefined, undefined, undefined, I)[0][0]);
+      expect(pane.species[r]).toBe(speciesAt(row[6] as string, row[1] as number, row[2] as number, 25, 1e-6, undefined, undefined, undefined, undefined, I)[0][0]);
     });
 
     // the command line on the same rows (the comma in "0,8" quoted as a field of a point-decimal file)
