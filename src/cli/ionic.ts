@@ -23,7 +23,11 @@ export type IonicPlan =
 /** Output column of the ionic strength passed to the functions. */
 export const IONIC_OUTPUT = "ionic_strength_mol_kg";
 
-const WHAT: Readonly<Record<IonicColumnRole, string>> = { ionicStrength: "ionic strength", conductivity: "specific conductance", tds: "total dissolved solids" };
+const WHAT: Readonly<Record<IonicColumnRole, string>> = {
+  ionicStrength: "ionic strength",
+  conductivity: "specific conductance",
+  tds: "total dissolved solids",
+};
 
 /** The basis argument of REDOX.IONICSTRENGTH for a unit, or null for a stated ionic strength. */
 export function ionicBasis(unit: IonicUnit): "uS/cm" | "mg/L" | null {
@@ -35,9 +39,15 @@ export function ionicBasis(unit: IonicUnit): "uS/cm" | "mg/L" | null {
  * The ionic strength plan of a file. `taken` holds the columns already used (pH, potential, ligands, …); `find`
  * resolves a column named with --ionic-strength-column.
  */
-export function planIonic(headers: readonly string[], options: CliOptions, taken: readonly number[], find: (option: string, what: string) => number): IonicPlan {
+export function planIonic(
+  headers: readonly string[],
+  options: CliOptions,
+  taken: readonly number[],
+  find: (option: string, what: string) => number,
+): IonicPlan {
   const found = matchIonicColumns(headers, taken);
-  if (options.ideal && options.ionicStrength !== undefined) throw new UsageError("--ideal and --ionic-strength contradict each other; give one of them");
+  if (options.ideal && options.ionicStrength !== undefined)
+    throw new UsageError("--ideal and --ionic-strength contradict each other; give one of them");
   if (options.ideal) return { kind: "ideal", why: "--ideal", ignored: found };
   if (options.pureWater) return { kind: "ideal", why: "--pure-water", ignored: found };
   if (options.ionicStrength !== undefined) return { kind: "fixed", value: options.ionicStrength, ignored: found };
@@ -45,9 +55,13 @@ export function planIonic(headers: readonly string[], options: CliOptions, taken
   if (named === null) return { kind: "ideal", why: "--ionic-strength-column none", ignored: found };
   if (named !== undefined) {
     const index = find(named, "--ionic-strength-column");
-    if (taken.includes(index)) throw new UsageError(`--ionic-strength-column: the column "${headers[index]}" already feeds another argument`);
+    if (taken.includes(index))
+      throw new UsageError(`--ionic-strength-column: the column "${headers[index]}" already feeds another argument`);
     const own = matchIonicColumns(headers.map((h, i) => (i === index ? h : "")))[0];
-    if (own === undefined) throw new UsageError(`--ionic-strength-column: "${headers[index]}" does not say whether it is a conductivity, a TDS or an ionic strength (name one in its header)`);
+    if (own === undefined)
+      throw new UsageError(
+        `--ionic-strength-column: "${headers[index]}" does not say whether it is a conductivity, a TDS or an ionic strength (name one in its header)`,
+      );
     return { kind: "column", column: own, ignored: found.filter((c) => c.index !== index) };
   }
   if (found.length === 0) return { kind: "ideal", why: "no conductivity, TDS or ionic-strength column", ignored: [] };
@@ -61,11 +75,15 @@ export function ionicWords(column: IonicColumn): string {
 
 /** One summary line on the ionic strength used. */
 export function ionicSummary(plan: IonicPlan, headers: readonly string[]): string {
-  const aside = plan.ignored.length === 0 ? "" : `; not used: ${plan.ignored.map((c) => `"${headers[c.index]}"`).join(", ")}`;
+  const aside =
+    plan.ignored.length === 0 ? "" : `; not used: ${plan.ignored.map((c) => `"${headers[c.index]}"`).join(", ")}`;
   if (plan.kind === "ideal") return `ionic strength: none, ideal solution (${plan.why})${aside}`;
   if (plan.kind === "fixed") return `ionic strength: ${plan.value} mol/kg on every row (--ionic-strength)${aside}`;
   const c = plan.column;
   const basis = ionicBasis(c.unit);
-  const how = basis === null ? "as stated" : `REDOX.IONICSTRENGTH(value, "${basis}"), ${basis === "uS/cm" ? "Russell 1976" : "Langelier 1936"}`;
+  const how =
+    basis === null
+      ? "as stated"
+      : `REDOX.IONICSTRENGTH(value, "${basis}"), ${basis === "uS/cm" ? "Russell 1976" : "Langelier 1936"}`;
   return `ionic strength: from "${headers[c.index]}" (${ionicWords(c)}; ${how})${aside}`;
 }

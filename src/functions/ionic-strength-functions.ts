@@ -58,10 +58,13 @@ export function ionicStrengthArgument(
 ): IonicStrengthArgument {
   const blank = values.map(([v]) => isBlank(v));
   const computed: CellOutput[][] =
-    basis === null ? mapCells([ionicStrengthArg], [values as CellScalar[][]], (x) => x) : ionicStrength(values as CellScalar[][], basis);
+    basis === null
+      ? mapCells([ionicStrengthArg], [values as CellScalar[][]], (x) => x)
+      : ionicStrength(values as CellScalar[][], basis);
   const cells = computed.map((cell, r) => (blank[r] ? [""] : cell));
   const errors = cells.map(([c]) => (c instanceof CellError ? c : null));
   // a stated value goes to the functions as written, so their own message names [ionicStrength]
-  const argument = basis === null ? values.map(([v]) => [v]) : cells.map(([c]) => [c instanceof CellError ? "" : (c as CellScalar)]);
+  const argument =
+    basis === null ? values.map(([v]) => [v]) : cells.map(([c]) => [c instanceof CellError ? "" : (c as CellScalar)]);
   return { argument, cells, errors: basis === null ? errors.map(() => null) : errors };
 }

@@ -45,7 +45,20 @@ export interface IonicColumn {
 const has = (tokens: readonly string[], ...words: string[]) => words.some((w) => tokens.includes(w));
 
 /** Header words of a text field about a measurement, not the measurement. */
-const TEXT_FIELD = ["flag", "flags", "comment", "comments", "note", "notes", "remark", "remarks", "qualifier", "method", "probe", "meter"];
+const TEXT_FIELD = [
+  "flag",
+  "flags",
+  "comment",
+  "comments",
+  "note",
+  "notes",
+  "remark",
+  "remarks",
+  "qualifier",
+  "method",
+  "probe",
+  "meter",
+];
 
 function isIonicStrength(tokens: readonly string[]): boolean {
   if (has(tokens, "ionic") && has(tokens, "strength")) return true;
@@ -60,7 +73,11 @@ function isTds(tokens: readonly string[]): boolean {
   return has(tokens, "tds") || (has(tokens, "dissolved") && has(tokens, "solids"));
 }
 
-const TESTS: Readonly<Record<IonicColumnRole, (t: readonly string[]) => boolean>> = { ionicStrength: isIonicStrength, conductivity: isConductivity, tds: isTds };
+const TESTS: Readonly<Record<IonicColumnRole, (t: readonly string[]) => boolean>> = {
+  ionicStrength: isIonicStrength,
+  conductivity: isConductivity,
+  tds: isTds,
+};
 
 /** Whether a header names a column of `role` (and not a text field about it). */
 export function headerIsIonic(role: IonicColumnRole, tokens: readonly string[]): boolean {
@@ -83,7 +100,9 @@ export function ionicUnit(role: IonicColumnRole, tokens: readonly string[]): Ion
  * conductivity, TDS); the first matching column (left to right) per role.
  */
 export function matchIonicColumns(headers: readonly unknown[], taken: Iterable<number> = []): IonicColumn[] {
-  const tokens = headers.map((h) => headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)));
+  const tokens = headers.map((h) =>
+    headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)),
+  );
   const used = new Set(taken);
   const out: IonicColumn[] = [];
   for (const role of IONIC_COLUMN_ROLES) {
@@ -105,7 +124,11 @@ export function isNumericColumn(cells: readonly unknown[]): boolean {
   for (const c of cells) {
     if (c === null || c === undefined || (typeof c === "string" && c.trim() === "")) continue;
     filled++;
-    if ((typeof c === "number" && Number.isFinite(c)) || (typeof c === "string" && (readNumber(c.trim(), ".") ?? readNumber(c.trim(), ",")) !== null)) numbers++;
+    if (
+      (typeof c === "number" && Number.isFinite(c)) ||
+      (typeof c === "string" && (readNumber(c.trim(), ".") ?? readNumber(c.trim(), ",")) !== null)
+    )
+      numbers++;
   }
   return filled === 0 || numbers * 2 >= filled;
 }

@@ -10,7 +10,11 @@ import type { CellScalar } from "../functions/cell-values";
 import { IONIC_UNITS, isNumericColumn, matchIonicColumns, readNumber, type IonicColumn } from "../tables";
 
 /** The column the pane reads the ionic strength from, or null: the first by precedence whose cells are numbers. */
-export function findIonicColumn(headers: readonly unknown[], taken: readonly number[], rows: readonly (readonly unknown[])[]): IonicColumn | null {
+export function findIonicColumn(
+  headers: readonly unknown[],
+  taken: readonly number[],
+  rows: readonly (readonly unknown[])[],
+): IonicColumn | null {
   const found = matchIonicColumns(headers, taken);
   return found.find((c) => isNumericColumn(rows.map((r) => r[c.index]))) ?? null;
 }
@@ -33,7 +37,11 @@ export function ionicArgumentFor(column: IonicColumn, rows: readonly (readonly u
   );
 }
 
-const SOURCE = { "uS/cm": "REDOX.IONICSTRENGTH from specific conductance, Russell 1976", "mg/L": "REDOX.IONICSTRENGTH from TDS, Langelier 1936", "mol/kg": "as stated" } as const;
+const SOURCE = {
+  "uS/cm": "REDOX.IONICSTRENGTH from specific conductance, Russell 1976",
+  "mg/L": "REDOX.IONICSTRENGTH from TDS, Langelier 1936",
+  "mol/kg": "as stated",
+} as const;
 
 /** "I 0.016 mol/kg" for a sample's hover; "" when its answer is ideal. */
 export function ionicHover(used: unknown): string {

@@ -15,7 +15,14 @@ import { toSHEAt } from "../functions/electrode-functions";
 import { dissolvedAt, regimeAt, speciesAt } from "../functions/stability-functions";
 import { waterMarginAt } from "../functions/water-functions";
 import { ionicArgumentFor } from "./ionic-input";
-import { alkalinityFactor, isAlkalinityUnit, molalFactor, type FormulaParts, type IonicColumn, type WaterColumn } from "../tables";
+import {
+  alkalinityFactor,
+  isAlkalinityUnit,
+  molalFactor,
+  type FormulaParts,
+  type IonicColumn,
+  type WaterColumn,
+} from "../tables";
 
 /** One ligand argument read per row: the column's number × factor is mg/L as CaCO3 (alkalinity) or mol/kg (total). */
 export interface RowLigand {

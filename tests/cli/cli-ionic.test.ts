@@ -41,17 +41,31 @@ async function results(name: string, text: string, args: string[] = []) {
   const stdout = new Capture();
   const stderr = new Capture();
   const r = await runCommand([input, "-o", output, "--no-svg", "--full-precision", ...args], { stdout, stderr });
-  const rows = r.code <= 1 ? (parseSync(readFileSync(output, "utf8"), { columns: true }) as Record<string, string>[]) : [];
+  const rows =
+    r.code <= 1 ? (parseSync(readFileSync(output, "utf8"), { columns: true }) as Record<string, string>[]) : [];
   return { code: r.code, rows, stdout: stdout.text, stderr: stderr.text };
 }
 
 const E = -0.307;
-const direct = (I: number | string) => speciesAt("Pb", 7, E, 25, 1e-6, undefined, undefined, undefined, undefined, I)[0][0];
+const direct = (I: number | string) =>
+  speciesAt("Pb", 7, E, 25, 1e-6, undefined, undefined, undefined, undefined, I)[0][0];
 
 describe("the test point sits between the ideal and the corrected boundary", () => {
   it("the boundary below Pb2+ at pH 7 is above the point ideal and below it at I = 0.016 (the worksheet functions)", () => {
     const ideal = boundaryFrom("Pb", 7, 0, 25, 1e-6, undefined, undefined, undefined, undefined, 0, -1)[0][0] as number;
-    const corrected = boundaryFrom("Pb", 7, 0, 25, 1e-6, undefined, undefined, undefined, undefined, 0.016, -1)[0][0] as number;
+    const corrected = boundaryFrom(
+      "Pb",
+      7,
+      0,
+      25,
+      1e-6,
+      undefined,
+      undefined,
+      undefined,
+      undefined,
+      0.016,
+      -1,
+    )[0][0] as number;
     expect(typeof ideal).toBe("number");
     expect(ideal).toBeGreaterThan(E); // ideal: the point is below the boundary, in the metal's field
     expect(corrected).toBeLessThan(E);
@@ -71,15 +85,26 @@ describe("a conductivity column changes the answer near a boundary", () => {
     expect(rows[0].metal_species).toBe(direct(ionicStrengthAt(1000, "uS/cm")[0][0] as number));
     expect(rows[1].ionic_strength_mol_kg).toBe("");
     expect(rows[1].metal_species).toBe("Pb(s)");
-    expect(stderr).toMatch(/Conductivity \(µS\/cm\).*blank; this row is evaluated without the ionic-strength correction/);
+    expect(stderr).toMatch(
+      /Conductivity \(µS\/cm\).*blank; this row is evaluated without the ionic-strength correction/,
+    );
     expect(rows[2].ionic_strength_mol_kg).toBe("#VALUE!");
     expect(rows[2].metal_species).toBe("#VALUE!");
-    expect(rows[2].errors).toMatch(/^Conductivity \(µS\/cm\): 40000 uS\/cm gives I = 0\.640 mol\/kg, above the 0\.5 mol\/kg/);
-    expect(stdout).toMatch(/ionic strength: from "Conductivity \(µS\/cm\)" \(specific conductance in µS\/cm; REDOX\.IONICSTRENGTH\(value, "uS\/cm"\), Russell 1976\)/);
+    expect(rows[2].errors).toMatch(
+      /^Conductivity \(µS\/cm\): 40000 uS\/cm gives I = 0\.640 mol\/kg, above the 0\.5 mol\/kg/,
+    );
+    expect(stdout).toMatch(
+      /ionic strength: from "Conductivity \(µS\/cm\)" \(specific conductance in µS\/cm; REDOX\.IONICSTRENGTH\(value, "uS\/cm"\), Russell 1976\)/,
+    );
   });
 
   it("mS/cm is × 1000; TDS 640 mg/L (Langelier: 0.016 mol/kg) and a stated I give the same answer", async () => {
-    for (const [header, value] of [["EC (mS/cm)", "1"], ["TDS (mg/L)", "640"], ["TDS (g/L)", "0.64"], ["Ionic strength (mol/L)", "0.016"]]) {
+    for (const [header, value] of [
+      ["EC (mS/cm)", "1"],
+      ["TDS (mg/L)", "640"],
+      ["TDS (g/L)", "0.64"],
+      ["Ionic strength (mol/L)", "0.016"],
+    ]) {
       const { rows } = await results("units.csv", `pH,Eh (V),${header},metal\n7,-0.307,${value},Pb\n`);
       expect(Number(rows[0].ionic_strength_mol_kg), header).toBeCloseTo(0.016, 12);
       expect(rows[0].metal_species, header).toBe("Pb2+");
@@ -112,7 +137,10 @@ describe("a conductivity column changes the answer near a boundary", () => {
   });
 
   it("a stated ionic strength above 0.5 mol/kg is the functions' #VALUE! for that row", async () => {
-    const { code, rows } = await results("above.csv", "pH,Eh (V),Ionic strength (mol/kg),metal\n7,-0.307,0.8,Pb\n7,-0.307,0.016,Pb\n");
+    const { code, rows } = await results(
+      "above.csv",
+      "pH,Eh (V),Ionic strength (mol/kg),metal\n7,-0.307,0.8,Pb\n7,-0.307,0.016,Pb\n",
+    );
     expect(code).toBe(1);
     expect(rows[0].metal_species).toBe("#VALUE!");
     expect(rows[0].errors).toMatch(/^Ionic strength \(mol\/kg\):/);

@@ -1,5 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { headerTokens, ionicStrengthOf, isNumericColumn, matchHeaders, matchIonicColumns, matchWaterColumns } from "../../src/tables";
+import {
+  headerTokens,
+  ionicStrengthOf,
+  isNumericColumn,
+  matchHeaders,
+  matchIonicColumns,
+  matchWaterColumns,
+} from "../../src/tables";
 
 const roles = (headers: string[]) => matchIonicColumns(headers).map((c) => [c.role, c.index, c.unit]);
 
@@ -27,7 +34,11 @@ describe("ionic-strength columns by header", () => {
   });
 
   it("lists every kind present in the order they win: stated I, conductivity, TDS", () => {
-    expect(roles(["TDS (mg/L)", "EC (uS/cm)", "Ionic strength"]).map((r) => r[0])).toEqual(["ionicStrength", "conductivity", "tds"]);
+    expect(roles(["TDS (mg/L)", "EC (uS/cm)", "Ionic strength"]).map((r) => r[0])).toEqual([
+      "ionicStrength",
+      "conductivity",
+      "tds",
+    ]);
   });
 
   it("never takes a text field about the measurement", () => {
@@ -35,11 +46,24 @@ describe("ionic-strength columns by header", () => {
   });
 
   it("leaves the other roles as they were: a conductivity header naming 25 °C is not the temperature", () => {
-    const headers = ["Sample ID", "pH", "ORP (mV) vs SHE", "Conductivity (µS/cm at 25 °C)", "Temp (°C)", "Alkalinity (mg/L CaCO3)", "Chloride (mg/L)"];
+    const headers = [
+      "Sample ID",
+      "pH",
+      "ORP (mV) vs SHE",
+      "Conductivity (µS/cm at 25 °C)",
+      "Temp (°C)",
+      "Alkalinity (mg/L CaCO3)",
+      "Chloride (mg/L)",
+    ];
     const { mapping } = matchHeaders(headers);
     expect(mapping.temperature).toBe(4);
-    expect(matchWaterColumns(headers, mapping)).toEqual({ alkalinity: { index: 5, unit: "mg/L CaCO3" }, chloride: { index: 6, unit: "mg/L" } });
-    expect(matchIonicColumns(headers, Object.values(mapping))).toEqual([{ role: "conductivity", index: 3, unit: "uS/cm" }]);
+    expect(matchWaterColumns(headers, mapping)).toEqual({
+      alkalinity: { index: 5, unit: "mg/L CaCO3" },
+      chloride: { index: 6, unit: "mg/L" },
+    });
+    expect(matchIonicColumns(headers, Object.values(mapping))).toEqual([
+      { role: "conductivity", index: 3, unit: "uS/cm" },
+    ]);
     expect(matchIonicColumns(headers, [3])).toEqual([]);
   });
 

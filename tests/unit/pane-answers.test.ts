@@ -97,7 +97,18 @@ describe("pane, command line and worksheet functions on every demo row", () => {
           species: speciesAt(metal, pH, e as number, t, 1e-6, co3)[0][0],
           regime: regimeAt(metal, pH, e as number, t, 1e-6, co3)[0][0],
           margin: waterMarginAt(pH, e as number, t)[0][0],
-          dissolved: dissolvedAt(metal, pH, e as number, t, co3, undefined, undefined, undefined, undefined, "ug/L")[0][0],
+          dissolved: dissolvedAt(
+            metal,
+            pH,
+            e as number,
+            t,
+            co3,
+            undefined,
+            undefined,
+            undefined,
+            undefined,
+            "ug/L",
+          )[0][0],
         };
         if (cellOf(row[m.temperature]) === "") {
           // a blank temperature in a column is a missing measurement: no answer in the pane or the command line
@@ -213,7 +224,10 @@ describe("a log with a conductivity column (fixture, invented)", () => {
       stderr: new PassThrough(),
     });
     expect(result.code).toBe(1); // row F: 40 000 µS/cm is above the Davies equation's 0.5 mol/kg
-    const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
+    const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<
+      string,
+      string
+    >[];
     const t = tableFromText(text, "cond");
     const headers = t.headers as string[];
     const m = matchHeaders(headers).mapping;
@@ -239,13 +253,26 @@ describe("a log with a conductivity column (fixture, invented)", () => {
       const ideal = answerSamples(plan, t.rows);
       answers.forEach((a, r) => {
         const line = lines[r];
-        expect("error" in a ? "#VALUE!" : `${a.species}/${a.regime}`, `${metal} row ${r}`).toBe(`${line[`${metal}_species`]}/${line[`${metal}_regime`]}`.replace("#VALUE!/#VALUE!", "#VALUE!"));
+        expect("error" in a ? "#VALUE!" : `${a.species}/${a.regime}`, `${metal} row ${r}`).toBe(
+          `${line[`${metal}_species`]}/${line[`${metal}_regime`]}`.replace("#VALUE!/#VALUE!", "#VALUE!"),
+        );
         if ("error" in a) return;
         // the worksheet: this row alone, REDOX.IONICSTRENGTH of its conductivity in [ionicStrength]
         const row = t.rows[r].map(cellOf);
         const I = row[5] === "" ? "" : ionicStrengthAt(row[5] as number, "uS/cm")[0][0];
         const co3 = dicAt(row[4] as number, row[1] as number, row[3] as number)[0][0] as number;
-        const sheet = speciesAt(metal, row[1] as number, row[2] as number, row[3] as number, 1e-6, co3, undefined, undefined, undefined, I as number)[0][0];
+        const sheet = speciesAt(
+          metal,
+          row[1] as number,
+          row[2] as number,
+          row[3] as number,
+          1e-6,
+          co3,
+          undefined,
+          undefined,
+          undefined,
+          I as number,
+        )[0][0];
         expect(a.species, `${metal} row ${r} sheet`).toBe(sheet);
         expect(a.ionicStrength === null ? "" : a.ionicStrength).toBe(I === "" ? "" : I);
         if (a.ionicStrength !== null) expect(Number(line.ionic_strength_mol_kg)).toBeCloseTo(a.ionicStrength, 6);

@@ -36,7 +36,14 @@ describe("pane: ionic strength per sample", () => {
     const column = findIonicColumn(HEADERS, [0, 1, 2, 6], ROWS);
     expect(column).toEqual({ role: "conductivity", index: 4, unit: "mS/cm" });
     // a header that reads like conductivity but holds text is never a source
-    const textual = findIonicColumn(["pH", "Eh", "EC"], [0, 1], [[7, 0, "high"], [7, 0, "low"]]);
+    const textual = findIonicColumn(
+      ["pH", "Eh", "EC"],
+      [0, 1],
+      [
+        [7, 0, "high"],
+        [7, 0, "low"],
+      ],
+    );
     expect(textual).toBeNull();
   });
 
@@ -53,8 +60,30 @@ describe("pane: ionic strength per sample", () => {
 
     const col = (i: number) => ROWS.map((r) => [r[i] as number | string]);
     const pane = {
-      species: speciesAt(col(6), col(1), col(2), 25, 1e-6, undefined, undefined, undefined, undefined, ionic.argument).map(([s], r) => ionic.errors[r]?.code ?? s),
-      regime: regimeAt(col(6), col(1), col(2), 25, 1e-6, undefined, undefined, undefined, undefined, ionic.argument).map(([s], r) => ionic.errors[r]?.code ?? s),
+      species: speciesAt(
+        col(6),
+        col(1),
+        col(2),
+        25,
+        1e-6,
+        undefined,
+        undefined,
+        undefined,
+        undefined,
+        ionic.argument,
+      ).map(([s], r) => ionic.errors[r]?.code ?? s),
+      regime: regimeAt(
+        col(6),
+        col(1),
+        col(2),
+        25,
+        1e-6,
+        undefined,
+        undefined,
+        undefined,
+        undefined,
+        ionic.argument,
+      ).map(([s], r) => ionic.errors[r]?.code ?? s),
     };
     expect(pane.species[0]).toBe("Pb2+");
     expect(pane.species[1]).toBe("Pb(s)");
@@ -63,16 +92,37 @@ describe("pane: ionic strength per sample", () => {
     ROWS.forEach((row, r) => {
       if (ionic.errors[r]) return;
       const I = used[r] === "" ? undefined : (used[r] as number);
-      expect(pane.species[r]).toBe(speciesAt(row[6] as string, row[1] as number, row[2] as number, 25, 1e-6, undefined, undefined, undefined, undefined, I)[0][0]);
+      expect(pane.species[r]).toBe(
+        speciesAt(
+          row[6] as string,
+          row[1] as number,
+          row[2] as number,
+          25,
+          1e-6,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          I,
+        )[0][0],
+      );
     });
 
     // the command line on the same rows (the comma in "0,8" quoted as a field of a point-decimal file)
     const dir = mkdtempSync(join(tmpdir(), "redox-pane-ionic-"));
     try {
-      const csv = [HEADERS.join(","), ...ROWS.map((r) => r.map((c) => (String(c).includes(",") ? `"${String(c).replace(",", ".")}"` : String(c))).join(","))].join("\n");
+      const csv = [
+        HEADERS.join(","),
+        ...ROWS.map((r) =>
+          r.map((c) => (String(c).includes(",") ? `"${String(c).replace(",", ".")}"` : String(c))).join(","),
+        ),
+      ].join("\n");
       writeFileSync(join(dir, "log.csv"), csv + "\n");
       const out = join(dir, "out.csv");
-      await runCommand([join(dir, "log.csv"), "-o", out, "--no-svg", "--quiet", "--full-precision"], { stdout: new Capture(), stderr: new Capture() });
+      await runCommand([join(dir, "log.csv"), "-o", out, "--no-svg", "--quiet", "--full-precision"], {
+        stdout: new Capture(),
+        stderr: new Capture(),
+      });
       const cli = parseSync(readFileSync(out, "utf8"), { columns: true }) as Record<string, string>[];
       expect(cli.map((row) => row.metal_species)).toEqual(pane.species);
       expect(cli.map((row) => row.metal_regime)).toEqual(pane.regime);
@@ -88,7 +138,9 @@ describe("pane: ionic strength per sample", () => {
     const column = findIonicColumn(HEADERS, [0, 1, 2, 6], ROWS)!;
     const ionic = ionicArgumentFor(column, ROWS);
     const caption = ionicCaption(HEADERS[column.index], column, ionic);
-    expect(caption).toMatch(/^Ionic strength: each sample's own from "Conductivity \(mS\/cm\)" \(mS\/cm, REDOX\.IONICSTRENGTH from specific conductance, Russell 1976\), median 0\.0128 mol\/kg/);
+    expect(caption).toMatch(
+      /^Ionic strength: each sample's own from "Conductivity \(mS\/cm\)" \(mS\/cm, REDOX\.IONICSTRENGTH from specific conductance, Russell 1976\), median 0\.0128 mol\/kg/,
+    );
     expect(caption).toMatch(/1 blank row answered without the correction/);
     expect(ionicHover(ionic.cells[0][0])).toBe("I 0.016 mol/kg");
     expect(ionicHover("")).toBe("");
