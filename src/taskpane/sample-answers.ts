@@ -7,7 +7,7 @@
  * second implementation. The diagram behind the markers is drawn separately, at one temperature and one water.
  */
 import { getDatabase } from "../chemistry/database";
-import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
+import { LIGAND_ORDER, type LigandName, type LigandTotals } from "../chemistry/ligand-cells";
 import type { Regime } from "../chemistry/system";
 import { CellError, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
 import { dicAt } from "../functions/carbonate-functions";
@@ -168,7 +168,7 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
       return { error: "a required cell is blank" };
     const d = dissolved[r][0];
     const water: LigandTotals = {};
-    for (const ligand of ["carbonate", "chloride", "sulfur"] as const) {
+    for (const ligand of LIGAND_ORDER) {
       const v = at(args[ligand], r);
       if (typeof v === "number" && v > 0) water[ligand] = v;
     }
