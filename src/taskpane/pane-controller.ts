@@ -18,7 +18,8 @@ import { fitWindow, isClustered, zoomWindow } from "../diagram/view-window";
 import { DiagramView, type DrawingOptions } from "./pane-view";
 import { resultsCsv, resultsTsv } from "./results-table";
 import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
-import { COLUMN_ROLES, ColumnMapping, matchHeaders, WaterColumns } from "../tables";
+import { COLUMN_ROLES, ColumnMapping, matchHeaders, WaterColumns, type IonicColumn } from "../tables";
+import { findIonicColumn } from "./ionic-input";
 import { ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
 import type { HostAdapter, PaneSettings } from "./host";
 import { download } from "./png-export";
@@ -66,6 +67,8 @@ export class DiagramPane {
   private plotted: { samples: PlottedSample[]; unit: PotentialUnit } = { samples: [], unit: "V" };
   private settings: PaneSettings;
   private waterFound: WaterColumns = {};
+  /** The conductivity, TDS or ionic-strength column used automatically for each sample's [ionicStrength]. */
+  private ionicFound: IonicColumn | null = null;
   private view!: DiagramView;
   /** "fit": the samples' window; "full": pH −2…16, ±2 V; null: fit when the samples are clustered. */
   private viewMode: "fit" | "full" | null = null;
@@ -202,6 +205,8 @@ export class DiagramPane {
     this.mapping = mapping;
     buildColumnControls(headers, this.mapping, (role, index) => this.chooseColumn(role, index));
     this.waterFound = buildWaterSources(this.table, this.mapping, this.settings);
+    const taken = [...Object.values(this.mapping), ...Object.values(this.waterFound).map((c) => c.index)].filter((i) => i >= 0);
+    this.ionicFound = findIonicColumn(headers, taken, this.table.rows);
   }
 
   /** The metal most rows of column `index` name, if any does. */
@@ -308,7 +313,7 @@ export class DiagramPane {
     const regions = shownRegions(system, window, scale);
     showWater(resolved, hasLigands(resolved.diagram) || resolved.fromColumns.length > 0);
     const title = this.diagramTitle(at.metal, resolved.diagram);
-    const caption = this.caption(title, at, scale, rows, samples.length, resolved);
+    const caption = this.caption(title, at, scale, rows, samples.length, [waterCaption(resolved), own.ionicLine]);
     const showKineticBand = input("kinetic").checked;
     this.plotted = { samples, unit: at.unit };
     const sites = siteColours(own.samples);
@@ -341,7 +346,7 @@ export class DiagramPane {
   }
 
   private rowSource() {
-    return this.table ? { table: this.table, mapping: this.mapping, temperatureUnit: this.temperatureUnit } : null;
+    return this.table ? { table: this.table, mapping: this.mapping, temperatureUnit: this.temperatureUnit, ionic: this.ionicFound } : null;
   }
 
   /** "Iron in water", with the water's ligands named when it has any. */
@@ -350,14 +355,16 @@ export class DiagramPane {
     return hasLigands(totals) ? `${metalTitle} in water with ${ligandNames(totals)}` : `${metalTitle} in water`;
   }
 
-  /** The caption: conditions, the markers' promise, the water, the samples' source and the data's compilation. */
-  private caption(title: string, at: AnswerConditions, scale: DisplayScale, rows: ReadRows, drawn: number, resolved: ReturnType<typeof resolveWater>): string[] {
+  /**
+   * The caption: conditions, the markers' promise, the water's lines (ligands, ionic strength; blank ones left
+   * out), the samples' source and the data's compilation.
+   */
+  private caption(title: string, at: AnswerConditions, scale: DisplayScale, rows: ReadRows, drawn: number, waterLines: string[]): string[] {
     const compilation = this.db.system(at.metal)?.compilation ?? "";
-    const waterLine = waterCaption(resolved);
     return [
       `${title} at ${rows.celsius} °C${rows.atMedian ? " (the rows' median temperature)" : ""}, dissolved activity ${formatActivity(at.activity)}, potentials in ${at.unit} vs ${scale.electrode}.`,
       ...(drawn > 0 ? [OWN_ANSWERS] : []),
-      ...(waterLine ? [waterLine] : []),
+      ...waterLines.filter((line) => line !== ""),
       `Samples: ${this.table ? `${this.table.source}; ${drawn} drawn, ${rows.read?.skipped.length ?? 0} not drawn` : "none"}. Thermodynamic data: ${firstSentence(compilation)}`,
     ];
   }

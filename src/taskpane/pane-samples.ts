@@ -4,7 +4,8 @@
  */
 import { hasLigands, LIGAND_ORDER, LigandName } from "../chemistry/ligand-cells";
 import type { DisplayScale, PlottedSample, PotentialUnit } from "../diagram/diagram-model";
-import type { ColumnMapping } from "../tables";
+import type { ColumnMapping, IonicColumn } from "../tables";
+import { ionicArgumentFor, ionicCaption } from "./ionic-input";
 import type { WaterSettings } from "./ligand-inputs";
 import { AnswerPlan, answerSamples, RowLigand, rowLigand } from "./sample-answers";
 import type { readSamples, SampleTable, SkippedRow } from "./sample-table";
@@ -23,6 +24,8 @@ export interface RowSource {
   table: SampleTable;
   mapping: ColumnMapping;
   temperatureUnit: "C" | "F";
+  /** The conductivity, TDS or ionic-strength column used automatically for each sample's [ionicStrength]. */
+  ionic: IonicColumn | null;
 }
 
 /** The worksheet functions' plan for the rows: their columns, the ligands read per row and the typed totals. */
@@ -42,21 +45,27 @@ function answerPlan(source: RowSource, water: WaterSettings, at: AnswerCondition
     temperatureUnit: source.temperatureUnit,
     ligands,
     typed,
+    ...(source.ionic ? { ionic: source.ionic } : {}),
   };
 }
 
-/** Each read row's own answer as a plotted sample; rows the functions refuse in `failed` with their message. */
+/**
+ * Each read row's own answer as a plotted sample; rows the functions refuse in `failed` with their message;
+ * `ionicLine` the caption's words on the ionic-strength column used, if any.
+ */
 export function ownAnswers(
   source: RowSource | null,
   read: ReturnType<typeof readSamples> | null,
   water: WaterSettings,
   at: AnswerConditions,
   scale: DisplayScale,
-): { samples: PlottedSample[]; failed: SkippedRow[] } {
-  if (!source || !read) return { samples: [], failed: [] };
+): { samples: PlottedSample[]; failed: SkippedRow[]; ionicLine: string } {
+  if (!source || !read) return { samples: [], failed: [], ionicLine: "" };
   const { table, mapping } = source;
   const rows = read.indices.map((i) => table.rows[i]);
   const answers = answerSamples(answerPlan(source, water, at), rows);
+  const ionic = source.ionic;
+  const ionicLine = ionic && rows.length > 0 ? ionicCaption(table.headers[ionic.index], ionic, ionicArgumentFor(ionic, rows)) : "";
   const samples: PlottedSample[] = [];
   const failed: SkippedRow[] = [];
   read.samples.forEach((s, k) => {
@@ -78,7 +87,8 @@ export function ownAnswers(
       equilibrium: a.dissolved,
       site: mapping.site >= 0 ? String(rows[k][mapping.site] ?? "").trim() : undefined,
     };
-    samples.push(hasLigands(a.water) ? { ...plotted, ligands: a.water } : plotted);
+    const withIonic = a.ionicStrength === null ? plotted : { ...plotted, ionicStrength: a.ionicStrength };
+    samples.push(hasLigands(a.water) ? { ...withIonic, ligands: a.water } : withIonic);
   });
-  return { samples, failed };
+  return { samples, failed, ionicLine };
 }
