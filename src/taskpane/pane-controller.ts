@@ -25,7 +25,15 @@ import type { HostAdapter, PaneSettings } from "./host";
 import { download } from "./png-export";
 import { median, readSamples, SampleTable } from "./sample-table";
 import { $, input, select } from "./pane-dom";
-import { buildColumnControls, fillSettingControls, settingsFromControls, showWindow, siteColours, siteFiltered, windowFromControls } from "./pane-controls";
+import {
+  buildColumnControls,
+  fillSettingControls,
+  settingsFromControls,
+  showWindow,
+  siteColours,
+  siteFiltered,
+  windowFromControls,
+} from "./pane-controls";
 import { buildWaterSources, readWater, showWater, waterToRemember } from "./pane-water-sources";
 import { copyText, Drawn, exportFileName, exportPng, exportSvg, insertPicture } from "./pane-export";
 import { showResults, showSkipped, showTemperatureSpread } from "./pane-notes";
@@ -59,7 +67,15 @@ export class DiagramPane {
   private readonly db = getDatabase();
   private readonly cache = new SystemCache(this.db);
   private table: SampleTable | null = null;
-  private mapping: ColumnMapping = { pH: -1, potential: -1, temperature: -1, id: -1, site: -1, dissolved: -1, metal: -1 };
+  private mapping: ColumnMapping = {
+    pH: -1,
+    potential: -1,
+    temperature: -1,
+    id: -1,
+    site: -1,
+    dissolved: -1,
+    metal: -1,
+  };
   private temperatureUnit: "C" | "F" = "C";
   private manualTemperature = false;
   private window: AxisWindow | null = null;
@@ -205,7 +221,9 @@ export class DiagramPane {
     this.mapping = mapping;
     buildColumnControls(headers, this.mapping, (role, index) => this.chooseColumn(role, index));
     this.waterFound = buildWaterSources(this.table, this.mapping, this.settings);
-    const taken = [...Object.values(this.mapping), ...Object.values(this.waterFound).map((c) => c.index)].filter((i) => i >= 0);
+    const taken = [...Object.values(this.mapping), ...Object.values(this.waterFound).map((c) => c.index)].filter(
+      (i) => i >= 0,
+    );
     this.ionicFound = findIonicColumn(headers, taken, this.table.rows);
   }
 
@@ -223,7 +241,10 @@ export class DiagramPane {
   private chooseColumn(role: keyof ColumnMapping, index: number): void {
     const headers = this.table?.headers ?? [];
     this.mapping = { ...this.mapping, [role]: index };
-    this.settings.columns = { ...(this.settings.columns ?? {}), [role]: this.mapping[role] >= 0 ? headers[this.mapping[role]] : "" };
+    this.settings.columns = {
+      ...(this.settings.columns ?? {}),
+      [role]: this.mapping[role] >= 0 ? headers[this.mapping[role]] : "",
+    };
     void this.host.saveSettings(this.settings);
     this.draw();
   }
@@ -231,7 +252,9 @@ export class DiagramPane {
   /** The system of a water: the ligand-free one when no ligand is present. */
   private systemIn(metal: string, celsius: number, activity: number, totals: LigandTotals): MetalSystem {
     if (!hasLigands(totals)) return this.cache.get(metal, celsius, activity);
-    return this.cache.get(metal, celsius, activity, ligandKey(totals), () => buildLigandSystem(this.db, metal, { celsius, activity }, totals));
+    return this.cache.get(metal, celsius, activity, ligandKey(totals), () =>
+      buildLigandSystem(this.db, metal, { celsius, activity }, totals),
+    );
   }
 
   private remember(): void {
@@ -264,7 +287,8 @@ export class DiagramPane {
       celsius = Math.round(median(temperatures) * 10) / 10;
       input("temperature").value = String(celsius);
     }
-    if (!(celsius >= MIN_CELSIUS && celsius <= MAX_CELSIUS)) return { error: `Temperature: ${MIN_CELSIUS} to ${MAX_CELSIUS} °C.` };
+    if (!(celsius >= MIN_CELSIUS && celsius <= MAX_CELSIUS))
+      return { error: `Temperature: ${MIN_CELSIUS} to ${MAX_CELSIUS} °C.` };
     if (this.table) read = readSamples(this.table, { ...options, celsius });
     return { read, temperatures, celsius, atMedian: !this.manualTemperature && temperatures.length > 0 };
   }
@@ -275,7 +299,10 @@ export class DiagramPane {
     const electrode = select("electrode").value;
     const unit = select("unit").value as PotentialUnit;
     const activity = Number(input("activity").value);
-    if (!(activity > 0 && activity <= MAX_ACTIVITY)) return this.status(`Dissolved activity: a number above 0 and at most ${MAX_ACTIVITY}, e.g. ${DEFAULT_ACTIVITY.toExponential()}.`);
+    if (!(activity > 0 && activity <= MAX_ACTIVITY))
+      return this.status(
+        `Dissolved activity: a number above 0 and at most ${MAX_ACTIVITY}, e.g. ${DEFAULT_ACTIVITY.toExponential()}.`,
+      );
     const waterInput = readWater(this.table);
     if ("error" in waterInput) return this.status(waterInput.error);
     const rows = this.readRows({
@@ -303,7 +330,13 @@ export class DiagramPane {
   }
 
   /** The built system with its samples: window, regions, caption, the view, the text panels and the export. */
-  private drawSystem(system: MetalSystem, at: AnswerConditions, rows: ReadRows, resolved: ReturnType<typeof resolveWater>, water: WaterSettings): void {
+  private drawSystem(
+    system: MetalSystem,
+    at: AnswerConditions,
+    rows: ReadRows,
+    resolved: ReturnType<typeof resolveWater>,
+    water: WaterSettings,
+  ): void {
     const { read, celsius } = rows;
     const scale = displayScale(at.electrode, at.unit, celsius);
     const own = ownAnswers(this.rowSource(), read, water, at, scale);
@@ -334,7 +367,12 @@ export class DiagramPane {
     };
     const compare = this.compareOptions(drawing, at, resolved.diagram, read, water, scale);
     $("point-info").textContent = POINT_PROMPT; // the previous drawing's sample may not be on this one
-    this.view.show({ options: drawing, caption, compare, legend: { kinetic: showKineticBand, ligandEdges: ligandEdges(system), sites } });
+    this.view.show({
+      options: drawing,
+      caption,
+      compare,
+      legend: { kinetic: showKineticBand, ligandEdges: ligandEdges(system), sites },
+    });
     this.drawn = {
       caption,
       render: (width, height, titles = true) => renderDiagramSvg({ ...drawing, width, height, sampleTitles: titles }),
@@ -342,11 +380,14 @@ export class DiagramPane {
     const pure = hasLigands(resolved.diagram) ? this.systemIn(system.element, celsius, system.activity, {}) : system;
     this.equationsText = showResults(this.db, samples, system, pure, celsius, resolved.diagram);
     showSkipped(read, own.failed, this.table !== null && (this.mapping.pH < 0 || this.mapping.potential < 0));
-    if (this.table) this.status(`${samples.length} sample${samples.length === 1 ? "" : "s"} drawn from ${this.table.source}.`);
+    if (this.table)
+      this.status(`${samples.length} sample${samples.length === 1 ? "" : "s"} drawn from ${this.table.source}.`);
   }
 
   private rowSource() {
-    return this.table ? { table: this.table, mapping: this.mapping, temperatureUnit: this.temperatureUnit, ionic: this.ionicFound } : null;
+    return this.table
+      ? { table: this.table, mapping: this.mapping, temperatureUnit: this.temperatureUnit, ionic: this.ionicFound }
+      : null;
   }
 
   /** "Iron in water", with the water's ligands named when it has any. */
@@ -359,7 +400,14 @@ export class DiagramPane {
    * The caption: conditions, the markers' promise, the water's lines (ligands, ionic strength; blank ones left
    * out), the samples' source and the data's compilation.
    */
-  private caption(title: string, at: AnswerConditions, scale: DisplayScale, rows: ReadRows, drawn: number, waterLines: string[]): string[] {
+  private caption(
+    title: string,
+    at: AnswerConditions,
+    scale: DisplayScale,
+    rows: ReadRows,
+    drawn: number,
+    waterLines: string[],
+  ): string[] {
     const compilation = this.db.system(at.metal)?.compilation ?? "";
     return [
       `${title} at ${rows.celsius} °C${rows.atMedian ? " (the rows' median temperature)" : ""}, dissolved activity ${formatActivity(at.activity)}, potentials in ${at.unit} vs ${scale.electrode}.`,
@@ -389,7 +437,10 @@ export class DiagramPane {
   }
 
   private selectRow(row: number): void {
-    if (this.host.selectRow && Number.isFinite(row)) void this.host.selectRow(row).catch((e: unknown) => this.status(`Could not select row ${row}: ${(e as Error).message}`));
+    if (this.host.selectRow && Number.isFinite(row))
+      void this.host
+        .selectRow(row)
+        .catch((e: unknown) => this.status(`Could not select row ${row}: ${(e as Error).message}`));
   }
 
   /** View buttons: fit to the samples, the full range, zoom in and out; results and equations out. */
@@ -402,12 +453,26 @@ export class DiagramPane {
     const status = (text: string) => this.status(text);
     $("fit-samples").addEventListener("click", () => setWindow(null, "fit"));
     $("full-range").addEventListener("click", () => setWindow(null, "full"));
-    $("zoom-in").addEventListener("click", () => this.lastWindow && setWindow(zoomWindow(this.lastWindow, 0.6), this.viewMode));
-    $("zoom-out").addEventListener("click", () => this.lastWindow && setWindow(zoomWindow(this.lastWindow, 1 / 0.6), this.viewMode));
+    $("zoom-in").addEventListener(
+      "click",
+      () => this.lastWindow && setWindow(zoomWindow(this.lastWindow, 0.6), this.viewMode),
+    );
+    $("zoom-out").addEventListener(
+      "click",
+      () => this.lastWindow && setWindow(zoomWindow(this.lastWindow, 1 / 0.6), this.viewMode),
+    );
     for (const id of ["color-by", "site-filter", "compare-metal"]) $(id).addEventListener("change", () => this.draw());
-    $("export-csv").addEventListener("click", () => download(new Blob([resultsCsv(this.plotted.samples)], { type: "text/csv" }), exportFileName("csv")));
-    $("copy-results").addEventListener("click", () => void copyText(resultsTsv(this.plotted.samples), "Results copied: paste them into a sheet.", status));
-    $("copy-equations").addEventListener("click", () => void copyText(this.equationsText, "Boundary equations copied.", status));
+    $("export-csv").addEventListener("click", () =>
+      download(new Blob([resultsCsv(this.plotted.samples)], { type: "text/csv" }), exportFileName("csv")),
+    );
+    $("copy-results").addEventListener(
+      "click",
+      () => void copyText(resultsTsv(this.plotted.samples), "Results copied: paste them into a sheet.", status),
+    );
+    $("copy-equations").addEventListener(
+      "click",
+      () => void copyText(this.equationsText, "Boundary equations copied.", status),
+    );
   }
 
   /** The shown window: the user's limits, else fitted to the samples when asked or when they are clustered. */
@@ -438,7 +503,14 @@ export class DiagramPane {
       const own = ownAnswers(this.rowSource(), read, water, { ...at, metal }, scale);
       const keep = new Set(first.samples.map((s) => s.row));
       const title = `${this.db.system(metal)?.title ?? metal} in water`;
-      return { ...first, system, regions: shownRegions(system, first.window, scale), samples: own.samples.filter((s) => keep.has(s.row)), title, sampleFill: undefined };
+      return {
+        ...first,
+        system,
+        regions: shownRegions(system, first.window, scale),
+        samples: own.samples.filter((s) => keep.has(s.row)),
+        title,
+        sampleFill: undefined,
+      };
     } catch (error) {
       this.status(`The comparison could not be drawn: ${(error as Error).message}`);
       return undefined;

@@ -50,7 +50,11 @@ export function settingsFromControls(settings: PaneSettings): PaneSettings {
 }
 
 /** One menu per column role listing the table's headers; `choose` gets the role and the column (−1 for none). */
-export function buildColumnControls(headers: readonly string[], mapping: ColumnMapping, choose: (role: ColumnRole, index: number) => void): void {
+export function buildColumnControls(
+  headers: readonly string[],
+  mapping: ColumnMapping,
+  choose: (role: ColumnRole, index: number) => void,
+): void {
   const container = $("column-controls");
   container.replaceChildren();
   for (const role of COLUMN_ROLES) {
@@ -69,7 +73,12 @@ export function buildColumnControls(headers: readonly string[], mapping: ColumnM
 
 /** The axis limits typed by the user, or null when a maximum does not exceed its minimum. */
 export function windowFromControls(): AxisWindow | null {
-  const w = { pHMin: Number(input("ph-min").value), pHMax: Number(input("ph-max").value), eMin: Number(input("e-min").value), eMax: Number(input("e-max").value) };
+  const w = {
+    pHMin: Number(input("ph-min").value),
+    pHMax: Number(input("ph-max").value),
+    eMin: Number(input("e-min").value),
+    eMax: Number(input("e-max").value),
+  };
   if (![w.pHMin, w.pHMax, w.eMin, w.eMax].every(Number.isFinite) || w.pHMax <= w.pHMin || w.eMax <= w.eMin) return null;
   return w;
 }

@@ -16,7 +16,10 @@ export interface Drawn {
 function exportSize(): { width: number; height: number } {
   const width = Math.round(Number(input("png-width").value));
   const height = Math.round(Number(input("png-height").value));
-  return { width: width >= 200 && width <= 4000 ? width : 1200, height: height >= 150 && height <= 3000 ? height : 900 };
+  return {
+    width: width >= 200 && width <= 4000 ? width : 1200,
+    height: height >= 150 && height <= 3000 ? height : 900,
+  };
 }
 
 /** The file name of an export: metal and diagram temperature. */
@@ -37,12 +40,21 @@ export async function exportPng(drawn: Drawn | null): Promise<void> {
 }
 
 /** The drawing as a PNG placed beside the data with its caption (Excel only). */
-export async function insertPicture(drawn: Drawn | null, host: HostAdapter, status: (text: string) => void): Promise<void> {
+export async function insertPicture(
+  drawn: Drawn | null,
+  host: HostAdapter,
+  status: (text: string) => void,
+): Promise<void> {
   if (!drawn || !host.insertPicture) return;
   const { width, height } = exportSize();
   try {
     const png = await svgToPngBlob(drawn.render(width, height), width, height);
-    await host.insertPicture({ pngBase64: await blobToBase64(png), widthPx: width, heightPx: height, caption: drawn.caption.join(" ") });
+    await host.insertPicture({
+      pngBase64: await blobToBase64(png),
+      widthPx: width,
+      heightPx: height,
+      caption: drawn.caption.join(" "),
+    });
     status("Diagram inserted beside the data.");
   } catch (error) {
     status(`Could not insert the picture: ${(error as Error).message}`);

@@ -17,7 +17,12 @@ import { median, readSamples, SkippedRow } from "./sample-table";
 export const SPREAD_WARNING = 10;
 
 /** The rows' temperature range and median, with a warning when one diagram cannot represent them. */
-export function showTemperatureSpread(temperatures: number[], celsius: number, hasTable: boolean, manual: boolean): void {
+export function showTemperatureSpread(
+  temperatures: number[],
+  celsius: number,
+  hasTable: boolean,
+  manual: boolean,
+): void {
   const spread = $("temperature-spread");
   const warning = $("temperature-warning");
   if (temperatures.length === 0) {
@@ -36,14 +41,19 @@ export function showTemperatureSpread(temperatures: number[], celsius: number, h
 }
 
 /** The "not drawn" list: unreadable rows and rows the functions refused, with the reason of each. */
-export function showSkipped(read: ReturnType<typeof readSamples> | null, failed: readonly SkippedRow[], columnsMissing: boolean): void {
+export function showSkipped(
+  read: ReturnType<typeof readSamples> | null,
+  failed: readonly SkippedRow[],
+  columnsMissing: boolean,
+): void {
   const list = $("skipped");
   list.replaceChildren();
   const skipped = [...(read?.skipped ?? []), ...failed].sort((a, b) => a.row - b.row);
   const parts: string[] = [];
   if (skipped.length === 0) parts.push("None.");
   else parts.push(`${skipped.length} row${skipped.length === 1 ? "" : "s"} with blank or unreadable cells:`);
-  if (read && read.otherMetal > 0) parts.push(`(${read.otherMetal} rows of other metals are not shown on this diagram.)`);
+  if (read && read.otherMetal > 0)
+    parts.push(`(${read.otherMetal} rows of other metals are not shown on this diagram.)`);
   if (columnsMissing) parts.push("Choose the pH and potential columns under Columns.");
   $("skipped-summary").textContent = parts.join(" ");
   for (const s of skipped) {
@@ -58,7 +68,14 @@ export function showSkipped(read: ReturnType<typeof readSamples> | null, failed:
  * The results table and the pure-water boundary equations at the diagram's temperature (`pure`: the ligand-free
  * system); returns the equations as tab-separated text for copying.
  */
-export function showResults(db: Database, samples: readonly PlottedSample[], system: MetalSystem, pure: MetalSystem, celsius: number, totals: LigandTotals): string {
+export function showResults(
+  db: Database,
+  samples: readonly PlottedSample[],
+  system: MetalSystem,
+  pure: MetalSystem,
+  celsius: number,
+  totals: LigandTotals,
+): string {
   $("results-table").innerHTML = resultsHtml(samples);
   const metal = system.element;
   const equations = boundaryEquations(pure, { pHMin: PH_MIN, pHMax: PH_MAX, eMin: -FULL_E_LIMIT, eMax: FULL_E_LIMIT });

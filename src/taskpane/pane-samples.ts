@@ -65,7 +65,8 @@ export function ownAnswers(
   const rows = read.indices.map((i) => table.rows[i]);
   const answers = answerSamples(answerPlan(source, water, at), rows);
   const ionic = source.ionic;
-  const ionicLine = ionic && rows.length > 0 ? ionicCaption(table.headers[ionic.index], ionic, ionicArgumentFor(ionic, rows)) : "";
+  const ionicLine =
+    ionic && rows.length > 0 ? ionicCaption(table.headers[ionic.index], ionic, ionicArgumentFor(ionic, rows)) : "";
   const samples: PlottedSample[] = [];
   const failed: SkippedRow[] = [];
   read.samples.forEach((s, k) => {

@@ -4,14 +4,22 @@
  */
 import { LIGAND_ORDER, LigandName } from "../chemistry/ligand-cells";
 import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
-import { ColumnMapping, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "../tables";
+import {
+  ColumnMapping,
+  matchWaterColumns,
+  waterColumnAt,
+  WaterColumn,
+  WaterColumns,
+  WATER_UNIT_WORDS,
+} from "../tables";
 import type { PaneSettings } from "./host";
 import { LIGAND_COLUMN, LigandSource, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
 import { $, input, select } from "./pane-dom";
 import type { SampleTable } from "./sample-table";
 
 /** Ligand settings and the columns they read, or a message when a typed total is not a number in range. */
-export type WaterInput = { settings: WaterSettings; columns: Partial<Record<LigandName, WaterColumn>> } | { error: string };
+export type WaterInput =
+  { settings: WaterSettings; columns: Partial<Record<LigandName, WaterColumn>> } | { error: string };
 
 /** Whether most filled cells of column `index` (among the first 200 rows) are numbers. */
 function mostlyNumbers(table: SampleTable | null, index: number): boolean {
@@ -38,31 +46,57 @@ function columnOption(text: string, value: string, header: string): HTMLOptionEl
  * column. A choice survives a new table when a column of the same header text is still there. Returns the
  * water columns found by their headers.
  */
-export function buildWaterSources(table: SampleTable | null, mapping: ColumnMapping, settings: PaneSettings): WaterColumns {
+export function buildWaterSources(
+  table: SampleTable | null,
+  mapping: ColumnMapping,
+  settings: PaneSettings,
+): WaterColumns {
   const headers = table?.headers ?? [];
   const waterFound = matchWaterColumns(headers, mapping);
   const taken = (i: number) => Object.values(mapping).includes(i);
   for (const ligand of LIGAND_ORDER) {
     const role = LIGAND_COLUMN[ligand];
     const menu = select(`${ligand}-source`);
-    const previous = /^(col|dic):/.test(menu.value) ? menu.selectedOptions[0]?.dataset.header : settings.water?.[ligand]?.column;
+    const previous = /^(col|dic):/.test(menu.value)
+      ? menu.selectedOptions[0]?.dataset.header
+      : settings.water?.[ligand]?.column;
     menu.replaceChildren(new Option("typed total", "typed"));
     // carbonate: a measured DIC column first (used before alkalinity, as the command line does)
     const dic = ligand === "carbonate" ? waterFound.dic : undefined;
-    if (dic) menu.add(columnOption(`from the DIC column “${headers[dic.index]}” (${WATER_UNIT_WORDS[dic.unit]})`, `dic:${dic.index}`, headers[dic.index]));
+    if (dic)
+      menu.add(
+        columnOption(
+          `from the DIC column “${headers[dic.index]}” (${WATER_UNIT_WORDS[dic.unit]})`,
+          `dic:${dic.index}`,
+          headers[dic.index],
+        ),
+      );
     const found = waterFound[role];
-    const order = found ? [found.index, ...headers.keys()].filter((i, k, all) => all.indexOf(i) === k) : [...headers.keys()];
+    const order = found
+      ? [found.index, ...headers.keys()].filter((i, k, all) => all.indexOf(i) === k)
+      : [...headers.keys()];
     for (const i of order) {
       if (taken(i)) continue; // pH, potential… are not water columns
       if (i !== found?.index && !mostlyNumbers(table, i)) continue; // site, date, note… are not either
       const unit = WATER_UNIT_WORDS[waterColumnAt(role, headers, i).unit];
-      menu.add(columnOption(`from ${i === found?.index ? `the ${role} column` : "column"} “${headers[i] || `column ${i + 1}`}” (${unit})`, `col:${i}`, headers[i]));
+      menu.add(
+        columnOption(
+          `from ${i === found?.index ? `the ${role} column` : "column"} “${headers[i] || `column ${i + 1}`}” (${unit})`,
+          `col:${i}`,
+          headers[i],
+        ),
+      );
     }
     // a column found by its header is used unless the user chose otherwise (as the command line does)
     const keep = previous === undefined ? -1 : headers.indexOf(previous);
     const typedChosen = settings.water?.[ligand]?.typed === true;
     const usable = (i: number) => i >= 0 && !taken(i);
-    const auto = dic && !typedChosen ? `dic:${dic.index}` : found && !typedChosen && usable(found.index) ? `col:${found.index}` : "typed";
+    const auto =
+      dic && !typedChosen
+        ? `dic:${dic.index}`
+        : found && !typedChosen && usable(found.index)
+          ? `col:${found.index}`
+          : "typed";
     menu.value = dic && keep === dic.index ? `dic:${dic.index}` : usable(keep) ? `col:${keep}` : auto;
     input(`${ligand}-total`).disabled = menu.value !== "typed";
   }
@@ -86,7 +120,9 @@ export function readWater(table: SampleTable | null): WaterInput {
     const text = input(`${ligand}-total`).value.trim();
     const total = text === "" ? null : Number(text);
     if (total !== null && !(total >= 0 && total <= MAX_LIGAND_TOTAL)) {
-      return { error: `${ligand[0].toUpperCase()}${ligand.slice(1)} total: a number from 0 to ${MAX_LIGAND_TOTAL} mol/kg (e.g. 1.5e-3), or blank for none.` };
+      return {
+        error: `${ligand[0].toUpperCase()}${ligand.slice(1)} total: a number from 0 to ${MAX_LIGAND_TOTAL} mol/kg (e.g. 1.5e-3), or blank for none.`,
+      };
     }
     settings[ligand] = { kind: "typed", total };
   }
@@ -101,7 +137,12 @@ export function waterToRemember(waterFound: WaterColumns): NonNullable<PaneSetti
     const total = input(`${ligand}-total`).value.trim();
     const column = /^(col|dic):/.test(menu.value) ? menu.selectedOptions[0]?.dataset.header : undefined;
     const typed = column === undefined && waterFound[LIGAND_COLUMN[ligand]] !== undefined;
-    if (total || column !== undefined || typed) water[ligand] = { ...(total ? { total } : {}), ...(column !== undefined ? { column } : {}), ...(typed ? { typed } : {}) };
+    if (total || column !== undefined || typed)
+      water[ligand] = {
+        ...(total ? { total } : {}),
+        ...(column !== undefined ? { column } : {}),
+        ...(typed ? { typed } : {}),
+      };
   }
   return water;
 }
@@ -119,8 +160,10 @@ export function showWater(resolved: ReturnType<typeof resolveWater>, ligands: bo
   if (caption) parts.push(caption.split(";")[0] + ".");
   for (const ligand of resolved.fromColumns) {
     const n = resolved.fallbacks[ligand] ?? 0;
-    if (n > 0) parts.push(`${n} row${n === 1 ? "" : "s"} without a usable ${LIGAND_COLUMN[ligand]} value use the median.`);
+    if (n > 0)
+      parts.push(`${n} row${n === 1 ? "" : "s"} without a usable ${LIGAND_COLUMN[ligand]} value use the median.`);
   }
-  for (const ligand of resolved.unusable) parts.push(`No row has a usable ${LIGAND_COLUMN[ligand]} value: ${ligand} is left out.`);
+  for (const ligand of resolved.unusable)
+    parts.push(`No row has a usable ${LIGAND_COLUMN[ligand]} value: ${ligand} is left out.`);
   note.textContent = parts.join(" ");
 }
