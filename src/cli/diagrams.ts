@@ -10,6 +10,7 @@ import { SystemCache } from "../chemistry/system-cache";
 import { displayScale, plotSamples, renderDiagramSvg, shownRegions, shownWaterLines } from "../diagram";
 import type { SamplePoint } from "./evaluate";
 import { Reservoir } from "./reservoir";
+import { DEFAULT_CELSIUS } from "../chemistry/domain";
 
 /** Points drawn per diagram at most (the pane's budget is 10 k samples, DEVELOPERS.md Speed budgets). */
 export const POINTS_PER_DIAGRAM = 10_000;
@@ -46,7 +47,7 @@ function hashSeed(text: string): number {
 }
 
 /** The temperature a diagram is drawn at: the median of its samples' temperatures, to 1 °C. */
-export function diagramCelsius(points: readonly SamplePoint[], fallback = 25): number {
+export function diagramCelsius(points: readonly SamplePoint[], fallback = DEFAULT_CELSIUS): number {
   const ts = points.map((p) => p.celsius).filter((t) => Number.isFinite(t)).sort((a, b) => a - b);
   if (ts.length === 0) return fallback;
   const mid = ts.length >> 1;

@@ -7,6 +7,7 @@ import { join } from "node:path";
 import { DiagramSamples, diagramCelsius, diagramTotals, renderDiagram, totalsText } from "./diagrams";
 import type { EvaluationPlan } from "./evaluate";
 import type { CliOptions } from "./options";
+import { DEFAULT_CELSIUS } from "../chemistry/domain";
 
 function baseName(path: string): string {
   const i = Math.max(path.lastIndexOf("/"), path.lastIndexOf("\\"));
@@ -50,7 +51,7 @@ export function writeDiagrams(options: CliOptions, plan: EvaluationPlan, diagram
   if (options.svgDir === null || diagrams === null) return [];
   mkdirSync(options.svgDir, { recursive: true });
   const files: string[] = [];
-  const fixed = plan.fixedTemperature ?? 25;
+  const fixed = plan.fixedTemperature ?? DEFAULT_CELSIUS;
   for (const symbol of diagrams.symbols()) {
     const points = diagrams.points(symbol);
     const celsius = plan.temperatureColumn === null ? fixed : diagramCelsius(points, fixed);

@@ -1,5 +1,7 @@
 /** The summary a run prints: rows, speed, where the results went, rows with bad or blank cells, regime counts. */
 
+import { REGIMES } from "../chemistry/domain";
+
 const PROGRAM = "redox-cells";
 
 export interface RunSummary {
@@ -17,8 +19,6 @@ export interface RunSummary {
   /** Lines on how the inputs were read (the ionic strength used), printed after the results line. */
   notes?: string[];
 }
-
-const REGIMES = ["immunity", "passivation", "corrosion"];
 
 export function summaryText(s: RunSummary): string {
   const lines: string[] = [];
