@@ -33,20 +33,21 @@ const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
  * Standard potentials by database, gas and temperature: columns of samples repeat a few temperatures, and each
  * value costs a reaction balance, so they are remembered (bounded).
  */
-const standardPotentials = new WeakMap<Database, Map<string, number>>();
+const standardPotentials = new WeakMap<Database, Record<WaterGas, Map<number, number>>>();
 const REMEMBERED_POTENTIALS = 512;
 
 /** Standard potential (V vs SHE) of the O2/H2O (gas "O2") or H+/H2 (gas "H2") couple at `celsius`. */
 export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database = getDatabase()): number {
-  let memo = standardPotentials.get(db);
-  if (!memo) standardPotentials.set(db, (memo = new Map()));
-  const key = `${gas}|${celsius}`;
-  const known = memo.get(key);
+  let byGas = standardPotentials.get(db);
+  if (!byGas) standardPotentials.set(db, (byGas = { O2: new Map(), H2: new Map() }));
+  // keyed by the number itself: a text key per call cost more than the look-up saves on a column of samples
+  const memo = gas === "O2" ? byGas.O2 : byGas.H2;
+  const known = memo.get(celsius);
   if (known !== undefined) return known;
   const k = nernstFactor(kelvin(celsius));
   const e0 = gas === "O2" ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4 : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
   if (memo.size >= REMEMBERED_POTENTIALS) memo.clear();
-  memo.set(key, e0 + 0); // + 0 turns a negative zero into 0
+  memo.set(celsius, e0 + 0); // + 0 turns a negative zero into 0
   return e0 + 0;
 }
 
@@ -61,9 +62,20 @@ export function waterLine(pH: number, celsius = 25, gas: WaterGas = "O2", pressu
   return gas === "O2" ? e0 - k * pH + (k / 4) * Math.log10(pressure) : e0 - k * pH - (k / 2) * Math.log10(pressure);
 }
 
+/** pKw by database and temperature (bounded, as the standard potentials). */
+const ionProducts = new WeakMap<Database, Map<number, number>>();
+
 /** pKw = −log10 Kw of H2O(l) = H+ + OH− at `celsius` (molal activities, 1 bar). */
 export function pKw(celsius = 25, db: Database = getDatabase()): number {
-  return -reactionLogK(db, IONISATION, celsius);
+  // remembered like the standard potentials: DIC from alkalinity asks for it once per row, and a balance is costly
+  let memo = ionProducts.get(db);
+  if (!memo) ionProducts.set(db, (memo = new Map()));
+  const known = memo.get(celsius);
+  if (known !== undefined) return known;
+  const value = -reactionLogK(db, IONISATION, celsius);
+  if (memo.size >= REMEMBERED_POTENTIALS) memo.clear();
+  memo.set(celsius, value);
+  return value;
 }
 
 /** Ion product of water Kw(T). */

@@ -179,7 +179,17 @@ export function mapCells<A extends unknown[]>(
         args[i] = plain[r * column.rowStep + c * column.colStep];
         continue;
       }
-      const parsed = parseCell(specs[i], column.range[r * column.rowStep][c * column.colStep], true);
+      const value = column.range[r * column.rowStep][c * column.colStep];
+      // a text cell equal to the one above reads the same (readers are pure): a metal column repeats its symbols
+      let parsed: unknown;
+      if (typeof value === "string" && value === column.lastText) parsed = column.lastParsed;
+      else {
+        parsed = parseCell(specs[i], value, true);
+        if (typeof value === "string") {
+          column.lastText = value;
+          column.lastParsed = parsed;
+        }
+      }
       if (parsed === BLANK) blank = true;
       else if (typeof parsed === "object" && parsed instanceof CellError) {
         if (errorIndex < 0 || i < errorIndex) errorIndex = i; // the first error in argument order wins over blanks
@@ -221,6 +231,9 @@ interface VaryingColumn {
   readonly colStep: number;
   /** The range's numbers in one flat array (index r·rowStep + c·colStep), or null when a cell needs reading. */
   readonly plain: Float64Array | null;
+  /** The last text cell read, and what it read as. */
+  lastText: string | null;
+  lastParsed: unknown;
 }
 
 /**
@@ -231,7 +244,7 @@ interface VaryingColumn {
 function varyingColumn(index: number, spec: ArgSpec<unknown>, range: CellScalar[][], shape: Shape): VaryingColumn {
   const rowStep = shape.rows === 1 ? 0 : shape.cols;
   const colStep = shape.cols === 1 ? 0 : 1;
-  const base = { index, range, rowStep: shape.rows === 1 ? 0 : 1, colStep };
+  const base = { index, range, rowStep: shape.rows === 1 ? 0 : 1, colStep, lastText: null, lastParsed: undefined };
   const accepts = spec.accepts;
   if (!accepts) return { ...base, plain: null };
   const plain = new Float64Array(shape.rows * shape.cols);
