@@ -27,6 +27,9 @@ const OXYGEN_REDUCTION = { "O2(g)": -1, "H+": -4, "e-": -4, "H2O(l)": 2 } as con
 /** 2 H+ + 2 e− → H2(g) */
 const HYDROGEN_EVOLUTION = { "H+": -2, "e-": -2, "H2(g)": 1 } as const;
 /** H2O(l) → H+ + OH− */
+// Built-ins held in module constants: in a sandboxed host each global lookup per row is slow (REDOX.ASSESS).
+const { log10, min } = Math;
+
 const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
 
 /**
@@ -59,7 +62,7 @@ export function waterLine(pH: number, celsius = 25, gas: WaterGas = "O2", pressu
   const k = nernstFactor(kelvin(celsius));
   const e0 = waterStandardPotential(gas, celsius, db);
   // Nernst: E = E° − (k/n)·log10 Q, Q = products over reactants with a(H+) = 10^−pH
-  return gas === "O2" ? e0 - k * pH + (k / 4) * Math.log10(pressure) : e0 - k * pH - (k / 2) * Math.log10(pressure);
+  return gas === "O2" ? e0 - k * pH + (k / 4) * log10(pressure) : e0 - k * pH - (k / 2) * log10(pressure);
 }
 
 /** pKw by database and temperature (bounded, as the standard potentials). */
@@ -97,6 +100,6 @@ export function neutralPH(celsius = 25, db: Database = getDatabase()): number {
 export function waterMargin(pH: number, potential: number, celsius = 25, overpotential = 0, db: Database = getDatabase()): number {
   const upper = waterLine(pH, celsius, "O2", 1, db) + overpotential;
   const lower = waterLine(pH, celsius, "H2", 1, db) - overpotential;
-  return Math.min(upper - potential, potential - lower);
+  return min(upper - potential, potential - lower);
 }
 

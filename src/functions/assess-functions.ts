@@ -18,6 +18,8 @@ import { DISSOLVED_UNITS, engineIn, unitArg } from "./stability-functions";
 
 export const ASSESS_COLUMNS = ["species", "regime", "boundary above (V)", "boundary below (V)", "water margin (V)", "dissolved", "controlling solid"] as const;
 const WIDTH = ASSESS_COLUMNS.length;
+// Held in a module constant: in a sandboxed host each global lookup per cell is slow.
+const isFiniteNumber = Number.isFinite;
 
 /** The water a sample is evaluated in: ligand totals in mol/kg (0 = absent). */
 interface Water {
@@ -122,6 +124,6 @@ function finishRow(row: CellOutput[]): CellOutput[] {
 
 function finishCell(value: CellOutput): CellOutput {
   if (value instanceof CellError) return toHostError(value);
-  if (typeof value === "number" && !Number.isFinite(value)) return toHostError(notAvailable("no finite answer exists at this input"));
+  if (typeof value === "number" && !isFiniteNumber(value)) return toHostError(notAvailable("no finite answer exists at this input"));
   return value;
 }
