@@ -99,7 +99,7 @@ export function benchStability(get: (name: string) => Fn | undefined, rows = 50_
     rate(rows, () => species("Pb", c.pH, c.E, 25, undefined, c.co3)),
     pure,
   );
-  const water = rate(rows, () => species("Pb", c.pH, c.E, c.T, undefined, c.co3, c.cl, c.s, c.I));
+  const water = rate(rows, () => species("Pb", c.pH, c.E, c.T, undefined, c.co3, c.cl, c.s, undefined, c.I));
   perRow("SPECIES, each row its own T, carbonate, chloride, sulfur, I", water, pure);
   perRow(
     "BOUNDARY above, pure water (vs SPECIES)",
@@ -113,12 +113,12 @@ export function benchStability(get: (name: string) => Fn | undefined, rows = 50_
   );
   perRow(
     "BOUNDARY above, own water per row (vs SPECIES same)",
-    rate(rows, () => boundary("Pb", c.pH, c.E, c.T, undefined, c.co3, c.cl, c.s, c.I, 1)),
+    rate(rows, () => boundary("Pb", c.pH, c.E, c.T, undefined, c.co3, c.cl, c.s, undefined, c.I, 1)),
     water,
   );
   perRow(
     "DISSOLVED, own water per row (vs SPECIES same)",
-    rate(rows, () => dissolved("Pb", c.pH, c.E, c.T, c.co3, c.cl, c.s, c.I)),
+    rate(rows, () => dissolved("Pb", c.pH, c.E, c.T, c.co3, c.cl, c.s, undefined, c.I)),
     water,
   );
   // the one-call assessment (species, regime, both boundaries, water margin, dissolved metal and its solid)
@@ -135,7 +135,7 @@ export function benchStability(get: (name: string) => Fn | undefined, rows = 50_
   // no cliff: the same column with 100, 1 000 and every row a distinct water
   const distinct = [100, 1000, rows].map((k) => {
     const T = c.T.map((_, i) => c.T[i % k]);
-    return rate(rows, () => species("Pb", c.pH, c.E, T, undefined, c.co3, c.cl, c.s, c.I));
+    return rate(rows, () => species("Pb", c.pH, c.E, T, undefined, c.co3, c.cl, c.s, undefined, c.I));
   });
   const spread = Math.max(...distinct) / Math.min(...distinct);
   out.push({
@@ -148,7 +148,18 @@ export function benchStability(get: (name: string) => Fn | undefined, rows = 50_
   const cells = 5_000;
   const naive = rate(cells, () => {
     for (let i = 0; i < cells; i++)
-      species("Pb", c.pH[i][0], c.E[i][0], c.T[i][0], undefined, c.co3[i][0], c.cl[i][0], c.s[i][0], c.I[i][0]);
+      species(
+        "Pb",
+        c.pH[i][0],
+        c.E[i][0],
+        c.T[i][0],
+        undefined,
+        c.co3[i][0],
+        c.cl[i][0],
+        c.s[i][0],
+        undefined,
+        c.I[i][0],
+      );
   });
   out.push({
     name: `naive: one single-cell SPECIES formula per row, own water (${cells.toLocaleString("en")} calls)`,

@@ -22,6 +22,9 @@ const output = resolve(process.argv[3] ?? "data/demo/demo-workbook.xlsx");
 /** First data row on the sheet: row 1 says the data are invented, row 2 is the header. */
 export const FIRST_ROW = 3;
 
+/** Result columns written after the log's own (the demo test counts them). */
+export const RESULT_COUNT = 10;
+
 const NUMBER = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/;
 
 /** A CSV cell as a worksheet cell: numbers as numbers, blanks empty, anything else (typos included) as text. */
@@ -58,6 +61,12 @@ async function main(): Promise<void> {
   // activity of dissolved metal species (the functions' default, written out so the carbonate can follow it);
   // chloride, sulfur and ionic strength are written as 0 (absent, ideal solution) so the option can follow them
   const activity = "1E-6";
+  const dissolvedColumn = letter(first + 7);
+  // what-if: 1 mg/L orthophosphate as PO4 = 1e-3 / 94.97 mol/kg as P (1 L taken as 1 kg)
+  const whatIfPhosphate = "1.053E-5";
+  // typed thresholds in row 1, right of the result columns (µg/L; the EU Directive 2020/2184 figures as a start)
+  const thresholdLead = `${letter(first + RESULT_COUNT + 1)}1`;
+  const thresholdCopper = `${letter(first + RESULT_COUNT + 3)}1`;
 
   /** Result columns: header and formula for sheet row r (formulas without the leading "="). */
   const results: Array<[string, (r: number) => string]> = [
@@ -68,10 +77,18 @@ async function main(): Promise<void> {
     ["DIC_mol_kg", (r) => `REDOX.DIC(${alkalinity}${r},${pH}${r},${temp}${r})`],
     ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
     ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
-    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,1)`],
-    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,-1)`],
-    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,0,"ug/L")`],
+    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,0,1)`],
+    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,0,-1)`],
+    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,0,0,"ug/L")`],
+    // lead and copper rows against the threshold typed in row 1; other metals blank
+    [
+      "vs_threshold",
+      (r) =>
+        `IF(${dissolvedColumn}${r}="","",IF(${metal}${r}="Pb",IF(${dissolvedColumn}${r}>${thresholdLead},"above","below"),IF(${metal}${r}="Cu",IF(${dissolvedColumn}${r}>${thresholdCopper},"above","below"),"")))`,
+    ],
+    ["what_if_1mg_PO4_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,${whatIfPhosphate},0,"ug/L")`],
   ];
+  if (results.length !== RESULT_COUNT) throw new Error("RESULT_COUNT is out of date");
 
   const workbook = new ExcelJS.Workbook();
   workbook.creator = "Redox Cells demo generator";
@@ -85,6 +102,9 @@ async function main(): Promise<void> {
   sheet.getCell("A1").value =
     "INVENTED DEMO DATA — the Brackenholm Water Cooperative and every value here are fictional (scripts/generate-demo-log.ts). Result columns hold REDOX formulas.";
   sheet.getCell("A1").font = { bold: true, color: { argb: "FF8A3B12" } };
+  // the thresholds the user types (µg/L); examples: EU 2020/2184 lead 10 (5 from 2036), copper 2000; US action levels 15 and 1300
+  const typed: Array<[number, ExcelJS.CellValue]> = [[0, "lead threshold µg/L (type yours):"], [1, 10], [2, "copper threshold µg/L:"], [3, 2000]];
+  for (const [offset, value] of typed) sheet.getCell(`${letter(first + RESULT_COUNT + offset)}1`).value = value;
   const headerRow = sheet.getRow(2);
   [...header, ...results.map(([h]) => h)].forEach((h, i) => {
     const cell = headerRow.getCell(i + 1);
@@ -132,6 +152,12 @@ async function main(): Promise<void> {
     "  boundary_above_V     REDOX.BOUNDARY(…, 1) — nearest stability boundary above the sample (direction last)",
     "  boundary_below_V     REDOX.BOUNDARY(…, -1) — nearest stability boundary below",
     "  pipe_dissolved_ug_L  REDOX.DISSOLVED — dissolved metal in equilibrium with the most stable solid, µg/L (#N/A where no solid can form)",
+    "  vs_threshold         lead and copper rows: above or below the threshold typed in row 1 (10 and 2000 µg/L to start: EU Directive",
+    "                       2020/2184 lead 10 µg/L until 2036 then 5, copper 2 mg/L; US Lead and Copper Rule action levels 15 µg/L and 1.3 mg/L)",
+    "  what_if_1mg_PO4_ug_L the same with 1 mg/L orthophosphate as PO4 (1.053E-5 mol/kg as P in the phosphate argument)",
+    "",
+    "Equilibrium is not a tap sample: thresholds apply to samples taken under the regulator's protocol. These columns compare",
+    "treatment options; they do not show compliance (see docs/lead-and-copper.md in the project).",
     "",
     "Some cells are blank or mistyped on purpose (a decimal comma, '7.4.1', 'n/a', '1O.4', '612 mV', pH 17.2): their rows show",
     "blank results or #VALUE! (hover the error indicator for the message), as a real log would. A blank temperature is a missing",

@@ -10,10 +10,10 @@
  * Approximations, stated: ideal dilute solution (activity coefficients 1, so mol/L ≈ mol/kg and the measured pH is
  * taken as −log [H+]); other proton acceptors (borate, silicate, phosphate, organic acids) counted as carbonate.
  * Alkalinity in mg/L as CaCO3 (the utility unit): 1 meq/L = 50.04 mg/L as CaCO3 (half the molar mass of CaCO3,
- * 100.087 g/mol). K1, K2 from Plummer & Busenberg (1982) (carbonic-acid.ts); Kw from the water records (water.ts).
+ * 100.087 g/mol). K1, K2 from Plummer & Busenberg (1982) (carbonic-acid.ts); Kw from IAPWS R11-07 (water.ts).
  */
 import { carbonicPK1, carbonicPK2 } from "./carbonic-acid";
-import { Database, getDatabase } from "./database";
+import type { Database } from "./database";
 import { pKw } from "./water";
 
 /** Grams of CaCO3 per equivalent: ½ × 100.087 g/mol (IUPAC atomic weights; common practice for "as CaCO3"). */
@@ -38,14 +38,15 @@ export function alkalinityEquivalents(mgPerLitreAsCaCO3: number): number {
  * the total alkalinity): no carbonate water matches that pair of numbers; and below the titration end point
  * (pH < 4.5), where DIC is not determined by alkalinity (α1 + 2α2 → 0 and the quotient grows without bound).
  */
-export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, db: Database = getDatabase()): number {
+export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, _db?: Database): number {
+  // _db kept for callers: Kw comes from IAPWS R11-07, not from the records
   if (pH < ALKALINITY_END_POINT_PH) {
     throw new AlkalinityError(`pH ${pH} is below the alkalinity end point (${ALKALINITY_END_POINT_PH}): alkalinity does not determine DIC there`);
   }
   const h = 10 ** -pH;
   const k1 = 10 ** -carbonicPK1(celsius);
   const k2 = 10 ** -carbonicPK2(celsius);
-  const oh = 10 ** -pKw(celsius, db) / h;
+  const oh = 10 ** -pKw(celsius) / h;
   const carbonateAlkalinity = alkalinityEquivalents(alkalinityMgL) - oh + h;
   if (!(carbonateAlkalinity > 0)) {
     throw new AlkalinityError(`the carbonate alkalinity is not positive at pH ${pH} (hydroxide exceeds the total alkalinity)`);

@@ -15,9 +15,9 @@ export const ZERO_CELSIUS = 273.15;
 /** Natural logarithm of 10. */
 export const LN10 = Math.LN10;
 
-/** Lowest and highest temperature the engine accepts, °C (data are fitted near 1 bar, liquid water). */
+/** Lowest and highest temperature accepted, °C: liquid water at 1 atm below 100 °C, on the saturation curve above (water-properties.ts). */
 export const MIN_CELSIUS = 0;
-export const MAX_CELSIUS = 100;
+export const MAX_CELSIUS = 300;
 
 /** Celsius → kelvin. */
 export function kelvin(celsius: number): number {

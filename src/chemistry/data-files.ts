@@ -32,6 +32,7 @@ import pt from "../../data/species/pt.json";
 import carbonate from "../../data/species/carbonate.json";
 import sulfur from "../../data/species/sulfur.json";
 import chloride from "../../data/species/chloride.json";
+import phosphate from "../../data/species/phosphate.json";
 
 export const ELEMENTS_FILE: DataFile = { path: "data/elements.json", content: elements };
 
@@ -65,4 +66,5 @@ export const DATA_FILES: readonly DataFile[] = [
   { path: "data/species/carbonate.json", content: carbonate },
   { path: "data/species/sulfur.json", content: sulfur },
   { path: "data/species/chloride.json", content: chloride },
+  { path: "data/species/phosphate.json", content: phosphate },
 ];

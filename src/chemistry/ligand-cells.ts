@@ -12,6 +12,7 @@
  *              methane and graphite formation are slow and left out)
  *   sulfur     SO4²− | HSO4− | S(s) | H2S(aq) | HS− | S²−  — redox-active: a small predominance diagram of its own
  *   chloride   Cl− everywhere (its oxidation lies above the oxygen line and is very slow)
+ *   phosphate  H3PO4 | H2PO4− | HPO4²− | PO4³−  — vertical boundaries at its three pKa (phosphorus redox-inert)
  *
  * Cells of several ligands are intersected (the half-planes of both).
  *
@@ -31,7 +32,7 @@ import { clipPolygon, HalfPlane, Point, polygonArea, rectangle } from "./halfpla
 import { LigandBasis } from "./system";
 import { ELECTRON, gibbsAt } from "./thermo";
 
-export type LigandName = "carbonate" | "chloride" | "sulfur";
+export type LigandName = "carbonate" | "chloride" | "sulfur" | "phosphate";
 
 /** Total of each ligand, mol/kg; 0 (or absent) = the ligand is not in the water. */
 export type LigandTotals = Partial<Record<LigandName, number>>;
@@ -41,9 +42,10 @@ export const LIGAND_BASIS: Readonly<Record<LigandName, readonly string[]>> = {
   carbonate: ["HCO3-", "CO2(aq)", "CO32-"],
   sulfur: ["SO42-", "HSO4-", "S(s)", "H2S(aq)", "HS-", "S2-"],
   chloride: ["Cl-"],
+  phosphate: ["HPO42-", "H3PO4(aq)", "H2PO4-", "PO43-"],
 };
 
-export const LIGAND_ORDER: readonly LigandName[] = ["carbonate", "sulfur", "chloride"];
+export const LIGAND_ORDER: readonly LigandName[] = ["carbonate", "sulfur", "chloride", "phosphate"];
 
 /** A cell as buildSystem takes it. */
 export interface LigandCell {

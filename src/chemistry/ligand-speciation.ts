@@ -13,8 +13,9 @@
  * of the total is taken as the solid. Ligand bound in complexes of the trace metal is neglected (metal totals are
  * far below ligand totals in waters).
  */
-import { FARADAY } from "./constants";
-import { LigandTable } from "./species-tables";
+import { FARADAY, T0 } from "./constants";
+import { correspondenceBasis } from "./criss-cobble";
+import { LigandTable, rowGibbs } from "./species-tables";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { abs, exp, log, max, min } = Math;
@@ -61,8 +62,9 @@ export class LigandAtPoint {
   private setTemperature(celsius: number, dT: number, shape: number, k: number, f: number): void {
     const t = this.table;
     const inverseF = 1 / FARADAY;
+    const basis = correspondenceBasis(dT + T0);
     for (let j = 0; j < t.g0.length; j++) {
-      this.g[j] = (t.g0[j] - t.s[j] * dT + t.cp[j] * shape) * inverseF;
+      this.g[j] = rowGibbs(t, j, dT, shape, basis) * inverseF;
       this.b[j] = -t.proton[j] * k;
       this.e[j] = -t.electron[j];
     }

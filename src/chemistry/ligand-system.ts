@@ -3,6 +3,7 @@
  * metal species containing carbon, sulfur or chlorine is formed from the metal, water, H+, e− and the cell's basis
  * species. With no ligand present this is exactly buildSystem without cells.
  */
+import { MAX_CELSIUS, MIN_CELSIUS } from "./constants";
 import { Database } from "./database";
 import { hasLigands, ligandCells, LigandTotals } from "./ligand-cells";
 import { buildSystem, MetalSystem, SystemError, SystemOptions } from "./system";
@@ -16,6 +17,6 @@ export function buildLigandSystem(db: Database, element: string, options: System
     if (value === undefined) continue;
     if (!(value >= 0 && value <= MAX_LIGAND_TOTAL)) throw new SystemError(`${name}: total ${value} mol/kg is outside 0–${MAX_LIGAND_TOTAL}`);
   }
-  if (!(options.celsius >= 0 && options.celsius <= 100)) return buildSystem(db, element, options); // lets buildSystem report the range
+  if (!(options.celsius >= MIN_CELSIUS && options.celsius <= MAX_CELSIUS)) return buildSystem(db, element, options); // lets buildSystem report the range
   return { ...buildSystem(db, element, options, ligandCells(db, totals, options.celsius)), ligandTotals: totals };
 }

@@ -20,10 +20,13 @@ import {
   ligandTable,
   NEEDS_CARBONATE,
   NEEDS_CHLORIDE,
+  NEEDS_PHOSPHATE,
   NEEDS_SULFUR,
+  rowGibbs,
   SpeciesTable,
   speciesTable,
 } from "./species-tables";
+import { correspondenceBasis } from "./criss-cobble";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { log } = Math;
@@ -38,12 +41,15 @@ export interface PointWater {
   readonly chloride: number;
   readonly sulfur: number;
   readonly ionicStrength: number;
+  /** Total orthophosphate, mol/kg as P (absent = none). */
+  readonly phosphate?: number;
 }
 
 export class PointEngine {
   readonly table: SpeciesTable;
   private readonly carbonateSpeciation: LigandAtPoint;
   private readonly sulfurSpeciation: LigandAtPoint;
+  private readonly phosphateSpeciation: LigandAtPoint;
   // per temperature: g = a + b·pH + c·E (+ ligand and activity terms scaled by r)
   private celsius = NOT_A_NUMBER;
   private readonly aUnit: Float64Array;
@@ -69,15 +75,18 @@ export class PointEngine {
   private lnCarbonate = 0;
   private lnChloride = 0;
   private lnSulfur = 0;
+  private lnPhosphate = 0;
   // per point
   lnC = 0;
   lnS = 0;
   lnCl = 0;
+  lnP = 0;
 
   constructor(db: Database, element: string) {
     this.table = speciesTable(db, element);
     this.carbonateSpeciation = new LigandAtPoint(ligandTable(db, LIGAND_BASIS.carbonate));
     this.sulfurSpeciation = new LigandAtPoint(ligandTable(db, LIGAND_BASIS.sulfur));
+    this.phosphateSpeciation = new LigandAtPoint(ligandTable(db, LIGAND_BASIS.phosphate));
     const n = this.table.species.length;
     this.aUnit = new Float64Array(n);
     this.b = new Float64Array(n);
@@ -90,7 +99,10 @@ export class PointEngine {
     return this.table.species.length;
   }
 
-  /** Sets the water for the next points; work that depends only on T (or T, threshold and I) is redone on change. */
+  /**
+   * Sets the water for the next points; work that depends only on T (or T, threshold and I) is redone on change.
+   * `phosphate` (total orthophosphate, mol/kg as P) comes last so that callers without it need not change.
+   */
   setWater(
     celsius: number,
     activity: number,
@@ -98,6 +110,7 @@ export class PointEngine {
     chloride: number,
     sulfur: number,
     ionicStrength: number,
+    phosphate = 0,
   ): void {
     if (celsius !== this.celsius) this.setTemperature(celsius);
     if (this.stale || activity !== this.activity || ionicStrength !== this.ionicStrength) {
@@ -114,14 +127,18 @@ export class PointEngine {
       this.stale = false;
     }
     this.present =
-      (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0);
+      (carbonate > 0 ? NEEDS_CARBONATE : 0) |
+      (sulfur > 0 ? NEEDS_SULFUR : 0) |
+      (chloride > 0 ? NEEDS_CHLORIDE : 0) |
+      (phosphate > 0 ? NEEDS_PHOSPHATE : 0);
     this.lnCarbonate = carbonate > 0 ? log(carbonate) : 0;
     this.lnSulfur = sulfur > 0 ? log(sulfur) : 0;
+    this.lnPhosphate = phosphate > 0 ? log(phosphate) : 0;
     this.lnChloride = chloride > 0 ? log(chloride) + this.lnGamma1 : 0; // Cl− is free: a = γ·total
   }
 
   setPointWater(w: PointWater): void {
-    this.setWater(w.celsius, w.activity, w.carbonate, w.chloride, w.sulfur, w.ionicStrength);
+    this.setWater(w.celsius, w.activity, w.carbonate, w.chloride, w.sulfur, w.ionicStrength, w.phosphate ?? 0);
   }
 
   private setTemperature(celsius: number): void {
@@ -132,11 +149,12 @@ export class PointEngine {
     const k = nernstFactor(T);
     const rtOverF = (GAS_CONSTANT * T) / FARADAY;
     const { aUnit, b, c, r } = this;
-    const { x, g0, s, cp, proton, electron } = t;
+    const { x, proton, electron } = t;
     const inverseF = 1 / FARADAY;
+    const basis = correspondenceBasis(T);
     for (let i = 0, n = x.length; i < n; i++) {
       const perAtom = 1 / x[i];
-      aUnit[i] = (g0[i] - s[i] * dT + cp[i] * shape) * perAtom * inverseF;
+      aUnit[i] = rowGibbs(t, i, dT, shape, basis) * perAtom * inverseF;
       b[i] = -proton[i] * k * perAtom;
       c[i] = -electron[i] * perAtom;
       r[i] = rtOverF * perAtom;
@@ -150,7 +168,7 @@ export class PointEngine {
     this.k = k;
   }
 
-  /** Exact ligand activities at (pH, E) into lnC, lnS, lnCl. */
+  /** Exact ligand activities at (pH, E) into lnC, lnS, lnCl, lnP (HPO4²− from the α-fractions of orthophosphate). */
   ligandsAt(pH: number, E: number): void {
     const present = this.present;
     if (present & NEEDS_CARBONATE)
@@ -161,6 +179,10 @@ export class PointEngine {
       this.lnS = this.sulfurSpeciation
         .at(this.celsius, this.dT, this.shape, this.k, this.f)
         .lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
+    if (present & NEEDS_PHOSPHATE)
+      this.lnP = this.phosphateSpeciation
+        .at(this.celsius, this.dT, this.shape, this.k, this.f)
+        .lnPivot(this.lnPhosphate, this.lnGamma1, pH, E);
     this.lnCl = this.lnChloride;
   }
 
@@ -187,7 +209,10 @@ export class PointEngine {
   g(i: number, pH: number, E: number, unit = false): number {
     const t = this.table;
     let g = (unit ? this.aUnit[i] : this.aThreshold[i]) + this.b[i] * pH + this.c[i] * E;
-    if (t.needs[i]) g += this.r[i] * (t.carbonate[i] * this.lnC + t.sulfur[i] * this.lnS + t.chloride[i] * this.lnCl);
+    if (t.needs[i])
+      g +=
+        this.r[i] *
+        (t.carbonate[i] * this.lnC + t.sulfur[i] * this.lnS + t.chloride[i] * this.lnCl + t.phosphate[i] * this.lnP);
     return g;
   }
 
@@ -206,6 +231,7 @@ export class PointEngine {
     const lnC = this.lnC;
     const lnS = this.lnS;
     const lnCl = this.lnCl;
+    const lnP = this.lnP;
     let best = -1;
     let bestG = INF;
     for (let i = 0, n = aThreshold.length; i < n; i++) {
@@ -213,7 +239,7 @@ export class PointEngine {
       let g = aThreshold[i] + b[i] * pH + c[i] * E;
       if (need) {
         if (need & absent) continue;
-        g += r[i] * (t.carbonate[i] * lnC + t.sulfur[i] * lnS + t.chloride[i] * lnCl);
+        g += r[i] * (t.carbonate[i] * lnC + t.sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP);
       }
       if (g < bestG) {
         bestG = g;
@@ -263,6 +289,14 @@ export function dominantInWater(
 ): SystemSpecies {
   const water = ligands ?? system.ligandTotals ?? {};
   const engine = pointEngine(db, system.element);
-  engine.setWater(system.celsius, system.activity, water.carbonate ?? 0, water.chloride ?? 0, water.sulfur ?? 0, 0);
+  engine.setWater(
+    system.celsius,
+    system.activity,
+    water.carbonate ?? 0,
+    water.chloride ?? 0,
+    water.sulfur ?? 0,
+    0,
+    water.phosphate ?? 0,
+  );
   return engine.table.species[engine.dominant(pH, E)];
 }

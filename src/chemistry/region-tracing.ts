@@ -53,7 +53,15 @@ export function tracedRegions(
 ): Region[] {
   const engine = pointEngine(db, system.element);
   const water = system.ligandTotals ?? {};
-  engine.setWater(system.celsius, system.activity, water.carbonate ?? 0, water.chloride ?? 0, water.sulfur ?? 0, 0);
+  engine.setWater(
+    system.celsius,
+    system.activity,
+    water.carbonate ?? 0,
+    water.chloride ?? 0,
+    water.sulfur ?? 0,
+    0,
+    water.phosphate ?? 0,
+  );
   const toSystem = engine.table.species.map((s) => system.species.findIndex((t) => t.formula === s.formula));
   const regions: Region[] = [];
   const emit = (left: Column, right: Column, leftPH: number, rightPH: number) => {

@@ -1,13 +1,14 @@
 /**
  * Coefficient tables of a metal's species, worked out once per database and element: every species (the metal's
- * own and the carbonate, sulfur and chloride species containing it) is formed from the basis
+ * own and the carbonate, sulfur, chloride and phosphate species containing it) is formed from the basis
  *
- *   metal, H2O, H+, e−, HCO3−, SO4²−, Cl−
+ *   metal, H2O, H+, e−, HCO3−, SO4²−, Cl−, HPO4²−
  *
  * by an exact balance (rationals, reaction.ts), and its reaction's ΔG°r(25 °C), ΔS°r and ΔCp°r are kept, so a point
  * at any temperature and in any water needs only arithmetic on these numbers (point-engine.ts). The ligands' own
- * species get the same treatment from their pivot (HCO3−, SO4²−) for the ligand speciation (ligand-speciation.ts).
+ * species get the same treatment from their pivot (HCO3−, SO4²−, HPO4²−) for the ligand speciation (ligand-speciation.ts).
  */
+import { CORRESPONDENCE_TERMS } from "./criss-cobble";
 import { Database, Species } from "./database";
 import { formationTable } from "./formation";
 import type { Regime, SystemSpecies } from "./system";
@@ -17,17 +18,31 @@ import { ELECTRON, ReactionProperties } from "./thermo";
 export const NEEDS_CARBONATE = 1;
 export const NEEDS_SULFUR = 2;
 export const NEEDS_CHLORIDE = 4;
+export const NEEDS_PHOSPHATE = 8;
 
 /** The pivot (basis) species of each ligand. */
 export const CARBONATE_PIVOT = "HCO3-";
 export const SULFUR_PIVOT = "SO42-";
 export const CHLORIDE_PIVOT = "Cl-";
+export const PHOSPHATE_PIVOT = "HPO42-";
 
-/** Reaction properties as numbers: ΔG°r(T) = g0 − s·(T − T0) + cp·[(T − T0) − T·ln(T/T0)]. */
+/**
+ * Reaction properties as numbers: ΔG°r(T) = g0 − s·(T − T0) + cp·[(T − T0) − T·ln(T/T0)] + the Criss–Cobble
+ * terms above 100 °C (row i's CORRESPONDENCE_TERMS weights from i·CORRESPONDENCE_TERMS; criss-cobble.ts).
+ */
 export interface ReactionColumns {
   readonly g0: Float64Array;
   readonly s: Float64Array;
   readonly cp: Float64Array;
+  readonly correspondence: Float64Array;
+}
+
+/** ΔG°r(T) of row i, J/mol, with dT = T − T0, shape = dT − T·ln(T/T0) and the correspondence basis at T. */
+export function rowGibbs(columns: ReactionColumns, i: number, dT: number, shape: number, basis: Float64Array): number {
+  let extra = 0;
+  for (let k = 0, at = i * CORRESPONDENCE_TERMS; k < CORRESPONDENCE_TERMS; k++)
+    extra += columns.correspondence[at + k] * basis[k];
+  return columns.g0[i] - columns.s[i] * dT + columns.cp[i] * shape + extra;
 }
 
 export interface SpeciesTable extends ReactionColumns {
@@ -36,12 +51,13 @@ export interface SpeciesTable extends ReactionColumns {
   readonly metalIndex: number;
   /** Metal atoms per formula unit. */
   readonly x: Float64Array;
-  /** Basis coefficients (products positive) of H+, e−, HCO3−, SO4²−, Cl−. */
+  /** Basis coefficients (products positive) of H+, e−, HCO3−, SO4²−, Cl−, HPO4²−. */
   readonly proton: Float64Array;
   readonly electron: Float64Array;
   readonly carbonate: Float64Array;
   readonly sulfur: Float64Array;
   readonly chloride: Float64Array;
+  readonly phosphate: Float64Array;
   /** NEEDS_* bits. */
   readonly needs: Uint8Array;
   /** 1 for dissolved species. */
@@ -65,9 +81,15 @@ function putReaction(columns: ReactionColumns, i: number, p: ReactionProperties)
   columns.g0[i] = p.dG0;
   columns.s[i] = p.dS === null ? 0 : p.dS;
   columns.cp[i] = p.dS === null ? 0 : p.dCp;
+  if (p.dS !== null && p.correspondence) columns.correspondence.set(p.correspondence, i * CORRESPONDENCE_TERMS);
 }
 
-const LIGAND_ELEMENTS: Readonly<Record<string, number>> = { C: NEEDS_CARBONATE, S: NEEDS_SULFUR, Cl: NEEDS_CHLORIDE };
+const LIGAND_ELEMENTS: Readonly<Record<string, number>> = {
+  C: NEEDS_CARBONATE,
+  S: NEEDS_SULFUR,
+  Cl: NEEDS_CHLORIDE,
+  P: NEEDS_PHOSPHATE,
+};
 
 const tables = new WeakMap<Database, Map<string, SpeciesTable>>();
 
@@ -96,6 +118,7 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     db.require(CARBONATE_PIVOT),
     db.require(SULFUR_PIVOT),
     db.require(CHLORIDE_PIVOT),
+    db.require(PHOSPHATE_PIVOT),
   ] as const;
   const formationOf = formationTable(db, basis);
   const rows: { s: SystemSpecies; needs: number; coefficients: readonly number[]; props: ReactionProperties }[] = [];
@@ -127,12 +150,14 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     g0: col(),
     s: col(),
     cp: col(),
+    correspondence: new Float64Array(n * CORRESPONDENCE_TERMS),
     x: col(),
     proton: col(),
     electron: col(),
     carbonate: col(),
     sulfur: col(),
     chloride: col(),
+    phosphate: col(),
     needs: new Uint8Array(n),
     dissolved: new Uint8Array(n),
     chargeSquared: col(),
@@ -146,6 +171,7 @@ function buildSpeciesTable(db: Database, element: string): SpeciesTable {
     table.carbonate[i] = c[4];
     table.sulfur[i] = c[5];
     table.chloride[i] = c[6];
+    table.phosphate[i] = c[7];
     table.needs[i] = r.needs;
     table.dissolved[i] = r.s.dissolved ? 1 : 0;
     table.chargeSquared[i] = r.s.dissolved ? r.s.species.charge ** 2 : 0;
@@ -170,6 +196,7 @@ export function ligandTable(db: Database, members: readonly string[]): LigandTab
     g0: new Float64Array(n),
     s: new Float64Array(n),
     cp: new Float64Array(n),
+    correspondence: new Float64Array(n * CORRESPONDENCE_TERMS),
     proton: new Float64Array(n),
     electron: new Float64Array(n),
     chargeSquared: new Float64Array(n),

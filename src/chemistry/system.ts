@@ -17,6 +17,7 @@ import { Database, Species } from "./database";
 import { envelopeRegions } from "./envelope";
 import { clipPolygon, HalfPlane, insideAll, Point, rectangle } from "./halfplane";
 import { formationTable } from "./formation";
+import { presentLigands, temperatureProblem } from "./temperature-range";
 import { ELECTRON, gibbsAt } from "./thermo";
 import type { LigandTotals } from "./ligand-cells";
 
@@ -109,6 +110,10 @@ export function buildSystem(
 
   const ligandElements = new Set<string>();
   for (const cell of ligandCells) for (const l of cell.ligands) for (const e of Object.keys(l.species.elements)) if (e !== "H" && e !== "O") ligandElements.add(e);
+  const has = (e: string) => (ligandElements.has(e) ? 1 : 0);
+  const present = presentLigands(has("C"), has("Cl"), has("S"), has("P"));
+  const problem = temperatureProblem(db, element, options.celsius, present);
+  if (problem) throw new SystemError(problem);
 
   // Species of the metal: those in its own file, plus ligand-bearing species of it in ligand files.
   const candidates = db.allSpecies().filter((s) => s.elements[element] !== undefined);

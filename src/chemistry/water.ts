@@ -1,8 +1,8 @@
 /**
  * Water: the two lines that bound its stability, the ion product Kw(T) and neutral pH.
  *
- * Both lines and Kw come from the species records of data/species/water.json through the same reaction
- * thermodynamics as every other couple (docs/method.md, Temperature: constant ΔCp°r):
+ * Both lines come from the species records of data/species/water.json through the same reaction thermodynamics
+ * as every other couple (thermo.ts); Kw comes from the IAPWS formulation R11-07 (water-properties.ts):
  *
  *   oxygen line     O2(g) + 4 H+ + 4 e− = 2 H2O(l)   E = E°(T) − k(T)·pH + (k(T)/4)·log10 p(O2)
  *   hydrogen line   2 H+ + 2 e− = H2(g)               E = E°(T) − k(T)·pH − (k(T)/2)·log10 p(H2)
@@ -12,13 +12,16 @@
  * E°(H+/H2) is 0 at every temperature by the hydrogen-electrode convention that thermo.ts applies to the electron.
  * Gas pressures in bar (ideal gas, 1 bar standard state). Temperatures in °C, as elsewhere in the engine.
  *
- * Limitation (constant ΔCp°r): ΔCp of water ionisation is taken at its 25 °C value. The true ΔCp becomes less
- * negative towards 100 °C, so the model's pKw drifts above the published values as the temperature rises
- * (tests/reference/water.test.ts prints the residuals against Bandura & Lvov 2006).
+ * The lines keep constant heat capacities of H2O(l), H2(g) and O2(g) up to 300 °C: the rise of the liquid's Cp
+ * above 150 °C and the saturation pressure on the liquid (∫V dP) shift ΔG°f(H2O, l) by about 0.2 kJ/mol each, in
+ * opposite directions, at 300 °C — about 1 mV on the oxygen line (estimate, IAPWS-95 Cp and volume).
+ * Kw from the species records drifts above R11-07 towards 100 °C (constant ΔCp°r of ionisation), so the published
+ * formulation is used instead: pKw at 1 atm below 100 °C, on the saturation curve from 100 °C to 300 °C.
  */
 import { kelvin, nernstFactor } from "./constants";
 import { Database, getDatabase } from "./database";
 import { reactionLogK } from "./reaction";
+import { waterPKw } from "./water-properties";
 
 export type WaterGas = "O2" | "H2";
 
@@ -26,10 +29,10 @@ export type WaterGas = "O2" | "H2";
 const OXYGEN_REDUCTION = { "O2(g)": -1, "H+": -4, "e-": -4, "H2O(l)": 2 } as const;
 /** 2 H+ + 2 e− → H2(g) */
 const HYDROGEN_EVOLUTION = { "H+": -2, "e-": -2, "H2(g)": 1 } as const;
-/** H2O(l) → H+ + OH− */
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow (REDOX.ASSESS).
 const { log10, min } = Math;
 
+/** H2O(l) → H+ + OH− */
 const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
 
 /**
@@ -48,7 +51,10 @@ export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database
   const known = memo.get(celsius);
   if (known !== undefined) return known;
   const k = nernstFactor(kelvin(celsius));
-  const e0 = gas === "O2" ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4 : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
+  const e0 =
+    gas === "O2"
+      ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4
+      : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
   if (memo.size >= REMEMBERED_POTENTIALS) memo.clear();
   memo.set(celsius, e0 + 0); // + 0 turns a negative zero into 0
   return e0 + 0;
@@ -58,37 +64,37 @@ export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database
  * Potential (V vs SHE) of a water line at pH, temperature (°C) and partial pressure of the gas (bar).
  * Above the O2 line water is oxidised to oxygen; below the H2 line it is reduced to hydrogen.
  */
-export function waterLine(pH: number, celsius = 25, gas: WaterGas = "O2", pressure = 1, db: Database = getDatabase()): number {
+export function waterLine(
+  pH: number,
+  celsius = 25,
+  gas: WaterGas = "O2",
+  pressure = 1,
+  db: Database = getDatabase(),
+): number {
   const k = nernstFactor(kelvin(celsius));
   const e0 = waterStandardPotential(gas, celsius, db);
   // Nernst: E = E° − (k/n)·log10 Q, Q = products over reactants with a(H+) = 10^−pH
   return gas === "O2" ? e0 - k * pH + (k / 4) * log10(pressure) : e0 - k * pH - (k / 2) * log10(pressure);
 }
 
-/** pKw by database and temperature (bounded, as the standard potentials). */
-const ionProducts = new WeakMap<Database, Map<number, number>>();
+/** pKw = −log10 Kw of H2O(l) = H+ + OH− at `celsius` (molal activities; IAPWS R11-07 at the model's pressure). */
+export function pKw(celsius = 25): number {
+  return waterPKw(celsius);
+}
 
-/** pKw = −log10 Kw of H2O(l) = H+ + OH− at `celsius` (molal activities, 1 bar). */
-export function pKw(celsius = 25, db: Database = getDatabase()): number {
-  // remembered like the standard potentials: DIC from alkalinity asks for it once per row, and a balance is costly
-  let memo = ionProducts.get(db);
-  if (!memo) ionProducts.set(db, (memo = new Map()));
-  const known = memo.get(celsius);
-  if (known !== undefined) return known;
-  const value = -reactionLogK(db, IONISATION, celsius);
-  if (memo.size >= REMEMBERED_POTENTIALS) memo.clear();
-  memo.set(celsius, value);
-  return value;
+/** pKw of H2O(l) = H+ + OH− from the species records of a database (constant ΔCp°r; for checks of the data). */
+export function recordsPKw(celsius = 25, db: Database = getDatabase()): number {
+  return -reactionLogK(db, IONISATION, celsius);
 }
 
 /** Ion product of water Kw(T). */
-export function kw(celsius = 25, db: Database = getDatabase()): number {
-  return 10 ** -pKw(celsius, db);
+export function kw(celsius = 25): number {
+  return 10 ** -pKw(celsius);
 }
 
 /** pH of pure water, where a(H+) = a(OH−): ½ pKw(T). */
-export function neutralPH(celsius = 25, db: Database = getDatabase()): number {
-  return pKw(celsius, db) / 2;
+export function neutralPH(celsius = 25): number {
+  return pKw(celsius) / 2;
 }
 
 /**
@@ -97,9 +103,14 @@ export function neutralPH(celsius = 25, db: Database = getDatabase()): number {
  * `overpotential` (V, ≥ 0) widens both sides, for the kinetic window in which water decomposes only slowly
  * (about 0.6 V beyond each line in practice).
  */
-export function waterMargin(pH: number, potential: number, celsius = 25, overpotential = 0, db: Database = getDatabase()): number {
+export function waterMargin(
+  pH: number,
+  potential: number,
+  celsius = 25,
+  overpotential = 0,
+  db: Database = getDatabase(),
+): number {
   const upper = waterLine(pH, celsius, "O2", 1, db) + overpotential;
   const lower = waterLine(pH, celsius, "H2", 1, db) - overpotential;
   return min(upper - potential, potential - lower);
 }
-

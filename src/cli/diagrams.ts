@@ -1,14 +1,13 @@
 /**
  * Diagram SVGs for the command line: keeps a bounded, reproducible sample of each metal's points while the file
  * streams, then draws one potential–pH diagram per metal with the samples on it through the task pane's
- * DOM-free renderer (src/taskpane/diagram-svg.ts), run in Node.
+ * DOM-free renderer (src/diagram), run in Node.
  */
 import { getDatabase } from "../chemistry/database";
 import { hasLigands, LIGAND_ORDER, type LigandTotals } from "../chemistry/ligand-cells";
 import { buildLigandSystem } from "../chemistry/ligand-system";
 import { SystemCache } from "../chemistry/system-cache";
-import { displayScale, plotSamples, shownRegions, shownWaterLines } from "../taskpane/diagram-model";
-import { renderDiagramSvg } from "../taskpane/diagram-svg";
+import { displayScale, plotSamples, renderDiagramSvg, shownRegions, shownWaterLines } from "../diagram";
 import type { SamplePoint } from "./evaluate";
 import { Reservoir } from "./reservoir";
 
@@ -77,7 +76,7 @@ export function diagramTotals(points: readonly SamplePoint[]): LigandTotals {
 
 /** "DIC 1.73, chloride 0.56 mmol/kg" (three significant figures); "" for pure water. */
 export function totalsText(totals: LigandTotals): string {
-  const words = { carbonate: "DIC", chloride: "chloride", sulfur: "sulfur" } as const;
+  const words = { carbonate: "DIC", chloride: "chloride", sulfur: "sulfur", phosphate: "orthophosphate (as P)" } as const;
   const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map((l) => `${words[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`);
   return parts.length === 0 ? "" : `${parts.join(", ")} mmol/kg`;
 }

@@ -6,7 +6,7 @@
 import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { mapCells } from "../functions/broadcast";
 import { CellError, CellInput, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
-import { carbonateArg, chlorideArg, sulfurArg } from "../functions/ligand-args";
+import { carbonateArg, chlorideArg, phosphateArg, sulfurArg } from "../functions/ligand-args";
 import { readNumber, toCelsius, type TemperatureScale } from "../tables";
 import { numberField, textField, type CsvFormat, type NumberKind } from "./csv-format";
 import type { DissolvedUnit, PotentialUnitOption } from "./options";
@@ -154,7 +154,7 @@ function textColumn(rows: readonly InputRow[], index: number): CellScalar[][] {
 
 /** #VALUE! is always the input's fault; #N/A only when its message names an input (no DIC for that alkalinity). */
 const SERIOUS = new Set(["#VALUE!"]);
-const LIGAND_ARG = { carbonate: carbonateArg, chloride: chlorideArg, sulfur: sulfurArg } as const;
+const LIGAND_ARG = { carbonate: carbonateArg, chloride: chlorideArg, sulfur: sulfurArg, phosphate: phosphateArg } as const;
 
 /**
  * Argument names of the worksheet functions → the input column that fed them. The functions name the argument
@@ -251,18 +251,18 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       ligandCells.push(mapCells([LIGAND_ARG[l.ligand]], [column], (x) => x).map((cell, r) => (isBlank(column[r][0]) ? [""] : cell)));
     }
   }
-  const { carbonate, chloride, sulfur } = ligandArgs;
+  const { carbonate, chloride, sulfur, phosphate } = ligandArgs;
 
   const perTarget = plan.targets.map((t) => {
     const element: CellInput = t.symbol ?? textColumn(rows, plan.metalColumn as number);
     return {
       target: t,
       element,
-      species: fns.species(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur),
-      regime: fns.regime(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur),
-      above: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, undefined, 1),
-      below: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, undefined, -1),
-      dissolved: fns.dissolved(element, pH, potential, temperature, carbonate, chloride, sulfur, undefined, plan.dissolvedUnit),
+      species: fns.species(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate),
+      regime: fns.regime(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate),
+      above: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, undefined, 1),
+      below: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, undefined, -1),
+      dissolved: fns.dissolved(element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, undefined, plan.dissolvedUnit),
     };
   });
 

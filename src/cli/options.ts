@@ -3,6 +3,7 @@
  * reads is declared and documented here.
  */
 import { parseArgs } from "node:util";
+import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import type { DecimalMark } from "../tables/numbers";
 import type { TemperatureScale } from "../tables/units";
 
@@ -46,6 +47,7 @@ export interface CliOptions {
   dicColumn?: string | null;
   chlorideColumn?: string | null;
   sulfurColumn?: string | null;
+  phosphateColumn?: string | null;
   /** Ignore every ligand column: evaluate in pure water. */
   pureWater: boolean;
   /** Fixed temperature °C, used when there is no temperature column (and for blank cells in it). */
@@ -130,7 +132,10 @@ Columns (header text, or a 1-based column number)
       --chloride-column COL  chloride, mg/L (µg/L, mmol/L or mol/kg when the header says so); "none" to ignore
       --sulfur-column COL    total sulfur: a sulfate column in mg/L as SO4 (mg/L as S, mmol/L or mol/kg when the
                              header says so); "none" to ignore one
-      --pure-water           ignore every alkalinity, DIC, chloride and sulfur column (the functions' defaults)
+      --phosphate-column COL orthophosphate, mg/L as PO4 (mg/L as P when the header says "as P" or "PO4-P";
+                             mmol/L or mol/kg as P likewise); "none" to ignore one
+      --pure-water           ignore every alkalinity, DIC, chloride, sulfur and phosphate column (the functions'
+                             defaults)
 
 Chemistry
   -m, --metal LIST           metals evaluated on every row, comma-separated symbols or names: Fe,Cu,Pb
@@ -228,6 +233,7 @@ export const OPTION_SPEC = {
   "dic-column": { type: "string" },
   "chloride-column": { type: "string" },
   "sulfur-column": { type: "string" },
+  "phosphate-column": { type: "string" },
   "pure-water": { type: "boolean" },
   metal: { type: "string", short: "m", multiple: true },
   electrode: { type: "string", short: "e" },
@@ -325,8 +331,9 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     dicColumn: columnOption(v["dic-column"]),
     chlorideColumn: columnOption(v["chloride-column"]),
     sulfurColumn: columnOption(v["sulfur-column"]),
+    phosphateColumn: columnOption(v["phosphate-column"]),
     pureWater: v["pure-water"] ?? false,
-    temperature: numberOption("temperature", v.temperature, (x) => x >= 0 && x <= 100, "a temperature from 0 to 100 °C"),
+    temperature: numberOption("temperature", v.temperature, (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS, `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`),
     electrode: v.electrode,
     unit,
     activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,

@@ -1,10 +1,11 @@
 /**
- * The water of each row for the command line: which columns feed the [carbonate], [chloride] and [sulfur]
- * arguments of SPECIES, REGIME, BOUNDARY and DISSOLVED, and how their numbers become totals in mol/kg.
+ * The water of each row for the command line: which columns feed the [carbonate], [chloride], [sulfur] and
+ * [phosphate] arguments of SPECIES, REGIME, BOUNDARY and DISSOLVED, and how their numbers become totals in mol/kg.
  *
  * - Carbonate from a DIC column (mol/kg as written; mmol/L, µmol/L or mg/L as C when the header says so), else
  *   from an alkalinity column (mg/L as CaCO3, or meq/L when the header says so) through REDOX.DIC with the row's
  *   own pH and temperature, exactly as a worksheet would pass REDOX.DIC(alkalinity, pH, temperature).
+ * - Orthophosphate: mg/L as PO4, or as P when the header says so ("PO4-P", "as P"); mmol/L or mol/kg (as P) likewise.
  * - Chloride and sulfur: mol/kg when the header says mol/kg; otherwise mg/L (µg/L, mmol/L when the header says
  *   so) converted with the atomic weights of the element records. A sulfate column counts as total sulfur (in oxic
  *   water sulfate carries practically all of it). Dilute water: 1 L taken as 1 kg (common practice).
@@ -29,7 +30,7 @@ export interface LigandInput {
 }
 
 /** Output column of the total actually passed to the functions. */
-export const LIGAND_OUTPUT: Readonly<Record<LigandName, string>> = { carbonate: "DIC_mol_kg", chloride: "chloride_mol_kg", sulfur: "sulfur_mol_kg" };
+export const LIGAND_OUTPUT: Readonly<Record<LigandName, string>> = { carbonate: "DIC_mol_kg", chloride: "chloride_mol_kg", sulfur: "sulfur_mol_kg", phosphate: "phosphate_mol_kg" };
 
 /** g/mol of formula parts from the element records. */
 function molarMass(parts: FormulaParts): number {
@@ -42,9 +43,9 @@ function molarMass(parts: FormulaParts): number {
   return sum;
 }
 
-const OWN_ION: Readonly<Record<WaterColumnRole, FormulaParts>> = { alkalinity: {}, chloride: { Cl: 1 }, sulfate: { S: 1, O: 4 }, dic: { C: 1 } };
-const WHAT: Readonly<Record<WaterColumnRole, string>> = { alkalinity: "alkalinity", chloride: "chloride", sulfate: "sulfate", dic: "DIC" };
-const LIGAND_OF: Readonly<Record<WaterColumnRole, LigandName>> = { alkalinity: "carbonate", chloride: "chloride", sulfate: "sulfur", dic: "carbonate" };
+const OWN_ION: Readonly<Record<WaterColumnRole, FormulaParts>> = { alkalinity: {}, chloride: { Cl: 1 }, sulfate: { S: 1, O: 4 }, dic: { C: 1 }, phosphate: { P: 1 } };
+const WHAT: Readonly<Record<WaterColumnRole, string>> = { alkalinity: "alkalinity", chloride: "chloride", sulfate: "sulfate", dic: "DIC", phosphate: "orthophosphate" };
+const LIGAND_OF: Readonly<Record<WaterColumnRole, LigandName>> = { alkalinity: "carbonate", chloride: "chloride", sulfate: "sulfur", dic: "carbonate", phosphate: "phosphate" };
 
 /** The input for a column serving `role`, in the unit its header names (units.ts). */
 function inputFor(role: WaterColumnRole, column: number, unit: WaterUnit): LigandInput {
@@ -86,6 +87,7 @@ export function planWater(
   const roles: Array<[WaterColumnRole, string | null | undefined, string]> = [
     ["chloride", options.chlorideColumn, "--chloride-column"],
     ["sulfate", options.sulfurColumn, "--sulfur-column"],
+    ["phosphate", options.phosphateColumn, "--phosphate-column"],
   ];
   for (const [role, option, what] of roles) {
     const column = choose(option, auto[role]?.index ?? -1, what);

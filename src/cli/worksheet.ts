@@ -14,11 +14,11 @@ export interface WorksheetFunctions {
   toShe(reading: CellInput, electrode: CellInput, temperature?: CellInput, pH?: CellInput): CellOutput[][];
   /** REDOX.WATERMARGIN(pH, potential, [temperature], [overpotential]) */
   waterMargin(pH: CellInput, potential: CellInput, temperature?: CellInput, overpotential?: CellInput): CellOutput[][];
-  /** REDOX.SPECIES(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength]) */
-  species(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput, ionicStrength?: CellInput): CellOutput[][];
-  /** REDOX.REGIME(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength]) */
-  regime(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput, ionicStrength?: CellInput): CellOutput[][];
-  /** REDOX.BOUNDARY(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength], [direction]) */
+  /** REDOX.SPECIES(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength]) */
+  species(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput, phosphate?: CellInput, ionicStrength?: CellInput): CellOutput[][];
+  /** REDOX.REGIME(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength]) */
+  regime(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput, phosphate?: CellInput, ionicStrength?: CellInput): CellOutput[][];
+  /** REDOX.BOUNDARY(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [direction]) */
   boundary(
     element: CellInput,
     pH: CellInput,
@@ -28,10 +28,11 @@ export interface WorksheetFunctions {
     carbonate?: CellInput,
     chloride?: CellInput,
     sulfur?: CellInput,
+    phosphate?: CellInput,
     ionicStrength?: CellInput,
     direction?: CellInput,
   ): CellOutput[][];
-  /** REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [ionicStrength], [unit]) */
+  /** REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [unit]) */
   dissolved(
     element: CellInput,
     pH: CellInput,
@@ -40,6 +41,7 @@ export interface WorksheetFunctions {
     carbonate?: CellInput,
     chloride?: CellInput,
     sulfur?: CellInput,
+    phosphate?: CellInput,
     ionicStrength?: CellInput,
     unit?: CellInput,
   ): CellOutput[][];

@@ -12,7 +12,7 @@ import { waterMargin } from "../chemistry/water";
 import { mapCells } from "./broadcast";
 import { CellError, CellInput, CellOutput, isBlank, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
-import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";
+import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 import type { PointEngine } from "../chemistry/point-engine";
 import { DISSOLVED_UNITS, engineIn, unitArg } from "./stability-functions";
 
@@ -28,6 +28,8 @@ interface Water {
   carbonate: number;
   chloride: number;
   sulfur: number;
+  /** Total orthophosphate, mol/kg as P. */
+  phosphate: number;
   ionicStrength: number;
 }
 
@@ -41,7 +43,8 @@ function dissolvedWithSolid(engine: PointEngine, pH: number, E: number): { total
 
 /** The seven answers for one sample, in ASSESS_COLUMNS order (the same engine calls as the single functions). */
 function assessRow(element: string, pH: number, E: number, water: Water, unit: string): CellOutput[] {
-  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.ionicStrength);
+  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.phosphate, water.ionicStrength);
+  if (engine instanceof CellError) return ASSESS_COLUMNS.map(() => engine); // e.g. above 100 °C without S° (temperature-range.ts)
   const dominant = engine.table.species[engine.dominant(pH, E)];
   const boundary = (direction: 1 | -1): CellOutput =>
     pointBoundary(engine, pH, E, direction)?.E ?? notAvailable(`no boundary ${direction > 0 ? "above" : "below"} this point between −3 and +3 V`);
@@ -87,7 +90,7 @@ function headerRow(unit: CellInput): CellOutput[] {
   return ASSESS_COLUMNS.map((c) => (c === "dissolved" ? `dissolved (${name})` : c));
 }
 
-/** REDOX.ASSESS(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [ionicStrength], [unit], [header]). */
+/** REDOX.ASSESS(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [unit], [header]). */
 export function assessAt(
   element: CellInput,
   pH: CellInput,
@@ -97,19 +100,21 @@ export function assessAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
   unit?: CellInput,
   header?: CellInput,
 ): CellOutput[][] {
-  const inputs = [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, unit];
+  const inputs = [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, unit];
   const wantHeader = readHeader(header);
   const problem = wantHeader instanceof CellError ? wantHeader : widthProblem(inputs);
   if (problem) return [[toHostError(problem)]];
   const rows: CellOutput[][] = [];
   const cells = mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg, unitArg],
+    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg, unitArg],
     inputs,
-    (el, p, e, t, a, co3, cl, s, i, u) => rows.push(assessRow(el, p, e, { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, ionicStrength: i }, u)) - 1,
+    (el, p, e, t, a, co3, cl, s, po4, i, u) =>
+      rows.push(assessRow(el, p, e, { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, phosphate: po4, ionicStrength: i }, u)) - 1,
   );
   // a blank row stays blank, a row with a bad cell shows its error in every column, others their seven answers
   const out = cells.map(([cell]) => (typeof cell === "number" ? finishRow(rows[cell]) : new Array<CellOutput>(WIDTH).fill(cell)));

@@ -22,7 +22,7 @@ import { electrodeList, metalList, versionTable } from "./list-functions";
  * to oxygen, or the H+/H2 line (gas "H2") below which it is reduced to hydrogen.
  * @customfunction WATERLINE
  * @param {any[][]} pH pH of the solution, −2 to 16.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @param {any[][]} [gas] "O2" for the oxygen line (default) or "H2" for the hydrogen line.
  * @param {any[][]} [pressure] Partial pressure of the gas in bar, above 0 (default 1).
  * @returns {any[][]} Potential in V vs SHE.
@@ -37,7 +37,7 @@ export function waterline(pH: any[][], temperature?: any[][], gas?: any[][], pre
  * @customfunction WATERMARGIN
  * @param {any[][]} pH pH of the solution, −2 to 16.
  * @param {any[][]} potential Potential in V vs SHE, −3 to +3.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @param {any[][]} [overpotential] Extra width in V added beyond each line, 0 or more (default 0; about 0.6 V describes where water decomposes in practice).
  * @returns {any[][]} Margin in V.
  */
@@ -77,7 +77,7 @@ export function fromshe(potential: any[][], electrode: any[][], temperature?: an
  * Converts a potential (Eh, V vs SHE) to pe = F·Eh / (RT ln10).
  * @customfunction PE
  * @param {any[][]} potential Potential in V vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @returns {any[][]} pe (dimensionless).
  */
 export function pe(potential: any[][], temperature?: any[][]): any[][] {
@@ -88,7 +88,7 @@ export function pe(potential: any[][], temperature?: any[][]): any[][] {
  * Converts pe to a potential (Eh, V vs SHE) = pe·RT ln10 / F.
  * @customfunction EH
  * @param {any[][]} pe pe (dimensionless).
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @returns {any[][]} Potential in V vs SHE.
  */
 export function eh(pe: any[][], temperature?: any[][]): any[][] {
@@ -98,7 +98,7 @@ export function eh(pe: any[][], temperature?: any[][]): any[][] {
 /**
  * pH of pure water, ½ pKw, at the temperature (7.00 at 25 °C).
  * @customfunction NEUTRALPH
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @returns {any[][]} Neutral pH.
  */
 export function neutralph(temperature?: any[][]): any[][] {
@@ -108,7 +108,7 @@ export function neutralph(temperature?: any[][]): any[][] {
 /**
  * Nernst slope RT ln10 / F in V per decade (0.05916 V at 25 °C).
  * @customfunction SLOPE
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100 (default 25).
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (default 25): 1 atm below 100 °C, saturation pressure above.
  * @returns {any[][]} Slope in V per decade.
  */
 export function slope(temperature?: any[][]): any[][] {
@@ -121,16 +121,17 @@ export function slope(temperature?: any[][]): any[][] {
  * @param {any[][]} element Element symbol or name: Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo, V, W, Bi, Au, Pt, Hg, As, Sb, Se, U.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE, −3 to +3 (convert meter readings, also in mV, with REDOX.TOSHE).
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species, above 0 and at most 10. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none. Speciated exactly over H3PO4, H2PO4-, HPO4 2- and PO4 3- at the pH; forms lead, copper, zinc, iron and aluminium phosphates.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @returns {any[][]} Formula of the dominant species.
  */
-export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][]): any[][] {
-  return speciesAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength);
+export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][]): any[][] {
+  return speciesAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength);
 }
 
 /**
@@ -139,16 +140,17 @@ export function species(element: any[][], pH: any[][], potential: any[][], tempe
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none. Speciated exactly over H3PO4, H2PO4-, HPO4 2- and PO4 3- at the pH; forms lead, copper, zinc, iron and aluminium phosphates.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @returns {any[][]} immunity, passivation or corrosion.
  */
-export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][]): any[][] {
-  return regimeAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength);
+export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][]): any[][] {
+  return regimeAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength);
 }
 
 /**
@@ -157,17 +159,18 @@ export function regime(element: any[][], pH: any[][], potential: any[][], temper
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of dissolved metal species. Default 1e-6.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none. Speciated exactly over H3PO4, H2PO4-, HPO4 2- and PO4 3- at the pH; forms lead, copper, zinc, iron and aluminium phosphates.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @param {any[][]} [direction] 1 for the boundary above (default), -1 for the one below.
  * @returns {any[][]} Potential of the boundary in volts vs SHE.
  */
-export function boundary(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], direction?: any[][]): any[][] {
-  return boundaryFrom(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, direction);
+export function boundary(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], direction?: any[][]): any[][] {
+  return boundaryFrom(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, direction);
 }
 
 /**
@@ -176,7 +179,7 @@ export function boundary(element: any[][], pH: any[][], potential: any[][], temp
  * @param {any[][]} oxidized Formula of the oxidized species, e.g. Fe3+ or Fe2O3(s).
  * @param {any[][]} reduced Formula of the reduced species, e.g. Fe2+ or Fe(s).
  * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @param {any[][]} [activity] Activity of the dissolved species. Default 1e-6.
  * @returns {any[][]} Equilibrium potential in volts vs SHE.
  */
@@ -185,21 +188,22 @@ export function couple(oxidized: any[][], reduced: any[][], pH: any[][], tempera
 }
 
 /**
- * Total dissolved metal (free ion, hydroxo, carbonato and chloro complexes) in equilibrium with the controlling solid: the solid, the metal included, that is most stable at the point. A number wherever a solid can form; #N/A where even the most stable solid would dissolve (more than 1 mol/kg). Does not depend on a threshold activity. A thermodynamic estimate, not a substitute for laboratory analysis of lead or copper in drinking water.
+ * Total dissolved metal (free ion, hydroxo, carbonato and chloro complexes), lead and copper phosphates included, in equilibrium with the controlling solid: the solid, the metal included, that is most stable at the point. A number wherever a solid can form; #N/A where even the most stable solid would dissolve (more than 1 mol/kg). Does not depend on a threshold activity. A thermodynamic estimate, not a substitute for laboratory analysis of lead or copper in drinking water.
  * @customfunction DISSOLVED
  * @param {any[][]} element Metal symbol or name.
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
- * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride and sulfur are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
+ * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none. Carbonate, chloride, sulfur and phosphate are treated at fixed totals, exactly at the point: carbonate by its α-fractions at the pH, sulfur over sulfate, sulfide and elemental sulfur at the pH and potential, chloride free.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none. Sulfur is redox-active: sulfate in oxidising water, elemental sulfur or sulfide in reducing water.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none. Speciated exactly over H3PO4, H2PO4-, HPO4 2- and PO4 3- at the pH; forms lead, copper, zinc, iron and aluminium phosphates.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @param {any[][]} [unit] mol/kg (default), mg/L or ug/L.
  * @returns {any[][]} Dissolved metal in the chosen unit.
  */
-export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], unit?: any[][]): any[][] {
-  return dissolvedAt(element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, unit);
+export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], unit?: any[][]): any[][] {
+  return dissolvedAt(element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, unit);
 }
 
 /**
@@ -217,7 +221,7 @@ export function ionicstrength(value: any[][], basis: any[][]): any[][] {
  * Table of a metal's species with a header row: formula, state, name, Gibbs energy of formation at the temperature (kJ/mol) and data source.
  * @customfunction SPECIESTABLE
  * @param {any[][]} element Metal symbol or name.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @returns {any[][]} The table; it spills.
  */
 export function speciestable(element: any[][], temperature?: any[][]): any[][] {
@@ -229,7 +233,7 @@ export function speciestable(element: any[][], temperature?: any[][]): any[][] {
  * @customfunction DIC
  * @param {any[][]} alkalinity Total alkalinity in mg/L as CaCO3, 0 or more.
  * @param {any[][]} pH pH, from -2 to 16.
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
  * @returns {any[][]} Dissolved inorganic carbon in mol/kg.
  */
 export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): any[][] {
@@ -242,18 +246,19 @@ export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): an
  * @param {any[][]} element Metal symbol or name (REDOX.METALS lists them).
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} potential Potential in volts vs SHE, −3 to +3 (convert meter readings with REDOX.TOSHE).
- * @param {any[][]} [temperature] Temperature in °C, 0 to 100. Default 25; a blank cell is a missing measurement.
+ * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25; a blank cell is a missing measurement.
  * @param {any[][]} [activity] Activity of dissolved metal species deciding the dominant species. Default 1e-6.
  * @param {any[][]} [carbonate] Total dissolved inorganic carbon in mol/kg (REDOX.DIC gives it from alkalinity); blank = none.
  * @param {any[][]} [chloride] Total chloride in mol/kg; blank = none.
  * @param {any[][]} [sulfur] Total dissolved sulfur (sulfate + sulfide) in mol/kg; blank = none.
+ * @param {any[][]} [phosphate] Total orthophosphate in mol/kg as P (1 mg/L as PO4 = 1.05E-5); blank = none.
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it); blank = ideal dilute solution.
  * @param {any[][]} [unit] Unit of the dissolved metal: mol/kg (default), mg/L or ug/L.
  * @param {any[][]} [header] TRUE for a header row above the answers.
  * @returns {any[][]} Seven columns per sample row.
  */
-export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], ionicStrength?: any[][], unit?: any[][], header?: any[][]): any[][] {
-  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, unit, header);
+export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], unit?: any[][], header?: any[][]): any[][] {
+  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, unit, header);
 }
 
 /**

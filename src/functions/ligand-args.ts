@@ -1,6 +1,6 @@
 /**
- * Optional water arguments shared by SPECIES, REGIME, BOUNDARY and DISSOLVED: [carbonate], [chloride], [sulfur] in
- * mol/kg (blank or 0 = absent) and [ionicStrength] in mol/kg (blank or 0 = ideal dilute solution, γ = 1).
+ * Optional water arguments shared by SPECIES, REGIME, BOUNDARY and DISSOLVED: [carbonate], [chloride], [sulfur],
+ * [phosphate] (as P) in mol/kg (blank or 0 = absent) and [ionicStrength] in mol/kg (blank or 0 = ideal dilute solution, γ = 1).
  */
 import { MAX_IONIC_STRENGTH } from "../chemistry/activity-coefficients";
 import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
@@ -24,6 +24,8 @@ const totalArg = (name: string) =>
 export const carbonateArg = totalArg("carbonate");
 export const chlorideArg = totalArg("chloride");
 export const sulfurArg = totalArg("sulfur");
+/** Total orthophosphate, mol/kg as P (REDOX functions take it between sulfur and ionicStrength). */
+export const phosphateArg = totalArg("phosphate");
 
 export const ionicStrengthArg = withHint(
   numberArg("ionicStrength", { min: 0, max: MAX_IONIC_STRENGTH, unit: "mol/kg", optional: true, defaultValue: 0 }),

@@ -10,23 +10,40 @@ import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
 import { PointEngine, pointEngine } from "../chemistry/point-engine";
 import { speciesTable as metalSpeciesTable } from "../chemistry/species-tables";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
+import { CONSTANT_GIBBS_MAX_CELSIUS, presentLigands, temperatureProblem } from "../chemistry/temperature-range";
 import type { SystemSpecies } from "../chemistry/system";
 import { ownEntry } from "../chemistry/own-entry";
 import { mapCells, textArg } from "./broadcast";
-import { CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
+import { CellError, CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
-import { carbonateArg, chlorideArg, ionicStrengthArg, sulfurArg } from "./ligand-args";
+import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 
 let lastElement = "";
 let lastEngine: PointEngine | null = null;
 
-/** The point engine of an element with the row's water set (the engine keeps what depends only on T). */
-export function engineIn(element: string, celsius: number, activity: number, carbonate: number, chloride: number, sulfur: number, ionicStrength: number): PointEngine {
+/**
+ * The point engine of an element with the row's water set (the engine keeps what depends only on T), or #VALUE!
+ * naming the species without S° when the element cannot be answered above 100 °C (temperature-range.ts).
+ */
+export function engineIn(
+  element: string,
+  celsius: number,
+  activity: number,
+  carbonate: number,
+  chloride: number,
+  sulfur: number,
+  phosphate: number,
+  ionicStrength: number,
+): PointEngine | CellError {
+  if (celsius > CONSTANT_GIBBS_MAX_CELSIUS) {
+    const problem = temperatureProblem(getDatabase(), element, celsius, presentLigands(carbonate, chloride, sulfur, phosphate));
+    if (problem) return valueError(problem);
+  }
   if (element !== lastElement || !lastEngine) {
     lastEngine = pointEngine(getDatabase(), element);
     lastElement = element;
   }
-  lastEngine.setWater(celsius, activity, carbonate, chloride, sulfur, ionicStrength);
+  lastEngine.setWater(celsius, activity, carbonate, chloride, sulfur, ionicStrength, phosphate);
   return lastEngine;
 }
 
@@ -37,12 +54,13 @@ const directionArg = textArg<1 | -1>(
 );
 
 /** The point arguments every stability function shares, in the agreed order. */
-const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg] as const;
+const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg] as const;
 
 /** Reads the point arguments shared by SPECIES and REGIME and answers with `describe` of the dominant species. */
 function dominantAt(describe: (species: SystemSpecies) => string, inputs: readonly CellInput[]): CellOutput[][] {
-  return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, i) => {
-    const engine = engineIn(el, t, a, co3, cl, s, i);
+  return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, po4, i) => {
+    const engine = engineIn(el, t, a, co3, cl, s, po4, i);
+    if (engine instanceof CellError) return engine;
     return describe(engine.table.species[engine.dominant(p, e)]);
   });
 }
@@ -56,9 +74,10 @@ export function speciesAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength]);
+  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength]);
 }
 
 export function regimeAt(
@@ -70,9 +89,10 @@ export function regimeAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength]);
+  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength]);
 }
 
 export function boundaryFrom(
@@ -84,14 +104,17 @@ export function boundaryFrom(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
   direction?: CellInput,
 ): CellOutput[][] {
   return mapCells(
     [...POINT_ARGS, directionArg],
-    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, ionicStrength, direction],
-    (el, p, e, t, a, co3, cl, s, i, d) => {
-      const crossing = pointBoundary(engineIn(el, t, a, co3, cl, s, i), p, e, d);
+    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, direction],
+    (el, p, e, t, a, co3, cl, s, po4, i, d) => {
+      const engine = engineIn(el, t, a, co3, cl, s, po4, i);
+      if (engine instanceof CellError) return engine;
+      const crossing = pointBoundary(engine, p, e, d);
       return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
     },
   );
@@ -116,6 +139,10 @@ function couple(ox: Species, red: Species, pH: number, celsius: number, activity
     throw error;
   }
   if (Math.abs(reaction.electrons) < 1e-12) return notAvailable(`${ox.formula} and ${red.formula} have the same oxidation state`);
+  if (celsius > CONSTANT_GIBBS_MAX_CELSIUS) {
+    const missing = [ox, red].filter((sp) => sp.S === null).map((sp) => sp.formula);
+    if (missing.length) return valueError(`temperature ${celsius} °C: this couple is modelled 0–${CONSTANT_GIBBS_MAX_CELSIUS} °C only; above ${CONSTANT_GIBBS_MAX_CELSIUS} °C the records lack S° for ${missing.join(", ")}`);
+  }
   // the couple's potential does not depend on which member is named first
   const [o, r] = reaction.electrons > 0 ? [ox, red] : [red, ox];
   return couplePotential(db, o, r, { pH, celsius, activity });
@@ -147,14 +174,16 @@ export function dissolvedAt(
   carbonate?: CellInput,
   chloride?: CellInput,
   sulfur?: CellInput,
+  phosphate?: CellInput,
   ionicStrength?: CellInput,
   unit?: CellInput,
 ): CellOutput[][] {
   return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, carbonateArg, chlorideArg, sulfurArg, ionicStrengthArg, unitArg],
-    [element, pH, potential, temperature, carbonate, chloride, sulfur, ionicStrength, unit],
-    (el, p, e, t, co3, cl, s, i, u) => {
-      const engine = engineIn(el, t, 1, co3, cl, s, i);
+    [elementArg, pHArg, potentialArg(), temperatureArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg, unitArg],
+    [element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, unit],
+    (el, p, e, t, co3, cl, s, po4, i, u) => {
+      const engine = engineIn(el, t, 1, co3, cl, s, po4, i);
+      if (engine instanceof CellError) return engine;
       const { total, solid } = dissolvedAtPoint(engine, p, e);
       if (!(total <= MAX_DISSOLVED)) {
         return notAvailable(`no solid forms here: ${engine.table.species[solid].formula}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);
@@ -180,7 +209,8 @@ export function speciesTable(element: CellInput, temperature?: CellInput): CellO
   const header: CellOutput[] = ["formula", "state", "name", `ΔG°f(${celsius} °C) kJ/mol`, "source"];
   const rows: CellOutput[][] = [header];
   for (const s of table.species.filter((_, i) => table.needs[i] === 0)) {
-    const g = formationGibbsAt(db, s.species, celsius);
+    // above 100 °C a record without S° has no temperature dependence to give: the cell is left empty
+    const g = s.species.S === null && celsius > CONSTANT_GIBBS_MAX_CELSIUS ? null : formationGibbsAt(db, s.species, celsius);
     rows.push([s.formula, STATE_WORDS[s.species.state], s.species.name, g === null ? "" : Math.round(g / 10) / 100, s.species.source]);
   }
   return rows;

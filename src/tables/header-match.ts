@@ -198,13 +198,13 @@ export function findHeaderRow(rows: readonly (readonly unknown[])[], maxRows = 1
 }
 
 /**
- * Columns describing the water rather than the sample's reading: total alkalinity, chloride, sulfate and dissolved
- * inorganic carbon, with the unit their header names (units.ts). The pane and the command line take each row's
+ * Columns describing the water rather than the sample's reading: total alkalinity, chloride, sulfate, dissolved
+ * inorganic carbon and orthophosphate, with the unit their header names (units.ts). The pane and the command line take each row's
  * ligand totals from them. Matched apart from the main roles so a sample log's mapping is unchanged by them.
  */
-export type WaterColumnRole = "alkalinity" | "chloride" | "sulfate" | "dic";
+export type WaterColumnRole = "alkalinity" | "chloride" | "sulfate" | "dic" | "phosphate";
 
-export const WATER_COLUMN_ROLES: readonly WaterColumnRole[] = ["alkalinity", "chloride", "sulfate", "dic"];
+export const WATER_COLUMN_ROLES: readonly WaterColumnRole[] = ["alkalinity", "chloride", "sulfate", "dic", "phosphate"];
 
 export interface WaterColumn {
   readonly index: number;
@@ -229,6 +229,22 @@ function isSulfate(tokens: readonly string[]): boolean {
   return at >= 0 && tokens[at + 1] === "4";
 }
 
+/**
+ * A header naming orthophosphate: "orthophosphate", "phosphate", "PO4", "ortho-P". Total phosphorus is not
+ * orthophosphate (it counts organic and condensed phosphorus too) and is not matched.
+ */
+function isPhosphate(tokens: readonly string[]): boolean {
+  if (has(tokens, "orthophosphate", "phosphate", "phosphates", "orthophosphates")) return true;
+  if (has(tokens, "ortho") && (has(tokens, "p", "phosphorus") || tokens.includes("po"))) return true;
+  const at = tokens.indexOf("po");
+  return at >= 0 && tokens[at + 1] === "4";
+}
+
+/** Orthophosphate "as P": "PO4-P", "ortho-P", "(mg/L as P)"; otherwise mg/L as PO4. */
+function phosphateAsP(tokens: readonly string[]): boolean {
+  return tokens.some((t, i) => t === "p" && (tokens[i - 1] === "as" || tokens[i - 1] === "ortho" || (tokens[i - 1] === "4" && tokens[i - 2] === "po")));
+}
+
 /** A header naming dissolved inorganic carbon: "DIC", "TIC", "dissolved inorganic carbon (mmol/L)". */
 function isDic(tokens: readonly string[]): boolean {
   return has(tokens, "dic", "tic") || (has(tokens, "inorganic") && has(tokens, "carbon"));
@@ -247,6 +263,7 @@ function waterUnit(role: WaterColumnRole, tokens: readonly string[]): WaterUnit 
   if (saysMolPerKg(tokens)) return "mol/kg";
   if (role === "dic") return has(tokens, "mg", "ppm") ? "mg/L C" : "mol/kg";
   if (role === "chloride") return has(tokens, "ug", "ppb") ? "ug/L" : "mg/L";
+  if (role === "phosphate") return phosphateAsP(tokens) ? "mg/L P" : "mg/L PO4";
   // sulfate "as S" (SO4-S): the token "s" after "as", or "so 4 s"
   const asS = tokens.some((t, i) => t === "s" && (tokens[i - 1] === "as" || (tokens[i - 1] === "4" && tokens[i - 2] === "so")));
   return asS ? "mg/L S" : "mg/L SO4";
@@ -260,7 +277,7 @@ export function matchWaterColumns(headers: readonly unknown[], mapping: ColumnMa
   const tokens = headers.map((h) => headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)));
   const taken = new Set(Object.values(mapping).filter((i) => i >= 0));
   const out: WaterColumns = {};
-  const tests: Record<WaterColumnRole, (t: readonly string[]) => boolean> = { alkalinity: isAlkalinity, chloride: isChloride, sulfate: isSulfate, dic: isDic };
+  const tests: Record<WaterColumnRole, (t: readonly string[]) => boolean> = { alkalinity: isAlkalinity, chloride: isChloride, sulfate: isSulfate, dic: isDic, phosphate: isPhosphate };
   for (const role of WATER_COLUMN_ROLES) {
     const index = tokens.findIndex((t, i) => !taken.has(i) && t.length > 0 && tests[role](t));
     if (index < 0) continue;

@@ -29,9 +29,10 @@ export const POTENTIAL_UNITS: Readonly<Record<PotentialUnit, number>> = { V: 1, 
 /**
  * Units of the water columns. Alkalinity: mg/L as CaCO3 (the utility unit, the default) or meq/L (also written
  * mmol/L: the acid capacity to pH 4.3). Totals: mg/L or µg/L of the column's own ion, mg/L as SO4, as S or as C,
+ * orthophosphate mg/L as PO4 or as P,
  * mmol/L, µmol/L, or mol/kg.
  */
-export type WaterUnit = "mg/L CaCO3" | "meq/L" | "mg/L" | "ug/L" | "mmol/L" | "umol/L" | "mol/kg" | "mg/L SO4" | "mg/L S" | "mg/L C";
+export type WaterUnit = "mg/L CaCO3" | "meq/L" | "mg/L" | "ug/L" | "mmol/L" | "umol/L" | "mol/kg" | "mg/L SO4" | "mg/L S" | "mg/L C" | "mg/L PO4" | "mg/L P";
 
 /** Parts of a formula whose molar mass a unit uses: { S: 1, O: 4 } for sulfate. */
 export type FormulaParts = Readonly<Record<string, number>>;
@@ -58,6 +59,8 @@ export const WATER_UNITS: Readonly<Record<WaterUnit, WaterUnitEntry>> = {
   "mg/L SO4": { words: "mg/L as SO4", perLitre: 1e-3, weighed: { S: 1, O: 4 }, asCaCO3: null },
   "mg/L S": { words: "mg/L as S", perLitre: 1e-3, weighed: { S: 1 }, asCaCO3: null },
   "mg/L C": { words: "mg/L as C", perLitre: 1e-3, weighed: { C: 1 }, asCaCO3: null },
+  "mg/L PO4": { words: "mg/L as PO4", perLitre: 1e-3, weighed: { P: 1, O: 4 }, asCaCO3: null },
+  "mg/L P": { words: "mg/L as P", perLitre: 1e-3, weighed: { P: 1 }, asCaCO3: null },
 };
 
 /** Words for a water unit, for the pane's menus and captions. */

@@ -13,8 +13,11 @@ export interface PaneSettings {
   unit?: "V" | "mV";
   metal?: string;
   activity?: number;
-  /** Ligand totals as typed (text, blank = absent) and the header of a column chosen instead. */
-  water?: Partial<Record<"carbonate" | "chloride" | "sulfur", { total?: string; column?: string }>>;
+  /**
+   * Ligand totals as typed (text, blank = absent) and the header of a column chosen instead; `typed` records that
+   * the user chose the typed total over a column found by its header.
+   */
+  water?: Partial<Record<"carbonate" | "chloride" | "sulfur" | "phosphate", { total?: string; column?: string; typed?: boolean }>>;
 }
 
 export interface PictureRequest {

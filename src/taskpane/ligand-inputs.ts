@@ -1,5 +1,6 @@
 /**
- * The water the samples are drawn in: ligand totals (carbonate as dissolved inorganic carbon, chloride, sulfur) for
+ * The water the samples are drawn in: ligand totals (carbonate as dissolved inorganic carbon, chloride, sulfur,
+ * orthophosphate as P) for
  * the diagram and for each sample, either typed by the user (mol/kg, blank = absent) or taken row by row from the
  * log's alkalinity, chloride or sulfate column. Pure: no host, no DOM.
  *
@@ -16,7 +17,10 @@ import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
 import type { Database } from "../chemistry/database";
 import { hasLigands, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
-import { alkalinityFactor, molalFactor, readNumber, type WaterColumn, type WaterColumnRole } from "../tables";
+import { alkalinityFactor, isAlkalinityUnit, molalFactor, readNumber, type WaterColumn, type WaterColumnRole } from "../tables";
+import { formatTotals, LIGAND_WORDS } from "../diagram/water-words";
+
+export { formatTotals };
 
 /** Where each ligand's total comes from. */
 export type LigandSource = { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: WaterColumn };
@@ -28,10 +32,11 @@ export const PURE_WATER: WaterSettings = {
   carbonate: { kind: "typed", total: null },
   chloride: { kind: "typed", total: null },
   sulfur: { kind: "typed", total: null },
+  phosphate: { kind: "typed", total: null },
 };
 
 /** The column each ligand can be read from. */
-export const LIGAND_COLUMN: Readonly<Record<LigandName, WaterColumnRole>> = { carbonate: "alkalinity", chloride: "chloride", sulfur: "sulfate" };
+export const LIGAND_COLUMN: Readonly<Record<LigandName, WaterColumnRole>> = { carbonate: "alkalinity", chloride: "chloride", sulfur: "sulfate", phosphate: "phosphate" };
 
 /** A row's value for one ligand: a total in mol/kg, or why none could be read. */
 export type RowTotal = number | { readonly problem: string };
@@ -61,6 +66,9 @@ function molarMass(db: Database, parts: Record<string, number>): number {
   return sum;
 }
 
+/** The ion a ligand column in plain mass units weighs (orthophosphate columns say as PO4 or as P). */
+const OWN_ION: Readonly<Record<LigandName, Record<string, number>>> = { carbonate: { C: 1 }, chloride: { Cl: 1 }, sulfur: { S: 1, O: 4 }, phosphate: { P: 1, O: 4 } };
+
 /**
  * One row's total (mol/kg) of `ligand` from its column cell. `pH` and `celsius` are the row's own (alkalinity needs
  * them). Blank, unreadable, negative or out-of-range values give a problem instead.
@@ -71,7 +79,8 @@ export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, 
   if (value === null) return { problem: `"${String(cell).trim().slice(0, 20)}" is not a number` };
   if (value < 0) return { problem: `${value} is negative` };
   let total: number;
-  if (ligand === "carbonate") {
+  if (ligand === "carbonate" && !isAlkalinityUnit(column.unit)) total = value * molalFactor(column.unit, { C: 1 }, (parts) => molarMass(db, parts));
+  else if (ligand === "carbonate") {
     const mgCaCO3 = value * alkalinityFactor(column.unit);
     if (mgCaCO3 === 0) return { problem: "alkalinity is 0" };
     try {
@@ -80,7 +89,7 @@ export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, 
       if (error instanceof AlkalinityError) return { problem: error.message };
       throw error;
     }
-  } else total = value * molalFactor(column.unit, ligand === "chloride" ? { Cl: 1 } : { S: 1, O: 4 }, (parts) => molarMass(db, parts));
+  } else total = value * molalFactor(column.unit, OWN_ION[ligand], (parts) => molarMass(db, parts));
   if (total === 0) return 0;
   if (!(total > 0 && total <= MAX_LIGAND_TOTAL)) return { problem: `gives ${total.toPrecision(3)} mol/kg, outside 0–${MAX_LIGAND_TOTAL}` };
   return roundTotal(total);
@@ -145,14 +154,6 @@ export function resolveWater(settings: WaterSettings, rows: readonly RowTotals[]
     return own;
   });
   return { diagram, perSample, fromColumns, fallbacks, unusable };
-}
-
-const LIGAND_WORDS: Readonly<Record<LigandName, string>> = { carbonate: "DIC", chloride: "Cl", sulfur: "S" };
-
-/** "DIC 1.35, Cl 2 mmol/kg" — totals in mmol/kg with three significant figures; "" without ligands. */
-export function formatTotals(totals: LigandTotals): string {
-  const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map((l) => `${LIGAND_WORDS[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`);
-  return parts.length === 0 ? "" : `${parts.join(", ")} mmol/kg`;
 }
 
 /** Names of the ligands present, for titles: "carbonate, chloride and sulfur". */

@@ -3,21 +3,28 @@
  * SVG (diagram-svg.ts). The host adapter supplies tables and, in Excel, row selection and picture insertion.
  */
 import { getDatabase } from "../chemistry/database";
+import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import { getElectrodes } from "../chemistry/electrodes";
 import { SystemCache } from "../chemistry/system-cache";
 import { hasLigands, ligandKey, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { buildLigandSystem, MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
 import type { MetalSystem } from "../chemistry/system";
-import type { AxisWindow } from "./axes";
-import { defaultWindow, displayScale, plotSamples, PotentialUnit, shownRegions, shownWaterLines } from "./diagram-model";
-import { formatActivity, renderDiagramSvg, sampleText } from "./diagram-svg";
-import type { PlottedSample, SampleInput } from "./diagram-model";
+import type { AxisWindow } from "../diagram/axes";
+import { defaultWindow, displayScale, PotentialUnit, shownRegions, shownWaterLines } from "../diagram/diagram-model";
+import { escapeXml, formatActivity, renderDiagramSvg, sampleText } from "../diagram/diagram-svg";
+import { boundaryEquations, equationText } from "../diagram/boundary-equations";
+import { ligandEdges } from "../diagram/ligand-edges";
+import { fitWindow, isClustered, zoomWindow } from "../diagram/view-window";
+import { DiagramView, type DrawingOptions } from "./pane-view";
+import { SITE_COLOURS } from "./pane-legend";
+import { resultsCsv, resultsHtml, resultsTsv } from "./results-table";
+import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
 import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "../tables";
 import { LIGAND_COLUMN, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
-import { CANVAS_SAMPLES, SampleCanvas } from "./sample-canvas";
 import type { HostAdapter, PaneSettings } from "./host";
 import { blobToBase64, download, svgToPngBlob } from "./png-export";
-import { median, readSamples, SampleTable } from "./sample-table";
+import { median, readSamples, SampleTable, SkippedRow } from "./sample-table";
+import { AnswerPlan, answerSamples, RowLigand, rowLigand } from "./sample-answers";
 
 const ROLE_WORDS: Record<ColumnRole, string> = {
   pH: "pH",
@@ -31,6 +38,10 @@ const ROLE_WORDS: Record<ColumnRole, string> = {
 
 /** Temperature spread above which one diagram no longer represents the rows well (°C). */
 export const SPREAD_WARNING = 10;
+/** The caption's promise about markers (sample-answers.ts keeps it). */
+export const OWN_ANSWERS =
+  "Each marker's shape and colour are its own row's answer (REDOX.REGIME at that row's temperature and water, its reading as logged); the regions are drawn at the single temperature and water above.";
+export const POINT_PROMPT = "Hover over a sample, or tab to the samples and use the arrow keys, for its details.";
 /** Sample count up to which the on-screen SVG carries a <title> per point. */
 export const TITLED_SAMPLES = 2000;
 
@@ -51,8 +62,8 @@ const input = (id: string) => $(id) as HTMLInputElement;
 const select = (id: string) => $(id) as HTMLSelectElement;
 
 interface Drawn {
-  svg: string;
   caption: string[];
+  /** The drawing for export, title, legend and caption inside. */
   render(width: number, height: number, titles?: boolean): string;
 }
 
@@ -68,7 +79,10 @@ export class DiagramPane {
   private plotted: { samples: PlottedSample[]; unit: PotentialUnit } = { samples: [], unit: "V" };
   private settings: PaneSettings;
   private waterFound: WaterColumns = {};
-  private canvas: SampleCanvas | null = null;
+  private view!: DiagramView;
+  /** "fit": the samples' window; "full": pH −2…16, ±2 V; null: fit when the samples are clustered. */
+  private viewMode: "fit" | "full" | null = null;
+  private lastWindow: AxisWindow | null = null;
 
   constructor(private readonly host: HostAdapter) {
     this.settings = host.loadSettings() ?? {};
@@ -78,6 +92,7 @@ export class DiagramPane {
     const metals = select("metal");
     for (const symbol of this.db.metals()) metals.add(new Option(`${this.db.system(symbol)?.title ?? symbol} (${symbol})`, symbol));
     metals.value = this.settings.metal && this.db.metals().includes(this.settings.metal) ? this.settings.metal : "Fe";
+    for (const symbol of this.db.metals()) select("compare-metal").add(new Option(`${this.db.system(symbol)?.title ?? symbol} (${symbol})`, symbol));
     const electrodes = select("electrode");
     for (const e of getElectrodes().all()) electrodes.add(new Option(`${e.id} — ${e.name}`, e.id));
     electrodes.value = this.settings.electrode ?? "SHE";
@@ -128,6 +143,7 @@ export class DiagramPane {
     for (const id of ["ph-min", "ph-max", "e-min", "e-max"]) $(id).addEventListener("change", () => this.readWindow());
     $("reset-axes").addEventListener("click", () => {
       this.window = null;
+      this.viewMode = null;
       redraw();
     });
     $("export-svg").addEventListener("click", () => this.exportSvg());
@@ -136,7 +152,12 @@ export class DiagramPane {
       $("insert-sheet").hidden = false;
       $("insert-sheet").addEventListener("click", () => void this.insertPicture());
     }
+    this.view = new DiagramView($("diagram"), {
+      show: (sample) => ($("point-info").textContent = sampleText(sample, this.plotted.unit)),
+      choose: (sample) => this.selectRow(sample.row),
+    });
     this.wireSamples();
+    this.wireView();
     this.draw();
     await this.host.start(
       (table) => this.setTable(table),
@@ -207,21 +228,46 @@ export class DiagramPane {
     for (const ligand of LIGAND_ORDER) {
       const role = LIGAND_COLUMN[ligand];
       const menu = select(`${ligand}-source`);
-      const previous = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : this.settings.water?.[ligand]?.column;
+      const previous = /^(col|dic):/.test(menu.value) ? menu.selectedOptions[0]?.dataset.header : this.settings.water?.[ligand]?.column;
       menu.replaceChildren(new Option("typed total", "typed"));
+      // carbonate: a measured DIC column first (used before alkalinity, as the command line does)
+      const dic = ligand === "carbonate" ? this.waterFound.dic : undefined;
+      if (dic) {
+        const option = new Option(`from the DIC column “${headers[dic.index]}” (${WATER_UNIT_WORDS[dic.unit]})`, `dic:${dic.index}`);
+        option.dataset.header = headers[dic.index];
+        menu.add(option);
+      }
       const found = this.waterFound[role];
       const order = found ? [found.index, ...headers.keys()].filter((i, k, all) => all.indexOf(i) === k) : [...headers.keys()];
       for (const i of order) {
         if (Object.values(this.mapping).includes(i)) continue; // pH, potential… are not water columns
+        if (i !== found?.index && !this.mostlyNumbers(i)) continue; // site, date, note… are not either
         const unit = WATER_UNIT_WORDS[waterColumnAt(role, headers, i).unit];
         const option = new Option(`from ${i === found?.index ? `the ${role} column` : "column"} “${headers[i] || `column ${i + 1}`}” (${unit})`, `col:${i}`);
         option.dataset.header = headers[i];
         menu.add(option);
       }
+      // a column found by its header is used unless the user chose otherwise (as the command line does)
       const keep = previous === undefined ? -1 : headers.indexOf(previous);
-      menu.value = keep >= 0 && !Object.values(this.mapping).includes(keep) ? `col:${keep}` : "typed";
+      const typedChosen = this.settings.water?.[ligand]?.typed === true;
+      const usable = (i: number) => i >= 0 && !Object.values(this.mapping).includes(i);
+      const auto = dic && !typedChosen ? `dic:${dic.index}` : found && !typedChosen && usable(found.index) ? `col:${found.index}` : "typed";
+      menu.value = dic && keep === dic.index ? `dic:${dic.index}` : usable(keep) ? `col:${keep}` : auto;
       input(`${ligand}-total`).disabled = menu.value !== "typed";
     }
+  }
+
+  /** Whether most filled cells of column `index` (among the first 200 rows) are numbers. */
+  private mostlyNumbers(index: number): boolean {
+    let numbers = 0;
+    let filled = 0;
+    for (const row of (this.table?.rows ?? []).slice(0, 200)) {
+      const cell = row[index];
+      if (cell === null || cell === undefined || String(cell).trim() === "") continue;
+      filled++;
+      if (typeof cell === "number" || /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(String(cell))) numbers++;
+    }
+    return filled > 0 && numbers >= filled / 2;
   }
 
   /** Ligand settings from the controls; a message when a typed total is not a number in range. */
@@ -231,6 +277,12 @@ export class DiagramPane {
     const headers = this.table?.headers ?? [];
     for (const ligand of LIGAND_ORDER) {
       const source = select(`${ligand}-source`).value;
+      if (source.startsWith("dic:") && this.table) {
+        const column = waterColumnAt("dic", headers, Number(source.slice(4)));
+        settings[ligand] = { kind: "column", column };
+        columns[ligand] = column;
+        continue;
+      }
       if (source.startsWith("col:") && this.table) {
         const column = waterColumnAt(LIGAND_COLUMN[ligand], headers, Number(source.slice(4)));
         settings[ligand] = { kind: "column", column };
@@ -294,8 +346,9 @@ export class DiagramPane {
     for (const ligand of LIGAND_ORDER) {
       const menu = select(`${ligand}-source`);
       const total = input(`${ligand}-total`).value.trim();
-      const column = menu.value.startsWith("col:") ? menu.selectedOptions[0]?.dataset.header : undefined;
-      if (total || column !== undefined) water[ligand] = { ...(total ? { total } : {}), ...(column !== undefined ? { column } : {}) };
+      const column = /^(col|dic):/.test(menu.value) ? menu.selectedOptions[0]?.dataset.header : undefined;
+      const typed = column === undefined && this.waterFound[LIGAND_COLUMN[ligand]] !== undefined;
+      if (total || column !== undefined || typed) water[ligand] = { ...(total ? { total } : {}), ...(column !== undefined ? { column } : {}), ...(typed ? { typed } : {}) };
     }
     this.settings = { ...this.settings, water };
     void this.host.saveSettings(this.settings);
@@ -338,12 +391,11 @@ export class DiagramPane {
       celsius = Math.round(median(temperatures) * 10) / 10;
       input("temperature").value = String(celsius);
     }
-    if (!(celsius >= 0 && celsius <= 100)) return this.status("Temperature: 0 to 100 °C.");
+    if (!(celsius >= MIN_CELSIUS && celsius <= MAX_CELSIUS)) return this.status(`Temperature: ${MIN_CELSIUS} to ${MAX_CELSIUS} °C.`);
     if (this.table) read = readSamples(this.table, { ...options, celsius });
     this.showTemperatureSpread(temperatures, celsius);
 
     // the water: typed ligand totals, or each row's from a column with the median for the diagram
-    const inputs = read?.samples ?? [];
     const resolved = resolveWater(waterInput.settings, read?.rowTotals ?? []);
     const ligands = hasLigands(resolved.diagram) || resolved.fromColumns.length > 0;
     let system: MetalSystem;
@@ -353,59 +405,109 @@ export class DiagramPane {
       return this.status(`The diagram could not be built: ${(error as Error).message}`);
     }
     const scale = displayScale(electrode, unit, celsius);
-    const window = this.window ?? defaultWindow(scale);
+    const own = this.ownAnswers(read, waterInput.settings, { metal, electrode, unit, activity, celsius }, scale);
+    const samples = this.siteFiltered(own.samples);
+    const window = this.chooseWindow(scale, samples);
     this.showWindow(window);
     const regions = shownRegions(system, window, scale);
-    let samples: PlottedSample[];
-    if (!ligands) samples = plotSamples(system, inputs, scale);
-    else {
-      const perRow = resolved.perSample;
-      const withWater: SampleInput[] = inputs.map((s, i) => ({ ...s, ligands: perRow[i] }));
-      const systems = new Map<string, MetalSystem>([[ligandKey(resolved.diagram), system]]);
-      const systemOf = (s: SampleInput) => {
-        const totals = s.ligands ?? {};
-        const key = ligandKey(totals);
-        let own = systems.get(key);
-        if (!own) systems.set(key, (own = this.systemIn(metal, celsius, activity, totals)));
-        return own;
-      };
-      try {
-        samples = plotSamples(system, withWater, scale, systemOf);
-      } catch (error) {
-        return this.status(`The samples could not be placed: ${(error as Error).message}`);
-      }
-    }
     this.showWater(resolved, ligands);
     const water = shownWaterLines(celsius, scale);
     const metalTitle = this.db.system(metal)?.title ?? metal;
     const title = hasLigands(resolved.diagram) ? `${metalTitle} in water with ${ligandNames(resolved.diagram)}` : `${metalTitle} in water`;
     const compilation = this.db.system(metal)?.compilation ?? "";
     const waterLine = waterCaption(resolved);
+    const atMedian = !this.manualTemperature && temperatures.length > 0;
     const caption = [
-      `${title} at ${celsius} °C, dissolved activity ${formatActivity(activity)}, potentials in ${unit} vs ${scale.electrode}.`,
+      `${title} at ${celsius} °C${atMedian ? " (the rows' median temperature)" : ""}, dissolved activity ${formatActivity(activity)}, potentials in ${unit} vs ${scale.electrode}.`,
+      ...(samples.length > 0 ? [OWN_ANSWERS] : []),
       ...(waterLine ? [waterLine] : []),
       `Samples: ${this.table ? `${this.table.source}; ${samples.length} drawn, ${read?.skipped.length ?? 0} not drawn` : "none"}. Thermodynamic data: ${firstSentence(compilation)}`,
     ];
     const showKineticBand = input("kinetic").checked;
-    // above this many points the on-screen diagram leaves out the per-point <title> (the info line shows the text)
-    const sampleTitles = samples.length <= TITLED_SAMPLES;
     this.plotted = { samples, unit };
-    // above CANVAS_SAMPLES the screen gets the markers on a canvas layer (sample-canvas.ts); exports keep circles
-    const onCanvas = samples.length > CANVAS_SAMPLES;
-    const render = (width: number, height: number, titles = sampleTitles, omitSamples = false) =>
-      renderDiagramSvg({ system, window, regions, samples, water, axisTitle: scale.axisTitle, unit, width, height, title, caption, showKineticBand, sampleTitles: titles, omitSamples });
-    const container = $("diagram");
-    const width = Math.max(360, Math.min(900, Math.floor(container.clientWidth || 640)));
-    const height = Math.round(width * 0.82);
-    const svg = render(width, height, sampleTitles, onCanvas);
-    this.canvas?.clear();
-    container.innerHTML = svg;
-    if (onCanvas) this.canvas?.draw(container.querySelector("svg")!, samples);
-    container.dataset.samplesDrawn = String(samples.length);
-    container.dataset.samplesOn = onCanvas ? "canvas" : "svg";
-    this.drawn = { svg, caption, render };
-    this.showSkipped(read);
+    const sites = this.siteColours(own.samples);
+    const drawing: DrawingOptions = {
+      system,
+      window,
+      regions,
+      samples,
+      water,
+      axisTitle: scale.axisTitle,
+      unit,
+      title,
+      caption,
+      showKineticBand,
+      // above this many points the on-screen diagram leaves out the per-point <title> (the info line shows the text)
+      sampleTitles: samples.length <= TITLED_SAMPLES,
+      sampleFill: sites ? (p: PlottedSample) => sites.get(p.site ?? "") ?? "#888888" : undefined,
+    };
+    const compare = this.compareOptions(drawing, { electrode, unit, activity, celsius }, resolved.diagram, read, waterInput.settings, scale);
+    $("point-info").textContent = POINT_PROMPT; // the previous drawing's sample may not be on this one
+    this.view.show({ options: drawing, caption, compare, legend: { kinetic: showKineticBand, ligandEdges: ligandEdges(system), sites } });
+    this.drawn = {
+      caption,
+      render: (width, height, titles = true) => renderDiagramSvg({ ...drawing, width, height, sampleTitles: titles }),
+    };
+    this.showResults(samples, system, celsius, resolved.diagram);
+    this.showSkipped(read, own.failed);
     if (this.table) this.status(`${samples.length} sample${samples.length === 1 ? "" : "s"} drawn from ${this.table.source}.`);
+  }
+
+  /**
+   * Every drawn row's own answer from the worksheet functions (sample-answers.ts): its reading as logged at its
+   * own temperature, its own water. Rows the functions refuse move to the "not drawn" list with their message.
+   */
+  private ownAnswers(
+    read: ReturnType<typeof readSamples> | null,
+    water: WaterSettings,
+    at: { metal: string; electrode: string; unit: PotentialUnit; activity: number; celsius: number },
+    scale: DisplayScale,
+  ): { samples: PlottedSample[]; failed: SkippedRow[] } {
+    if (!this.table || !read) return { samples: [], failed: [] };
+    const table = this.table;
+    const ligands: RowLigand[] = [];
+    const typed: Partial<Record<LigandName, number>> = {};
+    for (const ligand of LIGAND_ORDER) {
+      const source = water[ligand];
+      if (source.kind === "column") ligands.push(rowLigand(ligand, source.column));
+      else if (source.total !== null && source.total > 0) typed[ligand] = source.total;
+    }
+    const plan: AnswerPlan = {
+      ...at,
+      phColumn: this.mapping.pH,
+      potentialColumn: this.mapping.potential,
+      temperatureColumn: this.mapping.temperature,
+      temperatureUnit: this.temperatureUnit,
+      ligands,
+      typed,
+    };
+    const rows = read.indices.map((i) => table.rows[i]);
+    const answers = answerSamples(plan, rows);
+    const samples: PlottedSample[] = [];
+    const failed: SkippedRow[] = [];
+    const electrodeId = scale.electrode;
+    read.samples.forEach((s, k) => {
+      const a = answers[k];
+      if ("error" in a) return void failed.push({ row: s.row, reason: a.error });
+      const logged = String(rows[k][this.mapping.potential] ?? "").trim();
+      const plotted: PlottedSample = {
+        row: s.row,
+        id: s.id,
+        pH: s.pH,
+        E: scale.fromSHE(s.pH, a.eSHE),
+        eSHE: a.eSHE,
+        formula: a.species,
+        regime: a.regime,
+        waterMargin: a.margin,
+        dissolved: s.dissolved,
+        reading: `${logged} ${at.unit} vs ${electrodeId}`,
+        celsius: a.celsius,
+        equilibrium: a.dissolved,
+        site: this.mapping.site >= 0 ? String(rows[k][this.mapping.site] ?? "").trim() : undefined,
+      };
+      samples.push(hasLigands(a.water) ? { ...plotted, ligands: a.water } : plotted);
+    });
+    return { samples, failed };
   }
 
   private showTemperatureSpread(temperatures: number[], celsius: number): void {
@@ -430,7 +532,7 @@ export class DiagramPane {
   private showWater(resolved: ReturnType<typeof resolveWater>, ligands: boolean): void {
     const note = $("ligand-note");
     if (!ligands && resolved.unusable.length === 0) {
-      note.textContent = "A column choice reads each row's value: DIC from the row's alkalinity, pH and temperature; sulfate as total sulfur. The diagram is drawn at the median, each sample at its own row's water.";
+      note.textContent = "A column choice reads each row's value: DIC from the row's alkalinity, pH and temperature; sulfate as total sulfur; orthophosphate as PO4 (as P when the header says so). The diagram is drawn at the median, each sample at its own row's water.";
       return;
     }
     const parts: string[] = [];
@@ -454,10 +556,10 @@ export class DiagramPane {
     input("e-max").step = step;
   }
 
-  private showSkipped(read: ReturnType<typeof readSamples> | null): void {
+  private showSkipped(read: ReturnType<typeof readSamples> | null, failed: readonly SkippedRow[] = []): void {
     const list = $("skipped");
     list.replaceChildren();
-    const skipped = read?.skipped ?? [];
+    const skipped = [...(read?.skipped ?? []), ...failed].sort((a, b) => a.row - b.row);
     const parts: string[] = [];
     if (skipped.length === 0) parts.push("None.");
     else parts.push(`${skipped.length} row${skipped.length === 1 ? "" : "s"} with blank or unreadable cells:`);
@@ -472,44 +574,125 @@ export class DiagramPane {
     }
   }
 
-  /** Hover, focus, click and Enter on sample points. */
+  /** Hover and click on sample points (the keyboard is the view's: one tab stop, arrow keys). */
   private wireSamples(): void {
     const container = $("diagram");
     const info = $("point-info");
     const target = (event: Event) => (event.target instanceof Element ? event.target.closest(".rc-sample") : null);
-    const show = (event: Event) => {
+    container.addEventListener("mouseover", (event) => {
       const point = target(event);
-      if (!point) return;
-      const sample = this.plotted.samples[Number(point.getAttribute("data-i"))];
-      info.textContent = sample ? sampleText(sample, this.plotted.unit) : (point.querySelector("title")?.textContent ?? "");
-    };
-    container.addEventListener("mouseover", show);
-    container.addEventListener("focusin", show);
-    const selectRow = (row: number) => {
-      if (this.host.selectRow && Number.isFinite(row)) void this.host.selectRow(row).catch((e: unknown) => this.status(`Could not select row ${row}: ${(e as Error).message}`));
-    };
-    const choose = (point: Element) => selectRow(Number(point.getAttribute("data-row")));
-    this.canvas = new SampleCanvas(container, {
-      show: (i) => {
-        const sample = this.plotted.samples[i];
-        if (sample) info.textContent = sampleText(sample, this.plotted.unit);
-      },
-      choose: (i) => {
-        const sample = this.plotted.samples[i];
-        if (sample) selectRow(sample.row);
-      },
+      const sample = point ? this.plotted.samples[Number(point.getAttribute("data-i"))] : undefined;
+      if (sample) info.textContent = sampleText(sample, this.plotted.unit);
     });
     container.addEventListener("click", (event) => {
       const point = target(event);
-      if (point) choose(point);
+      const sample = point ? this.plotted.samples[Number(point.getAttribute("data-i"))] : undefined;
+      if (sample) this.selectRow(sample.row);
     });
-    container.addEventListener("keydown", (event) => {
-      const point = target(event);
-      if (point && (event.key === "Enter" || event.key === " ")) {
-        event.preventDefault();
-        choose(point);
-      }
-    });
+  }
+
+  private selectRow(row: number): void {
+    if (this.host.selectRow && Number.isFinite(row)) void this.host.selectRow(row).catch((e: unknown) => this.status(`Could not select row ${row}: ${(e as Error).message}`));
+  }
+
+
+  /** View buttons: fit to the samples, the full range, zoom in and out. */
+  private wireView(): void {
+    const setWindow = (w: AxisWindow | null, mode: "fit" | "full" | null) => {
+      this.window = w;
+      this.viewMode = mode;
+      this.draw();
+    };
+    $("fit-samples").addEventListener("click", () => setWindow(null, "fit"));
+    $("full-range").addEventListener("click", () => setWindow(null, "full"));
+    $("zoom-in").addEventListener("click", () => this.lastWindow && setWindow(zoomWindow(this.lastWindow, 0.6), this.viewMode));
+    $("zoom-out").addEventListener("click", () => this.lastWindow && setWindow(zoomWindow(this.lastWindow, 1 / 0.6), this.viewMode));
+    for (const id of ["color-by", "site-filter", "compare-metal"]) $(id).addEventListener("change", () => this.draw());
+    $("export-csv").addEventListener("click", () => download(new Blob([resultsCsv(this.plotted.samples)], { type: "text/csv" }), this.fileName("csv")));
+    $("copy-results").addEventListener("click", () => void this.copy(resultsTsv(this.plotted.samples), "Results copied: paste them into a sheet."));
+    $("copy-equations").addEventListener("click", () => void this.copy(this.equationsText, "Boundary equations copied."));
+  }
+
+  private async copy(text: string, done: string): Promise<void> {
+    try {
+      await navigator.clipboard.writeText(text);
+      this.status(done);
+    } catch (error) {
+      this.status(`Could not copy (${(error as Error).message}); use Download CSV instead.`);
+    }
+  }
+
+  /** The shown window: the user's limits, else fitted to the samples when asked or when they are clustered. */
+  private chooseWindow(scale: DisplayScale, samples: readonly PlottedSample[]): AxisWindow {
+    const full = defaultWindow(scale);
+    let chosen = this.window;
+    if (!chosen && this.viewMode !== "full") {
+      const fitted = fitWindow(samples, scale.unit);
+      if (fitted && (this.viewMode === "fit" || isClustered(fitted, full))) chosen = fitted;
+    }
+    this.lastWindow = chosen ?? full;
+    return this.lastWindow;
+  }
+
+  /** Samples of the chosen site only (the "Show site" menu), refreshing the menu's list of sites. */
+  private siteFiltered(samples: PlottedSample[]): PlottedSample[] {
+    const menu = select("site-filter");
+    const sites = [...new Set(samples.map((s) => s.site ?? "").filter((x) => x !== ""))].sort();
+    const keep = menu.value;
+    menu.replaceChildren(new Option("all sites", ""), ...sites.map((x) => new Option(x, x)));
+    menu.value = sites.includes(keep) ? keep : "";
+    menu.disabled = sites.length === 0;
+    return menu.value === "" ? samples : samples.filter((s) => s.site === menu.value);
+  }
+
+  /** Site → colour when colouring by site (Okabe–Ito colours, cycling past eight sites). */
+  private siteColours(samples: readonly PlottedSample[]): Map<string, string> | undefined {
+    if (select("color-by").value !== "site") return undefined;
+    const sites = [...new Set(samples.map((s) => s.site ?? "").filter((x) => x !== ""))].sort();
+    if (sites.length === 0) return undefined;
+    return new Map(sites.map((x, i) => [x, SITE_COLOURS[i % SITE_COLOURS.length]]));
+  }
+
+  /** A second metal with the same window, temperature, water and samples (their own answers for that metal). */
+  private compareOptions(
+    first: DrawingOptions,
+    at: { electrode: string; unit: PotentialUnit; activity: number; celsius: number },
+    totals: LigandTotals,
+    read: ReturnType<typeof readSamples> | null,
+    water: WaterSettings,
+    scale: DisplayScale,
+  ): DrawingOptions | undefined {
+    const metal = select("compare-metal").value;
+    if (!metal || metal === select("metal").value) return undefined;
+    try {
+      const system = this.systemIn(metal, at.celsius, at.activity, totals);
+      const own = this.ownAnswers(read, water, { ...at, metal }, scale);
+      const keep = new Set(first.samples.map((s) => s.row));
+      const title = `${this.db.system(metal)?.title ?? metal} in water`;
+      return { ...first, system, regions: shownRegions(system, first.window, scale), samples: own.samples.filter((s) => keep.has(s.row)), title, sampleFill: undefined };
+    } catch (error) {
+      this.status(`The comparison could not be drawn: ${(error as Error).message}`);
+      return undefined;
+    }
+  }
+
+  private equationsText = "";
+
+  /** The results table and the pure-water boundary equations at the diagram's temperature. */
+  private showResults(samples: readonly PlottedSample[], system: MetalSystem, celsius: number, totals: LigandTotals): void {
+    $("results-table").innerHTML = resultsHtml(samples);
+    const metal = system.element;
+    const pure = hasLigands(totals) ? this.systemIn(metal, celsius, system.activity, {}) : system;
+    const equations = boundaryEquations(pure, { pHMin: -2, pHMax: 16, eMin: -2, eMax: 2 });
+    const head = ["between", "and", "boundary (E in V vs SHE)"];
+    const rows = equations.map((e) => [e.first, e.second, equationText(e)]);
+    this.equationsText = [head, ...rows].map((r) => r.join("\t")).join("\n") + "\n";
+    $("equations-note").textContent =
+      `${this.db.system(metal)?.title ?? metal} in pure water at ${celsius} °C, dissolved activity ${formatActivity(system.activity)}: each boundary drawn between pH −2 and 16 and −2…+2 V vs SHE.` +
+      (hasLigands(totals) ? " (The drawing itself includes the water's ligands; these equations do not.)" : "");
+    $("equations-table").innerHTML =
+      `<thead><tr>${head.map((h) => `<th scope="col">${escapeXml(h)}</th>`).join("")}</tr></thead>` +
+      `<tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${escapeXml(c)}</td>`).join("")}</tr>`).join("")}</tbody>`;
   }
 
   private exportSize(): { width: number; height: number } {

@@ -1,22 +1,21 @@
 /**
  * Large sample sets on screen: the markers painted on a canvas laid over the SVG diagram instead of one SVG
  * circle each (thousands of circles cost the browser more to parse, lay out and paint than the whole diagram).
- * Same look as the SVG markers (diagram-svg.ts): outlined circles of radius 4.5 px filled by regime, later rows
- * on top. Exports still write SVG circles.
+ * Same markers as the SVG (diagram/markers.ts: shape and fill by regime, outlined), later rows on top. Exports still write SVG circles.
  *
  * Access without per-point elements: the pointer finds the nearest sample (within a few pixels) for the info line
  * and the click; the canvas takes keyboard focus, arrow keys step through the samples in pH order (Home/End jump
  * to the ends), Enter or Space selects the row, and a ring marks the current sample.
  */
-import { Axes, makeAxes } from "./axes";
-import type { PlottedSample } from "./diagram-model";
-import { MARKER_FILLS, MARKER_OUTLINE } from "./palette";
+import { Axes, makeAxes } from "../diagram/axes";
+import type { PlottedSample } from "../diagram/diagram-model";
+import { MARKER_FILLS, MARKER_OUTLINE, MARKER_RADIUS, traceMarker } from "../diagram/markers";
 import type { Regime } from "../chemistry/system";
+
+export { MARKER_RADIUS };
 
 /** Above this many samples the pane paints markers on the canvas layer; up to it, SVG circles. */
 export const CANVAS_SAMPLES = 2000;
-/** Marker radius, px (as in diagram-svg.ts). */
-export const MARKER_RADIUS = 4.5;
 /** The pointer picks the nearest sample within this distance, px. */
 export const PICK_DISTANCE = 6;
 
@@ -150,8 +149,7 @@ export class SampleCanvas {
         const regime: Regime = samples[pixels.index[k]].regime;
         ctx.beginPath();
         for (; k < pixels.x.length && samples[pixels.index[k]].regime === regime; k++) {
-          ctx.moveTo(pixels.x[k] + MARKER_RADIUS, pixels.y[k]);
-          ctx.arc(pixels.x[k], pixels.y[k], MARKER_RADIUS, 0, 2 * Math.PI);
+          traceMarker(ctx, regime, pixels.x[k], pixels.y[k]);
         }
         ctx.fillStyle = MARKER_FILLS[regime];
         ctx.fill();

@@ -6,9 +6,10 @@
  */
 import { getElectrodes } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
+import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import type { LigandName } from "../chemistry/ligand-cells";
 import { ColumnMapping, findHeaderRow, POINT_NUMBER, toCelsius, WaterColumn } from "../tables";
-import type { PotentialUnit, SampleInput } from "./diagram-model";
+import type { PotentialUnit, SampleInput } from "../diagram/diagram-model";
 import { RowTotals, rowTotal } from "./ligand-inputs";
 
 /** A block of cells as a host hands it over: header texts, data rows, and the row number of each data row. */
@@ -48,6 +49,8 @@ export interface ReadResult {
   readonly otherMetal: number;
   /** Per drawn sample (aligned with `samples`): its ligand totals read from the water columns. */
   readonly rowTotals: RowTotals[];
+  /** Per drawn sample: its index in `table.rows`. */
+  readonly indices: number[];
 }
 
 const NUMBER = POINT_NUMBER;
@@ -90,6 +93,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
   const skipped: SkippedRow[] = [];
   let otherMetal = 0;
   const rowTotals: RowTotals[] = [];
+  const indices: number[] = [];
   const waterColumns = Object.entries(options.waterColumns ?? {}) as [LigandName, WaterColumn][];
   const db = waterColumns.length > 0 ? getDatabase() : null;
   const cell = (row: readonly unknown[], index: number) => (index >= 0 ? row[index] : undefined);
@@ -118,7 +122,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     if ("error" in temperature) reasons.push(`temperature ${temperature.error}`);
     else if ("value" in temperature) {
       celsius = toCelsius(temperature.value, options.temperatureUnit);
-      if (celsius < 0 || celsius > 100) reasons.push(`temperature ${temperature.value} °${options.temperatureUnit} is outside 0…100 °C`);
+      if (celsius < MIN_CELSIUS || celsius > MAX_CELSIUS) reasons.push(`temperature ${temperature.value} °${options.temperatureUnit} is outside ${MIN_CELSIUS}…${MAX_CELSIUS} °C`);
       else hasTemperature = true;
     }
     let eSHE = NaN;
@@ -137,6 +141,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     const id = [idCell, siteCell].filter((c) => c !== undefined && c !== null && String(c).trim() !== "").map((c) => String(c).trim())[0] ?? "";
     const dissolved = readNumber(cell(row, mapping.dissolved));
     samples.push({ row: rowNumber, id, pH: pH.value, eSHE, dissolved: "value" in dissolved ? dissolved.value : undefined });
+    indices.push(i);
     if (hasTemperature) temperatures.push(celsius);
     if (waterColumns.length === 0) rowTotals.push(NO_TOTALS);
     else {
@@ -145,7 +150,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
       rowTotals.push(totals);
     }
   });
-  return { samples, temperatures, skipped, otherMetal, rowTotals };
+  return { samples, temperatures, skipped, otherMetal, rowTotals, indices };
 }
 
 /**

@@ -147,4 +147,54 @@ describe("Excel adapter", () => {
     expect(caption).toMatchObject({ kind: "textbox", left: 5 * 64 + 12, top: 3 * 15 + 450 + 4, width: 600 });
     expect(caption.content).toMatch(/AgCl-sat/);
   });
+
+  it("replaces the picture and caption it inserted before instead of adding more", async () => {
+    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 4, cols: 5 };
+    workbook.shapes.push({ kind: "image", content: "someone else's chart", name: "Chart 1" });
+    const { adapter } = await started(workbook);
+    for (const caption of ["first", "second", "third"]) await adapter.insertPicture({ pngBase64: "iVBORw0KGgo=", widthPx: 800, heightPx: 600, caption });
+    expect(workbook.shapes.map((x) => [x.kind, x.name])).toEqual([
+      ["image", "Chart 1"],
+      ["image", "Redox Cells diagram"],
+      ["textbox", "Redox Cells diagram caption"],
+    ]);
+    expect(workbook.shapes[2].content).toBe("third");
+    expect(workbook.shapes[2].height).toBeLessThan(48); // a one-line caption is one line tall
+  });
+
+  it("reads only the used part of a selection of whole columns", async () => {
+    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    workbook.selection = { sheet: "Log", row: 0, col: 0, rows: 1_048_576, cols: 5 };
+    const { tables } = await started(workbook);
+    expect(workbook.largestRead).toBeLessThanOrEqual(LOG.length * 5);
+    expect(tables[0].rows).toHaveLength(4);
+    expect(tables[0].headers[2]).toBe("pH (field)");
+  });
+
+  it("re-reads once after a burst of edits", async () => {
+    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 4, cols: 5 };
+    const { tables } = await started(workbook);
+    const reads = workbook.valueReads;
+    for (const v of [7.0, 7.1, 7.15, 7.25]) workbook.userEdits(3, 2, v);
+    await vi.advanceTimersByTimeAsync(350);
+    expect(tables).toHaveLength(2);
+    expect(tables[1].rows[0][2]).toBe(7.25);
+    expect(workbook.valueReads - reads).toBeLessThanOrEqual(2); // the block and the rows above it, once
+  });
+
+  it("says clearly which API set is missing", async () => {
+    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const old = { isSetSupported: (_name: string, version?: string) => Number(version) < 1.4 };
+    const status: string[] = [];
+    const tables: SampleTable[] = [];
+    await new ExcelAdapter({ excel: workbook.excel as never, settings: workbook.settings, requirements: old }).start((t) => tables.push(t), (x) => status.push(x));
+    expect(tables).toHaveLength(0);
+    expect(status.join(" ")).toMatch(/ExcelApi 1\.4/);
+    const noShapes = new ExcelAdapter({ excel: workbook.excel as never, settings: workbook.settings, requirements: { isSetSupported: (_n, v) => Number(v) < 1.9 } });
+    await noShapes.start(() => {}, () => {});
+    await expect(noShapes.insertPicture({ pngBase64: "x", widthPx: 10, heightPx: 10, caption: "" })).rejects.toThrow(/ExcelApi 1\.9.*Download PNG/);
+    expect(workbook.shapes).toHaveLength(0);
+  });
 });

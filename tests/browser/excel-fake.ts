@@ -1,7 +1,7 @@
 /**
  * A small stand-in for the parts of Office.js the Excel adapter uses: Excel.run with a request context, the
- * selected range, tables, surrounding region, worksheets with shapes, selection and change events, and document
- * settings. Values are available after sync as in Office.js; reads of `values` are counted.
+ * selected range, tables, surrounding region, used range and intersections, worksheets with named shapes,
+ * selection and change events, and document settings. Values are available after sync as in Office.js; reads of `values` are counted.
  */
 
 export interface FakeTable {
@@ -79,6 +79,7 @@ export class FakeWorkbook {
       width: cols * COLUMN_WIDTH,
       get values() {
         workbook.valueReads++;
+        workbook.largestRead = Math.max(workbook.largestRead, rows * cols);
         return Array.from({ length: rows }, (_, r) => Array.from({ length: cols }, (_, c) => cells[row + r]?.[col + c] ?? ""));
       },
       worksheet: workbook.worksheet(sheet),
@@ -101,8 +102,20 @@ export class FakeWorkbook {
       select() {
         workbook.userSelects(row, col, rows, cols, sheet);
       },
+      getIntersectionOrNullObject(other: { rowIndex: number; columnIndex: number; rowCount: number; columnCount: number; isNullObject?: boolean }) {
+        const top = Math.max(row, other.rowIndex);
+        const left = Math.max(col, other.columnIndex);
+        const bottom = Math.min(row + rows, other.rowIndex + other.rowCount);
+        const right = Math.min(col + cols, other.columnIndex + other.columnCount);
+        if (other.isNullObject || bottom <= top || right <= left) return { load() {}, isNullObject: true };
+        return workbook.range(sheet, top, left, bottom - top, right - left);
+      },
+      isNullObject: false,
     };
   }
+
+  /** Ranges asked for, by size: the largest range whose values were read (whole-column selections). */
+  largestRead = 0;
 
   private worksheet(name: string): Record<string, unknown> {
     const workbook = this;
@@ -110,7 +123,20 @@ export class FakeWorkbook {
       name,
       load() {},
       getRangeByIndexes: (row: number, col: number, rows: number, cols: number) => workbook.range(name, row, col, rows, cols),
+      getUsedRange: () => {
+        // the block from A1 to the last non-blank cell (Excel's used range, values only)
+        const cells = workbook.sheets.get(name)!;
+        const filled = (v: unknown) => v !== "" && v !== null && v !== undefined;
+        const lastRow = cells.reduce<number>((last, r, i) => (r.some(filled) ? i : last), -1);
+        const lastCol = cells.reduce<number>((last, r) => Math.max(last, r.reduce<number>((c, v, j) => (filled(v) ? j : c), -1)), -1);
+        if (lastRow < 0) return { load() {}, isNullObject: true, rowIndex: 0, columnIndex: 0, rowCount: 0, columnCount: 0 };
+        return workbook.range(name, 0, 0, lastRow + 1, lastCol + 1);
+      },
       shapes: {
+        getItemOrNullObject(shapeName: string) {
+          const shape = workbook.shapes.find((x) => x.name === shapeName);
+          return { load() {}, isNullObject: !shape, delete: () => void (workbook.shapes = workbook.shapes.filter((x) => x !== shape)) };
+        },
         addImage(base64: string) {
           const shape: FakeShape = { kind: "image", content: base64 };
           workbook.shapes.push(shape);

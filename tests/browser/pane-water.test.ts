@@ -1,8 +1,8 @@
 /**
  * The built standalone pane with ligands: the invented demo log's lead rows drawn in a water with carbonate from
  * the alkalinity column (each row's DIC from its alkalinity, pH and temperature, the diagram at the median), and
- * typed chloride and sulfur totals. Every marker's regime and fill must equal REDOX.REGIME given the same totals;
- * every species of the split diagram is labelled; the caption names the water. Then a large synthetic set, drawn
+ * typed chloride and sulfur totals. Every marker's regime and fill must equal REDOX.REGIME of its row (own temperature, own DIC, typed totals);
+ * every species of the split diagram is labelled (in place, by number or in the key); the caption names the water. Then a large synthetic set, drawn
  * on the canvas layer: isolated markers carry their regime's fill, and the keyboard reaches the samples.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -13,8 +13,8 @@ import { OpenPane, openStandalonePane, ROOT } from "../support/serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildLigandSystem } from "../../src/chemistry/ligand-system";
 import { toSHE } from "../../src/chemistry/electrodes";
-import { displayScale, shownRegions } from "../../src/taskpane/diagram-model";
-import { MARKER_FILLS } from "../../src/taskpane/palette";
+import { displayScale, shownRegions } from "../../src/diagram/diagram-model";
+import { MARKER_FILLS } from "../../src/diagram/palette";
 import { roundTotal } from "../../src/taskpane/ligand-inputs";
 import { median } from "../../src/taskpane/sample-table";
 import { CANVAS_SAMPLES } from "../../src/taskpane/sample-canvas";
@@ -43,10 +43,12 @@ const hex = (rgb: string) => "#" + (rgb.match(/\d+/g) ?? []).slice(0, 3).map((v)
 
 describe("lead rows of the demo log in a water with carbonate, chloride and sulfur", () => {
   beforeAll(async () => {
+    await page.click("#paste-details summary"); // the paste box is folded away under the demo and file buttons
     await page.fill("#paste-input", DEMO_TEXT);
     await page.click("#draw-pasted");
     await page.waitForSelector("#diagram .rc-sample");
     await page.selectOption("#metal", "Pb");
+    await page.click("#ligands summary"); // the water settings are folded away under the diagram
     const alkalinity = await page.$$eval("#carbonate-source option", (options) => options.find((o) => /alkalinity column/.test(o.textContent ?? ""))?.getAttribute("value"));
     expect(alkalinity).toBeTruthy();
     await page.selectOption("#carbonate-source", alkalinity!);
@@ -54,7 +56,7 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
       await page.fill(id, value);
       await page.locator(id).blur(); // the input's change event redraws the diagram
     }
-    await page.waitForFunction(() => /Water: DIC/.test(document.querySelector("#diagram .rc-caption")?.textContent ?? ""));
+    await page.waitForFunction(() => /Water: DIC/.test(document.querySelector("#diagram-caption")?.textContent ?? ""));
   });
 
   it("fills every marker by REDOX.REGIME given the row's DIC and the typed totals", async () => {
@@ -74,26 +76,24 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
     expect(markers.length).toBeGreaterThan(15);
 
     // each drawn row's DIC computed here from its cells with REDOX.DIC; blank alkalinity → the median
-    const ownDic = new Map<number, number | null>();
-    for (const m of markers) {
-      const row = byLine.get(m.row)!;
-      const alk = row[col("alkalinity_mg_L_CaCO3")].trim();
-      ownDic.set(m.row, alk === "" ? null : roundTotal(dicAt(Number(alk), Number(row[col("pH")]), Number(row[col("temp_C")]))[0][0] as number));
-    }
-    const diagramDic = roundTotal(median([...ownDic.values()].filter((v): v is number => v !== null)));
+    // each row's own answer: its temperature, its DIC from its alkalinity (REDOX.DIC, as a worksheet chains it)
     let changedByLigands = 0;
+    const dics: number[] = [];
     for (const m of markers) {
       const row = byLine.get(m.row)!;
       expect(row[col("pipe_metal")]).toBe("Pb");
       const pH = Number(row[col("pH")]);
-      const eSHE = toSHE(Number(row[col("ORP_mV_AgCl_sat")]) / 1000, "AgCl-sat", Number(row[col("temp_C")]));
-      const dic = ownDic.get(m.row) ?? diagramDic;
-      const regime = regimeAt("Pb", pH, eSHE, c.celsius, c.activity, dic, CHLORIDE, SULFUR)[0][0];
+      const t = Number(row[col("temp_C")]);
+      const eSHE = toSHE(Number(row[col("ORP_mV_AgCl_sat")]) / 1000, "AgCl-sat", t);
+      const alk = row[col("alkalinity_mg_L_CaCO3")].trim();
+      const dic = alk === "" ? "" : (dicAt(Number(alk), pH, t)[0][0] as number);
+      if (typeof dic === "number") dics.push(roundTotal(dic));
+      const regime = regimeAt("Pb", pH, eSHE, t, c.activity, dic, CHLORIDE, SULFUR)[0][0];
       expect(m.regime, `row ${m.row}`).toBe(regime);
       expect(hex(m.fill), `row ${m.row}`).toBe(MARKER_FILLS[regime as keyof typeof MARKER_FILLS]);
-      if (regimeAt("Pb", pH, eSHE, c.celsius, c.activity)[0][0] !== regime) changedByLigands++;
+      if (regimeAt("Pb", pH, eSHE, t, c.activity)[0][0] !== regime) changedByLigands++;
     }
-    // carbonate solids passivate lead where pure water would corrode it: the ligands must show
+    const diagramDic = roundTotal(median(dics));
     expect(changedByLigands).toBeGreaterThan(0);
 
     // the diagram is drawn at the median DIC: every species of the split diagram has its label
@@ -104,20 +104,22 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
     });
     const system = buildLigandSystem(getDatabase(), "Pb", { celsius: c.celsius, activity: c.activity }, { carbonate: diagramDic, chloride: CHLORIDE, sulfur: SULFUR });
     const regions = shownRegions(system, svg.window, displayScale("AgCl-sat", "mV", c.celsius));
-    const labels = new Set(await page.$$eval("#diagram text.rc-label", (nodes) => nodes.map((n) => n.getAttribute("data-formula"))));
+    // every species is labelled in place, numbered, or (too small to mark) named in the key
+    const labels = new Set(await page.$$eval("#diagram text.rc-label, #region-key li", (nodes) => nodes.map((n) => n.getAttribute("data-formula"))));
     for (const r of regions) expect(labels.has(r.formula), `label of ${r.formula}`).toBe(true);
     const regimes = new Set(await page.$$eval("#diagram .rc-region", (nodes) => nodes.map((n) => n.getAttribute("data-formula"))));
     expect(regimes).toEqual(new Set(regions.map((r) => r.formula)));
   });
 
   it("names the water and the method; hover text carries the row's water", async () => {
-    expect(await page.textContent("#diagram .rc-title")).toBe("Lead in water with carbonate, sulfur and chloride");
-    const caption = (await page.textContent("#diagram .rc-caption")) ?? "";
+    expect(await page.textContent("#diagram-title")).toBe("Lead in water with carbonate, sulfur and chloride");
+    const caption = (await page.textContent("#diagram-caption")) ?? "";
     expect(caption).toMatch(/Water: DIC [\d.]+, S 0\.2, Cl 0\.5 mmol\/kg/);
     expect(caption).toMatch(/median of the rows' alkalinity/);
     expect(caption).toMatch(/speciated\s*exactly\s*at\s*every\s*point/);
-    await page.locator("#diagram .rc-sample").first().focus();
-    await expect.poll(() => page.textContent("#point-info")).toMatch(/; water DIC [\d.]+, S 0\.2, Cl 0\.5 mmol\/kg$/);
+    await page.focus("#diagram .rc-samples");
+    await page.keyboard.press("ArrowRight");
+    await expect.poll(() => page.textContent("#point-info")).toMatch(/, water DIC [\d.]+, S 0\.2, Cl 0\.5 mmol\/kg; /);
   });
 
   it("returns to the pure-water diagram when the ligands are cleared", async () => {
@@ -126,8 +128,8 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
       await page.fill(id, "");
       await page.locator(id).blur();
     }
-    await expect.poll(() => page.textContent("#diagram .rc-title")).toBe("Lead in water");
-    expect(await page.textContent("#diagram .rc-caption")).not.toMatch(/Water:/);
+    await expect.poll(() => page.textContent("#diagram-title")).toBe("Lead in water");
+    expect(await page.textContent("#diagram-caption")).not.toMatch(/Water:/);
   });
 });
 
@@ -139,6 +141,7 @@ describe("a large set on the canvas layer", () => {
   beforeAll(async () => {
     await page.evaluate(() => localStorage.clear()); // the first part chose lead, mV and Ag/AgCl; start afresh
     await pane.reload();
+    await page.click("#paste-details summary");
     const text = ["id,pH,E (V) vs SHE", ...inputs.map((s) => `${s.id},${s.pH.toFixed(3)},${s.eSHE.toFixed(4)}`)].join("\n");
     await page.evaluate((value) => ((document.getElementById("paste-input") as HTMLTextAreaElement).value = value), text);
     await page.click("#draw-pasted");
@@ -185,7 +188,7 @@ describe("a large set on the canvas layer", () => {
   it("reaches the samples from the keyboard and names them in the info line", async () => {
     await page.focus("#diagram canvas");
     const first = (await page.textContent("#point-info")) ?? "";
-    expect(first).toMatch(/^S-\d+ \(row \d+\): pH -?\d+\.\d{2}, E /);
+    expect(first).toMatch(/^S-\d+ \(row \d+\): pH -?\d+\.\d{2}, reading -?[\d.]+ V vs SHE = /);
     await page.keyboard.press("ArrowRight");
     const second = (await page.textContent("#point-info")) ?? "";
     expect(second).not.toBe(first);

@@ -13,12 +13,14 @@ import { OpenPane, openStandalonePane, ROOT } from "../support/serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildSystem } from "../../src/chemistry/system";
 import { toSHE, fromSHE } from "../../src/chemistry/electrodes";
-import { displayScale, shownRegions } from "../../src/taskpane/diagram-model";
-import { makeAxes } from "../../src/taskpane/axes";
-import { diagramLayout } from "../../src/taskpane/diagram-svg";
-import { formulaSegments, segmentsText } from "../../src/taskpane/formula-markup";
-import { MARKER_FILLS } from "../../src/taskpane/palette";
+import { displayScale, shownRegions } from "../../src/diagram/diagram-model";
+import { makeAxes } from "../../src/diagram/axes";
+import { diagramLayout } from "../../src/diagram/diagram-svg";
+import { formulaSegments, segmentsText } from "../../src/diagram/formula-markup";
+import { MARKER_FILLS } from "../../src/diagram/palette";
 import { regimeAt } from "../../src/functions/stability-functions";
+import { dicAt } from "../../src/functions/carbonate-functions";
+import { MARKER_RADIUS } from "../../src/diagram/markers";
 import { parseDelimited } from "../../src/tables";
 
 const DEMO_TEXT = readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8");
@@ -29,6 +31,7 @@ let page: Page;
 beforeAll(async () => {
   pane = await openStandalonePane();
   page = pane.page;
+  await page.click("#paste-details summary"); // the paste box is folded away under the demo and file buttons
   await page.fill("#paste-input", DEMO_TEXT);
   await page.click("#draw-pasted");
   await page.waitForSelector("#diagram .rc-sample");
@@ -52,7 +55,7 @@ async function controls() {
       window: { pHMin: attr("data-ph-min"), pHMax: attr("data-ph-max"), eMin: attr("data-e-min"), eMax: attr("data-e-max") },
       width: attr("width"),
       height: attr("height"),
-      captionLines: svg.querySelectorAll(".rc-caption text").length,
+      captionLines: -1, // the screen drawing has no caption inside: it is HTML under it
     };
   });
 }
@@ -67,20 +70,26 @@ describe("standalone pane with the demo data pasted", () => {
   });
 
   it("labels every region of the engine's diagram in place", async () => {
+    await page.click("#full-range"); // the fitted view of the clustered demo shows one region
     const c = await controls();
     const system = buildSystem(getDatabase(), c.metal, { celsius: c.celsius, activity: c.activity });
     const regions = shownRegions(system, c.window, displayScale(c.electrode, c.unit, c.celsius));
     expect(regions.length).toBeGreaterThan(2);
-    const labels = await page.$$eval("#diagram text.rc-label", (nodes) => nodes.map((n) => ({ formula: n.getAttribute("data-formula"), text: n.textContent })));
+    const labels = await page.$$eval("#diagram text.rc-label", (nodes) =>
+      nodes.map((n) => ({ formula: n.getAttribute("data-formula"), text: n.textContent, key: n.getAttribute("data-key") })),
+    );
+    const key = await page.$$eval("#region-key li", (nodes) => nodes.map((n) => ({ formula: n.getAttribute("data-formula"), number: n.getAttribute("value") })));
     for (const r of regions) {
       const label = labels.find((l) => l.formula === r.formula);
-      expect(label, `label of ${r.formula}`).toBeDefined();
-      expect(label!.text).toBe(segmentsText(formulaSegments(r.formula, r.charge)));
+      const listed = key.find((k) => k.formula === r.formula);
+      expect(label ?? listed, `label of ${r.formula}`).toBeDefined();
+      if (label && label.key === null) expect(label.text).toBe(segmentsText(formulaSegments(r.formula, r.charge)));
+      if (label && label.key !== null) expect(listed?.number, `key entry of ${r.formula}`).toBe(label.key);
     }
-    expect(labels.length).toBe(regions.length);
+    expect(labels.length + key.filter((k) => !labels.some((l) => l.key === k.number)).length).toBe(regions.length);
   });
 
-  it("puts every sample at the pixel of the axis transform (within 1 px) with REDOX.REGIME's regime", async () => {
+  it("puts every sample at the pixel of the axis transform (within 1 px) with REDOX.REGIME's regime for its own row", async () => {
     const c = await controls();
     const parsed = parseDelimited(DEMO_TEXT);
     const header = parsed.rows[0];
@@ -110,9 +119,14 @@ describe("standalone pane with the demo data pasted", () => {
       const rowCelsius = Number(row[col("temp_C")]);
       const eSHE = toSHE(Number(row[col("ORP_mV_AgCl_sat")]) / 1000, "AgCl-sat", rowCelsius);
       const shown = fromSHE(eSHE, "AgCl-sat", c.celsius) * 1000;
+      // the box centre of a triangle sits 0.34 r above its centroid (markers.ts: apex 1.35 r up, base 0.675 r down)
+      const offset = m.regime === "corrosion" ? -0.3375 * MARKER_RADIUS : 0;
       expect(Math.abs(m.x - axes.x(pH)), `row ${m.row} x`).toBeLessThanOrEqual(1);
-      expect(Math.abs(m.y - axes.y(shown)), `row ${m.row} y`).toBeLessThanOrEqual(1);
-      const regime = regimeAt(c.metal, pH, eSHE, c.celsius, c.activity)[0][0];
+      expect(Math.abs(m.y - offset - axes.y(shown)), `row ${m.row} y`).toBeLessThanOrEqual(1);
+      // the row's own water: REDOX.DIC of its alkalinity at its pH and temperature, as a worksheet chains it
+      const alk = row[col("alkalinity_mg_L_CaCO3")].trim();
+      const dic = alk === "" ? "" : (dicAt(Number(alk), pH, rowCelsius)[0][0] as number);
+      const regime = regimeAt(c.metal, pH, eSHE, rowCelsius, c.activity, dic)[0][0];
       expect(m.regime, `row ${m.row}`).toBe(regime);
       expect(m.fill).not.toBe("");
       expect(hex(m.fill)).toBe(MARKER_FILLS[regime as keyof typeof MARKER_FILLS]);
@@ -125,11 +139,23 @@ describe("standalone pane with the demo data pasted", () => {
     for (const item of items) expect(item).toMatch(/^Row \d+: .+(blank|not a number|decimal comma|outside)/);
   });
 
-  it("shows the hover text of a sample on keyboard focus", async () => {
-    const first = page.locator("#diagram .rc-sample").first();
-    await first.focus();
-    const row = await first.getAttribute("data-row");
-    await expect.poll(() => page.textContent("#point-info")).toMatch(new RegExp(`row ${row}\\): pH \\d+\\.\\d{2}, E .* mV; .+, (immunity|passivation|corrosion); water margin`));
+  it("shows the logged reading, E vs SHE and the row's temperature of the sample reached by the arrow keys", async () => {
+    await page.focus("#diagram .rc-samples");
+    await page.keyboard.press("Home");
+    const row = await page.getAttribute("#diagram .rc-sample.rc-current", "data-row");
+    await expect
+      .poll(() => page.textContent("#point-info"))
+      .toMatch(new RegExp(`row ${row}\\): pH \\d+\\.\\d{2}, reading -?\\d+ mV vs AgCl-sat = -?\\d\\.\\d{3} V vs SHE at [\\d.]+ °C.*; .+, (immunity|passivation|corrosion); water margin`));
+  });
+
+  it("clears the info line when the metal changes", async () => {
+    await page.focus("#diagram .rc-samples");
+    await page.keyboard.press("Home");
+    await expect.poll(() => page.textContent("#point-info")).toMatch(/^\S.*\(row \d+\)/);
+    const metal = await page.inputValue("#metal");
+    await page.selectOption("#metal", metal === "Cu" ? "Fe" : "Cu");
+    expect(await page.textContent("#point-info")).toMatch(/^Hover over a sample/);
+    await page.selectOption("#metal", metal);
   });
 
   it("exports a valid SVG and a PNG of the stated size; saves a screenshot", async () => {
@@ -140,6 +166,7 @@ describe("standalone pane with the demo data pasted", () => {
     const root = new XMLParser({ ignoreAttributes: false }).parse(svgText).svg;
     expect(root["@_width"]).toBe("1200");
 
+    await page.click("#export-details summary");
     await page.fill("#png-width", "1000");
     await page.fill("#png-height", "760");
     const pngDownload = page.waitForEvent("download");

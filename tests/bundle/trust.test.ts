@@ -93,7 +93,7 @@ describe("readings in mV", () => {
 describe("errors Excel shows", () => {
   it("out-of-range numbers are #VALUE! naming argument, value and range; DIC below pH 4.5 is #N/A with its reason", () => {
     expectError(first("SPECIES", cell("Fe"), cell(17.2), cell(0)), "#VALUE!", "pH: 17.2 is out of range (at least -2 and at most 16)");
-    expectError(first("NEUTRALPH", cell(101)), "#VALUE!", /^temperature: 101 is out of range/);
+    expectError(first("NEUTRALPH", cell(301)), "#VALUE!", /^temperature: 301 is out of range/); // 0–300 °C
     expectError(first("TOSHE", cell(0.1), cell("SCE"), cell(90)), "#VALUE!", /^temperature: 90 °C is outside the range of SCE/);
     expectError(named("BOUNDARY", { element: cell("Fe"), pH: cell(7), potential: cell(0), direction: cell(2) })[0][0], "#VALUE!", /^direction: expected 1 \(above\) or -1 \(below\), got 2/);
     expectError(first("DIC", cell(50), cell(3.5)), "#N/A", /^alkalinity, pH: pH 3.5 is below the alkalinity end point/);

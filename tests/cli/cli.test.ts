@@ -125,9 +125,9 @@ describe("a generated 200 000-row log", () => {
         expectedText(waterMarginAt(pH, ePassed, t)[0][0], "volts"),
         expectedText(speciesAt(metal, pH, ePassed, t)[0][0]),
         expectedText(regimeAt(metal, pH, ePassed, t)[0][0]),
-        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, 1)[0][0], "volts"),
-        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, -1)[0][0], "volts"),
-        expectedText(dissolvedAt(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, "ug/L")[0][0]),
+        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, undefined, 1)[0][0], "volts"),
+        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, undefined, -1)[0][0], "volts"),
+        expectedText(dissolvedAt(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, "ug/L")[0][0]),
       ];
       const got = record.slice(SYNTHETIC_HEADER.length, SYNTHETIC_HEADER.length + 7);
       expect(got, `row ${index + 1}`).toEqual(expected);
@@ -275,9 +275,9 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
       expect(row.sulfur_mol_kg).toBe(sulfur === "" ? "" : formatNumber(sulfur));
       expect(row.metal_species).toBe(expectedText(speciesAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
       expect(row.metal_regime).toBe(expectedText(regimeAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
-      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, 1)[0][0], "volts"));
-      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, -1)[0][0], "volts"));
-      expect(row.metal_dissolved_ug_L).toBe(expectedText(dissolvedAt(metal, pH, e, t, dic, chloride, sulfur, undefined, "ug/L")[0][0]));
+      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, undefined, 1)[0][0], "volts"));
+      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, undefined, -1)[0][0], "volts"));
+      expect(row.metal_dissolved_ug_L).toBe(expectedText(dissolvedAt(metal, pH, e, t, dic, chloride, sulfur, undefined, undefined, "ug/L")[0][0]));
       if (row.metal_species !== expectedText(speciesAt(metal, pH, e, t)[0][0])) carbonateMattered = true;
     });
     // the water changes at least one answer here (lead carbonates at pH 7.2 with 80 mg/L alkalinity)
@@ -295,6 +295,28 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
     const noChloride = await run([input, "-o", join(dir, "water-nocl.csv"), "--no-svg", "--quiet", "--chloride-column", "none"]);
     expect(Object.keys(read("water-nocl.csv")[0])).toEqual(expect.not.arrayContaining(["chloride_mol_kg"]));
     expect(noChloride.code).toBe(0);
+  });
+
+  it("an orthophosphate column feeds [phosphate]: mg/L as PO4 by default, as P when the header says PO4-P", async () => {
+    const header = (phosphate: string) => `site,pH,ORP_mV_AgCl_sat,temp_C,pipe_metal,DIC mmol/L,${phosphate}\n`;
+    const body = "A,7.5,350,15,Pb,1,1\nB,7.5,350,15,Pb,1,\n";
+    for (const [name, phosphateHeader, perMg] of [
+      ["po4.csv", "Orthophosphate (mg/L as PO4)", 1e-3 / (weight("P") + 4 * weight("O"))],
+      ["po4p.csv", "PO4-P mg/L", 1e-3 / weight("P")],
+    ] as const) {
+      const input = write(name, header(phosphateHeader) + body);
+      const out = `${name}.out.csv`;
+      const r = await run([input, "-o", join(dir, out), "--no-svg", "--quiet"]);
+      expect(r.code).toBe(0);
+      const rows = read(out);
+      expect(rows[0].phosphate_mol_kg).toBe(formatNumber(perMg));
+      expect(rows[1].phosphate_mol_kg).toBe("");
+      const e = toSHEAt(0.35, "AgCl-sat", 15)[0][0] as number;
+      expect(rows[0].metal_dissolved_ug_L).toBe(expectedText(dissolvedAt("Pb", 7.5, e, 15, 1e-3, undefined, undefined, perMg, undefined, "ug/L")[0][0]));
+      expect(rows[1].metal_dissolved_ug_L).toBe(expectedText(dissolvedAt("Pb", 7.5, e, 15, 1e-3, undefined, undefined, undefined, undefined, "ug/L")[0][0]));
+      // orthophosphate lowers equilibrium lead (hydroxypyromorphite instead of cerussite)
+      expect(Number(rows[0].metal_dissolved_ug_L)).toBeLessThan(Number(rows[1].metal_dissolved_ug_L) / 3);
+    }
   });
 
   it("a DIC column (mmol/L) is used before the alkalinity; named columns and units from the header", async () => {

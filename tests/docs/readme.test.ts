@@ -86,7 +86,7 @@ describe("README function reference", () => {
 });
 
 /** Lines "=REDOX.F(args) → answer" in the README and the docs, evaluated through the built bundle. */
-const DOCUMENTS = ["README.md", "docs/worked-examples.md", "docs/ligands.md", "docs/cli.md"];
+const DOCUMENTS = ["README.md", "docs/worked-examples.md", "docs/ligands.md", "docs/cli.md", "docs/lead-and-copper.md"];
 
 describe("formula examples in the README and docs, evaluated through the built bundle", () => {
   for (const document of DOCUMENTS) {

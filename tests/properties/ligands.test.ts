@@ -25,13 +25,14 @@ const conditions = fc.record({
   carbonate: total,
   chloride: total,
   sulfur: total,
+  phosphate: total,
   ionicStrength: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 0.5, noNaN: true })),
 });
 const point = fc.record({ pH: fc.double({ min: -2, max: 16, noNaN: true }), E: fc.double({ min: -2.5, max: 2.5, noNaN: true }) });
-type Conditions = { metal: string; celsius: number; logActivity: number; carbonate: number; chloride: number; sulfur: number; ionicStrength: number };
+type Conditions = { metal: string; celsius: number; logActivity: number; carbonate: number; chloride: number; sulfur: number; phosphate: number; ionicStrength: number };
 const engineIn = (c: Conditions) => {
   const engine = pointEngine(db, c.metal);
-  engine.setWater(c.celsius, 10 ** c.logActivity, c.carbonate, c.chloride, c.sulfur, c.ionicStrength);
+  engine.setWater(c.celsius, 10 ** c.logActivity, c.carbonate, c.chloride, c.sulfur, c.ionicStrength, c.phosphate);
   return engine;
 };
 
@@ -115,10 +116,10 @@ describe("point engine properties with ligands", () => {
       fc.property(fc.constantFrom(...metals), hostile, hostile, hostile, point, (metal, co3, cl, s, { pH, E }) => {
         const wrap = (v: unknown) => (Array.isArray(v) ? v : [[v]]) as any[][];
         const outputs = [
-          species([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(co3)),
-          regime([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(s)),
-          boundary([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(cl)),
-          dissolved([[metal]], [[pH]], [[E]], undefined, wrap(co3), wrap(cl), wrap(s), wrap(cl), [["mg/L"]]),
+          species([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(s), wrap(co3)),
+          regime([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(cl), wrap(s)),
+          boundary([[metal]], [[pH]], [[E]], undefined, undefined, wrap(co3), wrap(cl), wrap(s), wrap(co3), wrap(cl)),
+          dissolved([[metal]], [[pH]], [[E]], undefined, wrap(co3), wrap(cl), wrap(s), wrap(co3), wrap(cl), [["mg/L"]]),
         ];
         for (const out of outputs) {
           for (const row of out) {

@@ -179,10 +179,19 @@ describe("conversions", () => {
     expect(toSHEAt(0.1, "RHE", 25, 7)[0][0] as number).toBeCloseTo(0.1 - 0.414, 3);
   });
 
-  it("REDOX.TOSHE: temperature outside an electrode's range is #VALUE! naming temperature", () => {
+  it("REDOX.TOSHE: temperature outside an electrode's range is #VALUE! naming temperature, the electrode and its range", () => {
     const out = toSHEAt(0.1, "SCE", 90)[0][0] as CellError;
     expect(out.code).toBe("#VALUE!");
-    expect(out.message).toMatch(/^temperature:.*SCE/);
+    expect(out.message).toMatch(/^temperature:.*SCE \(0 to 60 °C\)/);
+    const hot = toSHEAt(0.1, "AgCl-3M", 250)[0][0] as CellError;
+    expect(hot.code).toBe("#VALUE!");
+    expect(hot.message).toMatch(/AgCl-3M \(0 to 95 °C\)/);
+  });
+
+  it("SHE and RHE hold at every temperature of the range, by their definition (IUPAC convention): 0 and −k(T)·pH", () => {
+    expect(toSHEAt(0.1, "SHE", 300)[0][0] as number).toBeCloseTo(0.1, 12);
+    // k(300 °C) = R·573.15·ln10/F = 0.1137252 V (CODATA 2018 R, F)
+    expect(toSHEAt(0, "RHE", 300, 5.7)[0][0] as number).toBeCloseTo(-0.1137252 * 5.7, 6);
   });
 
   it("REDOX.FROMSHE: unknown electrode is #VALUE! naming electrode; ranges broadcast", () => {

@@ -30,16 +30,16 @@ describe("blank ligand arguments change nothing", () => {
         species: species(el, p, e),
         regime: regime(el, p, e),
         up: boundary(el, p, e),
-        down: boundary(el, p, e, [[-1]]),
-        dissolved: dissolved(el, p, e, undefined, [["ug/L"]]),
+        down: boundary(el, p, e, undefined, undefined, undefined, undefined, undefined, undefined, undefined, [[-1]]),
+        dissolved: dissolved(el, p, e, undefined, undefined, undefined, undefined, undefined, undefined, [["ug/L"]]),
       };
       for (const blank of blanks) {
         const b = blank as any;
-        expect(species(el, p, e, undefined, undefined, b, b, b)).toEqual(base.species);
-        expect(regime(el, p, e, undefined, undefined, b, b, b)).toEqual(base.regime);
-        expect(boundary(el, p, e, undefined, undefined, undefined, b, b, b)).toEqual(base.up);
-        expect(boundary(el, p, e, [[-1]], undefined, undefined, b, b, b)).toEqual(base.down);
-        expect(dissolved(el, p, e, undefined, [["ug/L"]], undefined, b, b, b)).toEqual(base.dissolved);
+        expect(species(el, p, e, undefined, undefined, b, b, b, b)).toEqual(base.species);
+        expect(regime(el, p, e, undefined, undefined, b, b, b, b)).toEqual(base.regime);
+        expect(boundary(el, p, e, undefined, undefined, b, b, b, b)).toEqual(base.up);
+        expect(boundary(el, p, e, undefined, undefined, b, b, b, b, undefined, [[-1]])).toEqual(base.down);
+        expect(dissolved(el, p, e, undefined, b, b, b, b, undefined, [["ug/L"]])).toEqual(base.dissolved);
       }
     });
   }

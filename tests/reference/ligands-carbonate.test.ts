@@ -120,6 +120,7 @@ describe("dissolved inorganic carbon from alkalinity (hand calculations)", () =>
     expect((out[3][0] as CellError).code).toBe("#VALUE!"); // negative alkalinity: out of range
     expect(out[4][0]).toBe("");
     const hot = dic([[100]], [[7.5]], [[150]]);
-    expect((hot[0][0] as CellError).code).toBe("#VALUE!");
+    expect((hot[0][0] as CellError).code).toBe("#VALUE!"); // the fits' range, not the engine's 0–300 °C
+    expect((hot[0][0] as CellError).message).toMatch(/^temperature: 150 °C is outside 0 to 100 °C.*Plummer & Busenberg/);
   });
 });

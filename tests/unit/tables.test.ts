@@ -34,6 +34,19 @@ describe("header matching", () => {
     expect(waterColumnAt("chloride", ["Cl (umol/L)"], 0).unit).toBe("umol/L");
   });
 
+  it("finds orthophosphate columns: mg/L as PO4 by default, as P when the header says so; total phosphorus is not orthophosphate", () => {
+    const headers = ["pH", "ORP mV", "Total phosphorus mg/L", "Orthophosphate (mg/L)", "SO4 mg/L"];
+    const water = matchWaterColumns(headers, matchHeaders(headers).mapping);
+    expect(water.phosphate).toEqual({ index: 3, unit: "mg/L PO4" });
+    expect(water.sulfate?.index).toBe(4);
+    expect(waterColumnAt("phosphate", ["PO4-P mg/L"], 0).unit).toBe("mg/L P");
+    expect(waterColumnAt("phosphate", ["ortho-P"], 0).unit).toBe("mg/L P");
+    expect(waterColumnAt("phosphate", ["phosphate (mg/L as P)"], 0).unit).toBe("mg/L P");
+    expect(waterColumnAt("phosphate", ["PO4 mg/L"], 0).unit).toBe("mg/L PO4");
+    expect(waterColumnAt("phosphate", ["orthophosphate mmol/L"], 0).unit).toBe("mmol/L");
+    expect(matchWaterColumns(["pH", "ORP", "Total P (mg/L)"]).phosphate).toBeUndefined();
+  });
+
   it("reads the temperature scale: °F, K, else °C", () => {
     expect(matchHeaders(["pH", "ORP", "Water temp °F"]).hints.temperatureScale).toBe("F");
     expect(matchHeaders(["pH", "ORP", "T (K)"]).hints.temperatureScale).toBe("K");
@@ -86,6 +99,8 @@ describe("the unit table", () => {
     expect(molalFactor("ug/L", { Cl: 1 }, weight)).toBeCloseTo(1e-6 / weight({ Cl: 1 }), 18);
     expect(molalFactor("mg/L SO4", { S: 1, O: 4 }, weight)).toBeCloseTo(1e-3 / weight({ S: 1, O: 4 }), 15);
     expect(molalFactor("mg/L S", { S: 1, O: 4 }, weight)).toBeCloseTo(1e-3 / weight({ S: 1 }), 15);
+    expect(molalFactor("mg/L PO4", { P: 1 }, weight)).toBeCloseTo(1e-3 / weight({ P: 1, O: 4 }), 15);
+    expect(molalFactor("mg/L P", { P: 1 }, weight)).toBeCloseTo(1e-3 / weight({ P: 1 }), 15);
     expect(molalFactor("mmol/L", { Cl: 1 }, weight)).toBe(1e-3);
     expect(molalFactor("mol/kg", { Cl: 1 }, weight)).toBe(1);
     // 1 meq/L of alkalinity is 50.04 mg/L as CaCO3 (CaCO3 100.087 g/mol, 2 eq/mol — common practice)

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { formatTick, makeAxes, niceTicks } from "../../src/taskpane/axes";
-import { displayScale } from "../../src/taskpane/diagram-model";
+import { formatTick, makeAxes, niceTicks } from "../../src/diagram/axes";
+import { displayScale } from "../../src/diagram/diagram-model";
 import { getElectrodes } from "../../src/chemistry/electrodes";
 import { nernstFactor, kelvin } from "../../src/chemistry/constants";
 

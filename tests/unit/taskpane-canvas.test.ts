@@ -4,8 +4,8 @@
  */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { makeAxes } from "../../src/taskpane/axes";
-import type { PlottedSample } from "../../src/taskpane/diagram-model";
+import { makeAxes } from "../../src/diagram/axes";
+import type { PlottedSample } from "../../src/diagram/diagram-model";
 import { axesOfSvg, keyboardOrder, markerPixels, nearestMarker } from "../../src/taskpane/sample-canvas";
 
 const axes = makeAxes({ pHMin: 0, pHMax: 14, eMin: -1, eMax: 1 }, { left: 60, top: 40, width: 700, height: 500 });

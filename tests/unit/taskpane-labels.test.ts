@@ -1,11 +1,11 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { placeLabel, roomAt, Pixel } from "../../src/taskpane/label-placement";
+import { placeLabel, roomAt, Pixel } from "../../src/diagram/label-placement";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildSystem } from "../../src/chemistry/system";
-import { makeAxes } from "../../src/taskpane/axes";
-import { displayScale, defaultWindow, shownRegions } from "../../src/taskpane/diagram-model";
-import { formulaSegments, segmentsText } from "../../src/taskpane/formula-markup";
+import { makeAxes } from "../../src/diagram/axes";
+import { displayScale, defaultWindow, shownRegions } from "../../src/diagram/diagram-model";
+import { formulaSegments, segmentsText } from "../../src/diagram/formula-markup";
 
 /** Whether every corner of the box centred at (x, y) lies inside the convex polygon (either orientation). */
 function boxInside(polygon: readonly Pixel[], x: number, y: number, w: number, h: number): boolean {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { contrastRatio, LABEL_TEXT, AXIS_TEXT, MARKER_FILLS, MARKER_OUTLINE, REGION_FILLS, relativeLuminance } from "../../src/taskpane/palette";
+import { contrastRatio, LABEL_TEXT, AXIS_TEXT, MARKER_FILLS, MARKER_OUTLINE, REGION_FILLS, relativeLuminance } from "../../src/diagram/palette";
 
 // WCAG 2.1 (W3C Recommendation, 2018): contrast ratio (L1 + 0.05)/(L2 + 0.05); success criterion 1.4.3 asks 4.5:1
 // for normal text, 1.4.11 asks 3:1 for graphical objects.

@@ -13,10 +13,10 @@ import { regimeAt, speciesAt } from "../../src/functions/stability-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
 import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/tables";
 import { formatTotals, PURE_WATER, resolveWater, roundTotal, rowTotal, waterCaption, WaterSettings } from "../../src/taskpane/ligand-inputs";
-import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/taskpane/diagram-model";
-import { diagramLayout, renderDiagramSvg, sampleText } from "../../src/taskpane/diagram-svg";
-import { makeAxes } from "../../src/taskpane/axes";
-import { touchingGroups } from "../../src/taskpane/label-placement";
+import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/diagram/diagram-model";
+import { diagramLayout, renderDiagram, sampleText } from "../../src/diagram/diagram-svg";
+import { makeAxes } from "../../src/diagram/axes";
+import { touchingGroups } from "../../src/diagram/label-placement";
 import { readSamples } from "../../src/taskpane/sample-table";
 import { EMPTY_MAPPING } from "../../src/tables";
 
@@ -108,6 +108,7 @@ describe("the diagram's and each sample's water", () => {
       carbonate: { kind: "column", column: { index: 3, unit: "mg/L CaCO3" } },
       chloride: { kind: "typed", total: 5e-4 },
       sulfur: { kind: "typed", total: null },
+      phosphate: { kind: "typed", total: null },
     };
     const r = resolveWater(settings, [{ carbonate: 1e-3 }, { carbonate: { problem: "blank" } }, { carbonate: 3e-3 }, { carbonate: 2e-3 }]);
     expect(r.diagram).toEqual({ carbonate: roundTotal(2e-3), chloride: 5e-4 }); // median of 1, 2, 3 mmol/kg
@@ -170,7 +171,7 @@ describe("samples in a water with ligands", () => {
     expect(sampleText(pure, "V")).not.toMatch(/water DIC/);
     expect(sampleText(pure, "V")).toMatch(/water margin \+0\.\d\d V inside the water window$/);
     const [wet] = plotSamples(system, [{ row: 5, id: "A", pH: 7.5, eSHE: 0.4, ligands: { carbonate: 1.5e-3 } }], scale);
-    expect(sampleText(wet, "V")).toMatch(/; water DIC 1\.5 mmol\/kg$/);
+    expect(sampleText(wet, "V")).toMatch(/, water DIC 1\.5 mmol\/kg;/);
   });
 
   it("labels every species of a diagram split along ligand boundaries", () => {
@@ -180,11 +181,14 @@ describe("samples in a water with ligands", () => {
     const regions = shownRegions(system, window, scale);
     const formulas = new Set(regions.map((r) => r.formula));
     expect(regions.length).toBeGreaterThan(formulas.size); // some species are split by a ligand boundary
-    const svg = renderDiagramSvg({ system, window, regions, samples: [], water: shownWaterLines(25, scale), axisTitle: scale.axisTitle, unit: "V", width: 800, height: 650 });
-    const labelled = new Set([...svg.matchAll(/class="rc-label" data-formula="([^"]+)"/g)].map((m) => m[1].replace(/&amp;/g, "&")));
+    const drawn = renderDiagram({ system, window, regions, samples: [], water: shownWaterLines(25, scale), axisTitle: scale.axisTitle, unit: "V", width: 800, height: 650 });
+    const svg = drawn.svg;
+    // each species: its formula in place, or a number in place with the formula in the key, or the key alone
+    const inPlace = [...svg.matchAll(/class="rc-label[^"]*" data-formula="([^"]+)"/g)].map((m) => m[1].replace(/&amp;/g, "&"));
+    const labelled = new Set([...inPlace, ...drawn.key.map((k) => k.formula)]);
     for (const f of formulas) expect(labelled.has(f), f).toBe(true);
     // touching pieces of one species read as one region and carry one label
-    const labels = [...svg.matchAll(/class="rc-label"/g)].length;
+    const labels = inPlace.length + drawn.key.filter((k) => !k.marked).length;
     expect(labels).toBeLessThan(regions.length);
     const axes = makeAxes(window, diagramLayout(800, 650, 0));
     expect(labels).toBe(new Set(touchingGroups(regions.map((r) => ({ key: r.formula, pixels: r.vertices.map(([x, y]) => [axes.x(x), axes.y(y)] as const) })))).size);

@@ -132,6 +132,14 @@ export interface PlottedSample {
   readonly dissolved?: number;
   /** Ligand totals (mol/kg) the species and regime were found at; absent in pure water. */
   readonly ligands?: LigandTotals;
+  /** The reading as logged, with its unit and electrode ("595 mV vs AgCl-sat"). */
+  readonly reading?: string;
+  /** Temperature (°C) the answer was found at, when it is the row's own. */
+  readonly celsius?: number;
+  /** Equilibrium dissolved metal, µg/L (null: no solid is stable there). */
+  readonly equilibrium?: number | null;
+  /** The row's site, when the log names one. */
+  readonly site?: string;
 }
 
 export interface SampleInput {

@@ -9,8 +9,9 @@ import type { MetalSystem, Regime } from "../chemistry/system";
 import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./axes";
 import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
 import { formulaSegments, Segment } from "./formula-markup";
-import { formatTotals } from "./ligand-inputs";
-import { placeLabel, touchingGroups } from "./label-placement";
+import { formatTotals } from "./water-words";
+import { markerPath } from "./markers";
+import { LabelPlan, planLabels } from "./region-labels";
 import {
   AXIS_TEXT,
   LABEL_TEXT,
@@ -53,6 +54,13 @@ export interface DiagramSvgOptions {
   readonly omitSamples?: boolean;
   /** Overpotential of the kinetic band, V (default 0.6). */
   readonly kineticOverpotential?: number;
+  /**
+   * Title, subtitle, legend and caption inside the SVG (default true: exports and the command line). The pane
+   * shows them as HTML under the drawing instead, so the plot keeps its height in a narrow pane.
+   */
+  readonly chrome?: boolean;
+  /** Fill of a sample's marker (default: by regime); the shape always says the regime. */
+  readonly sampleFill?: (sample: PlottedSample) => string;
 }
 
 export const KINETIC_OVERPOTENTIAL = 0.6;
@@ -60,10 +68,15 @@ const TITLE_BAND = 46;
 const LEFT_BAND = 64;
 const RIGHT_BAND = 14;
 const CAPTION_LINE = 14;
-const LABEL_SIZES = [13, 11, 9];
+/** Bands of a drawing without title, legend and caption (the pane's screen drawing): ticks and axis titles only. */
+const BARE = { top: 10, left: 54, right: 12, bottom: 44 } as const;
 
-/** The plot rectangle inside an SVG of the given size (also used by tests to place markers). */
+/**
+ * The plot rectangle inside an SVG of the given size (also used by tests to place markers). `captionLines` < 0
+ * means a drawing without title, legend and caption.
+ */
 export function diagramLayout(width: number, height: number, captionLines = 0): PlotArea {
+  if (captionLines < 0) return { left: BARE.left, top: BARE.top, width: Math.max(40, width - BARE.left - BARE.right), height: Math.max(40, height - BARE.top - BARE.bottom) };
   const bottom = 22 + 20 + 26 + captionLines * CAPTION_LINE + 6;
   return { left: LEFT_BAND, top: TITLE_BAND, width: Math.max(40, width - LEFT_BAND - RIGHT_BAND), height: Math.max(40, height - TITLE_BAND - bottom) };
 }
@@ -100,13 +113,15 @@ export function formatActivity(a: number): string {
   return `${Number(mantissa.toPrecision(3))} \u00d7 10${sup(String(exponent))}`;
 }
 
-/** Hover and focus text of a sample. */
+/** Hover and focus text of a sample: the reading as logged, E vs SHE, the row's own temperature and water, its answer. */
 export function sampleText(s: PlottedSample, unit: "V" | "mV"): string {
-  const e = unit === "mV" ? `${Math.round(s.E)} mV` : `${s.E.toFixed(3)} V`;
+  const shown = unit === "mV" ? `${Math.round(s.E)} mV` : `${s.E.toFixed(3)} V`;
+  const reading = s.reading ? `reading ${s.reading} = ${s.eSHE.toFixed(3)} V vs SHE` : `E ${shown}`;
   const margin = `${s.waterMargin >= 0 ? "+" : "\u2212"}${Math.abs(s.waterMargin).toFixed(2)} V ${s.waterMargin >= 0 ? "inside" : "outside"} the water window`;
   const who = s.id ? `${s.id} (row ${s.row})` : `row ${s.row}`;
+  const at = s.celsius === undefined ? "" : ` at ${Number(s.celsius.toFixed(1))} \u00b0C`;
   const water = s.ligands ? formatTotals(s.ligands) : "";
-  return `${who}: pH ${s.pH.toFixed(2)}, E ${e}; ${s.formula}, ${s.regime}; water margin ${margin}${water ? `; water ${water}` : ""}`;
+  return `${who}: pH ${s.pH.toFixed(2)}, ${reading}${at}${water ? `, water ${water}` : ""}; ${s.formula}, ${s.regime}; water margin ${margin}`;
 }
 
 function patternDefs(): string {
@@ -153,43 +168,34 @@ export function wrapCaption(lines: readonly string[], width: number): string[] {
   return out;
 }
 
-export function renderDiagramSvg(o: DiagramSvgOptions): string {
-  const caption = wrapCaption(o.caption ?? [], o.width);
-  const area = diagramLayout(o.width, o.height, caption.length);
-  const axes = makeAxes(o.window, area);
-  const w = o.window;
-  const out: string[] = [];
-  const title = o.title ?? `${o.system.element}\u2013water`;
-  const subtitle = `${fixed(o.system.celsius, 1)} \u00b0C \u00b7 dissolved activity ${formatActivity(o.system.activity)} \u00b7 potentials vs ${o.axisTitle.split(" vs ")[1] ?? "SHE"}`;
-  out.push(
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${o.width}" height="${o.height}" viewBox="0 0 ${o.width} ${o.height}" role="group" aria-labelledby="rc-title rc-desc" class="rc-diagram"` +
-      ` data-plot-left="${area.left}" data-plot-top="${area.top}" data-plot-width="${area.width}" data-plot-height="${area.height}"` +
-      ` data-ph-min="${w.pHMin}" data-ph-max="${w.pHMax}" data-e-min="${w.eMin}" data-e-max="${w.eMax}" font-family="'Segoe UI', system-ui, -apple-system, sans-serif">`,
-  );
-  out.push(`<title id="rc-title">${escapeXml(`${title} potential\u2013pH diagram`)}</title>`);
-  out.push(`<desc id="rc-desc">${escapeXml(`${subtitle}. ${o.regions.length} stability regions, ${o.samples.length} samples.`)}</desc>`);
-  out.push(`<defs>${patternDefs()}<clipPath id="rc-plot"><rect x="${area.left}" y="${area.top}" width="${area.width}" height="${area.height}"/></clipPath></defs>`);
-  out.push(`<rect width="${o.width}" height="${o.height}" fill="#ffffff"/>`);
+type PixelRegion = { region: ShownRegion; pixels: (readonly [number, number])[]; fill: string };
 
-  // regions: fill by regime and species, pattern by regime
+/** Region fills by regime, shades stepping per species so neighbours differ. */
+function pixelRegions(o: DiagramSvgOptions, axes: Axes): PixelRegion[] {
   const shadeIndex: Record<Regime, Map<number, number>> = { immunity: new Map(), passivation: new Map(), corrosion: new Map() };
-  out.push(`<g class="rc-regions" clip-path="url(#rc-plot)">`);
-  const pixelRegions = o.regions.map((r) => {
+  return o.regions.map((r) => {
     const shades = shadeIndex[r.regime];
     if (!shades.has(r.species)) shades.set(r.species, shades.size);
-    const fill = regionFill(r.regime, shades.get(r.species)!);
-    const pixels = r.vertices.map(([pH, e]) => [axes.x(pH), axes.y(e)] as const);
+    return { region: r, pixels: r.vertices.map(([pH, e]) => [axes.x(pH), axes.y(e)] as const), fill: regionFill(r.regime, shades.get(r.species)!) };
+  });
+}
+
+function regionsSvg(regions: readonly PixelRegion[]): string {
+  const out = [`<g class="rc-regions" clip-path="url(#rc-plot)">`];
+  for (const { region: r, pixels, fill } of regions) {
     const d = polygonPath(pixels);
     out.push(
       `<path class="rc-region" d="${d}" fill="${fill}" data-formula="${escapeXml(r.formula)}" data-regime="${r.regime}" data-fill="${fill}"><title>${escapeXml(`${r.formula}: ${REGIME_WORDS[r.regime]}`)}</title></path>` +
-        `<path d="${d}" fill="url(#rc-pat-${r.regime})" stroke="#ffffff" stroke-width="1" pointer-events="none"/>`,
+        `<path class="rc-ligand-edge" d="${d}" fill="url(#rc-pat-${r.regime})" stroke="#ffffff" stroke-width="1" pointer-events="none"/>`,
     );
-    return { region: r, pixels };
-  });
+  }
   out.push(`</g>`);
+  return out.join("\n");
+}
 
-  // water window and kinetic band
-  out.push(`<g class="rc-water" clip-path="url(#rc-plot)" pointer-events="none">`);
+function waterSvg(o: DiagramSvgOptions, axes: Axes): string {
+  const w = o.window;
+  const out = [`<g class="rc-water" clip-path="url(#rc-plot)" pointer-events="none">`];
   if (o.showKineticBand) {
     const dv = (o.kineticOverpotential ?? KINETIC_OVERPOTENTIAL) * (o.unit === "mV" ? 1000 : 1);
     const up = { intercept: o.water.oxygen.intercept + dv, slope: o.water.oxygen.slope };
@@ -206,74 +212,74 @@ export function renderDiagramSvg(o: DiagramSvgOptions): string {
     out.push(`<path class="rc-water-line" data-couple="${name}" d="${linePath(axes, w, l)}" stroke="${WATER_LINE}" stroke-width="1.4" stroke-dasharray="7 4" fill="none"/>`);
   }
   out.push(`</g>`);
+  return out.join("\n");
+}
 
-  // labels in place
-  out.push(`<g class="rc-labels" fill="${LABEL_TEXT}" text-anchor="middle" pointer-events="none" paint-order="stroke" stroke="#ffffff" stroke-width="3" stroke-opacity="0.75" stroke-linejoin="round">`);
-  const placed = pixelRegions.map(({ region, pixels }) => {
-    const segments = formulaSegments(region.formula, region.charge);
-    let chosen: { x: number; y: number; size: number; fits: boolean; room: number } | null = null;
-    for (const size of LABEL_SIZES) {
-      const place = placeLabel(pixels, formulaWidth(segments, size) + 4, size * 1.25 + 2);
-      if (place.fits || size === LABEL_SIZES[LABEL_SIZES.length - 1]) {
-        chosen = { x: place.x, y: place.y, size, fits: place.fits, room: place.room };
-        if (place.fits) break;
-      }
+/** The width estimate is a fixed-advance guess; fonts differ, so labels are planned 15 % wider than estimated. */
+const LABEL_WIDTH_SAFETY = 1.15;
+
+/** What the numbered key beside the diagram lists: number → formula (and whether it is marked in place). */
+export interface KeyEntry {
+  readonly number: number;
+  readonly formula: string;
+  readonly marked: boolean;
+}
+
+/** The labels as SVG and the numbered key for regions too small for their formula. */
+function labelsSvg(regions: readonly PixelRegion[]): { svg: string; key: KeyEntry[] } {
+  const segments = regions.map((r) => formulaSegments(r.region.formula, r.region.charge));
+  const plans: LabelPlan[] = planLabels(regions.map((r, i) => ({ key: r.region.formula, pixels: r.pixels, width: (size: number) => formulaWidth(segments[i], size) * LABEL_WIDTH_SAFETY })));
+  const out = [`<g class="rc-labels" fill="${LABEL_TEXT}" text-anchor="middle" pointer-events="none" paint-order="stroke" stroke="#ffffff" stroke-width="3" stroke-opacity="0.75" stroke-linejoin="round">`];
+  const key: KeyEntry[] = [];
+  for (const p of plans) {
+    const formula = regions[p.piece].region.formula;
+    if (p.kind === "key-only") {
+      key.push({ number: p.number, formula, marked: false });
+      continue;
     }
-    return { region, segments, chosen };
-  });
-  // A species split by ligand boundaries into touching pieces reads as one region: it is labelled once, on the
-  // piece where its label fits largest (then with the most room). In pure water each species has one piece, so
-  // every region keeps its own label.
-  const groups = touchingGroups(pixelRegions.map(({ region, pixels }) => ({ key: region.formula, pixels })));
-  const better = (a: (typeof placed)[number], b: (typeof placed)[number]) => {
-    const p = a.chosen!;
-    const q = b.chosen!;
-    if (p.fits !== q.fits) return p.fits;
-    if (p.size !== q.size) return p.size > q.size;
-    return p.room > q.room;
-  };
-  const labelOf = new Map<number, number>();
-  placed.forEach((p, i) => {
-    if (!p.chosen) return;
-    const current = labelOf.get(groups[i]);
-    if (current === undefined || better(p, placed[current])) labelOf.set(groups[i], i);
-  });
-  for (let i = 0; i < placed.length; i++) {
-    const { region, segments, chosen } = placed[i];
-    if (!chosen || labelOf.get(groups[i]) !== i) continue;
-    out.push(
-      `<text class="rc-label" data-formula="${escapeXml(region.formula)}" data-fits="${chosen.fits}" x="${fixed(chosen.x, 1)}" y="${fixed(chosen.y + chosen.size * 0.35, 1)}" font-size="${chosen.size}">${segmentsSvg(segments)}</text>`,
-    );
+    const y = fixed(p.y + p.size * 0.35, 1);
+    if (p.kind === "formula") {
+      out.push(`<text class="rc-label" data-formula="${escapeXml(formula)}" data-fits="true" x="${fixed(p.x, 1)}" y="${y}" font-size="${p.size}">${segmentsSvg(segments[p.piece])}</text>`);
+    } else {
+      key.push({ number: p.number, formula, marked: true });
+      out.push(`<text class="rc-label rc-key-number" data-formula="${escapeXml(formula)}" data-key="${p.number}" x="${fixed(p.x, 1)}" y="${y}" font-size="${p.size}" font-weight="600">${p.number}</text>`);
+    }
   }
   out.push(`</g>`);
+  return { svg: out.join("\n"), key: key.sort((a, b) => a.number - b.number) };
+}
 
-  // frame, ticks, axis titles
-  out.push(`<g class="rc-axes" fill="${AXIS_TEXT}" font-size="11">`);
+function axesSvg(o: DiagramSvgOptions, area: PlotArea, axes: Axes): string {
+  const w = o.window;
+  const out = [`<g class="rc-axes" fill="${AXIS_TEXT}" font-size="11">`];
   out.push(`<rect x="${area.left}" y="${area.top}" width="${area.width}" height="${area.height}" fill="none" stroke="${AXIS_TEXT}" stroke-width="1"/>`);
-  for (const t of niceTicks(w.pHMin, w.pHMax, Math.max(4, Math.round(area.width / 60)))) {
+  for (const t of niceTicks(w.pHMin, w.pHMax, Math.max(3, Math.round(area.width / 55)))) {
     const x = fixed(axes.x(t));
     out.push(`<path d="M${x} ${area.top + area.height}v5" stroke="${AXIS_TEXT}"/><text x="${x}" y="${area.top + area.height + 17}" text-anchor="middle">${formatTick(t)}</text>`);
   }
-  for (const t of niceTicks(w.eMin, w.eMax, Math.max(4, Math.round(area.height / 45)))) {
+  for (const t of niceTicks(w.eMin, w.eMax, Math.max(3, Math.round(area.height / 45)))) {
     const y = fixed(axes.y(t));
     out.push(`<path d="M${area.left} ${y}h-5" stroke="${AXIS_TEXT}"/><text x="${area.left - 8}" y="${fixed(axes.y(t) + 4)}" text-anchor="end">${formatTick(t)}</text>`);
   }
   out.push(`<text class="rc-axis-title" x="${area.left + area.width / 2}" y="${area.top + area.height + 36}" text-anchor="middle" font-size="13">pH</text>`);
-  out.push(
-    `<text class="rc-axis-title" transform="translate(16 ${area.top + area.height / 2}) rotate(-90)" text-anchor="middle" font-size="13">${escapeXml(o.axisTitle)}</text>`,
-  );
-  out.push(`<text class="rc-title" x="${area.left}" y="19" font-size="15" font-weight="600">${escapeXml(title)}</text>`);
-  out.push(`<text class="rc-subtitle" x="${area.left}" y="36" font-size="11.5">${escapeXml(subtitle)}</text>`);
+  out.push(`<text class="rc-axis-title" transform="translate(14 ${area.top + area.height / 2}) rotate(-90)" text-anchor="middle" font-size="13">${escapeXml(o.axisTitle)}</text>`);
   out.push(`</g>`);
+  return out.join("\n");
+}
 
-  // legend
+/** Title, subtitle, legend and caption inside the SVG (exports, command line). */
+function chromeSvg(o: DiagramSvgOptions, area: PlotArea, title: string, subtitle: string, caption: readonly string[]): string {
+  const out = [
+    `<g class="rc-chrome" fill="${AXIS_TEXT}"><text class="rc-title" x="${area.left}" y="19" font-size="15" font-weight="600">${escapeXml(title)}</text>`,
+    `<text class="rc-subtitle" x="${area.left}" y="36" font-size="11.5">${escapeXml(subtitle)}</text></g>`,
+  ];
   const legendY = area.top + area.height + 50;
   const legend: string[] = [];
   let lx = area.left;
   for (const regime of ["immunity", "passivation", "corrosion"] as const) {
     legend.push(
       `<rect x="${lx}" y="${legendY}" width="16" height="12" fill="${regionFill(regime, 0)}" stroke="${AXIS_TEXT}" stroke-width="0.5"/><rect x="${lx}" y="${legendY}" width="16" height="12" fill="url(#rc-pat-${regime})"/>` +
-        `<circle cx="${lx + 24}" cy="${legendY + 6}" r="4" fill="${MARKER_FILLS[regime]}" stroke="${MARKER_OUTLINE}"/><text x="${lx + 32}" y="${legendY + 10}">${regime}</text>`,
+        `<path d="${markerPath(regime, lx + 24, legendY + 6, 4)}" fill="${MARKER_FILLS[regime]}" stroke="${MARKER_OUTLINE}"/><text x="${lx + 32}" y="${legendY + 10}">${regime}</text>`,
     );
     lx += 32 + regime.length * 6.2 + 14;
   }
@@ -282,25 +288,75 @@ export function renderDiagramSvg(o: DiagramSvgOptions): string {
   );
   out.push(`<g class="rc-legend" font-size="11" fill="${AXIS_TEXT}">${legend.join("")}</g>`);
   if (caption.length > 0) {
-    out.push(
-      `<g class="rc-caption" font-size="10" fill="${AXIS_TEXT}">${caption
-        .map((line, i) => `<text x="${area.left}" y="${legendY + 28 + i * CAPTION_LINE}">${escapeXml(line)}</text>`)
-        .join("")}</g>`,
-    );
+    out.push(`<g class="rc-caption" font-size="10" fill="${AXIS_TEXT}">${caption.map((line, i) => `<text x="${area.left}" y="${legendY + 28 + i * CAPTION_LINE}">${escapeXml(line)}</text>`).join("")}</g>`);
   }
+  return out.join("\n");
+}
 
-  // samples last, on top
-  out.push(`<g class="rc-samples" stroke="${MARKER_OUTLINE}" stroke-width="1">`);
-  const fill = MARKER_FILLS;
+/** The sample layer: one tab stop for the whole layer (the pane moves through it with the arrow keys). */
+function samplesSvg(o: DiagramSvgOptions, axes: Axes): string {
+  const w = o.window;
   const titles = o.sampleTitles !== false;
+  const shown = o.omitSamples === true ? 0 : o.samples.filter((s) => s.pH >= w.pHMin && s.pH <= w.pHMax && s.E >= w.eMin && s.E <= w.eMax).length;
+  const out = [
+    `<g class="rc-samples" stroke="${MARKER_OUTLINE}" stroke-width="1"${shown > 0 ? ` tabindex="0" role="group" aria-label="${shown} samples: arrow keys step through them in pH order, Enter selects the row"` : ""}>`,
+  ];
   for (let i = 0; o.omitSamples !== true && i < o.samples.length; i++) {
     const s = o.samples[i];
     if (!(s.pH >= w.pHMin && s.pH <= w.pHMax && s.E >= w.eMin && s.E <= w.eMax)) continue;
-    // <title> is both the hover text and the accessible name of the point
+    const fill = o.sampleFill ? o.sampleFill(s) : MARKER_FILLS[s.regime];
     out.push(
-      `<circle class="rc-sample" tabindex="0" cx="${axes.x(s.pH).toFixed(2)}" cy="${axes.y(s.E).toFixed(2)}" r="4.5" fill="${fill[s.regime]}" data-row="${s.row}" data-ph="${s.pH}" data-e="${s.E}" data-regime="${s.regime}" data-i="${i}">${titles ? `<title>${escapeXml(sampleText(s, o.unit))}</title>` : ""}</circle>`,
+      `<path class="rc-sample" id="rc-s-${i}" d="${markerPath(s.regime, axes.x(s.pH), axes.y(s.E))}" fill="${fill}" data-row="${s.row}" data-ph="${s.pH}" data-e="${s.E}" data-regime="${s.regime}" data-species="${escapeXml(s.formula)}" data-i="${i}">${titles ? `<title>${escapeXml(sampleText(s, o.unit))}</title>` : ""}</path>`,
     );
   }
-  out.push(`</g></svg>`);
+  out.push(`</g>`);
   return out.join("\n");
+}
+
+export interface RenderedDiagram {
+  readonly svg: string;
+  readonly key: KeyEntry[];
+  readonly title: string;
+  readonly subtitle: string;
+}
+
+/** The diagram and its numbered key. */
+export function renderDiagram(o: DiagramSvgOptions): RenderedDiagram {
+  const chrome = o.chrome !== false;
+  const caption = chrome ? wrapCaption(o.caption ?? [], o.width) : [];
+  const area = diagramLayout(o.width, o.height, chrome ? caption.length : -1);
+  const axes = makeAxes(o.window, area);
+  const w = o.window;
+  const title = o.title ?? `${o.system.element}\u2013water`;
+  const subtitle = `${fixed(o.system.celsius, 1)} \u00b0C \u00b7 dissolved activity ${formatActivity(o.system.activity)} \u00b7 potentials vs ${o.axisTitle.split(" vs ")[1] ?? "SHE"}`;
+  const regions = pixelRegions(o, axes);
+  const labels = labelsSvg(regions);
+  const out = [
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${o.width}" height="${o.height}" viewBox="0 0 ${o.width} ${o.height}" role="group" aria-labelledby="rc-title rc-desc" class="rc-diagram"` +
+      ` data-plot-left="${area.left}" data-plot-top="${area.top}" data-plot-width="${area.width}" data-plot-height="${area.height}"` +
+      ` data-ph-min="${w.pHMin}" data-ph-max="${w.pHMax}" data-e-min="${w.eMin}" data-e-max="${w.eMax}" font-family="'Segoe UI', system-ui, -apple-system, sans-serif">`,
+    `<title id="rc-title">${escapeXml(`${title} potential\u2013pH diagram`)}</title>`,
+    `<desc id="rc-desc">${escapeXml(`${subtitle}. ${o.regions.length} stability regions, ${o.samples.length} samples.`)}</desc>`,
+    `<defs>${patternDefs()}<clipPath id="rc-plot"><rect x="${area.left}" y="${area.top}" width="${area.width}" height="${area.height}"/></clipPath></defs>`,
+    `<rect width="${o.width}" height="${o.height}" fill="#ffffff"/>`,
+    regionsSvg(regions),
+    waterSvg(o, axes),
+    labels.svg,
+    axesSvg(o, area, axes),
+    chrome ? chromeSvg(o, area, title, subtitle, caption) : "",
+    chrome && labels.key.length > 0 ? keySvg(labels.key, area) : "",
+    samplesSvg(o, axes),
+    `</svg>`,
+  ];
+  return { svg: out.filter((part) => part !== "").join("\n"), key: labels.key, title, subtitle };
+}
+
+/** The numbered key inside an exported drawing: one line at the top right of the plot's title band. */
+function keySvg(key: readonly KeyEntry[], area: PlotArea): string {
+  const text = key.map((k) => `${k.number} ${k.formula}`).join("  ");
+  return `<text class="rc-key" x="${area.left + area.width}" y="36" text-anchor="end" font-size="10.5" fill="${AXIS_TEXT}">${escapeXml(text)}</text>`;
+}
+
+export function renderDiagramSvg(o: DiagramSvgOptions): string {
+  return renderDiagram(o).svg;
 }

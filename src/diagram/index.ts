@@ -1,0 +1,48 @@
+/**
+ * The diagram layer: host-free (no Office, no DOM) model and renderer of potential–pH diagrams, used by the task
+ * pane and the command line. It depends on src/chemistry only.
+ *
+ * - diagram-model: display scales (electrode, unit), the shown window, regions, water lines, samples to plot
+ * - diagram-svg: the whole diagram as SVG text
+ * - axes: window → pixel transforms and ticks
+ * - label-placement: where a region's label fits
+ * - markers: the sample marker (shape and fill by regime) for SVG and canvas
+ * - palette: colours by regime, contrast checks
+ * - formula-markup: chemical formulas as sub- and superscript segments
+ * - water-words: ligand totals in words
+ */
+export { AxisError, formatTick, makeAxes, niceTicks } from "./axes";
+export type { Axes, AxisWindow, PlotArea } from "./axes";
+export { defaultWindow, displayScale, plotSamples, shownRegions, shownWaterLines } from "./diagram-model";
+export type { DisplayScale, PlottedSample, PotentialUnit, SampleInput, ShownLine, ShownRegion } from "./diagram-model";
+export {
+  diagramLayout,
+  escapeXml,
+  formatActivity,
+  KINETIC_OVERPOTENTIAL,
+  renderDiagramSvg,
+  sampleText,
+  wrapCaption,
+} from "./diagram-svg";
+export type { DiagramSvgOptions } from "./diagram-svg";
+export { placeLabel, polygonsTouch, roomAt, touchingGroups } from "./label-placement";
+export type { LabelPlacement, Pixel } from "./label-placement";
+export { MARKER_RADIUS, MARKER_SHAPES, markerPath, markerSvg, traceMarker } from "./markers";
+export type { MarkerShape, PathSink } from "./markers";
+export {
+  AXIS_TEXT,
+  contrastRatio,
+  LABEL_TEXT,
+  MARKER_FILLS,
+  MARKER_OUTLINE,
+  PATTERN_INK,
+  REGIME_WORDS,
+  REGION_FILLS,
+  regionFill,
+  relativeLuminance,
+  WATER_BAND,
+  WATER_LINE,
+} from "./palette";
+export { formulaSegments, segmentsText } from "./formula-markup";
+export type { Segment } from "./formula-markup";
+export { formatTotals, LIGAND_WORDS } from "./water-words";
