@@ -129,7 +129,7 @@ export function benchStability(get: (name: string) => Fn | undefined, rows = 50_
   );
   perRow(
     "ASSESS, own water per row (vs SPECIES same)",
-    rate(rows, () => assess("Pb", c.pH, c.E, c.T, undefined, c.co3, c.cl, c.s, c.I)),
+    rate(rows, () => assess("Pb", c.pH, c.E, c.T, undefined, c.co3, c.cl, c.s, undefined, c.I)),
     water,
   );
   // no cliff: the same column with 100, 1 000 and every row a distinct water
