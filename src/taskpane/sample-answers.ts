@@ -7,7 +7,7 @@
  * second implementation. The diagram behind the markers is drawn separately, at one temperature and one water.
  */
 import { getDatabase } from "../chemistry/database";
-import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
+import { LIGAND_ORDER, type LigandName, type LigandTotals } from "../chemistry/ligand-cells";
 import type { Regime } from "../chemistry/system";
 import { CellError, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
 import { dicAt } from "../functions/carbonate-functions";
@@ -134,12 +134,12 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
   const potential = eShe.map(([e]) => [passOn(e)]);
   const margin = waterMarginAt(pH, potential, temperature);
   const { args, errors } = ligandColumns(plan, rows, pH, temperature);
-  const { carbonate, chloride, sulfur } = args;
+  const { carbonate, chloride, sulfur, phosphate } = args;
   const el = plan.metal;
-  const species = speciesAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur);
-  const regime = regimeAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur);
-  // REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [ionicStrength], [unit])
-  const dissolved = dissolvedAt(el, pH, potential, temperature, carbonate, chloride, sulfur, undefined, "ug/L");
+  const species = speciesAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate);
+  const regime = regimeAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate);
+  // REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [unit])
+  const dissolved = dissolvedAt(el, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, undefined, "ug/L");
   return rows.map((_, r): SampleAnswer => {
     // a blank cell in the temperature column is a missing measurement, not 25 °C (as in the command line)
     if (Array.isArray(temperature) && temperature[r][0] === "")
@@ -152,7 +152,7 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
       return { error: "a required cell is blank" };
     const d = dissolved[r][0];
     const water: LigandTotals = {};
-    for (const ligand of ["carbonate", "chloride", "sulfur"] as const) {
+    for (const ligand of LIGAND_ORDER) {
       const v = at(args[ligand], r);
       if (typeof v === "number" && v > 0) water[ligand] = v;
     }

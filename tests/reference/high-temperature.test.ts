@@ -67,6 +67,7 @@ describe("continuity across 100 °C and nothing changed below it", () => {
         db.require("HCO3-"),
         db.require("SO42-"),
         db.require("Cl-"),
+        db.require("HPO42-"),
       ] as const;
     };
     for (const element of ["Fe", "Cu", "Ni", "Zn"]) {
