@@ -7,6 +7,9 @@ import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { mapCells } from "../functions/broadcast";
 import { CellError, CellInput, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
 import { carbonateArg, chlorideArg, phosphateArg, sulfurArg } from "../functions/ligand-args";
+import { ionicStrengthArgument } from "../functions/ionic-strength-functions";
+import { IONIC_UNITS } from "../tables";
+import { ionicBasis, IONIC_OUTPUT, ionicWords, type IonicPlan } from "./ionic";
 import { readNumber, toCelsius, type TemperatureScale } from "../tables";
 import { numberField, textField, type CsvFormat, type NumberKind } from "./csv-format";
 import type { DissolvedUnit, PotentialUnitOption } from "./options";
@@ -45,6 +48,8 @@ export interface EvaluationPlan {
   readonly keepInput: boolean;
   /** Columns feeding the [carbonate], [chloride], [sulfur] arguments (empty: pure water). */
   readonly ligands: readonly LigandInput[];
+  /** Where each row's [ionicStrength] comes from (absent: none, ideal solution). */
+  readonly ionic?: IonicPlan;
   /** Delimiter, decimal mark, text neutralising and precision of the input and the results. */
   readonly format: CsvFormat;
   /** Whether the batch results carry the sample points for diagrams. */
@@ -63,6 +68,7 @@ export function outputHeader(plan: EvaluationPlan): string[] {
   const header = plan.keepInput ? [...plan.headers] : [];
   header.push("E_SHE_V", "water_margin_V");
   for (const l of plan.ligands) header.push(LIGAND_OUTPUT[l.ligand]);
+  if (usesIonic(plan)) header.push(IONIC_OUTPUT);
   for (const t of plan.targets) {
     for (const s of RESULT_SUFFIXES) header.push(`${t.prefix}_${s}`);
     header.push(`${t.prefix}_dissolved_${unitSlug(plan.dissolvedUnit)}`);
@@ -169,6 +175,10 @@ function argumentColumns(plan: EvaluationPlan): Record<string, string | null> {
     temperature: h(plan.temperatureColumn),
     element: h(plan.metalColumn),
   };
+  if (plan.ionic?.kind === "column") {
+    columns.ionicStrength = h(plan.ionic.column.index);
+    if (ionicBasis(plan.ionic.column.unit) !== null) columns.value = h(plan.ionic.column.index);
+  }
   for (const l of plan.ligands) {
     columns[l.ligand] = h(l.column);
     if (l.kind === "alkalinity") {
@@ -252,17 +262,20 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     }
   }
   const { carbonate, chloride, sulfur, phosphate } = ligandArgs;
+  const ionic = ionicColumn(plan, rows, fns);
+  const ionicStrength = ionic?.argument;
+  if (ionic) ligandCells.push(ionic.cells);
 
   const perTarget = plan.targets.map((t) => {
     const element: CellInput = t.symbol ?? textColumn(rows, plan.metalColumn as number);
     return {
       target: t,
       element,
-      species: fns.species(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate),
-      regime: fns.regime(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate),
-      above: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, undefined, 1),
-      below: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, undefined, -1),
-      dissolved: fns.dissolved(element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, undefined, plan.dissolvedUnit),
+      species: fns.species(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength),
+      regime: fns.regime(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength),
+      above: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength, 1),
+      below: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength, -1),
+      dissolved: fns.dissolved(element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, plan.dissolvedUnit),
     };
   });
 
@@ -270,6 +283,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   // a total converted from the column's unit is named in mol/kg by the functions: say where it came from
   const argNotes: Record<string, string> = {};
   for (const l of plan.ligands) if (l.kind === "total" && l.factor !== 1) argNotes[l.ligand] = ` (converted from ${l.unit})`;
+  if (ionic?.note) argNotes[ionic.note.arg] = ionic.note.text;
   if (scale !== "C") argNotes.temperature = ` (°C, converted from the column's ${scale === "F" ? "°F" : "K"})`;
   const kinds = cellKinds(ligandCells.length, perTarget.length);
   const missingTemperature = plan.temperatureColumn !== null && plan.fixedTemperature === undefined ? plan.temperatureColumn : null;
@@ -301,7 +315,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     const e = eShe[r][0];
     const eError = e instanceof CellError ? e : null;
     // the spreadsheet passes an error in an argument cell straight through: the potential first, then the carbonate
-    const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]);
+    const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]) ?? (ionic?.errors[r] ?? null);
     const cells = rowCells; // reused: each row's line is written before the next row
     let k = 0;
     cells[k++] = e;
@@ -344,6 +358,10 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
         for (const l of plan.ligands) {
           if (isBlank(row.fields[l.column])) messages.push({ line: row.line, column: plan.headers[l.column], text: `blank; this row is evaluated without ${l.ligand}`, kind: "blank" });
         }
+        if (plan.ionic?.kind === "column" && isBlank(row.fields[plan.ionic.column.index])) {
+          const text = "blank; this row is evaluated without the ionic-strength correction (ideal solution)";
+          messages.push({ line: row.line, column: plan.headers[plan.ionic.column.index], text, kind: "blank" });
+        }
       }
     }
 
@@ -374,6 +392,30 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   }
   for (const [prefix, counts] of regimes) if (counts.size === 0) regimes.delete(prefix);
   return { lines: out, messages, errorRows, blankRows, regimes, points };
+}
+
+/** Whether the results carry an ionic-strength column (a fixed value or a column feeds the functions). */
+function usesIonic(plan: EvaluationPlan): boolean {
+  return plan.ionic !== undefined && plan.ionic.kind !== "ideal";
+}
+
+/**
+ * The [ionicStrength] of a batch: a fixed value, or a column through ionicStrengthArgument (a stated ionic strength
+ * × its unit's factor, or a conductivity or TDS reading through REDOX.IONICSTRENGTH). Blank cells: that row is ideal.
+ */
+function ionicColumn(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions) {
+  const ionic = plan.ionic;
+  if (ionic === undefined || ionic.kind === "ideal") return null;
+  if (ionic.kind === "fixed") {
+    const none = new Array<CellError | null>(rows.length).fill(null);
+    return { argument: ionic.value as CellInput, cells: rows.map((): CellOutput[] => [ionic.value]), errors: none, note: null };
+  }
+  const { index, unit } = ionic.column;
+  const { factor } = IONIC_UNITS[unit];
+  const basis = ionicBasis(unit);
+  const column = ionicStrengthArgument(numericColumn(rows, index, plan.format, factor), basis, fns.ionicStrength);
+  const note = factor === 1 ? null : { arg: basis === null ? "ionicStrength" : "value", text: ` (converted from ${ionicWords(ionic.column)})` };
+  return { ...column, note };
 }
 
 /** How each result cell's number is rounded, in output order (see outputHeader). */

@@ -50,6 +50,12 @@ export interface CliOptions {
   phosphateColumn?: string | null;
   /** Ignore every ligand column: evaluate in pure water. */
   pureWater: boolean;
+  /** Ionic strength column (header text or 1-based number), null = "none", undefined = found by header. */
+  ionicStrengthColumn?: string | null;
+  /** Fixed ionic strength (mol/kg) for every row; columns ignored. */
+  ionicStrength?: number;
+  /** No activity correction: every conductivity, TDS and ionic-strength column ignored. */
+  ideal: boolean;
   /** Fixed temperature °C, used when there is no temperature column (and for blank cells in it). */
   temperature?: number;
   /** Scale of the temperature column's numbers; undefined = from its header. */
@@ -93,6 +99,14 @@ potential from its total. A blank cell there means the ligand is absent in that 
 of its own per row costs no system build (13 000–19 000 rows/s against 59 000–65 000 for pure water in npm run
 bench); --pure-water ignores these columns.
 
+Ionic strength: a conductivity column ("conductivity", "specific conductance", "EC", "SC"; µS/cm, or mS/cm
+and mS/m when the header says so), a TDS column ("TDS", "total dissolved solids"; mg/L or ppm, g/L) or an
+ionic-strength column ("ionic strength", "I (mol/kg)"; mol/L read as mol/kg for dilute water) gives each row's
+[ionicStrength] (Davies activity coefficients). Conductivity and TDS go through REDOX.IONICSTRENGTH (I ≈
+1.6e-5 × µS/cm, Russell 1976; I ≈ 2.5e-5 × mg/L, Langelier 1936). With several, a stated ionic strength wins,
+then conductivity, then TDS; the summary names the one used. A blank cell: that row is answered without the
+correction (ideal solution) and reported. Above 0.5 mol/kg the row's results are #VALUE!.
+
 Columns are found by their headers (case and punctuation ignored): pH ("pH"), the potential reading ("ORP",
 "Eh", "redox", "potential", …), temperature ("temp", "temperature", …), the metal of each row ("metal",
 "element", "pipe metal"), and the water: alkalinity ("alkalinity", "alk", "TA"), DIC ("DIC", "TIC"), chloride
@@ -135,7 +149,11 @@ Columns (header text, or a 1-based column number)
       --phosphate-column COL orthophosphate, mg/L as PO4 (mg/L as P when the header says "as P" or "PO4-P";
                              mmol/L or mol/kg as P likewise); "none" to ignore one
       --pure-water           ignore every alkalinity, DIC, chloride, sulfur and phosphate column (the functions'
-                             defaults)
+                             defaults), and every ionic-strength source (as --ideal)
+      --ionic-strength-column COL
+                             the column giving each row's ionic strength: a conductivity (µS/cm; mS/cm, mS/m
+                             when the header says so), a TDS (mg/L or ppm; g/L) or an ionic strength (mol/kg;
+                             mol/L read as mol/kg) column; "none" to ignore one
 
 Chemistry
   -m, --metal LIST           metals evaluated on every row, comma-separated symbols or names: Fe,Cu,Pb
@@ -149,6 +167,10 @@ Chemistry
   -a, --activity A           activity of dissolved metal species, 0 < A ≤ 10 (default 1e-6)
       --dissolved-unit U     ug/L (default), mg/L or mol/kg
       --overpotential V      widens the water window on both sides for the margin column (default 0)
+      --ionic-strength I     ionic strength in mol/kg (0 to 0.5) for every row; columns giving one are ignored
+                             (default: from a column found by header, else none)
+      --ideal                no activity correction (γ = 1): ignore every conductivity, TDS and ionic-strength
+                             column
 
 Messages and progress
       --progress             show a progress bar on standard error even when it is not a terminal
@@ -166,6 +188,8 @@ Result columns
   water_margin_V             distance from the water-stability window, V: positive inside, negative outside
   DIC_mol_kg, chloride_mol_kg, sulfur_mol_kg
                              the totals passed to the functions (only for the ligands read from columns)
+  ionic_strength_mol_kg      the ionic strength passed to the functions (only when one is used; blank where the
+                             row had a blank cell and was answered without the correction)
   <M>_species                dominant species of metal M (M = symbol, or "metal" for the per-row metal column)
   <M>_regime                 immunity, passivation or corrosion
   <M>_boundary_above_V       nearest stability boundary above the point at its pH (#N/A if none up to +3 V)
@@ -235,6 +259,9 @@ export const OPTION_SPEC = {
   "sulfur-column": { type: "string" },
   "phosphate-column": { type: "string" },
   "pure-water": { type: "boolean" },
+  "ionic-strength-column": { type: "string" },
+  "ionic-strength": { type: "string" },
+  ideal: { type: "boolean" },
   metal: { type: "string", short: "m", multiple: true },
   electrode: { type: "string", short: "e" },
   unit: { type: "string", short: "u" },
@@ -333,6 +360,9 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     sulfurColumn: columnOption(v["sulfur-column"]),
     phosphateColumn: columnOption(v["phosphate-column"]),
     pureWater: v["pure-water"] ?? false,
+    ionicStrengthColumn: columnOption(v["ionic-strength-column"]),
+    ionicStrength: numberOption("ionic-strength", v["ionic-strength"], (x) => x >= 0 && x <= 0.5, "an ionic strength from 0 to 0.5 mol/kg (the Davies equation's range)"),
+    ideal: v.ideal ?? false,
     temperature: numberOption("temperature", v.temperature, (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS, `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`),
     electrode: v.electrode,
     unit,

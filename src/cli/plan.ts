@@ -10,6 +10,7 @@ import type { CsvFormat } from "./csv-format";
 import { clip, type EvaluationPlan, type MetalTarget } from "./evaluate";
 import { UsageError, type CliOptions } from "./options";
 import { planWater } from "./water";
+import { planIonic } from "./ionic";
 
 /** Headers listed in a message: each cut to a few dozen characters, at most twenty of them. */
 export function headerList(headers: readonly string[]): string {
@@ -107,6 +108,8 @@ export function planFromHeader(headers: string[], options: CliOptions, format: C
   const metalColumn = pick(options.metalColumn === "auto" ? undefined : options.metalColumn, auto.metal, "--metal-column");
   const mapping = { ...EMPTY_MAPPING, pH: ph, potential, temperature: temperatureColumn ?? -1, metal: metalColumn ?? -1, id: auto.id, site: auto.site };
   const ligands = planWater(headers, options, mapping, (option, what) => pick(option, -1, what) as number);
+  const taken = [...Object.values(mapping).filter((i) => i >= 0), ...ligands.map((l) => l.column)];
+  const ionic = planIonic(headers, options, taken, (option, what) => pick(option, -1, what) as number);
   const potentialHeader = headers[potential];
   const unit = options.unit ?? unitFromHeader(potentialHeader);
   if (unit === null) throw new UsageError(`the header "${clip(potentialHeader, 60)}" does not say whether the readings are in V or mV; give --unit V or --unit mV`);
@@ -127,6 +130,7 @@ export function planFromHeader(headers: string[], options: CliOptions, format: C
     targets: targetsOf(options, metalColumn),
     keepInput: options.keepInput,
     ligands,
+    ionic,
     format,
     diagrams: options.svgDir !== null,
   };

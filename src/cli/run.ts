@@ -17,6 +17,7 @@ import { MalformedCsvError, RecordSplitter, type InputRow } from "./record-reade
 import { writeDiagrams } from "./run-diagrams";
 import { SafeOutput, sameFile, type StreamOpener } from "./safe-output";
 import { summaryText, type RunSummary } from "./summary";
+import { ionicSummary } from "./ionic";
 import { version } from "./version";
 import { worksheetFunctions, WorksheetFunctions } from "./worksheet";
 
@@ -169,6 +170,7 @@ async function finish(options: CliOptions, streams: CliStreams, run: StreamedRun
     regimes: run.regimes,
     svgFiles,
     header: outputHeader(plan),
+    notes: plan.ionic && (plan.ionic.kind !== "ideal" || plan.ionic.ignored.length > 0) ? [ionicSummary(plan.ionic, plan.headers)] : [],
   };
   if (!options.quiet) (options.output === "-" ? err : streams.stdout).write(summaryText(summary));
   if (diagramFailure !== null) {

@@ -14,6 +14,8 @@ export interface RunSummary {
   regimes: Record<string, Record<string, number>>;
   svgFiles: string[];
   header: string[];
+  /** Lines on how the inputs were read (the ionic strength used), printed after the results line. */
+  notes?: string[];
 }
 
 const REGIMES = ["immunity", "passivation", "corrosion"];
@@ -23,6 +25,7 @@ export function summaryText(s: RunSummary): string {
   const rate = s.seconds > 0 ? Math.round(s.rows / s.seconds) : s.rows;
   lines.push(`${PROGRAM}: ${s.rows.toLocaleString("en-US")} rows from ${s.input} in ${s.seconds.toFixed(1)} s (${rate.toLocaleString("en-US")} rows/s)`);
   lines.push(`  results:  ${s.output === "-" ? "standard output" : s.output}`);
+  for (const note of s.notes ?? []) lines.push(`  ${note}`);
   if (s.errorRows > 0) lines.push(`  rows with bad cells: ${s.errorRows} (error codes in their result cells, reasons in the errors column)`);
   if (s.blankRows > 0) lines.push(`  rows with blank or missing inputs: ${s.blankRows} (results left blank)`);
   const prefixes = Object.keys(s.regimes);

@@ -8,6 +8,7 @@ import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../functions/sta
 import { toSHEAt } from "../functions/electrode-functions";
 import { waterMarginAt } from "../functions/water-functions";
 import { dicAt } from "../functions/carbonate-functions";
+import { ionicStrengthAt } from "../functions/ionic-strength-functions";
 
 export interface WorksheetFunctions {
   /** REDOX.TOSHE(reading, electrode, [temperature], [pH]) */
@@ -47,6 +48,8 @@ export interface WorksheetFunctions {
   ): CellOutput[][];
   /** REDOX.DIC(alkalinity, pH, [temperature]) */
   dic(alkalinity: CellInput, pH: CellInput, temperature?: CellInput): CellOutput[][];
+  /** REDOX.IONICSTRENGTH(value, basis) */
+  ionicStrength(value: CellInput, basis: CellInput): CellOutput[][];
 }
 
 export const worksheetFunctions: WorksheetFunctions = {
@@ -57,4 +60,5 @@ export const worksheetFunctions: WorksheetFunctions = {
   boundary: boundaryFrom,
   dissolved: dissolvedAt,
   dic: dicAt,
+  ionicStrength: ionicStrengthAt,
 };

@@ -132,6 +132,8 @@ export interface PlottedSample {
   readonly dissolved?: number;
   /** Ligand totals (mol/kg) the species and regime were found at; absent in pure water. */
   readonly ligands?: LigandTotals;
+  /** Ionic strength (mol/kg) the species and regime were found at; absent for an ideal solution. */
+  readonly ionicStrength?: number;
   /** The reading as logged, with its unit and electrode ("595 mV vs AgCl-sat"). */
   readonly reading?: string;
   /** Temperature (°C) the answer was found at, when it is the row's own. */

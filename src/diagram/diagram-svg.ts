@@ -121,7 +121,8 @@ export function sampleText(s: PlottedSample, unit: "V" | "mV"): string {
   const who = s.id ? `${s.id} (row ${s.row})` : `row ${s.row}`;
   const at = s.celsius === undefined ? "" : ` at ${Number(s.celsius.toFixed(1))} \u00b0C`;
   const water = s.ligands ? formatTotals(s.ligands) : "";
-  return `${who}: pH ${s.pH.toFixed(2)}, ${reading}${at}${water ? `, water ${water}` : ""}; ${s.formula}, ${s.regime}; water margin ${margin}`;
+  const ionic = s.ionicStrength ? `, I ${Number(s.ionicStrength.toPrecision(3))} mol/kg` : "";
+  return `${who}: pH ${s.pH.toFixed(2)}, ${reading}${at}${water ? `, water ${water}` : ""}${ionic}; ${s.formula}, ${s.regime}; water margin ${margin}`;
 }
 
 function patternDefs(): string {

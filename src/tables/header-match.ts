@@ -64,6 +64,7 @@ function isPotential(tokens: readonly string[]): boolean {
 }
 
 function isTemperature(tokens: readonly string[]): boolean {
+  if (has(tokens, "conductivity", "conductance", "ec", "sc", "spcond")) return false; // "Conductivity (µS/cm at 25 °C)"
   if (has(tokens, "temp", "temperature", "degc", "degf", "celsius", "fahrenheit", "kelvin")) return true;
   // "T", "T (C)", "t_c", "T °C", "T (K)"
   return tokens[0] === "t" && tokens.length <= 3 && tokens.slice(1).every((t) => ["c", "f", "k", "degc", "degf"].includes(t));

@@ -5,6 +5,7 @@
  *                    chloride, sulfate, DIC — and the unit, electrode and temperature scale their headers name
  * - delimiter.ts     the field separator of a table from its header line
  * - numbers.ts       numbers with a decimal point or a decimal comma, and which of the two a table uses
+ * - ionic-columns.ts  conductivity, TDS and ionic-strength columns, their units, and I in mol/kg
  * - units.ts         one table per kind of unit: temperature scales, potential units, water units
  * - delimited-text.ts  pasted or opened text → rows of cells (the pane; the command line streams its own)
  */
@@ -29,6 +30,18 @@ export {
   type WaterColumnRole,
   type WaterColumns,
 } from "./header-match";
+export {
+  headerIsIonic,
+  IONIC_COLUMN_ROLES,
+  IONIC_UNITS,
+  ionicStrengthOf,
+  ionicUnit,
+  isNumericColumn,
+  matchIonicColumns,
+  type IonicColumn,
+  type IonicColumnRole,
+  type IonicUnit,
+} from "./ionic-columns";
 export { DELIMITERS, guessDelimiter } from "./delimiter";
 export { COMMA_NUMBER, guessDecimalMark, POINT_NUMBER, readNumber, writeDecimal, type DecimalMark } from "./numbers";
 export {

@@ -19,12 +19,13 @@ import { DiagramView, type DrawingOptions } from "./pane-view";
 import { SITE_COLOURS } from "./pane-legend";
 import { resultsCsv, resultsHtml, resultsTsv } from "./results-table";
 import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
-import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS } from "../tables";
+import { COLUMN_ROLES, ColumnMapping, ColumnRole, matchHeaders, matchWaterColumns, waterColumnAt, WaterColumn, WaterColumns, WATER_UNIT_WORDS, type IonicColumn } from "../tables";
 import { LIGAND_COLUMN, LigandSource, ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
 import type { HostAdapter, PaneSettings } from "./host";
 import { blobToBase64, download, svgToPngBlob } from "./png-export";
 import { median, readSamples, SampleTable, SkippedRow } from "./sample-table";
 import { AnswerPlan, answerSamples, RowLigand, rowLigand } from "./sample-answers";
+import { findIonicColumn, ionicArgumentFor, ionicCaption } from "./ionic-input";
 
 const ROLE_WORDS: Record<ColumnRole, string> = {
   pH: "pH",
@@ -79,6 +80,8 @@ export class DiagramPane {
   private plotted: { samples: PlottedSample[]; unit: PotentialUnit } = { samples: [], unit: "V" };
   private settings: PaneSettings;
   private waterFound: WaterColumns = {};
+  /** The conductivity, TDS or ionic-strength column used automatically for each sample's [ionicStrength]. */
+  private ionicFound: IonicColumn | null = null;
   private view!: DiagramView;
   /** "fit": the samples' window; "full": pH −2…16, ±2 V; null: fit when the samples are clustered. */
   private viewMode: "fit" | "full" | null = null;
@@ -225,6 +228,8 @@ export class DiagramPane {
   private buildWaterSources(): void {
     const headers = this.table?.headers ?? [];
     this.waterFound = matchWaterColumns(headers, this.mapping);
+    const taken = [...Object.values(this.mapping), ...Object.values(this.waterFound).map((c) => c.index)].filter((i) => i >= 0);
+    this.ionicFound = findIonicColumn(headers, taken, this.table?.rows ?? []);
     for (const ligand of LIGAND_ORDER) {
       const role = LIGAND_COLUMN[ligand];
       const menu = select(`${ligand}-source`);
@@ -416,11 +421,13 @@ export class DiagramPane {
     const title = hasLigands(resolved.diagram) ? `${metalTitle} in water with ${ligandNames(resolved.diagram)}` : `${metalTitle} in water`;
     const compilation = this.db.system(metal)?.compilation ?? "";
     const waterLine = waterCaption(resolved);
+    const ionicLine = own.ionicLine;
     const atMedian = !this.manualTemperature && temperatures.length > 0;
     const caption = [
       `${title} at ${celsius} °C${atMedian ? " (the rows' median temperature)" : ""}, dissolved activity ${formatActivity(activity)}, potentials in ${unit} vs ${scale.electrode}.`,
       ...(samples.length > 0 ? [OWN_ANSWERS] : []),
       ...(waterLine ? [waterLine] : []),
+      ...(ionicLine ? [ionicLine] : []),
       `Samples: ${this.table ? `${this.table.source}; ${samples.length} drawn, ${read?.skipped.length ?? 0} not drawn` : "none"}. Thermodynamic data: ${firstSentence(compilation)}`,
     ];
     const showKineticBand = input("kinetic").checked;
@@ -462,8 +469,8 @@ export class DiagramPane {
     water: WaterSettings,
     at: { metal: string; electrode: string; unit: PotentialUnit; activity: number; celsius: number },
     scale: DisplayScale,
-  ): { samples: PlottedSample[]; failed: SkippedRow[] } {
-    if (!this.table || !read) return { samples: [], failed: [] };
+  ): { samples: PlottedSample[]; failed: SkippedRow[]; ionicLine: string } {
+    if (!this.table || !read) return { samples: [], failed: [], ionicLine: "" };
     const table = this.table;
     const ligands: RowLigand[] = [];
     const typed: Partial<Record<LigandName, number>> = {};
@@ -480,9 +487,12 @@ export class DiagramPane {
       temperatureUnit: this.temperatureUnit,
       ligands,
       typed,
+      ...(this.ionicFound ? { ionic: this.ionicFound } : {}),
     };
     const rows = read.indices.map((i) => table.rows[i]);
     const answers = answerSamples(plan, rows);
+    const ionic = this.ionicFound;
+    const ionicLine = ionic && rows.length > 0 ? ionicCaption(table.headers[ionic.index], ionic, ionicArgumentFor(ionic, rows)) : "";
     const samples: PlottedSample[] = [];
     const failed: SkippedRow[] = [];
     const electrodeId = scale.electrode;
@@ -505,9 +515,10 @@ export class DiagramPane {
         equilibrium: a.dissolved,
         site: this.mapping.site >= 0 ? String(rows[k][this.mapping.site] ?? "").trim() : undefined,
       };
-      samples.push(hasLigands(a.water) ? { ...plotted, ligands: a.water } : plotted);
+      const withIonic = a.ionicStrength === null ? plotted : { ...plotted, ionicStrength: a.ionicStrength };
+      samples.push(hasLigands(a.water) ? { ...withIonic, ligands: a.water } : withIonic);
     });
-    return { samples, failed };
+    return { samples, failed, ionicLine };
   }
 
   private showTemperatureSpread(temperatures: number[], celsius: number): void {

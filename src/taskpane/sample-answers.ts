@@ -14,7 +14,15 @@ import { dicAt } from "../functions/carbonate-functions";
 import { toSHEAt } from "../functions/electrode-functions";
 import { dissolvedAt, regimeAt, speciesAt } from "../functions/stability-functions";
 import { waterMarginAt } from "../functions/water-functions";
-import { alkalinityFactor, isAlkalinityUnit, molalFactor, type FormulaParts, type WaterColumn } from "../tables";
+import { ionicArgumentFor } from "./ionic-input";
+import {
+  alkalinityFactor,
+  isAlkalinityUnit,
+  molalFactor,
+  type FormulaParts,
+  type IonicColumn,
+  type WaterColumn,
+} from "../tables";
 
 /** One ligand argument read per row: the column's number × factor is mg/L as CaCO3 (alkalinity) or mol/kg (total). */
 export interface RowLigand {
@@ -40,6 +48,8 @@ export interface AnswerPlan {
   readonly ligands: readonly RowLigand[];
   /** Ligands typed once for every row (mol/kg). */
   readonly typed: LigandTotals;
+  /** The conductivity, TDS or ionic-strength column feeding [ionicStrength] per row; absent: ideal solution. */
+  readonly ionic?: IonicColumn;
 }
 
 /** A row's answer, or the first error a function gave for it (its message names the argument). */
@@ -55,6 +65,8 @@ export type SampleAnswer =
       readonly celsius: number;
       /** The totals passed to the functions (mol/kg), ligands present only. */
       readonly water: LigandTotals;
+      /** The ionic strength passed to the functions (mol/kg); null: none (ideal solution). */
+      readonly ionicStrength: number | null;
     }
   | { readonly error: string };
 
@@ -135,11 +147,15 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
   const margin = waterMarginAt(pH, potential, temperature);
   const { args, errors } = ligandColumns(plan, rows, pH, temperature);
   const { carbonate, chloride, sulfur, phosphate } = args;
+  // the ionic strength as the command line builds it (REDOX.IONICSTRENGTH for conductivity and TDS)
+  const ionic = plan.ionic ? ionicArgumentFor(plan.ionic, rows) : null;
+  ionic?.errors.forEach((e, r) => (errors[r] ??= e));
+  const I = ionic?.argument;
   const el = plan.metal;
-  const species = speciesAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate);
-  const regime = regimeAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate);
+  const species = speciesAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, I);
+  const regime = regimeAt(el, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, I);
   // REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [unit])
-  const dissolved = dissolvedAt(el, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, undefined, "ug/L");
+  const dissolved = dissolvedAt(el, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, I, "ug/L");
   return rows.map((_, r): SampleAnswer => {
     // a blank cell in the temperature column is a missing measurement, not 25 °C (as in the command line)
     if (Array.isArray(temperature) && temperature[r][0] === "")
@@ -157,7 +173,9 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
       if (typeof v === "number" && v > 0) water[ligand] = v;
     }
     const t = at(temperature, r);
+    const used = ionic ? ionic.cells[r][0] : null;
     return {
+      ionicStrength: typeof used === "number" && used > 0 ? used : null,
       eSHE: e,
       margin: m,
       species: s,

@@ -204,3 +204,36 @@ describe("a large set on the canvas layer", () => {
     expect(text.match(/class="rc-sample"/g)?.length).toBe(count);
   });
 });
+
+describe("a log with a conductivity column (fixture, invented)", () => {
+  // lead at pH 7, Eh −0.307 V: Pb(s) for an ideal solution, Pb2+ at I = 0.016 mol/kg, which REDOX.IONICSTRENGTH
+  // gives for 1000 µS/cm (I ≈ 1.6e-5 × µS/cm, Russell, L.L., Chemistry of oilfield waters, 1976)
+  beforeAll(async () => {
+    await page.evaluate(() => localStorage.clear());
+    await pane.reload();
+    await page.click("#paste-details summary");
+    const text = ["id,pH,Eh (V),Conductivity (µS/cm)", "A,7,-0.307,1000", "B,7,-0.307,", "C,7.5,-0.2,350"].join("\n");
+    await page.evaluate((value) => ((document.getElementById("paste-input") as HTMLTextAreaElement).value = value), text);
+    await page.click("#draw-pasted");
+    await page.waitForSelector("#diagram .rc-sample");
+    await page.selectOption("#metal", "Pb");
+    await page.waitForFunction(() => /Ionic strength/.test(document.querySelector("#diagram-caption")?.textContent ?? ""));
+  });
+
+  it("answers each sample with its own ionic strength, says so in the caption and the hover", async () => {
+    const caption = (await page.textContent("#diagram-caption")) ?? "";
+    expect(caption).toMatch(/Ionic strength: each sample's own from "Conductivity \(µS\/cm\)"/);
+    expect(caption).toMatch(/1 blank row answered without the correction/);
+    const species = await page.$$eval("#diagram .rc-sample", (nodes) => nodes.map((n) => n.getAttribute("data-species")));
+    expect(species.slice(0, 2)).toEqual(["Pb2+", "Pb(s)"]);
+    await page.focus("#diagram .rc-samples");
+    const texts: string[] = [];
+    for (const key of ["Home", "ArrowRight", "ArrowRight"]) {
+      await page.keyboard.press(key);
+      texts.push((await page.textContent("#point-info")) ?? "");
+    }
+    // sample A carries its ionic strength; blank B none (pH order decides which comes first)
+    expect(texts.filter((t) => /^A .*, I 0\.016 mol\/kg; Pb2\+/.test(t))).toHaveLength(1);
+    expect(texts.find((t) => /^B /.test(t))).not.toMatch(/ I \d/);
+  });
+});

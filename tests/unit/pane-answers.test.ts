@@ -2,7 +2,8 @@
  * One answer everywhere: every row of the invented demo log, for every metal of the database, gives the same
  * species, regime, E vs SHE, water margin and dissolved metal in the pane (sample-answers.ts with the plan the
  * pane builds from the headers), in the command line (its results CSV) and in the worksheet functions called on
- * that row alone with its own temperature and water (REDOX.DIC of its alkalinity, as a worksheet would chain it).
+ * that row alone with its own temperature and water (REDOX.DIC of its alkalinity, as a worksheet would chain it),
+ * and — on a fixture log with a conductivity column — with each row's REDOX.IONICSTRENGTH as [ionicStrength].
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "fs";
@@ -18,6 +19,8 @@ import { dissolvedAt, regimeAt, speciesAt } from "../../src/functions/stability-
 import { waterMarginAt } from "../../src/functions/water-functions";
 import { matchHeaders, matchWaterColumns } from "../../src/tables";
 import { answerSamples, rowLigand } from "../../src/taskpane/sample-answers";
+import { findIonicColumn } from "../../src/taskpane/ionic-input";
+import { ionicStrengthAt } from "../../src/functions/ionic-strength-functions";
 import { tableFromText } from "../../src/taskpane/standalone-adapter";
 
 const DEMO = join(__dirname, "../../data/demo/sample-log.csv");
@@ -186,5 +189,87 @@ describe("a log with a measured DIC column", () => {
         );
       });
     }
+  });
+});
+
+describe("a log with a conductivity column (fixture, invented)", () => {
+  // I ≈ 1.6e-5 × specific conductance in µS/cm (Russell, L.L., Chemistry of oilfield waters, 1976), through
+  // REDOX.IONICSTRENGTH; the demo log has no conductivity column, so a fixture stands in for it.
+  it("pane, command line and worksheet functions give the same answers with each row's ionic strength", async () => {
+    const text = [
+      "site,pH,Eh (V),Temp C,Alkalinity (mg/L CaCO3),Conductivity (µS/cm)",
+      "A,7.0,-0.307,25,40,1000",
+      "B,7.0,-0.307,25,40,",
+      "C,7.9,0.42,18,120,650",
+      "D,6.4,0.12,12,25,180",
+      "E,8.3,-0.25,9,90,2400",
+      "F,7.0,-0.307,25,40,40000",
+    ].join("\n");
+    const file = join(dir, "cond.csv");
+    const output = join(dir, "cond-results.csv");
+    writeFileSync(file, text);
+    const result = await runCommand([file, "--metal", "Cu,Pb,Fe,Zn", "--output", output, "--no-svg"], {
+      stdout: new PassThrough(),
+      stderr: new PassThrough(),
+    });
+    expect(result.code).toBe(1); // row F: 40 000 µS/cm is above the Davies equation's 0.5 mol/kg
+    const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<
+      string,
+      string
+    >[];
+    const t = tableFromText(text, "cond");
+    const headers = t.headers as string[];
+    const m = matchHeaders(headers).mapping;
+    const alkalinity = matchWaterColumns(headers, m).alkalinity!;
+    const ionic = findIonicColumn(headers, [m.pH, m.potential, m.temperature, alkalinity.index], t.rows)!;
+    expect(ionic).toEqual({ role: "conductivity", index: 5, unit: "uS/cm" });
+    let changed = 0;
+    for (const metal of ["Cu", "Pb", "Fe", "Zn"]) {
+      const plan = {
+        metal,
+        phColumn: 1,
+        potentialColumn: 2,
+        temperatureColumn: 3,
+        temperatureUnit: "C" as const,
+        celsius: 25,
+        electrode: "SHE",
+        unit: "V" as const,
+        activity: 1e-6,
+        ligands: [rowLigand("carbonate", alkalinity)],
+        typed: {},
+      };
+      const answers = answerSamples({ ...plan, ionic }, t.rows);
+      const ideal = answerSamples(plan, t.rows);
+      answers.forEach((a, r) => {
+        const line = lines[r];
+        expect("error" in a ? "#VALUE!" : `${a.species}/${a.regime}`, `${metal} row ${r}`).toBe(
+          `${line[`${metal}_species`]}/${line[`${metal}_regime`]}`.replace("#VALUE!/#VALUE!", "#VALUE!"),
+        );
+        if ("error" in a) return;
+        // the worksheet: this row alone, REDOX.IONICSTRENGTH of its conductivity in [ionicStrength]
+        const row = t.rows[r].map(cellOf);
+        const I = row[5] === "" ? "" : ionicStrengthAt(row[5] as number, "uS/cm")[0][0];
+        const co3 = dicAt(row[4] as number, row[1] as number, row[3] as number)[0][0] as number;
+        const sheet = speciesAt(
+          metal,
+          row[1] as number,
+          row[2] as number,
+          row[3] as number,
+          1e-6,
+          co3,
+          undefined,
+          undefined,
+          undefined,
+          I as number,
+        )[0][0];
+        expect(a.species, `${metal} row ${r} sheet`).toBe(sheet);
+        expect(a.ionicStrength === null ? "" : a.ionicStrength).toBe(I === "" ? "" : I);
+        if (a.ionicStrength !== null) expect(Number(line.ionic_strength_mol_kg)).toBeCloseTo(a.ionicStrength, 6);
+        const b = ideal[r];
+        if (!("error" in b) && b.species !== a.species) changed++;
+      });
+    }
+    // near the Pb2+/Pb boundary (rows A) the correction changes lead's answer; row B (blank) stays ideal
+    expect(changed).toBeGreaterThan(0);
   });
 });
