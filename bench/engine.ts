@@ -67,7 +67,8 @@ export function benchStability(get: (name: string) => Fn | undefined, rows = 50_
   const species = get("SPECIES");
   const boundary = get("BOUNDARY");
   const dissolved = get("DISSOLVED");
-  if (!species || !boundary || !dissolved)
+  const assess = get("ASSESS");
+  if (!species || !boundary || !dissolved || !assess)
     return [{ name: "stability functions", figure: "not registered", target: "—", met: false }];
   const c = columns(rows);
   const out: BenchRow[] = [];
@@ -118,6 +119,17 @@ export function benchStability(get: (name: string) => Fn | undefined, rows = 50_
   perRow(
     "DISSOLVED, own water per row (vs SPECIES same)",
     rate(rows, () => dissolved("Pb", c.pH, c.E, c.T, c.co3, c.cl, c.s, undefined, c.I)),
+    water,
+  );
+  // the one-call assessment (species, regime, both boundaries, water margin, dissolved metal and its solid)
+  perRow(
+    "ASSESS, pure water (vs SPECIES)",
+    rate(rows, () => assess("Pb", c.pH, c.E, 25)),
+    pure,
+  );
+  perRow(
+    "ASSESS, own water per row (vs SPECIES same)",
+    rate(rows, () => assess("Pb", c.pH, c.E, c.T, undefined, c.co3, c.cl, c.s, undefined, c.I)),
     water,
   );
   // no cliff: the same column with 100, 1 000 and every row a distinct water

@@ -112,6 +112,8 @@ function integrate(g: (kelvinT: number) => number, kelvinT: number): number {
   return total;
 }
 
+/** The basis at and below 100 °C (all terms 0); read only, like every basis handed out. */
+export const NO_CORRESPONDENCE = new Float64Array(CORRESPONDENCE_TERMS);
 const basisMemo = { kelvinT: Number.NaN, values: new Float64Array(CORRESPONDENCE_TERMS) };
 
 /**
@@ -121,6 +123,8 @@ const basisMemo = { kelvinT: Number.NaN, values: new Float64Array(CORRESPONDENCE
  * from ΔS°(T) = ΔS°const(T1) + [S°CC(T) − S°CC(T1)] for the covered ions and ΔG°(T) = ΔG°(T1) − ∫ΔS° dT.
  */
 export function correspondenceBasis(kelvinT: number): Float64Array {
+  // at and below 100 °C every term is 0: one shared array, so that a column of new temperatures allocates nothing
+  if (!(kelvinT > T1)) return NO_CORRESPONDENCE;
   if (basisMemo.kelvinT === kelvinT) return basisMemo.values;
   const values = new Float64Array(CORRESPONDENCE_TERMS);
   if (kelvinT > T1) {

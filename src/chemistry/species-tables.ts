@@ -8,7 +8,7 @@
  * at any temperature and in any water needs only arithmetic on these numbers (point-engine.ts). The ligands' own
  * species get the same treatment from their pivot (HCO3−, SO4²−, HPO4²−) for the ligand speciation (ligand-speciation.ts).
  */
-import { CORRESPONDENCE_TERMS } from "./criss-cobble";
+import { CORRESPONDENCE_TERMS, NO_CORRESPONDENCE } from "./criss-cobble";
 import { Database, Species } from "./database";
 import { formationTable } from "./formation";
 import type { Regime, SystemSpecies } from "./system";
@@ -39,6 +39,8 @@ export interface ReactionColumns {
 
 /** ΔG°r(T) of row i, J/mol, with dT = T − T0, shape = dT − T·ln(T/T0) and the correspondence basis at T. */
 export function rowGibbs(columns: ReactionColumns, i: number, dT: number, shape: number, basis: Float64Array): number {
+  // at and below 100 °C the correspondence adds nothing: skip its terms (they ran once per species and temperature)
+  if (basis === NO_CORRESPONDENCE) return columns.g0[i] - columns.s[i] * dT + columns.cp[i] * shape;
   let extra = 0;
   for (let k = 0, at = i * CORRESPONDENCE_TERMS; k < CORRESPONDENCE_TERMS; k++)
     extra += columns.correspondence[at + k] * basis[k];

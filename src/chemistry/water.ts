@@ -29,6 +29,9 @@ export type WaterGas = "O2" | "H2";
 const OXYGEN_REDUCTION = { "O2(g)": -1, "H+": -4, "e-": -4, "H2O(l)": 2 } as const;
 /** 2 H+ + 2 e− → H2(g) */
 const HYDROGEN_EVOLUTION = { "H+": -2, "e-": -2, "H2(g)": 1 } as const;
+// Built-ins held in module constants: in a sandboxed host each global lookup per row is slow (REDOX.ASSESS).
+const { log10, min } = Math;
+
 /** H2O(l) → H+ + OH− */
 const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
 
@@ -36,15 +39,16 @@ const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
  * Standard potentials by database, gas and temperature: columns of samples repeat a few temperatures, and each
  * value costs a reaction balance, so they are remembered (bounded).
  */
-const standardPotentials = new WeakMap<Database, Map<string, number>>();
+const standardPotentials = new WeakMap<Database, Record<WaterGas, Map<number, number>>>();
 const REMEMBERED_POTENTIALS = 512;
 
 /** Standard potential (V vs SHE) of the O2/H2O (gas "O2") or H+/H2 (gas "H2") couple at `celsius`. */
 export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database = getDatabase()): number {
-  let memo = standardPotentials.get(db);
-  if (!memo) standardPotentials.set(db, (memo = new Map()));
-  const key = `${gas}|${celsius}`;
-  const known = memo.get(key);
+  let byGas = standardPotentials.get(db);
+  if (!byGas) standardPotentials.set(db, (byGas = { O2: new Map(), H2: new Map() }));
+  // keyed by the number itself: a text key per call cost more than the look-up saves on a column of samples
+  const memo = gas === "O2" ? byGas.O2 : byGas.H2;
+  const known = memo.get(celsius);
   if (known !== undefined) return known;
   const k = nernstFactor(kelvin(celsius));
   const e0 =
@@ -52,7 +56,7 @@ export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database
       ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4
       : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
   if (memo.size >= REMEMBERED_POTENTIALS) memo.clear();
-  memo.set(key, e0 + 0); // + 0 turns a negative zero into 0
+  memo.set(celsius, e0 + 0); // + 0 turns a negative zero into 0
   return e0 + 0;
 }
 
@@ -70,7 +74,7 @@ export function waterLine(
   const k = nernstFactor(kelvin(celsius));
   const e0 = waterStandardPotential(gas, celsius, db);
   // Nernst: E = E° − (k/n)·log10 Q, Q = products over reactants with a(H+) = 10^−pH
-  return gas === "O2" ? e0 - k * pH + (k / 4) * Math.log10(pressure) : e0 - k * pH - (k / 2) * Math.log10(pressure);
+  return gas === "O2" ? e0 - k * pH + (k / 4) * log10(pressure) : e0 - k * pH - (k / 2) * log10(pressure);
 }
 
 /** pKw = −log10 Kw of H2O(l) = H+ + OH− at `celsius` (molal activities; IAPWS R11-07 at the model's pressure). */
@@ -108,5 +112,5 @@ export function waterMargin(
 ): number {
   const upper = waterLine(pH, celsius, "O2", 1, db) + overpotential;
   const lower = waterLine(pH, celsius, "H2", 1, db) - overpotential;
-  return Math.min(upper - potential, potential - lower);
+  return min(upper - potential, potential - lower);
 }

@@ -13,10 +13,13 @@ import { mapCells } from "./broadcast";
 import { CellError, CellInput, CellOutput, isBlank, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
+import type { PointEngine } from "../chemistry/point-engine";
 import { DISSOLVED_UNITS, engineIn, unitArg } from "./stability-functions";
 
 export const ASSESS_COLUMNS = ["species", "regime", "boundary above (V)", "boundary below (V)", "water margin (V)", "dissolved", "controlling solid"] as const;
 const WIDTH = ASSESS_COLUMNS.length;
+// Held in a module constant: in a sandboxed host each global lookup per cell is slow.
+const isFiniteNumber = Number.isFinite;
 
 /** The water a sample is evaluated in: ligand totals in mol/kg (0 = absent). */
 interface Water {
@@ -30,10 +33,8 @@ interface Water {
   ionicStrength: number;
 }
 
-/** Equilibrium dissolved metal (mol/kg) and the controlling solid (the point engine, as REDOX.DISSOLVED), or #N/A. */
-function dissolvedWithSolid(element: string, pH: number, E: number, water: Water): { total: number; controllingSolid: string } | CellError {
-  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.phosphate, water.ionicStrength);
-  if (engine instanceof CellError) return engine;
+/** Equilibrium dissolved metal (mol/kg) and the controlling solid (the point engine set to the row's water, as REDOX.DISSOLVED), or #N/A. */
+function dissolvedWithSolid(engine: PointEngine, pH: number, E: number): { total: number; controllingSolid: string } | CellError {
   const { total, solid } = dissolvedAtPoint(engine, pH, E);
   const controllingSolid = engine.table.species[solid].formula;
   if (!(total <= MAX_DISSOLVED)) return notAvailable(`no solid forms here: ${controllingSolid}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);
@@ -49,7 +50,7 @@ function assessRow(element: string, pH: number, E: number, water: Water, unit: s
     pointBoundary(engine, pH, E, direction)?.E ?? notAvailable(`no boundary ${direction > 0 ? "above" : "below"} this point between −3 and +3 V`);
   const above = boundary(1);
   const below = boundary(-1);
-  const dissolved = dissolvedWithSolid(element, pH, E, water);
+  const dissolved = dissolvedWithSolid(engine, pH, E); // the engine already holds this row's water
   const weight = getDatabase().element(element)?.atomicWeight ?? NaN;
   return [
     dominant.formula,
@@ -116,12 +117,18 @@ export function assessAt(
       rows.push(assessRow(el, p, e, { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, phosphate: po4, ionicStrength: i }, u)) - 1,
   );
   // a blank row stays blank, a row with a bad cell shows its error in every column, others their seven answers
-  const out = cells.map(([cell]) => (typeof cell === "number" ? rows[cell].map(finishCell) : new Array<CellOutput>(WIDTH).fill(cell)));
+  const out = cells.map(([cell]) => (typeof cell === "number" ? finishRow(rows[cell]) : new Array<CellOutput>(WIDTH).fill(cell)));
   return wantHeader ? [headerRow(unit), ...out] : out;
+}
+
+/** The row's answers as the host shows them, in place (a copy per row would be one more array per sample to collect). */
+function finishRow(row: CellOutput[]): CellOutput[] {
+  for (let i = 0; i < row.length; i++) row[i] = finishCell(row[i]);
+  return row;
 }
 
 function finishCell(value: CellOutput): CellOutput {
   if (value instanceof CellError) return toHostError(value);
-  if (typeof value === "number" && !Number.isFinite(value)) return toHostError(notAvailable("no finite answer exists at this input"));
+  if (typeof value === "number" && !isFiniteNumber(value)) return toHostError(notAvailable("no finite answer exists at this input"));
   return value;
 }

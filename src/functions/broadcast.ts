@@ -164,41 +164,54 @@ export function mapCells<A extends unknown[]>(
       args[i] = parsed;
     } else args[i] = parsed;
   }
-  const ranges = varying.map((i) => inputs[i] as CellScalar[][]);
-  const rowStep = varying.map((i) => (shapes[i].rows === 1 ? 0 : 1));
-  const colStep = varying.map((i) => (shapes[i].cols === 1 ? 0 : 1));
-  const lows = varying.map((i) => specs[i].accepts?.low ?? Infinity);
-  const highs = varying.map((i) => specs[i].accepts?.high ?? -Infinity);
-  const varyingCount = varying.length;
+  const columns = varying.map((i) => varyingColumn(i, specs[i], inputs[i] as CellScalar[][], shapes[i]));
+  const varyingCount = columns.length;
 
+  // One result cell: the row's varying arguments read into `args`, then the computation.
+  const cell = (r: number, c: number, guarded: boolean): CellOutput => {
+    let blank = constantBlank;
+    let errorIndex = constantError;
+    for (let k = 0; k < varyingCount; k++) {
+      const column = columns[k];
+      const i = column.index;
+      const plain = column.plain;
+      if (plain !== null) {
+        args[i] = plain[r * column.rowStep + c * column.colStep];
+        continue;
+      }
+      const value = column.range[r * column.rowStep][c * column.colStep];
+      // a text cell equal to the one above reads the same (readers are pure): a metal column repeats its symbols
+      let parsed: unknown;
+      if (typeof value === "string" && value === column.lastText) parsed = column.lastParsed;
+      else {
+        parsed = parseCell(specs[i], value, true);
+        if (typeof value === "string") {
+          column.lastText = value;
+          column.lastParsed = parsed;
+        }
+      }
+      if (parsed === BLANK) blank = true;
+      else if (typeof parsed === "object" && parsed instanceof CellError) {
+        if (errorIndex < 0 || i < errorIndex) errorIndex = i; // the first error in argument order wins over blanks
+        args[i] = parsed;
+      } else args[i] = parsed;
+    }
+    if (errorIndex >= 0) return toHostError(args[errorIndex] as CellError);
+    if (blank) return "";
+    return finish(guarded ? safeCompute(compute, args as A) : compute(...(args as A)));
+  };
   // Computations almost never throw: run unguarded, and only if one does, run again guarding every cell.
   const fill = (guarded: boolean): CellOutput[][] => {
     const result: CellOutput[][] = new Array(rows);
     for (let r = 0; r < rows; r++) {
-      const row: CellOutput[] = []; // a literal: in a sandboxed host the global Array is a slow lookup
-      for (let c = 0; c < cols; c++) {
-        let blank = constantBlank;
-        let errorIndex = constantError;
-        for (let k = 0; k < varyingCount; k++) {
-          const value = ranges[k][r * rowStep[k]][c * colStep[k]];
-          // fast path: a plain number inside the accepted interval needs no further reading
-          if (typeof value === "number" && value >= lows[k] && value <= highs[k]) {
-            args[varying[k]] = value;
-            continue;
-          }
-          const i = varying[k];
-          const parsed = parseCell(specs[i], value, true);
-          if (parsed === BLANK) blank = true;
-          else if (typeof parsed === "object" && parsed instanceof CellError) {
-            if (errorIndex < 0 || i < errorIndex) errorIndex = i; // the first error in argument order wins over blanks
-            args[i] = parsed;
-          } else args[i] = parsed;
-        }
-        if (errorIndex >= 0) row[c] = toHostError(args[errorIndex] as CellError);
-        else if (blank) row[c] = "";
-        else row[c] = finish(guarded ? safeCompute(compute, args as A) : compute(...(args as A)));
+      // a one-cell literal for a column (the usual lab export): an empty literal grown by one cell reserves room for
+      // many, and those rows stay alive until the host takes the result, so every collection copies them
+      if (cols === 1) result[r] = [cell(r, 0, guarded)];
+      else {
+        const row: CellOutput[] = []; // a literal: in a sandboxed host the global Array is a slow lookup
+        for (let c = 0; c < cols; c++) row[c] = cell(r, c, guarded);
+        result[r] = row;
       }
-      result[r] = row;
     }
     return result;
   };
@@ -207,6 +220,43 @@ export function mapCells<A extends unknown[]>(
   } catch {
     return fill(true);
   }
+}
+
+/** A range argument as the row loop reads it. */
+interface VaryingColumn {
+  readonly index: number;
+  readonly range: CellScalar[][];
+  /** Steps into `range` (0 along a dimension of size 1, which broadcasts). */
+  readonly rowStep: number;
+  readonly colStep: number;
+  /** The range's numbers in one flat array (index r·rowStep + c·colStep), or null when a cell needs reading. */
+  readonly plain: Float64Array | null;
+  /** The last text cell read, and what it read as. */
+  lastText: string | null;
+  lastParsed: unknown;
+}
+
+/**
+ * Reads a range argument column by column before the row loop. When every cell is a plain number inside the spec's
+ * accepted interval (a lab column), the numbers go into one typed array: the row loop then reads contiguous
+ * memory instead of one row array per cell of every argument, which was most of a row's cost with many columns.
+ */
+function varyingColumn(index: number, spec: ArgSpec<unknown>, range: CellScalar[][], shape: Shape): VaryingColumn {
+  const rowStep = shape.rows === 1 ? 0 : shape.cols;
+  const colStep = shape.cols === 1 ? 0 : 1;
+  const base = { index, range, rowStep: shape.rows === 1 ? 0 : 1, colStep, lastText: null, lastParsed: undefined };
+  const accepts = spec.accepts;
+  if (!accepts) return { ...base, plain: null };
+  const plain = new Float64Array(shape.rows * shape.cols);
+  for (let r = 0; r < shape.rows; r++) {
+    const cells = range[r];
+    for (let c = 0; c < shape.cols; c++) {
+      const value = cells[c];
+      if (typeof value !== "number" || !(value >= accepts.low && value <= accepts.high)) return { ...base, plain: null };
+      plain[r * shape.cols + c] = value;
+    }
+  }
+  return { ...base, rowStep, plain };
 }
 
 /** Reads one cell; `given` is false only for an omitted argument (a top-level blank). */
