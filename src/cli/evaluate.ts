@@ -189,10 +189,15 @@ function argumentColumns(plan: EvaluationPlan): Record<string, string | null> {
   return columns;
 }
 
-/** Splits "pH: expected …" into the argument and the rest. */
-function splitMessage(message: string): [string | null, string] {
-  const m = /^([A-Za-z][\w ,]*?):\s(.*)$/s.exec(message);
-  return m ? [m[1], m[2]] : [null, message];
+/**
+ * The argument at fault and the message without its "argument: " lead. The argument readers record it on the error
+ * (CellError.argument); errors raised deeper in a function name it only in the text's lead, read as a fallback.
+ */
+function splitMessage(error: CellError): [string | null, string] {
+  const lead = error.argument !== undefined ? `${error.argument}: ` : null;
+  if (lead !== null) return [error.argument!, error.message.startsWith(lead) ? error.message.slice(lead.length) : error.message];
+  const m = /^([A-Za-z][\w ,]*?):\s(.*)$/s.exec(error.message);
+  return m ? [m[1], m[2]] : [null, error.message];
 }
 
 /**
@@ -336,7 +341,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     let problems: RowMessage[] | null = null;
     for (const c of cells) {
       if (!(c instanceof CellError)) continue;
-      const [arg, rest] = splitMessage(c.message);
+      const [arg, rest] = splitMessage(c);
       if (!SERIOUS.has(c.code) && !(c.code === "#N/A" && arg !== null && Object.prototype.hasOwnProperty.call(argColumns, arg))) continue;
       const col = arg !== null && arg in argColumns ? argColumns[arg] : null;
       const text = clip(col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`);

@@ -64,10 +64,10 @@ export function numberArg(
       let x: number;
       if (typeof value === "number") x = value;
       else if (typeof value === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(value)) x = Number(value);
-      else return valueError(`${name}: expected a number, got ${describe(value)}`);
-      if (!isFiniteNumber(x)) return valueError(`${name}: expected a finite number, got ${x}`);
+      else return valueError(`${name}: expected a number, got ${describe(value)}`, name);
+      if (!isFiniteNumber(x)) return valueError(`${name}: expected a finite number, got ${x}`, name);
       const below = min !== undefined && (minExclusive ? x <= min : x < min);
-      if (below || (max !== undefined && x > max)) return valueError(outOfRange ? outOfRange(x) : `${name}: ${x} is out of range (${rangeText()})`);
+      if (below || (max !== undefined && x > max)) return valueError(outOfRange ? outOfRange(x) : `${name}: ${x} is out of range (${rangeText()})`, name);
       return x;
     },
   };
@@ -86,7 +86,7 @@ export function textArg<T>(
     parse(value) {
       if (typeof value !== "string") {
         if (typeof value === "number" && Number.isInteger(value)) return resolve(String(value));
-        return valueError(`${name}: expected text, got ${describe(value)}`);
+        return valueError(`${name}: expected text, got ${describe(value)}`, name);
       }
       return resolve(value.trim());
     },
@@ -128,7 +128,7 @@ export function mapCells<A extends unknown[]>(
   const shapes: Shape[] = [];
   for (let i = 0; i < count; i++) {
     const shape = shapeOf(inputs[i]);
-    if (shape === null) return [[toHostError(valueError(`${specs[i].name}: the range is empty or not rectangular`))]];
+    if (shape === null) return [[toHostError(valueError(`${specs[i].name}: the range is empty or not rectangular`, specs[i].name))]];
     shapes.push(shape);
   }
   let rows = 1;
@@ -273,10 +273,10 @@ function parseCell<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<
 function parseObject<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<T> {
   const code = inputErrorCode(value);
   if (code === "#N/A") return notAvailable(`${spec.name}: the cell holds #N/A (no value)`);
-  if (code !== null) return valueError(`${spec.name}: the cell holds the error ${code.slice(0, 12)}; correct that cell`);
+  if (code !== null) return valueError(`${spec.name}: the cell holds the error ${code.slice(0, 12)}; correct that cell`, spec.name);
   const basic = basicValueOf(value);
   if (basic !== undefined) return parseCell(spec, basic, given);
-  return valueError(`${spec.name}: the cell holds an unreadable value`);
+  return valueError(`${spec.name}: the cell holds an unreadable value`, spec.name);
 }
 
 function safeCompute<A extends unknown[]>(compute: (...args: A) => CellOutput, args: A): CellOutput {

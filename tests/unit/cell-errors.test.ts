@@ -5,7 +5,8 @@
  */
 import { describe, expect, it } from "vitest";
 import { CellError, notAvailable, valueError } from "../../src/functions/cell-values";
-import { elementArg } from "../../src/functions/common-args";
+import { elementArg, pHArg, potentialArg } from "../../src/functions/common-args";
+import { speciesAt } from "../../src/functions/stability-functions";
 
 describe("CellError.argument", () => {
   it("is set by the element reader for an unknown metal, beside the message naming it", () => {
@@ -20,5 +21,18 @@ describe("CellError.argument", () => {
     expect(Object.keys(notAvailable("no boundary within ±3 V"))).not.toContain("argument");
     expect(Object.keys(valueError("ranges of different shapes cannot be combined"))).not.toContain("argument");
     expect(valueError("pH: 17 is out of range", "pH").argument).toBe("pH");
+  });
+
+  it("is set by the number readers, for a wrong kind and for a value out of range", () => {
+    expect((pHArg.parse("seven") as CellError).argument).toBe("pH");
+    expect((pHArg.parse(17) as CellError).argument).toBe("pH");
+    // a reading in mV typed where volts are expected (595 outside ±3 V)
+    expect((potentialArg().parse(595) as CellError).argument).toBe("potential");
+  });
+
+  it("reaches the caller through a worksheet function, so the command line ties it to the column", () => {
+    const [[cell]] = speciesAt("Fe", "seven", 0.1);
+    expect(cell).toBeInstanceOf(CellError);
+    expect((cell as CellError).argument).toBe("pH");
   });
 });
