@@ -120,7 +120,11 @@ function cliConfig(mode) {
       clean: true,
     },
     resolve: { extensions: [".ts", ".js"], extensionAlias: { ".js": [".ts", ".js"] } },
-    module: { rules: [{ test: /\.ts$/, exclude: /node_modules/, use: { loader: "ts-loader", options: { transpileOnly: true } } }] },
+    module: {
+      rules: [
+        { test: /\.ts$/, exclude: /node_modules/, use: { loader: "ts-loader", options: { transpileOnly: true } } },
+      ],
+    },
     optimization: { minimize: false },
     performance: { hints: false },
     plugins: [new DefinePlugin({ __REDOX_CELLS_VERSION__: JSON.stringify(pkg.version) })],
@@ -128,7 +132,8 @@ function cliConfig(mode) {
 }
 
 // the dev server serves the add-in only
-module.exports = (env = {}, argv = {}) => (env.WEBPACK_SERVE ? addinConfig(env, argv) : [addinConfig(env, argv), cliConfig(argv.mode || "production")]);
+module.exports = (env = {}, argv = {}) =>
+  env.WEBPACK_SERVE ? addinConfig(env, argv) : [addinConfig(env, argv), cliConfig(argv.mode || "production")];
 
 function addinConfig(env, argv) {
   const mode = argv.mode || "production";

@@ -74,35 +74,45 @@ s.on("data", (c) => { const lines = (rest + c).split("\\n"); rest = lines.pop();
 s.on("end", () => { if (rest) rows++; process.stdout.write(rows + " " + fields + "\\n"); });
 `;
 
-const perSecond = (rows: number, seconds: number): string => `${Math.round(rows / seconds).toLocaleString("en-US")} rows/s`;
+const perSecond = (rows: number, seconds: number): string =>
+  `${Math.round(rows / seconds).toLocaleString("en-US")} rows/s`;
 
 async function main(): Promise<void> {
   const rows = Number(process.argv[2] ?? 1_000_000);
   const waterRows = Number(process.argv[3] ?? 20_000);
-  if (!existsSync(join(root, "dist/cli/redox-cells.cjs"))) console.log("cli: dist/cli/redox-cells.cjs is missing (run npm run build): the bin falls back to tsx");
+  if (!existsSync(join(root, "dist/cli/redox-cells.cjs")))
+    console.log("cli: dist/cli/redox-cells.cjs is missing (run npm run build): the bin falls back to tsx");
   const dir = mkdtempSync(join(tmpdir(), "redox-cli-bench-"));
   try {
     const pure = join(dir, "pure.csv");
     const water = join(dir, "water.csv");
     await writeSyntheticLog(pure, rows, { seed: 3 });
     await writeSyntheticLog(water, waterRows, { seed: 5, ownWater: true });
-    console.log(`cli: logs of ${rows.toLocaleString("en-US")} pure-water rows (${(statSync(pure).size / 1e6).toFixed(1)} MB) and ${waterRows.toLocaleString("en-US")} own-water rows`);
+    console.log(
+      `cli: logs of ${rows.toLocaleString("en-US")} pure-water rows (${(statSync(pure).size / 1e6).toFixed(1)} MB) and ${waterRows.toLocaleString("en-US")} own-water rows`,
+    );
 
     const bare = medianStart(["-e", "0"]);
     const version = medianStart([bin, "--version"]);
-    console.log(`cli: start-up: --version ${version.toFixed(0)} ms, bare node -e 0 ${bare.toFixed(0)} ms: ${(version / bare).toFixed(1)}× (target: a few ×)`);
+    console.log(
+      `cli: start-up: --version ${version.toFixed(0)} ms, bare node -e 0 ${bare.toFixed(0)} ms: ${(version / bare).toFixed(1)}× (target: a few ×)`,
+    );
 
     const floor = await timed(["-e", FLOOR, pure]);
     const cli = await timed([bin, pure, "-o", join(dir, "pure-out.csv"), "--svg-dir", dir, "--quiet"]);
     if (cli.code !== 0) console.log(`cli: exit code ${cli.code}\n${cli.stderr.slice(0, 2000)}`);
     console.log(`cli: floor (split lines and fields) ${floor.seconds.toFixed(2)} s, ${perSecond(rows, floor.seconds)}`);
-    console.log(`cli: pure water ${cli.seconds.toFixed(2)} s, ${perSecond(rows, cli.seconds)}: ${(cli.seconds / floor.seconds).toFixed(1)}× the floor (target ≤ 8×); peak memory ${(cli.peakKiB / 1024).toFixed(0)} MiB`);
+    console.log(
+      `cli: pure water ${cli.seconds.toFixed(2)} s, ${perSecond(rows, cli.seconds)}: ${(cli.seconds / floor.seconds).toFixed(1)}× the floor (target ≤ 8×); peak memory ${(cli.peakKiB / 1024).toFixed(0)} MiB`,
+    );
 
     const own = await timed([bin, water, "-o", join(dir, "water-out.csv"), "--no-svg", "--quiet"]);
     // exit 1: rows whose pH is outside what an alkalinity can say (their cells hold #NUM!), as in real logs
     if (own.code > 1) console.log(`cli: exit code ${own.code}\n${own.stderr.slice(0, 2000)}`);
     const ratio = own.seconds / waterRows / (cli.seconds / rows);
-    console.log(`cli: own water per row ${own.seconds.toFixed(2)} s, ${perSecond(waterRows, own.seconds)}: ${ratio.toFixed(1)}× the pure-water time per row (target ≤ 3×); peak memory ${(own.peakKiB / 1024).toFixed(0)} MiB`);
+    console.log(
+      `cli: own water per row ${own.seconds.toFixed(2)} s, ${perSecond(waterRows, own.seconds)}: ${ratio.toFixed(1)}× the pure-water time per row (target ≤ 3×); peak memory ${(own.peakKiB / 1024).toFixed(0)} MiB`,
+    );
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

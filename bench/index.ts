@@ -15,16 +15,34 @@ function bundleStabilityRows(): BenchRow[] {
   try {
     bundle = loadBundle();
   } catch (error) {
-    return [{ name: "stability functions in the built bundle", figure: `bundle not loadable (${(error as Error).message.slice(0, 40)})`, target: "—", met: null }];
+    return [
+      {
+        name: "stability functions in the built bundle",
+        figure: `bundle not loadable (${(error as Error).message.slice(0, 40)})`,
+        target: "—",
+        met: null,
+      },
+    ];
   }
   return benchStability((name) => bundle.functions.get(name) as ((...args: unknown[]) => unknown) | undefined);
 }
 
 function bundleRow(): BenchRow {
   const file = path.join(process.env.REDOX_DIST ?? "dist", "functions.js");
-  if (!fs.existsSync(file)) return { name: "functions bundle, gzipped", figure: "not built (run npm run build)", target: "< 150 KB", met: null };
+  if (!fs.existsSync(file))
+    return {
+      name: "functions bundle, gzipped",
+      figure: "not built (run npm run build)",
+      target: "< 150 KB",
+      met: null,
+    };
   const gz = zlib.gzipSync(fs.readFileSync(file), { level: 9 }).length;
-  return { name: "functions bundle, gzipped", figure: `${(gz / 1024).toFixed(1)} KB`, target: "< 150 KB", met: gz < 150 * 1024 };
+  return {
+    name: "functions bundle, gzipped",
+    figure: `${(gz / 1024).toFixed(1)} KB`,
+    target: "< 150 KB",
+    met: gz < 150 * 1024,
+  };
 }
 
 async function main(): Promise<void> {
@@ -41,7 +59,10 @@ async function main(): Promise<void> {
   const children: [string, string[]][] = [["bench/cli.ts", [process.env.REDOX_BENCH_CLI_ROWS ?? "1000000"]]];
   if (fs.existsSync("/usr/bin/chromium")) children.push(["bench/pane-browser.ts", []]);
   for (const [script, args] of children) {
-    const run = spawnSync(process.execPath, ["--import", "tsx", script, ...args], { stdio: "inherit", env: process.env });
+    const run = spawnSync(process.execPath, ["--import", "tsx", script, ...args], {
+      stdio: "inherit",
+      env: process.env,
+    });
     if (run.status !== 0) console.log(`${script}: exited with ${run.status ?? run.signal}`);
   }
 }

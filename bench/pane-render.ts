@@ -9,7 +9,14 @@
  */
 import { getDatabase } from "../src/chemistry/database";
 import { buildSystem } from "../src/chemistry/system";
-import { displayScale, defaultWindow, PlottedSample, SampleInput, shownRegions, shownWaterLines } from "../src/diagram/diagram-model";
+import {
+  displayScale,
+  defaultWindow,
+  PlottedSample,
+  SampleInput,
+  shownRegions,
+  shownWaterLines,
+} from "../src/diagram/diagram-model";
 import { answerSamples } from "../src/taskpane/sample-answers";
 import { renderDiagramSvg } from "../src/diagram/diagram-svg";
 import { mulberry32 } from "../src/cli/seeded-random";
@@ -18,7 +25,12 @@ import type { BenchRow } from "./engine";
 /** Deterministic samples spread over the usual window (mulberry32). */
 export function syntheticSamples(count: number, seed = 7): SampleInput[] {
   const next = mulberry32(seed);
-  return Array.from({ length: count }, (_, i) => ({ row: i + 2, id: `S-${i + 1}`, pH: 4 + 6 * next(), eSHE: -0.6 + 1.4 * next() }));
+  return Array.from({ length: count }, (_, i) => ({
+    row: i + 2,
+    id: `S-${i + 1}`,
+    pH: 4 + 6 * next(),
+    eSHE: -0.6 + 1.4 * next(),
+  }));
 }
 
 /** A sample log as the pane reads it: pH, ORP in mV vs Ag/AgCl (sat.), and with `ownWater` a temperature and alkalinity per row. */
@@ -37,7 +49,11 @@ export function syntheticLog(count: number, ownWater: boolean, seed = 7): { head
 }
 
 /** The pane's path: every row's answer through the worksheet functions (sample-answers.ts), then the SVG text. */
-function paneOnce(count: number, ownWater: boolean, log: ReturnType<typeof syntheticLog>): { ms: number; bytes: number } {
+function paneOnce(
+  count: number,
+  ownWater: boolean,
+  log: ReturnType<typeof syntheticLog>,
+): { ms: number; bytes: number } {
   const start = performance.now();
   const system = buildSystem(getDatabase(), "Fe", { celsius: 25, activity: 1e-6 });
   const scale = displayScale("AgCl-sat", "mV", 25);
@@ -62,12 +78,36 @@ function paneOnce(count: number, ownWater: boolean, log: ReturnType<typeof synth
   answers.forEach((a, i) => {
     if ("error" in a) return;
     const pH = log.rows[i][1] as number;
-    samples.push({ row: i + 2, id: String(log.rows[i][0]), pH, E: scale.fromSHE(pH, a.eSHE), eSHE: a.eSHE, formula: a.species, regime: a.regime, waterMargin: a.margin, celsius: a.celsius, equilibrium: a.dissolved });
+    samples.push({
+      row: i + 2,
+      id: String(log.rows[i][0]),
+      pH,
+      E: scale.fromSHE(pH, a.eSHE),
+      eSHE: a.eSHE,
+      formula: a.species,
+      regime: a.regime,
+      waterMargin: a.margin,
+      celsius: a.celsius,
+      equilibrium: a.dissolved,
+    });
   });
   const regions = shownRegions(system, window, scale);
-  const svg = renderDiagramSvg({ system, window, regions, samples, water: shownWaterLines(25, scale), axisTitle: scale.axisTitle, unit: "mV", width: 800, height: 760, chrome: false, sampleTitles: false });
+  const svg = renderDiagramSvg({
+    system,
+    window,
+    regions,
+    samples,
+    water: shownWaterLines(25, scale),
+    axisTitle: scale.axisTitle,
+    unit: "mV",
+    width: 800,
+    height: 760,
+    chrome: false,
+    sampleTitles: false,
+  });
   const firstError = answers.find((a) => "error" in a);
-  if (samples.length < count * 0.99) throw new Error(`only ${samples.length} of ${count} samples answered: ${JSON.stringify(firstError)}`);
+  if (samples.length < count * 0.99)
+    throw new Error(`only ${samples.length} of ${count} samples answered: ${JSON.stringify(firstError)}`);
   return { ms: performance.now() - start, bytes: svg.length };
 }
 
@@ -90,5 +130,6 @@ export function benchPaneRender(count = 10_000): BenchRow[] {
 }
 
 if (process.argv[1] && /pane-render\.ts$/.test(process.argv[1])) {
-  for (const row of benchPaneRender()) console.log(`${row.name}  ${row.figure}  target ${row.target}  ${row.met ? "met" : "NOT MET"}`);
+  for (const row of benchPaneRender())
+    console.log(`${row.name}  ${row.figure}  target ${row.target}  ${row.met ? "met" : "NOT MET"}`);
 }

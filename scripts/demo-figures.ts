@@ -31,7 +31,10 @@ async function demoResults(): Promise<Record<string, string>[]> {
     const out = join(dir, "results.csv");
     const sink = new PassThrough();
     sink.resume();
-    const { code } = await runCommand([LOG, "-o", out, "--no-svg", "--quiet", "--max-messages", "0"], { stdout: sink, stderr: sink });
+    const { code } = await runCommand([LOG, "-o", out, "--no-svg", "--quiet", "--max-messages", "0"], {
+      stdout: sink,
+      stderr: sink,
+    });
     if (code > 1) throw new Error(`the command line failed on the demo log (exit ${code})`);
     return parse(readFileSync(out, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
   } finally {
@@ -45,7 +48,8 @@ function regimeTable(rows: Record<string, string>[]): string {
   for (const r of rows) {
     const entry = bySite.get(r.site) ?? { metal: r.pipe_metal, counts: {}, other: 0 };
     bySite.set(r.site, entry);
-    if ((REGIMES as readonly string[]).includes(r.metal_regime)) entry.counts[r.metal_regime] = (entry.counts[r.metal_regime] ?? 0) + 1;
+    if ((REGIMES as readonly string[]).includes(r.metal_regime))
+      entry.counts[r.metal_regime] = (entry.counts[r.metal_regime] ?? 0) + 1;
     else entry.other++;
   }
   const lines = [
@@ -94,14 +98,22 @@ async function workedRow(): Promise<string> {
     if (r > 2 && row.getCell(idColumn).value === WORKED_SAMPLE) rowNumber = r;
   });
   if (rowNumber < 0) throw new Error(`${WORKED_SAMPLE} is not in ${WORKBOOK}`);
-  const lines = [`Sample ${WORKED_SAMPLE} is row ${rowNumber} of the workbook (row 1 marks the data invented, row 2 holds the headers):`, "", "```"];
+  const lines = [
+    `Sample ${WORKED_SAMPLE} is row ${rowNumber} of the workbook (row 1 marks the data invented, row 2 holds the headers):`,
+    "",
+    "```",
+  ];
   const row = sheet.getRow(rowNumber);
   const formulas: Array<[string, string, string]> = [];
   row.eachCell((cell, col) => {
     const value = cell.value as { formula?: string; result?: unknown } | null;
     if (value && typeof value === "object" && typeof value.formula === "string") {
       const header = headers.get(col)!;
-      formulas.push([`${cell.address.replace(/\d+$/, "")} ${header}`, `=${value.formula}`, shown(value.result, header)]);
+      formulas.push([
+        `${cell.address.replace(/\d+$/, "")} ${header}`,
+        `=${value.formula}`,
+        shown(value.result, header),
+      ]);
     }
   });
   const w1 = Math.max(...formulas.map((f) => f[0].length)) + 2;
@@ -114,7 +126,11 @@ async function workedRow(): Promise<string> {
 /** Every figure block by name. */
 export async function demoFigures(): Promise<Record<string, string>> {
   const rows = await demoResults();
-  return { "regimes-per-site": regimeTable(rows), "mill-lane": millLaneSentence(rows), "worked-row": await workedRow() };
+  return {
+    "regimes-per-site": regimeTable(rows),
+    "mill-lane": millLaneSentence(rows),
+    "worked-row": await workedRow(),
+  };
 }
 
 const BLOCK = /<!-- figures:([a-z-]+) -->\n([\s\S]*?)<!-- \/figures:\1 -->/g;
@@ -126,7 +142,9 @@ export function figureBlocks(text: string): Map<string, string> {
 
 /** The document with every figure block replaced by the computed one. */
 export function withFigures(text: string, figures: Record<string, string>): string {
-  return text.replace(BLOCK, (whole, name: string) => (name in figures ? `<!-- figures:${name} -->\n${figures[name]}\n<!-- /figures:${name} -->` : whole));
+  return text.replace(BLOCK, (whole, name: string) =>
+    name in figures ? `<!-- figures:${name} -->\n${figures[name]}\n<!-- /figures:${name} -->` : whole,
+  );
 }
 
 async function main(): Promise<number> {
@@ -139,7 +157,9 @@ async function main(): Promise<number> {
     if (updated === text) continue;
     stale++;
     if (process.argv.includes("--write")) writeFileSync(path, updated);
-    console.log(`${document}: figure blocks ${process.argv.includes("--write") ? "rewritten" : "are stale (run with --write)"}`);
+    console.log(
+      `${document}: figure blocks ${process.argv.includes("--write") ? "rewritten" : "are stale (run with --write)"}`,
+    );
   }
   return stale > 0 && !process.argv.includes("--write") ? 1 : 0;
 }

@@ -11,16 +11,22 @@ const OUTPUT = "out/results.csv";
 
 async function main(): Promise<number> {
   console.log("Redox Cells demo — the Brackenholm Water Cooperative (an INVENTED utility; every value is fictional)\n");
-  const { code, summary } = await runCommand([INPUT, "-o", OUTPUT, "--svg-dir", "out", "--max-messages", "20", "--quiet"], {
-    stdout: process.stdout,
-    stderr: process.stderr,
-  });
+  const { code, summary } = await runCommand(
+    [INPUT, "-o", OUTPUT, "--svg-dir", "out", "--max-messages", "20", "--quiet"],
+    {
+      stdout: process.stdout,
+      stderr: process.stderr,
+    },
+  );
   if (!summary || code > 1) {
     console.error(`demo: the command line failed (exit code ${code})`);
     return code || 1;
   }
 
-  const rows = parse(readFileSync(OUTPUT, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
+  const rows = parse(readFileSync(OUTPUT, "utf8"), { columns: true, skip_empty_lines: true }) as Record<
+    string,
+    string
+  >[];
   const regimes = ["immunity", "passivation", "corrosion"];
   const bySite = new Map<string, { metal: string; counts: Record<string, number>; other: number }>();
   for (const r of rows) {
@@ -36,9 +42,13 @@ async function main(): Promise<number> {
   );
   console.log(`\nSamples per regime of each site's pipe metal (${rows.length} samples):`);
   const width = Math.max(...[...bySite.keys()].map((s) => s.length)) + 2;
-  console.log(`  ${"site".padEnd(width)}${"metal".padEnd(7)}${regimes.map((r) => r.padStart(13)).join("")}${"not evaluated".padStart(15)}`);
+  console.log(
+    `  ${"site".padEnd(width)}${"metal".padEnd(7)}${regimes.map((r) => r.padStart(13)).join("")}${"not evaluated".padStart(15)}`,
+  );
   for (const [site, e] of [...bySite].sort((a, b) => a[0].localeCompare(b[0]))) {
-    console.log(`  ${site.padEnd(width)}${e.metal.padEnd(7)}${regimes.map((r) => String(e.counts[r] ?? 0).padStart(13)).join("")}${String(e.other).padStart(15)}`);
+    console.log(
+      `  ${site.padEnd(width)}${e.metal.padEnd(7)}${regimes.map((r) => String(e.counts[r] ?? 0).padStart(13)).join("")}${String(e.other).padStart(15)}`,
+    );
   }
 
   const corrosive = rows.filter((r) => r.metal_regime === "corrosion");
@@ -49,9 +59,12 @@ async function main(): Promise<number> {
       `  ${r.sample_id.padEnd(12)}${r.date}  ${r.site.padEnd(width)}pH ${r.pH.padStart(5)}  E ${Number(r.E_SHE_V).toFixed(3).padStart(6)} V vs SHE  → ${r.metal_species}`,
     );
   }
-  if (corrosive.length > shown.length) console.log(`  … and ${corrosive.length - shown.length} more (filter metal_regime = corrosion in ${OUTPUT})`);
+  if (corrosive.length > shown.length)
+    console.log(`  … and ${corrosive.length - shown.length} more (filter metal_regime = corrosion in ${OUTPUT})`);
 
-  console.log(`\nRows with deliberately mistyped cells: ${summary.errorRows}; rows with blank inputs: ${summary.blankRows} (see the errors column).`);
+  console.log(
+    `\nRows with deliberately mistyped cells: ${summary.errorRows}; rows with blank inputs: ${summary.blankRows} (see the errors column).`,
+  );
   console.log(`\nFiles:\n  ${OUTPUT}${summary.svgFiles.map((f) => `\n  ${f}`).join("")}`);
   console.log(
     "\nThermodynamics says which state is stable, not how fast a pipe corrodes. For lead and copper in drinking water, confirm by\nlaboratory analysis and defer to local codes, regulators and licensed corrosion professionals.",

@@ -16,13 +16,16 @@ class ErrorCellsMetadataPlugin {
 
   apply(compiler) {
     compiler.hooks.thisCompilation.tap("ErrorCellsMetadataPlugin", (compilation) => {
-      compilation.hooks.processAssets.tap({ name: "ErrorCellsMetadataPlugin", stage: Compilation.PROCESS_ASSETS_STAGE_ADDITIONAL }, () => {
-        const asset = compilation.getAsset(this.file);
-        if (!asset) return;
-        const metadata = JSON.parse(asset.source.source().toString());
-        const updated = { allowErrorForDataTypeAny: true, ...metadata };
-        compilation.updateAsset(this.file, new sources.RawSource(JSON.stringify(updated, null, 4)));
-      });
+      compilation.hooks.processAssets.tap(
+        { name: "ErrorCellsMetadataPlugin", stage: Compilation.PROCESS_ASSETS_STAGE_ADDITIONAL },
+        () => {
+          const asset = compilation.getAsset(this.file);
+          if (!asset) return;
+          const metadata = JSON.parse(asset.source.source().toString());
+          const updated = { allowErrorForDataTypeAny: true, ...metadata };
+          compilation.updateAsset(this.file, new sources.RawSource(JSON.stringify(updated, null, 4)));
+        },
+      );
     });
   }
 }

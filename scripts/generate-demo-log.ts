@@ -18,7 +18,6 @@ import { mkdirSync, writeFileSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { mulberry32 } from "../src/cli/seeded-random";
 
-
 const random = mulberry32(20250117);
 
 /** Standard normal deviate by Box–Muller. */
@@ -50,13 +49,83 @@ interface Site {
 }
 
 const SITES: Site[] = [
-  { name: "Brackenholm Works outlet", code: "BWO", pipe: "stainless / nickel-alloy plant line", metal: "Ni", pH: 7.6, orp: 640, alkalinity: 95, dT: 0.5, interval: 7 },
-  { name: "Eastgate trunk main", code: "ETM", pipe: "ductile iron, cement-lined", metal: "Fe", pH: 7.5, orp: 590, alkalinity: 92, dT: 0.3, interval: 7 },
-  { name: "Old Town dead end", code: "OTD", pipe: "cast iron, unlined", metal: "Fe", pH: 7.3, orp: 420, alkalinity: 88, dT: 1.2, interval: 7 },
-  { name: "Mill Lane", code: "MLL", pipe: "lead service line", metal: "Pb", pH: 7.2, orp: 520, alkalinity: 40, dT: 0.8, interval: 14 },
-  { name: "Orchard Rise", code: "ORR", pipe: "copper service lines", metal: "Cu", pH: 7.1, orp: 560, alkalinity: 35, dT: 1.0, interval: 14 },
-  { name: "Quayside estate", code: "QSE", pipe: "galvanised steel (zinc)", metal: "Zn", pH: 7.4, orp: 540, alkalinity: 70, dT: 0.9, interval: 14 },
-  { name: "Fellside clarifier", code: "FSC", pipe: "aluminium launders", metal: "Al", pH: 7.0, orp: 610, alkalinity: 60, dT: -0.5, interval: 7 },
+  {
+    name: "Brackenholm Works outlet",
+    code: "BWO",
+    pipe: "stainless / nickel-alloy plant line",
+    metal: "Ni",
+    pH: 7.6,
+    orp: 640,
+    alkalinity: 95,
+    dT: 0.5,
+    interval: 7,
+  },
+  {
+    name: "Eastgate trunk main",
+    code: "ETM",
+    pipe: "ductile iron, cement-lined",
+    metal: "Fe",
+    pH: 7.5,
+    orp: 590,
+    alkalinity: 92,
+    dT: 0.3,
+    interval: 7,
+  },
+  {
+    name: "Old Town dead end",
+    code: "OTD",
+    pipe: "cast iron, unlined",
+    metal: "Fe",
+    pH: 7.3,
+    orp: 420,
+    alkalinity: 88,
+    dT: 1.2,
+    interval: 7,
+  },
+  {
+    name: "Mill Lane",
+    code: "MLL",
+    pipe: "lead service line",
+    metal: "Pb",
+    pH: 7.2,
+    orp: 520,
+    alkalinity: 40,
+    dT: 0.8,
+    interval: 14,
+  },
+  {
+    name: "Orchard Rise",
+    code: "ORR",
+    pipe: "copper service lines",
+    metal: "Cu",
+    pH: 7.1,
+    orp: 560,
+    alkalinity: 35,
+    dT: 1.0,
+    interval: 14,
+  },
+  {
+    name: "Quayside estate",
+    code: "QSE",
+    pipe: "galvanised steel (zinc)",
+    metal: "Zn",
+    pH: 7.4,
+    orp: 540,
+    alkalinity: 70,
+    dT: 0.9,
+    interval: 14,
+  },
+  {
+    name: "Fellside clarifier",
+    code: "FSC",
+    pipe: "aluminium launders",
+    metal: "Al",
+    pH: 7.0,
+    orp: 610,
+    alkalinity: 60,
+    dT: -0.5,
+    interval: 7,
+  },
 ];
 
 const METAL_COLUMNS = ["Fe", "Cu", "Pb", "Zn", "Ni", "Al"] as const;

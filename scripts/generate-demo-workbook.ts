@@ -31,7 +31,8 @@ const NUMBER = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/;
 function cellValue(text: string, header: string): ExcelJS.CellValue {
   if (text.trim() === "") return null;
   if (header === "date" && /^\d{4}-\d{2}-\d{2}$/.test(text)) return new Date(`${text}T00:00:00Z`);
-  if (NUMBER.test(text) && !["sample_id", "site", "pipe_metal", "pipe_material", "note"].includes(header)) return Number(text);
+  if (NUMBER.test(text) && !["sample_id", "site", "pipe_metal", "pipe_material", "note"].includes(header))
+    return Number(text);
   return text;
 }
 
@@ -43,7 +44,12 @@ function letter(n: number): string {
 }
 
 async function main(): Promise<void> {
-  const records = parse(readFileSync(input, "utf8"), { comment: "#", comment_no_infix: true, skip_empty_lines: true, relax_column_count: true }) as string[][];
+  const records = parse(readFileSync(input, "utf8"), {
+    comment: "#",
+    comment_no_infix: true,
+    skip_empty_lines: true,
+    relax_column_count: true,
+  }) as string[][];
   const [header, ...rows] = records;
   const col = (name: string): string => {
     const i = header.indexOf(name);
@@ -77,16 +83,28 @@ async function main(): Promise<void> {
     ["DIC_mol_kg", (r) => `REDOX.DIC(${alkalinity}${r},${pH}${r},${temp}${r})`],
     ["pipe_species", (r) => `REDOX.SPECIES(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
     ["pipe_regime", (r) => `REDOX.REGIME(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r})`],
-    ["boundary_above_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,0,1)`],
-    ["boundary_below_V", (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,0,-1)`],
-    ["pipe_dissolved_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,0,0,"ug/L")`],
+    [
+      "boundary_above_V",
+      (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,0,1)`,
+    ],
+    [
+      "boundary_below_V",
+      (r) => `REDOX.BOUNDARY(${metal}${r},${pH}${r},${E}${r},${temp}${r},${activity},${DIC}${r},0,0,0,0,-1)`,
+    ],
+    [
+      "pipe_dissolved_ug_L",
+      (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,0,0,"ug/L")`,
+    ],
     // lead and copper rows against the threshold typed in row 1; other metals blank
     [
       "vs_threshold",
       (r) =>
         `IF(${dissolvedColumn}${r}="","",IF(${metal}${r}="Pb",IF(${dissolvedColumn}${r}>${thresholdLead},"above","below"),IF(${metal}${r}="Cu",IF(${dissolvedColumn}${r}>${thresholdCopper},"above","below"),"")))`,
     ],
-    ["what_if_1mg_PO4_ug_L", (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,${whatIfPhosphate},0,"ug/L")`],
+    [
+      "what_if_1mg_PO4_ug_L",
+      (r) => `REDOX.DISSOLVED(${metal}${r},${pH}${r},${E}${r},${temp}${r},${DIC}${r},0,0,${whatIfPhosphate},0,"ug/L")`,
+    ],
   ];
   if (results.length !== RESULT_COUNT) throw new Error("RESULT_COUNT is out of date");
 
@@ -103,7 +121,12 @@ async function main(): Promise<void> {
     "INVENTED DEMO DATA — the Brackenholm Water Cooperative and every value here are fictional (scripts/generate-demo-log.ts). Result columns hold REDOX formulas.";
   sheet.getCell("A1").font = { bold: true, color: { argb: "FF8A3B12" } };
   // the thresholds the user types (µg/L); examples: EU 2020/2184 lead 10 (5 from 2036), copper 2000; US action levels 15 and 1300
-  const typed: Array<[number, ExcelJS.CellValue]> = [[0, "lead threshold µg/L (type yours):"], [1, 10], [2, "copper threshold µg/L:"], [3, 2000]];
+  const typed: Array<[number, ExcelJS.CellValue]> = [
+    [0, "lead threshold µg/L (type yours):"],
+    [1, 10],
+    [2, "copper threshold µg/L:"],
+    [3, 2000],
+  ];
   for (const [offset, value] of typed) sheet.getCell(`${letter(first + RESULT_COUNT + offset)}1`).value = value;
   const headerRow = sheet.getRow(2);
   [...header, ...results.map(([h]) => h)].forEach((h, i) => {
@@ -193,7 +216,11 @@ function stored(value: Value | CellError): ExcelJS.CellValue {
  * The result of every formula cell, evaluated through the add-in's sources: add-in calls receive each argument as
  * the spreadsheet passes it (a single cell as a 1×1 range, an omitted one as null).
  */
-function cachedResults(sheet: ExcelJS.Worksheet, first: number, results: Array<[string, (r: number) => string]>): (address: string) => ExcelJS.CellValue {
+function cachedResults(
+  sheet: ExcelJS.Worksheet,
+  first: number,
+  results: Array<[string, (r: number) => string]>,
+): (address: string) => ExcelJS.CellValue {
   const functions = addin as unknown as Record<string, (...args: unknown[]) => unknown[][]>;
   const memo = new Map<string, Value>();
   const formulaAt = (column: string, row: number): string | null => {
@@ -206,7 +233,13 @@ function cachedResults(sheet: ExcelJS.Worksheet, first: number, results: Array<[
       if (memo.has(address)) return memo.get(address)!;
       const formula = formulaAt(column, row);
       const raw = sheet.getCell(address).value;
-      const value: Value = formula ? evaluate(parseFormula(formula), context) : raw === null || raw === undefined ? null : raw instanceof Date ? raw.getTime() : (raw as number | string);
+      const value: Value = formula
+        ? evaluate(parseFormula(formula), context)
+        : raw === null || raw === undefined
+          ? null
+          : raw instanceof Date
+            ? raw.getTime()
+            : (raw as number | string);
       memo.set(address, value);
       return value;
     },

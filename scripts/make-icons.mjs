@@ -23,7 +23,15 @@ function arrow(x0, y0, x1, y1, w, h, hw) {
   const bx = x1 - ux * h; // base of the head
   const by = y1 - uy * h;
   const p = (x, y, s) => [x + nx * s, y + ny * s];
-  return [p(x0, y0, w / 2), p(bx, by, w / 2), p(bx, by, hw / 2), [x1, y1], p(bx, by, -hw / 2), p(bx, by, -w / 2), p(x0, y0, -w / 2)];
+  return [
+    p(x0, y0, w / 2),
+    p(bx, by, w / 2),
+    p(bx, by, hw / 2),
+    [x1, y1],
+    p(bx, by, -hw / 2),
+    p(bx, by, -w / 2),
+    p(x0, y0, -w / 2),
+  ];
 }
 
 const cells = [];
@@ -67,7 +75,10 @@ function rasterise(size) {
   const scale = VIEW / size;
   for (let py = 0; py < size; py++) {
     for (let px = 0; px < size; px++) {
-      let r = 0, g = 0, b = 0, a = 0;
+      let r = 0,
+        g = 0,
+        b = 0,
+        a = 0;
       for (let sy = 0; sy < SAMPLES; sy++) {
         for (let sx = 0; sx < SAMPLES; sx++) {
           const x = (px + (sx + 0.5) / SAMPLES) * scale;
@@ -76,7 +87,10 @@ function rasterise(size) {
           for (const s of SHAPES) if (inside(s, x, y)) top = s;
           if (top) {
             const [cr, cg, cb] = rgb(top.fill);
-            r += cr; g += cg; b += cb; a += 1;
+            r += cr;
+            g += cg;
+            b += cb;
+            a += 1;
           }
         }
       }
@@ -98,7 +112,12 @@ function svg() {
       ? `  <rect x="${s.x}" y="${s.y}" width="${s.w}" height="${s.h}" rx="${s.r}" fill="${s.fill}"/>`
       : `  <polygon points="${s.points.map(([x, y]) => `${x.toFixed(2)},${y.toFixed(2)}`).join(" ")}" fill="${s.fill}"/>`,
   );
-  return [`<svg xmlns="http://www.w3.org/2000/svg" width="${VIEW}" height="${VIEW}" viewBox="0 0 ${VIEW} ${VIEW}">`, ...body, "</svg>", ""].join("\n");
+  return [
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${VIEW}" height="${VIEW}" viewBox="0 0 ${VIEW} ${VIEW}">`,
+    ...body,
+    "</svg>",
+    "",
+  ].join("\n");
 }
 
 mkdirSync(OUT, { recursive: true });

@@ -65,7 +65,8 @@ function certificateProblem() {
     const cert = new X509Certificate(readFileSync(localhostCertificatePath));
     const ca = new X509Certificate(readFileSync(caCertificatePath));
     if (Date.parse(cert.validTo) < Date.now() + DAY_MS) return `the localhost certificate expires ${cert.validTo}`;
-    if (!cert.checkPrivateKey(createPrivateKey(readFileSync(localhostKeyPath)))) return "the key does not match the certificate";
+    if (!cert.checkPrivateKey(createPrivateKey(readFileSync(localhostKeyPath))))
+      return "the key does not match the certificate";
     if (!cert.verify(ca.publicKey)) return "the localhost certificate was not issued by ca.crt";
     if (!cert.checkHost("localhost")) return "the certificate is not for localhost";
   } catch (e) {
@@ -77,7 +78,8 @@ function certificateProblem() {
 /** Why `sudo` cannot run here without asking for a password (null when it can). */
 function sudoProblem() {
   const r = spawnSync("sudo", ["-n", "true"], { stdio: "ignore", timeout: 10_000 });
-  if (r.error && r.error.code === "ENOENT") return "sudo is not installed, and the package's Linux installer calls sudo even as root";
+  if (r.error && r.error.code === "ENOENT")
+    return "sudo is not installed, and the package's Linux installer calls sudo even as root";
   return r.status === 0 ? null : "this Linux machine has no password-less sudo";
 }
 
@@ -122,7 +124,7 @@ function explainUntrusted(reason) {
   say("  - Work where Excel runs (Windows or macOS): run `npx office-addin-dev-certs install` there (asks for");
   say("    consent once), then `npm start`, and sideload manifest.xml as README.md explains.");
   say("  - On this Linux machine with admin rights: `sudo npx office-addin-dev-certs install`; Chromium and Firefox");
-  say("    keep their own store as well — import ca.crt there (e.g. certutil -d sql:$HOME/.pki/nssdb -A -t \"C,,\"");
+  say('    keep their own store as well — import ca.crt there (e.g. certutil -d sql:$HOME/.pki/nssdb -A -t "C,,"');
   say(`    -n "Redox Cells dev CA" -i ${caCertificatePath}).`);
   say("  - Headless machine (tests, CI): nothing to do. Browser tests launch Chromium with");
   say("    --ignore-certificate-errors or load the built dist/ files without the dev server.");

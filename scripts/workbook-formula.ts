@@ -195,8 +195,17 @@ export function evaluate(node: Node, ctx: EvaluationContext): Value {
       if (["=", "<>", "<", ">", "<=", ">="].includes(node.op)) {
         const a = l === null ? (typeof r === "number" ? 0 : "") : l;
         const b = r === null ? (typeof l === "number" ? 0 : "") : r;
-        const cmp = typeof a === "string" && typeof b === "string" ? a.toLowerCase().localeCompare(b.toLowerCase()) : a === b ? 0 : (a as number) < (b as number) ? -1 : 1;
-        return { "=": cmp === 0, "<>": cmp !== 0, "<": cmp < 0, ">": cmp > 0, "<=": cmp <= 0, ">=": cmp >= 0 }[node.op]!;
+        const cmp =
+          typeof a === "string" && typeof b === "string"
+            ? a.toLowerCase().localeCompare(b.toLowerCase())
+            : a === b
+              ? 0
+              : (a as number) < (b as number)
+                ? -1
+                : 1;
+        return { "=": cmp === 0, "<>": cmp !== 0, "<": cmp < 0, ">": cmp > 0, "<=": cmp <= 0, ">=": cmp >= 0 }[
+          node.op
+        ]!;
       }
       if (node.op === "&") return `${l ?? ""}${r ?? ""}`;
       const a = toNumber(l);
@@ -215,7 +224,10 @@ export function evaluate(node: Node, ctx: EvaluationContext): Value {
         return branch === undefined ? truth : evaluate(branch, ctx);
       }
       // with allowErrorForDataTypeAny the spreadsheet hands error cells to the function, which names them
-      return ctx.callAddin(node.name, node.args.map((a) => (a.kind === "omitted" ? undefined : evaluate(a, ctx))));
+      return ctx.callAddin(
+        node.name,
+        node.args.map((a) => (a.kind === "omitted" ? undefined : evaluate(a, ctx))),
+      );
     }
   }
 }

@@ -41,7 +41,9 @@ export function alkalinityEquivalents(mgPerLitreAsCaCO3: number): number {
 export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, _db?: Database): number {
   // _db kept for callers: Kw comes from IAPWS R11-07, not from the records
   if (pH < ALKALINITY_END_POINT_PH) {
-    throw new AlkalinityError(`pH ${pH} is below the alkalinity end point (${ALKALINITY_END_POINT_PH}): alkalinity does not determine DIC there`);
+    throw new AlkalinityError(
+      `pH ${pH} is below the alkalinity end point (${ALKALINITY_END_POINT_PH}): alkalinity does not determine DIC there`,
+    );
   }
   const h = 10 ** -pH;
   const k1 = 10 ** -carbonicPK1(celsius);
@@ -49,7 +51,9 @@ export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 2
   const oh = 10 ** -pKw(celsius) / h;
   const carbonateAlkalinity = alkalinityEquivalents(alkalinityMgL) - oh + h;
   if (!(carbonateAlkalinity > 0)) {
-    throw new AlkalinityError(`the carbonate alkalinity is not positive at pH ${pH} (hydroxide exceeds the total alkalinity)`);
+    throw new AlkalinityError(
+      `the carbonate alkalinity is not positive at pH ${pH} (hydroxide exceeds the total alkalinity)`,
+    );
   }
   const d = h * h + k1 * h + k1 * k2;
   const alpha1 = (k1 * h) / d;

@@ -64,8 +64,11 @@ export class Database {
         throw new DatabaseError(`${file.path}: ${formatIssues(parsed.error.issues, file.content)}`);
       }
       const data = parsed.data;
-      if (this.systems.has(data.system)) throw new DatabaseError(`${file.path}: system "${data.system}" is defined twice`);
-      const species = data.species.map((record, i) => this.toSpecies(record, data.system, data.references, `${file.path}: species[${i}] ${record.formula}`));
+      if (this.systems.has(data.system))
+        throw new DatabaseError(`${file.path}: system "${data.system}" is defined twice`);
+      const species = data.species.map((record, i) =>
+        this.toSpecies(record, data.system, data.references, `${file.path}: species[${i}] ${record.formula}`),
+      );
       this.systems.set(data.system, {
         system: data.system,
         kind: data.kind,
@@ -91,14 +94,16 @@ export class Database {
       throw new DatabaseError(`${where}: ${(error as Error).message}`);
     }
     for (const symbol of Object.keys(elements)) {
-      if (!this.elementRecords.has(symbol)) throw new DatabaseError(`${where}: element ${symbol} is not in data/elements.json`);
+      if (!this.elementRecords.has(symbol))
+        throw new DatabaseError(`${where}: element ${symbol} is not in data/elements.json`);
     }
     const source = ownEntry(references, record.source);
     if (!source) throw new DatabaseError(`${where}: source key "${record.source}" is not in the file's references`);
     if (record.cpSource && !ownEntry(references, record.cpSource)) {
       throw new DatabaseError(`${where}: cpSource key "${record.cpSource}" is not in the file's references`);
     }
-    if (this.byFormula.has(record.formula)) throw new DatabaseError(`${where}: formula ${record.formula} appears twice in the database`);
+    if (this.byFormula.has(record.formula))
+      throw new DatabaseError(`${where}: formula ${record.formula} appears twice in the database`);
     const species: Species = {
       formula: record.formula,
       charge: record.charge,
@@ -189,7 +194,8 @@ function formatIssues(issues: readonly { path: readonly PropertyKey[]; message: 
       if (path[0] === "species" && content && typeof content === "object") {
         const list = (content as { species?: { formula?: unknown }[] }).species;
         const formula = list?.[Number(path[1])]?.formula;
-        if (typeof formula === "string") label = `species[${path[1]}] ${formula}${path.length > 2 ? " ." + path.slice(2).join(".") : ""}`;
+        if (typeof formula === "string")
+          label = `species[${path[1]}] ${formula}${path.length > 2 ? " ." + path.slice(2).join(".") : ""}`;
       }
       return `${label || "(file)"}: ${issue.message}`;
     })

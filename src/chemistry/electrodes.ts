@@ -95,7 +95,9 @@ export class ElectrodeTable {
   constructor(content: unknown, path = "data/electrodes.json") {
     const parsed = electrodesFileSchema.safeParse(content);
     if (!parsed.success) {
-      const issues = parsed.error.issues.slice(0, 5).map((i) => `${i.path.map(String).join(".") || "(file)"}: ${i.message}`);
+      const issues = parsed.error.issues
+        .slice(0, 5)
+        .map((i) => `${i.path.map(String).join(".") || "(file)"}: ${i.message}`);
       throw new ElectrodeError(`${path}: ${issues.join("; ")}`);
     }
     const data = parsed.data;
@@ -116,22 +118,27 @@ export class ElectrodeTable {
       if (record.temperature.model === "silver-chloride") {
         const [low, high] = data.silverChlorideStandard.validCelsius;
         if (record.validCelsius[0] < low || record.validCelsius[1] > high) {
-          throw new ElectrodeError(`${path}: ${record.id}: validCelsius exceeds the range of the silver chloride standard potential`);
+          throw new ElectrodeError(
+            `${path}: ${record.id}: validCelsius exceeds the range of the silver chloride standard potential`,
+          );
         }
       }
       for (const name of [record.id, ...record.aliases]) {
         const key = normaliseElectrodeName(name);
         const other = this.byName.get(key);
-        if (other && other !== electrode) throw new ElectrodeError(`${path}: name "${name}" is used by both ${other.id} and ${record.id}`);
+        if (other && other !== electrode)
+          throw new ElectrodeError(`${path}: name "${name}" is used by both ${other.id} and ${record.id}`);
         this.byName.set(key, electrode);
       }
       this.list.push(electrode);
     }
     for (const entry of data.ambiguousNames) {
       const key = normaliseElectrodeName(entry.name);
-      if (this.byName.has(key)) throw new ElectrodeError(`${path}: ambiguous name "${entry.name}" is also an electrode name`);
+      if (this.byName.has(key))
+        throw new ElectrodeError(`${path}: ambiguous name "${entry.name}" is also an electrode name`);
       for (const id of entry.candidates) {
-        if (!this.list.some((e) => e.id === id)) throw new ElectrodeError(`${path}: ambiguous name "${entry.name}" lists unknown electrode ${id}`);
+        if (!this.list.some((e) => e.id === id))
+          throw new ElectrodeError(`${path}: ambiguous name "${entry.name}" lists unknown electrode ${id}`);
       }
       this.ambiguous.set(key, entry.candidates);
     }
@@ -149,7 +156,9 @@ export class ElectrodeTable {
     if (electrode) return { electrode };
     const candidates = this.ambiguous.get(key);
     if (candidates) return { error: `"${text}" could mean several electrodes; write one of ${candidates.join(", ")}` };
-    return { error: `"${text.length > 24 ? text.slice(0, 24) + "…" : text}" is not a known reference electrode (${this.list.map((e) => e.id).join(", ")})` };
+    return {
+      error: `"${text.length > 24 ? text.slice(0, 24) + "…" : text}" is not a known reference electrode (${this.list.map((e) => e.id).join(", ")})`,
+    };
   }
 
   /** E°(AgCl/Ag) at `celsius`, V vs SHE (Bates & Bower polynomial). */
@@ -206,11 +215,23 @@ function resolve(electrode: Electrode | string, table: ElectrodeTable): Electrod
 }
 
 /** Potential vs SHE from a reading (V) against `electrode` at `celsius` (pH only for RHE). */
-export function toSHE(reading: number, electrode: Electrode | string, celsius = 25, pH?: number, table: ElectrodeTable = getElectrodes()): number {
+export function toSHE(
+  reading: number,
+  electrode: Electrode | string,
+  celsius = 25,
+  pH?: number,
+  table: ElectrodeTable = getElectrodes(),
+): number {
   return reading + table.potential(resolve(electrode, table), celsius, pH);
 }
 
 /** Reading (V) against `electrode` of a potential given vs SHE. */
-export function fromSHE(potential: number, electrode: Electrode | string, celsius = 25, pH?: number, table: ElectrodeTable = getElectrodes()): number {
+export function fromSHE(
+  potential: number,
+  electrode: Electrode | string,
+  celsius = 25,
+  pH?: number,
+  table: ElectrodeTable = getElectrodes(),
+): number {
   return potential - table.potential(resolve(electrode, table), celsius, pH);
 }

@@ -42,7 +42,10 @@ export interface Formation {
  */
 const formations = new WeakMap<Database, Map<string, Map<Species, Formation | null>>>();
 
-export function formationTable(db: Database, basis: readonly (Species | typeof ELECTRON)[]): (s: Species) => Formation | null {
+export function formationTable(
+  db: Database,
+  basis: readonly (Species | typeof ELECTRON)[],
+): (s: Species) => Formation | null {
   let byBasis = formations.get(db);
   if (!byBasis) formations.set(db, (byBasis = new Map()));
   const key = basis.map((m) => (m === ELECTRON ? ELECTRON : m.formula)).join(",");
@@ -60,7 +63,11 @@ export function formationTable(db: Database, basis: readonly (Species | typeof E
 }
 
 /** The formation reaction of `s` from `basis`, or null when no balance exists (worked out afresh; see formationTable). */
-export function formationFromBasis(db: Database, s: Species, basis: readonly (Species | typeof ELECTRON)[]): Formation | null {
+export function formationFromBasis(
+  db: Database,
+  s: Species,
+  basis: readonly (Species | typeof ELECTRON)[],
+): Formation | null {
   let coefficients: number[];
   try {
     coefficients = balanceWith(new Map([[s, rational(1)]]), basis).map((c: Rational) => c.valueOf());

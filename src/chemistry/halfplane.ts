@@ -58,7 +58,12 @@ export function insideAll(halfPlanes: readonly HalfPlane[], pH: number, E: numbe
 }
 
 /** The interval of E on the vertical line at pH that satisfies every half-plane, or null when empty. */
-export function intervalOnVertical(halfPlanes: readonly HalfPlane[], pH: number, eLow: number, eHigh: number): [number, number] | null {
+export function intervalOnVertical(
+  halfPlanes: readonly HalfPlane[],
+  pH: number,
+  eLow: number,
+  eHigh: number,
+): [number, number] | null {
   let lo = eLow;
   let hi = eHigh;
   for (const h of halfPlanes) {

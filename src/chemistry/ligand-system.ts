@@ -11,11 +11,17 @@ import { buildSystem, MetalSystem, SystemError, SystemOptions } from "./system";
 /** Largest ligand total accepted, mol/kg (beyond it the ideal-solution treatment is meaningless). */
 export const MAX_LIGAND_TOTAL = 10;
 
-export function buildLigandSystem(db: Database, element: string, options: SystemOptions, totals: LigandTotals): MetalSystem {
+export function buildLigandSystem(
+  db: Database,
+  element: string,
+  options: SystemOptions,
+  totals: LigandTotals,
+): MetalSystem {
   if (!hasLigands(totals)) return buildSystem(db, element, options);
   for (const [name, value] of Object.entries(totals)) {
     if (value === undefined) continue;
-    if (!(value >= 0 && value <= MAX_LIGAND_TOTAL)) throw new SystemError(`${name}: total ${value} mol/kg is outside 0–${MAX_LIGAND_TOTAL}`);
+    if (!(value >= 0 && value <= MAX_LIGAND_TOTAL))
+      throw new SystemError(`${name}: total ${value} mol/kg is outside 0–${MAX_LIGAND_TOTAL}`);
   }
   if (!(options.celsius >= MIN_CELSIUS && options.celsius <= MAX_CELSIUS)) return buildSystem(db, element, options); // lets buildSystem report the range
   return { ...buildSystem(db, element, options, ligandCells(db, totals, options.celsius)), ligandTotals: totals };

@@ -20,7 +20,12 @@ export interface BoundaryCrossing {
 }
 
 /** Lower envelope of the lines g_i(E) = a_i + c_i·E on [lo, hi] for one cell at fixed pH. */
-function envelopeOnLine(cell: PlaneCell, pH: number, lo: number, hi: number): { from: number; to: number; species: number }[] {
+function envelopeOnLine(
+  cell: PlaneCell,
+  pH: number,
+  lo: number,
+  hi: number,
+): { from: number; to: number; species: number }[] {
   const n = cell.a.length;
   const offset = new Float64Array(n);
   for (let i = 0; i < n; i++) offset[i] = cell.a[i] + cell.b[i] * pH;
@@ -61,7 +66,12 @@ function envelopeOnLine(cell: PlaneCell, pH: number, lo: number, hi: number): { 
 }
 
 /** Every species change along the vertical line at pH between `lo` and `hi`, ascending in E. */
-export function boundariesAtPH(system: MetalSystem, pH: number, lo = BOUNDARY_SEARCH_LOW, hi = BOUNDARY_SEARCH_HIGH): BoundaryCrossing[] {
+export function boundariesAtPH(
+  system: MetalSystem,
+  pH: number,
+  lo = BOUNDARY_SEARCH_LOW,
+  hi = BOUNDARY_SEARCH_HIGH,
+): BoundaryCrossing[] {
   const segments: { from: number; to: number; species: number }[] = [];
   for (const cell of system.cells) {
     const interval = intervalOnVertical(cell.region, pH, lo, hi);
@@ -88,7 +98,12 @@ export function boundariesAtPH(system: MetalSystem, pH: number, lo = BOUNDARY_SE
  * The nearest boundary above (direction 1) or below (−1) the point at its pH, or null when none lies in
  * −3…+3 V. A point exactly on a boundary looks past it.
  */
-export function nearestBoundary(system: MetalSystem, pH: number, E: number, direction: 1 | -1): BoundaryCrossing | null {
+export function nearestBoundary(
+  system: MetalSystem,
+  pH: number,
+  E: number,
+  direction: 1 | -1,
+): BoundaryCrossing | null {
   const quick = nearestBoundaryInOneCell(system, pH, E, direction);
   if (quick !== undefined) return quick;
   const crossings = boundariesAtPH(system, pH);
@@ -107,8 +122,18 @@ export function nearestBoundary(system: MetalSystem, pH: number, E: number, dire
  * — for several cells, outside the pruning window, or when the point lies on a boundary or at a tie (there the
  * walk's tie rules decide).
  */
-function nearestBoundaryInOneCell(system: MetalSystem, pH: number, E: number, direction: 1 | -1): BoundaryCrossing | null | undefined {
-  if (system.cells.length !== 1 || !(pH >= PRUNE_PH_MIN && pH <= PRUNE_PH_MAX) || !(E >= BOUNDARY_SEARCH_LOW && E <= BOUNDARY_SEARCH_HIGH)) return undefined;
+function nearestBoundaryInOneCell(
+  system: MetalSystem,
+  pH: number,
+  E: number,
+  direction: 1 | -1,
+): BoundaryCrossing | null | undefined {
+  if (
+    system.cells.length !== 1 ||
+    !(pH >= PRUNE_PH_MIN && pH <= PRUNE_PH_MAX) ||
+    !(E >= BOUNDARY_SEARCH_LOW && E <= BOUNDARY_SEARCH_HIGH)
+  )
+    return undefined;
   const cell = system.cells[0];
   const { a, b, c } = cell;
   const active = cell.active ?? allSpecies(cell); // every species is a candidate until the cell has found its active ones
@@ -175,7 +200,11 @@ export function diagramRegions(system: MetalSystem, window: DiagramWindow): Regi
     for (const h of cell.region) cellPolygon = clipPolygon(cellPolygon, h);
     if (Math.abs(polygonArea(cellPolygon)) <= scale * 1e-15) continue;
     for (const piece of envelopeRegions(cell, cellPolygon, scale * 1e-15)) {
-      regions.push({ species: piece.species, formula: system.species[piece.species].formula, vertices: piece.vertices });
+      regions.push({
+        species: piece.species,
+        formula: system.species[piece.species].formula,
+        vertices: piece.vertices,
+      });
     }
   }
   return regions;
@@ -185,7 +214,12 @@ export function diagramRegions(system: MetalSystem, window: DiagramWindow): Regi
  * Total dissolved metal (mol/kg, ideal activities) in equilibrium with the solid `solid` at (pH, E):
  * for each dissolved species i,  ln a_i = x_i·F·(g_S − g_i°)/(RT), total Σ x_i·a_i (docs/method.md, Dissolved metal).
  */
-export function dissolvedTotal(system: MetalSystem, solid: number, pH: number, E: number): { total: number; parts: { species: number; molality: number }[] } {
+export function dissolvedTotal(
+  system: MetalSystem,
+  solid: number,
+  pH: number,
+  E: number,
+): { total: number; parts: { species: number; molality: number }[] } {
   const cell = cellAt(system, pH, E);
   const gSolid = cell.a[solid] + cell.b[solid] * pH + cell.c[solid] * E;
   const fOverRT = FARADAY / (GAS_CONSTANT * system.kelvin);

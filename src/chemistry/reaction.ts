@@ -37,7 +37,9 @@ export function balanceWith(given: ReadonlyMap<Member, Rational>, basis: readonl
   const x = solveExact(a, rhs);
   if (!x) {
     const names = [...given.keys()].map((m) => (m === ELECTRON ? "e-" : m.formula)).join(", ");
-    throw new ReactionError(`cannot balance ${names} with ${basis.map((b) => (b === ELECTRON ? "e-" : b.formula)).join(", ")}`);
+    throw new ReactionError(
+      `cannot balance ${names} with ${basis.map((b) => (b === ELECTRON ? "e-" : b.formula)).join(", ")}`,
+    );
   }
   return x;
 }
@@ -60,7 +62,8 @@ export interface HalfReaction {
 /** The element both species share other than H and O: the one that is reduced. */
 function sharedElement(a: Species, b: Species): string {
   const candidates = Object.keys(a.elements).filter((e) => e !== "H" && e !== "O" && b.elements[e] !== undefined);
-  if (candidates.length === 0) throw new ReactionError(`${a.formula} and ${b.formula} share no element besides H and O`);
+  if (candidates.length === 0)
+    throw new ReactionError(`${a.formula} and ${b.formula} share no element besides H and O`);
   return candidates[0];
 }
 
@@ -95,11 +98,17 @@ export function halfReaction(db: Database, oxidized: Species, reduced: Species):
 }
 
 /** Standard potential (V vs SHE) of the half-reaction between two species at `celsius`. */
-export function standardPotential(db: Database, oxidized: string | Species, reduced: string | Species, celsius = 25): number {
+export function standardPotential(
+  db: Database,
+  oxidized: string | Species,
+  reduced: string | Species,
+  celsius = 25,
+): number {
   const ox = typeof oxidized === "string" ? db.require(oxidized) : oxidized;
   const red = typeof reduced === "string" ? db.require(reduced) : reduced;
   const reaction = halfReaction(db, ox, red);
-  if (reaction.electrons === 0) throw new ReactionError(`${ox.formula} and ${red.formula} have the same oxidation state`);
+  if (reaction.electrons === 0)
+    throw new ReactionError(`${ox.formula} and ${red.formula} have the same oxidation state`);
   const dG = gibbsAt(reactionProperties(db, reaction.stoichiometry), kelvin(celsius));
   return -dG / (reaction.electrons * FARADAY);
 }
@@ -115,7 +124,8 @@ export function couplePotential(
   options: { pH: number; celsius: number; activity: number },
 ): number {
   const reaction = halfReaction(db, oxidized, reduced);
-  if (reaction.electrons === 0) throw new ReactionError(`${oxidized.formula} and ${reduced.formula} have the same oxidation state`);
+  if (reaction.electrons === 0)
+    throw new ReactionError(`${oxidized.formula} and ${reduced.formula} have the same oxidation state`);
   const T = kelvin(options.celsius);
   const k = nernstFactor(T);
   const dG = gibbsAt(reactionProperties(db, reaction.stoichiometry), T);
@@ -123,7 +133,8 @@ export function couplePotential(
   const logA = Math.log10(options.activity);
   const logActivity = (s: Species) => (s.state === "aq" && s.formula !== "H2O(l)" ? logA : 0);
   // log Q = ν_red·log a_red − log a_ox + h·pH   (a_H+ = 10^−pH is a reactant with coefficient h)
-  const logQ = reaction.reducedPerOxidized * logActivity(reduced) - logActivity(oxidized) + reaction.protons * options.pH;
+  const logQ =
+    reaction.reducedPerOxidized * logActivity(reduced) - logActivity(oxidized) + reaction.protons * options.pH;
   return eStandard - (k / reaction.electrons) * logQ;
 }
 

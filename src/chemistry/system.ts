@@ -108,9 +108,16 @@ function checkConditions(options: SystemOptions): void {
 }
 
 /** The ligand elements of the cells, after checking the data's temperature range covers each (temperature-range.ts). */
-function ligandElementsChecked(db: Database, element: string, celsius: number, ligandCells: readonly LigandCellSpec[]): Set<string> {
+function ligandElementsChecked(
+  db: Database,
+  element: string,
+  celsius: number,
+  ligandCells: readonly LigandCellSpec[],
+): Set<string> {
   const ligandElements = new Set<string>();
-  for (const cell of ligandCells) for (const l of cell.ligands) for (const e of Object.keys(l.species.elements)) if (e !== "H" && e !== "O") ligandElements.add(e);
+  for (const cell of ligandCells)
+    for (const l of cell.ligands)
+      for (const e of Object.keys(l.species.elements)) if (e !== "H" && e !== "O") ligandElements.add(e);
   const has = (e: string) => (ligandElements.has(e) ? 1 : 0);
   const problem = temperatureProblem(db, element, celsius, presentLigands(has("C"), has("Cl"), has("S"), has("P")));
   if (problem) throw new SystemError(problem);
@@ -118,7 +125,12 @@ function ligandElementsChecked(db: Database, element: string, celsius: number, l
 }
 
 /** Species of the metal: those in its own file, plus ligand-bearing species of it whose ligands are present. */
-function systemSpecies(db: Database, element: string, metal: Species, ligandElements: ReadonlySet<string>): SystemSpecies[] {
+function systemSpecies(
+  db: Database,
+  element: string,
+  metal: Species,
+  ligandElements: ReadonlySet<string>,
+): SystemSpecies[] {
   const species: SystemSpecies[] = [];
   for (const s of db.allSpecies().filter((x) => x.elements[element] !== undefined)) {
     if (ligandElementsIn(s, element).some((e) => !ligandElements.has(e))) continue; // ligand not present in this water
@@ -158,7 +170,13 @@ function planeCell(ctx: PlaneContext, cell: LigandCellSpec): PlaneCell {
   const b = new Float64Array(n);
   const c = new Float64Array(n);
   const aUnit = new Float64Array(n);
-  const basis = [ctx.metal, db.require("H2O(l)"), db.require("H+"), ELECTRON, ...cell.ligands.map((l) => l.species)] as const;
+  const basis = [
+    ctx.metal,
+    db.require("H2O(l)"),
+    db.require("H+"),
+    ELECTRON,
+    ...cell.ligands.map((l) => l.species),
+  ] as const;
   const available = new Set(cell.ligands.flatMap((l) => Object.keys(l.species.elements)));
   const formationOf = formationTable(db, basis);
   species.forEach((entrySpecies, i) => {
@@ -182,18 +200,33 @@ function planeCell(ctx: PlaneContext, cell: LigandCellSpec): PlaneCell {
 }
 
 /** Builds the planes of a metal's system at (T, activity), with optional ligand cells from `ligandCells`. */
-export function buildSystem(db: Database, element: string, options: SystemOptions, ligandCells: readonly LigandCellSpec[] = [{ region: [], ligands: [] }]): MetalSystem {
+export function buildSystem(
+  db: Database,
+  element: string,
+  options: SystemOptions,
+  ligandCells: readonly LigandCellSpec[] = [{ region: [], ligands: [] }],
+): MetalSystem {
   const entry = db.system(element);
   if (!entry || entry.kind !== "metal") throw new SystemError(`no data for the metal ${element}`);
   checkConditions(options);
   // the element in its reference state: a solid, or the liquid for mercury
-  const metal = entry.species.find((s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1);
+  const metal = entry.species.find(
+    (s) => (s.state === "s" || s.state === "l") && Object.keys(s.elements).length === 1 && s.elements[element] === 1,
+  );
   if (!metal) throw new SystemError(`the ${element} file lacks the metal ${element}(s)`);
   const ligandElements = ligandElementsChecked(db, element, options.celsius, ligandCells);
   const species = systemSpecies(db, element, metal, ligandElements);
   const metalIndex = species.findIndex((s) => s.species === metal);
   const T = kelvin(options.celsius);
-  const ctx: PlaneContext = { db, species, metal, metalIndex, needs: species.map((s) => ligandElementsIn(s.species, element)), T, lnActivity: Math.log(options.activity) };
+  const ctx: PlaneContext = {
+    db,
+    species,
+    metal,
+    metalIndex,
+    needs: species.map((s) => ligandElementsIn(s.species, element)),
+    T,
+    lnActivity: Math.log(options.activity),
+  };
   const cells = ligandCells.map((cell) => planeCell(ctx, cell));
   return { element, celsius: options.celsius, kelvin: T, activity: options.activity, species, cells, metalIndex };
 }
@@ -230,7 +263,14 @@ export function dominantSpecies(system: MetalSystem, pH: number, E: number): num
   const cell = cellAt(system, pH, E);
   const { a, b, c } = cell;
   const active = cell.active ?? (++cell.queries > PRUNE_AFTER_QUERIES ? activeSpecies(cell) : null);
-  if (active && active.length > 0 && pH >= PRUNE_PH_MIN && pH <= PRUNE_PH_MAX && E >= -PRUNE_E_LIMIT && E <= PRUNE_E_LIMIT) {
+  if (
+    active &&
+    active.length > 0 &&
+    pH >= PRUNE_PH_MIN &&
+    pH <= PRUNE_PH_MAX &&
+    E >= -PRUNE_E_LIMIT &&
+    E <= PRUNE_E_LIMIT
+  ) {
     let best = active[0];
     let bestG = a[best] + b[best] * pH + c[best] * E;
     for (let k = 1, n = active.length; k < n; k++) {
@@ -260,10 +300,7 @@ export function speciesIndex(system: MetalSystem, formula: string): number {
   return system.species.findIndex((s) => s.formula === formula);
 }
 
-export type PairBoundary =
-  | { kind: "line"; intercept: number; slope: number }
-  | { kind: "vertical"; pH: number }
-  | null;
+export type PairBoundary = { kind: "line"; intercept: number; slope: number } | { kind: "vertical"; pH: number } | null;
 
 /**
  * The line where two species have equal g (in the first cell containing both), written E = intercept + slope·pH,
@@ -272,7 +309,8 @@ export type PairBoundary =
 export function pairBoundary(system: MetalSystem, first: string, second: string): PairBoundary {
   const i = speciesIndex(system, first);
   const j = speciesIndex(system, second);
-  if (i < 0 || j < 0) throw new SystemError(`${i < 0 ? first : second} is not a species of the ${system.element} system`);
+  if (i < 0 || j < 0)
+    throw new SystemError(`${i < 0 ? first : second} is not a species of the ${system.element} system`);
   const cell = system.cells.find((c) => Number.isFinite(c.a[i]) && Number.isFinite(c.a[j]));
   if (!cell) return null;
   const da = cell.a[i] - cell.a[j];

@@ -40,6 +40,7 @@ export function temperatureProblem(db: Database, element: string, celsius: numbe
 
 /** Ligand bits of a water from its totals. */
 export function presentLigands(carbonate = 0, chloride = 0, sulfur = 0, phosphate = 0): number {
-  const bits = (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0);
+  const bits =
+    (carbonate > 0 ? NEEDS_CARBONATE : 0) | (sulfur > 0 ? NEEDS_SULFUR : 0) | (chloride > 0 ? NEEDS_CHLORIDE : 0);
   return bits | (phosphate > 0 ? NEEDS_PHOSPHATE : 0);
 }

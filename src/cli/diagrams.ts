@@ -22,7 +22,8 @@ export class DiagramSamples {
     const symbol = getDatabase().resolveMetal(point.symbol);
     if (!symbol) return;
     let reservoir = this.bySymbol.get(symbol);
-    if (!reservoir) this.bySymbol.set(symbol, (reservoir = new Reservoir<SamplePoint>(POINTS_PER_DIAGRAM, hashSeed(symbol))));
+    if (!reservoir)
+      this.bySymbol.set(symbol, (reservoir = new Reservoir<SamplePoint>(POINTS_PER_DIAGRAM, hashSeed(symbol))));
     reservoir.add(symbol === point.symbol ? point : { ...point, symbol });
   }
 
@@ -48,7 +49,10 @@ function hashSeed(text: string): number {
 
 /** The temperature a diagram is drawn at: the median of its samples' temperatures, to 1 °C. */
 export function diagramCelsius(points: readonly SamplePoint[], fallback = DEFAULT_CELSIUS): number {
-  const ts = points.map((p) => p.celsius).filter((t) => Number.isFinite(t)).sort((a, b) => a - b);
+  const ts = points
+    .map((p) => p.celsius)
+    .filter((t) => Number.isFinite(t))
+    .sort((a, b) => a - b);
   if (ts.length === 0) return fallback;
   const mid = ts.length >> 1;
   const median = ts.length % 2 ? ts[mid] : (ts[mid - 1] + ts[mid]) / 2;
@@ -77,8 +81,15 @@ export function diagramTotals(points: readonly SamplePoint[]): LigandTotals {
 
 /** "DIC 1.73, chloride 0.56 mmol/kg" (three significant figures); "" for pure water. */
 export function totalsText(totals: LigandTotals): string {
-  const words = { carbonate: "DIC", chloride: "chloride", sulfur: "sulfur", phosphate: "orthophosphate (as P)" } as const;
-  const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map((l) => `${words[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`);
+  const words = {
+    carbonate: "DIC",
+    chloride: "chloride",
+    sulfur: "sulfur",
+    phosphate: "orthophosphate (as P)",
+  } as const;
+  const parts = LIGAND_ORDER.filter((l) => (totals[l] ?? 0) > 0).map(
+    (l) => `${words[l]} ${Number(((totals[l] ?? 0) * 1000).toPrecision(3))}`,
+  );
   return parts.length === 0 ? "" : `${parts.join(", ")} mmol/kg`;
 }
 

@@ -125,7 +125,9 @@ export const ECHO_LIMIT = 200;
 
 /** Text cut to `limit` characters, with an ellipsis and the length left out. */
 export function clip(text: string, limit = ECHO_LIMIT): string {
-  return text.length <= limit ? text : `${text.slice(0, limit)}… (${(text.length - limit).toLocaleString("en-US")} more characters)`;
+  return text.length <= limit
+    ? text
+    : `${text.slice(0, limit)}… (${(text.length - limit).toLocaleString("en-US")} more characters)`;
 }
 
 /**
@@ -160,7 +162,12 @@ function textColumn(rows: readonly InputRow[], index: number): CellScalar[][] {
 
 /** #VALUE! is always the input's fault; #N/A only when its message names an input (no DIC for that alkalinity). */
 const SERIOUS = new Set(["#VALUE!"]);
-const LIGAND_ARG = { carbonate: carbonateArg, chloride: chlorideArg, sulfur: sulfurArg, phosphate: phosphateArg } as const;
+const LIGAND_ARG = {
+  carbonate: carbonateArg,
+  chloride: chlorideArg,
+  sulfur: sulfurArg,
+  phosphate: phosphateArg,
+} as const;
 
 /**
  * Argument names of the worksheet functions → the input column that fed them. The functions name the argument
@@ -195,7 +202,8 @@ function argumentColumns(plan: EvaluationPlan): Record<string, string | null> {
  */
 function splitMessage(error: CellError): [string | null, string] {
   const lead = error.argument !== undefined ? `${error.argument}: ` : null;
-  if (lead !== null) return [error.argument!, error.message.startsWith(lead) ? error.message.slice(lead.length) : error.message];
+  if (lead !== null)
+    return [error.argument!, error.message.startsWith(lead) ? error.message.slice(lead.length) : error.message];
   const m = /^([A-Za-z][\w ,]*?):\s(.*)$/s.exec(error.message);
   return m ? [m[1], m[2]] : [null, error.message];
 }
@@ -233,11 +241,27 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   const f = plan.format;
   const pH = numericColumn(rows, plan.phColumn, f);
   // Readings in mV are divided by 1000 when they are numbers; anything else goes to the function as written.
-  const reading: CellInput = numericColumn(rows, plan.potentialColumn, f, 1, "", plan.unit === "mV" ? (x) => x / 1000 : undefined);
+  const reading: CellInput = numericColumn(
+    rows,
+    plan.potentialColumn,
+    f,
+    1,
+    "",
+    plan.unit === "mV" ? (x) => x / 1000 : undefined,
+  );
   const fixedT = plan.fixedTemperature ?? "";
   const scale = plan.temperatureScale;
   const temperature: CellInput =
-    plan.temperatureColumn === null ? fixedT : numericColumn(rows, plan.temperatureColumn, f, 1, fixedT, scale === "C" ? undefined : (x) => toCelsius(x, scale));
+    plan.temperatureColumn === null
+      ? fixedT
+      : numericColumn(
+          rows,
+          plan.temperatureColumn,
+          f,
+          1,
+          fixedT,
+          scale === "C" ? undefined : (x) => toCelsius(x, scale),
+        );
   const isRhe = plan.electrode.trim().toUpperCase() === "RHE";
   const eShe = fns.toShe(reading, plan.electrode, temperature, isRhe ? pH : undefined);
   // A reading that failed to convert is an error cell the spreadsheet would pass on as it is.
@@ -263,7 +287,9 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       const column = numericColumn(rows, l.column, f, l.factor);
       ligandArgs[l.ligand] = column;
       // the output cell: the total as the functions read it ("" where blank)
-      ligandCells.push(mapCells([LIGAND_ARG[l.ligand]], [column], (x) => x).map((cell, r) => (isBlank(column[r][0]) ? [""] : cell)));
+      ligandCells.push(
+        mapCells([LIGAND_ARG[l.ligand]], [column], (x) => x).map((cell, r) => (isBlank(column[r][0]) ? [""] : cell)),
+      );
     }
   }
   const { carbonate, chloride, sulfur, phosphate } = ligandArgs;
@@ -276,22 +302,81 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     return {
       target: t,
       element,
-      species: fns.species(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength),
-      regime: fns.regime(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength),
-      above: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength, 1),
-      below: fns.boundary(element, pH, potential, temperature, plan.activity, carbonate, chloride, sulfur, phosphate, ionicStrength, -1),
-      dissolved: fns.dissolved(element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, plan.dissolvedUnit),
+      species: fns.species(
+        element,
+        pH,
+        potential,
+        temperature,
+        plan.activity,
+        carbonate,
+        chloride,
+        sulfur,
+        phosphate,
+        ionicStrength,
+      ),
+      regime: fns.regime(
+        element,
+        pH,
+        potential,
+        temperature,
+        plan.activity,
+        carbonate,
+        chloride,
+        sulfur,
+        phosphate,
+        ionicStrength,
+      ),
+      above: fns.boundary(
+        element,
+        pH,
+        potential,
+        temperature,
+        plan.activity,
+        carbonate,
+        chloride,
+        sulfur,
+        phosphate,
+        ionicStrength,
+        1,
+      ),
+      below: fns.boundary(
+        element,
+        pH,
+        potential,
+        temperature,
+        plan.activity,
+        carbonate,
+        chloride,
+        sulfur,
+        phosphate,
+        ionicStrength,
+        -1,
+      ),
+      dissolved: fns.dissolved(
+        element,
+        pH,
+        potential,
+        temperature,
+        carbonate,
+        chloride,
+        sulfur,
+        phosphate,
+        ionicStrength,
+        plan.dissolvedUnit,
+      ),
     };
   });
 
   const argColumns = argumentColumns(plan);
   // a total converted from the column's unit is named in mol/kg by the functions: say where it came from
   const argNotes: Record<string, string> = {};
-  for (const l of plan.ligands) if (l.kind === "total" && l.factor !== 1) argNotes[l.ligand] = ` (converted from ${l.unit})`;
+  for (const l of plan.ligands)
+    if (l.kind === "total" && l.factor !== 1) argNotes[l.ligand] = ` (converted from ${l.unit})`;
   if (ionic?.note) argNotes[ionic.note.arg] = ionic.note.text;
   if (scale !== "C") argNotes.temperature = ` (°C, converted from the column's ${scale === "F" ? "°F" : "K"})`;
   const kinds = cellKinds(ligandCells.length, perTarget.length);
-  const missingTemperature = plan.temperatureColumn !== null && plan.fixedTemperature === undefined ? plan.temperatureColumn : null;
+  const missingTemperature =
+    plan.temperatureColumn !== null && plan.fixedTemperature === undefined ? plan.temperatureColumn : null;
   const out: string[] = new Array(n);
   const messages: RowMessage[] = [];
   const regimes = new Map<string, Map<string, number>>();
@@ -305,7 +390,12 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
   for (let r = 0; r < n; r++) {
     const row = rows[r];
     if (isBlank(row.fields[plan.phColumn]) && row.fields.every(isBlank)) {
-      messages.push({ line: row.line, column: null, text: "a record of blank cells; its results are left blank", kind: "blank" });
+      messages.push({
+        line: row.line,
+        column: null,
+        text: "a record of blank cells; its results are left blank",
+        kind: "blank",
+      });
       out[r] = blankLine(plan, row, cellCount);
       blankRows++;
       continue;
@@ -320,7 +410,7 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     const e = eShe[r][0];
     const eError = e instanceof CellError ? e : null;
     // the spreadsheet passes an error in an argument cell straight through: the potential first, then the carbonate
-    const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]) ?? (ionic?.errors[r] ?? null);
+    const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]) ?? ionic?.errors[r] ?? null;
     const cells = rowCells; // reused: each row's line is written before the next row
     let k = 0;
     cells[k++] = e;
@@ -342,11 +432,18 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     for (const c of cells) {
       if (!(c instanceof CellError)) continue;
       const [arg, rest] = splitMessage(c);
-      if (!SERIOUS.has(c.code) && !(c.code === "#N/A" && arg !== null && Object.prototype.hasOwnProperty.call(argColumns, arg))) continue;
+      if (
+        !SERIOUS.has(c.code) &&
+        !(c.code === "#N/A" && arg !== null && Object.prototype.hasOwnProperty.call(argColumns, arg))
+      )
+        continue;
       const col = arg !== null && arg in argColumns ? argColumns[arg] : null;
-      const text = clip(col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`);
+      const text = clip(
+        col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`,
+      );
       problems ??= [];
-      if (!problems.some((m) => m.column === col && m.text === text)) problems.push({ line: row.line, column: col, text, kind: "error" });
+      if (!problems.some((m) => m.column === col && m.text === text))
+        problems.push({ line: row.line, column: col, text, kind: "error" });
     }
     if (problems !== null) {
       errorRows++;
@@ -355,13 +452,21 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       const blanks: string[] = [];
       if (isBlank(row.fields[plan.phColumn])) blanks.push(plan.headers[plan.phColumn]);
       if (isBlank(row.fields[plan.potentialColumn])) blanks.push(plan.headers[plan.potentialColumn]);
-      if (plan.metalColumn !== null && isBlank(row.fields[plan.metalColumn])) blanks.push(plan.headers[plan.metalColumn]);
+      if (plan.metalColumn !== null && isBlank(row.fields[plan.metalColumn]))
+        blanks.push(plan.headers[plan.metalColumn]);
       if (blanks.length > 0) {
         blankRows++;
-        for (const b of blanks) messages.push({ line: row.line, column: b, text: "blank; this row's results are left blank", kind: "blank" });
+        for (const b of blanks)
+          messages.push({ line: row.line, column: b, text: "blank; this row's results are left blank", kind: "blank" });
       } else {
         for (const l of plan.ligands) {
-          if (isBlank(row.fields[l.column])) messages.push({ line: row.line, column: plan.headers[l.column], text: `blank; this row is evaluated without ${l.ligand}`, kind: "blank" });
+          if (isBlank(row.fields[l.column]))
+            messages.push({
+              line: row.line,
+              column: plan.headers[l.column],
+              text: `blank; this row is evaluated without ${l.ligand}`,
+              kind: "blank",
+            });
         }
         if (plan.ionic?.kind === "column" && isBlank(row.fields[plan.ionic.column.index])) {
           const text = "blank; this row is evaluated without the ionic-strength correction (ideal solution)";
@@ -393,7 +498,13 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       }
     }
 
-    out[r] = outputLine(plan, row, cells, kinds, problems === null ? "" : problems.map((m) => (m.column ? `${clip(m.column)}: ${m.text}` : m.text)).join("; "));
+    out[r] = outputLine(
+      plan,
+      row,
+      cells,
+      kinds,
+      problems === null ? "" : problems.map((m) => (m.column ? `${clip(m.column)}: ${m.text}` : m.text)).join("; "),
+    );
   }
   for (const [prefix, counts] of regimes) if (counts.size === 0) regimes.delete(prefix);
   return { lines: out, messages, errorRows, blankRows, regimes, points };
@@ -413,13 +524,21 @@ function ionicColumn(plan: EvaluationPlan, rows: readonly InputRow[], fns: Works
   if (ionic === undefined || ionic.kind === "ideal") return null;
   if (ionic.kind === "fixed") {
     const none = new Array<CellError | null>(rows.length).fill(null);
-    return { argument: ionic.value as CellInput, cells: rows.map((): CellOutput[] => [ionic.value]), errors: none, note: null };
+    return {
+      argument: ionic.value as CellInput,
+      cells: rows.map((): CellOutput[] => [ionic.value]),
+      errors: none,
+      note: null,
+    };
   }
   const { index, unit } = ionic.column;
   const { factor } = IONIC_UNITS[unit];
   const basis = ionicBasis(unit);
   const column = ionicStrengthArgument(numericColumn(rows, index, plan.format, factor), basis, fns.ionicStrength);
-  const note = factor === 1 ? null : { arg: basis === null ? "ionicStrength" : "value", text: ` (converted from ${ionicWords(ionic.column)})` };
+  const note =
+    factor === 1
+      ? null
+      : { arg: basis === null ? "ionicStrength" : "value", text: ` (converted from ${ionicWords(ionic.column)})` };
   return { ...column, note };
 }
 
@@ -432,7 +551,13 @@ function cellKinds(ligandColumns: number, targets: number): NumberKind[] {
 }
 
 /** One output line: the input fields (unless dropped), the result cells and the errors cell. */
-function outputLine(plan: EvaluationPlan, row: InputRow, cells: readonly CellOutput[], kinds: readonly NumberKind[], errors: string): string {
+function outputLine(
+  plan: EvaluationPlan,
+  row: InputRow,
+  cells: readonly CellOutput[],
+  kinds: readonly NumberKind[],
+  errors: string,
+): string {
   const f = plan.format;
   const d = f.delimiter;
   let line = "";

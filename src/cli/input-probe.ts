@@ -15,7 +15,10 @@ function headOf(path: string): string {
   try {
     const buffer = Buffer.alloc(65536);
     const n = readSync(fd, buffer, 0, buffer.length, 0);
-    return buffer.subarray(0, n).toString("utf8").replace(/^\uFEFF/, "");
+    return buffer
+      .subarray(0, n)
+      .toString("utf8")
+      .replace(/^\uFEFF/, "");
   } finally {
     closeSync(fd);
   }

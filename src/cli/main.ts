@@ -38,7 +38,9 @@ main(process.argv.slice(2)).then(
   },
   (error: unknown) => {
     abortAllOutputs();
-    process.stderr.write(`redox-cells: unexpected failure: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
+    process.stderr.write(
+      `redox-cells: unexpected failure: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`,
+    );
     process.exitCode = 3;
   },
 );

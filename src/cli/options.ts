@@ -231,10 +231,16 @@ const DEFAULT_MAX_MESSAGES = 50;
  */
 export const DEFAULT_BATCH_SIZE = 256;
 
-function numberOption(name: string, text: string | undefined, check: (x: number) => boolean, expected: string): number | undefined {
+function numberOption(
+  name: string,
+  text: string | undefined,
+  check: (x: number) => boolean,
+  expected: string,
+): number | undefined {
   if (text === undefined) return undefined;
   const x = Number(text);
-  if (text.trim() === "" || !Number.isFinite(x) || !check(x)) throw new UsageError(`--${name}: expected ${expected}, got "${text}"`);
+  if (text.trim() === "" || !Number.isFinite(x) || !check(x))
+    throw new UsageError(`--${name}: expected ${expected}, got "${text}"`);
   return x;
 }
 
@@ -297,7 +303,10 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
   if (v.help) return { kind: "help" };
   if (v.version) return { kind: "version" };
   if (parsed.positionals.length === 0) throw new UsageError("no input file given");
-  if (parsed.positionals.length > 1) throw new UsageError(`one input file at a time (got ${parsed.positionals.length}: ${parsed.positionals.join(", ")})`);
+  if (parsed.positionals.length > 1)
+    throw new UsageError(
+      `one input file at a time (got ${parsed.positionals.length}: ${parsed.positionals.join(", ")})`,
+    );
   const input = parsed.positionals[0];
 
   let unit: PotentialUnitOption | undefined;
@@ -311,8 +320,15 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
   let dissolvedUnit: DissolvedUnit = "ug/L";
   if (v["dissolved-unit"] !== undefined) {
     const key = v["dissolved-unit"].trim().toLowerCase().replace(/[µμ]/g, "u");
-    const known: Record<string, DissolvedUnit> = { "ug/l": "ug/L", ppb: "ug/L", "mg/l": "mg/L", ppm: "mg/L", "mol/kg": "mol/kg" };
-    if (!Object.prototype.hasOwnProperty.call(known, key)) throw new UsageError(`--dissolved-unit: expected ug/L, mg/L or mol/kg, got "${v["dissolved-unit"]}"`);
+    const known: Record<string, DissolvedUnit> = {
+      "ug/l": "ug/L",
+      ppb: "ug/L",
+      "mg/l": "mg/L",
+      ppm: "mg/L",
+      "mol/kg": "mol/kg",
+    };
+    if (!Object.prototype.hasOwnProperty.call(known, key))
+      throw new UsageError(`--dissolved-unit: expected ug/L, mg/L or mol/kg, got "${v["dissolved-unit"]}"`);
     dissolvedUnit = known[key];
   }
 
@@ -329,17 +345,22 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     if (key === "comma" || key === ",") decimalMark = ",";
     else if (key === "point" || key === "." || key === "dot") decimalMark = ".";
     else throw new UsageError(`--decimal: expected comma or point, got "${v.decimal.slice(0, 40)}"`);
-    if (decimalMark === "," && delimiter === ",") throw new UsageError("--decimal comma needs a delimiter other than the comma (--delimiter ';' or tab)");
+    if (decimalMark === "," && delimiter === ",")
+      throw new UsageError("--decimal comma needs a delimiter other than the comma (--delimiter ';' or tab)");
   }
 
   let temperatureUnit: TemperatureScale | undefined;
   if (v["temperature-unit"] !== undefined) {
     const key = v["temperature-unit"].trim().toUpperCase().replace(/^°/, "");
-    if (key !== "C" && key !== "F" && key !== "K") throw new UsageError(`--temperature-unit: expected C, F or K, got "${v["temperature-unit"].slice(0, 40)}"`);
+    if (key !== "C" && key !== "F" && key !== "K")
+      throw new UsageError(`--temperature-unit: expected C, F or K, got "${v["temperature-unit"].slice(0, 40)}"`);
     temperatureUnit = key;
   }
 
-  const metals = (v.metal ?? []).flatMap((m) => m.split(",")).map((m) => m.trim()).filter((m) => m !== "");
+  const metals = (v.metal ?? [])
+    .flatMap((m) => m.split(","))
+    .map((m) => m.trim())
+    .filter((m) => m !== "");
   const columnOption = (text: string | undefined): string | null | undefined =>
     text === undefined ? undefined : text.trim().toLowerCase() === "none" ? null : text;
   const metalColumnOption = columnOption(v["metal-column"]);
@@ -361,14 +382,25 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     phosphateColumn: columnOption(v["phosphate-column"]),
     pureWater: v["pure-water"] ?? false,
     ionicStrengthColumn: columnOption(v["ionic-strength-column"]),
-    ionicStrength: numberOption("ionic-strength", v["ionic-strength"], (x) => x >= 0 && x <= 0.5, "an ionic strength from 0 to 0.5 mol/kg (the Davies equation's range)"),
+    ionicStrength: numberOption(
+      "ionic-strength",
+      v["ionic-strength"],
+      (x) => x >= 0 && x <= 0.5,
+      "an ionic strength from 0 to 0.5 mol/kg (the Davies equation's range)",
+    ),
     ideal: v.ideal ?? false,
-    temperature: numberOption("temperature", v.temperature, (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS, `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`),
+    temperature: numberOption(
+      "temperature",
+      v.temperature,
+      (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS,
+      `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`,
+    ),
     electrode: v.electrode,
     unit,
     activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,
     dissolvedUnit,
-    overpotential: numberOption("overpotential", v.overpotential, (x) => x >= 0 && x <= 3, "a number of volts from 0 to 3") ?? 0,
+    overpotential:
+      numberOption("overpotential", v.overpotential, (x) => x >= 0 && x <= 3, "a number of volts from 0 to 3") ?? 0,
     temperatureUnit,
     delimiter,
     decimalMark,
@@ -376,9 +408,17 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     fullPrecision: v["full-precision"] ?? false,
     keepInput: !v["no-keep-input"],
     progress: v["no-progress"] ? false : v.progress ? true : "auto",
-    maxMessages: numberOption("max-messages", v["max-messages"], (x) => Number.isInteger(x) && x >= 0, "a whole number ≥ 0") ?? DEFAULT_MAX_MESSAGES,
+    maxMessages:
+      numberOption("max-messages", v["max-messages"], (x) => Number.isInteger(x) && x >= 0, "a whole number ≥ 0") ??
+      DEFAULT_MAX_MESSAGES,
     quiet: v.quiet ?? false,
-    batchSize: numberOption("batch-size", v["batch-size"], (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000, "a whole number from 1 to 1000000") ?? DEFAULT_BATCH_SIZE,
+    batchSize:
+      numberOption(
+        "batch-size",
+        v["batch-size"],
+        (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000,
+        "a whole number from 1 to 1000000",
+      ) ?? DEFAULT_BATCH_SIZE,
   };
   return { kind: "run", options };
 }

@@ -5,7 +5,15 @@
  */
 import { getDatabase } from "../chemistry/database";
 import { getElectrodes } from "../chemistry/electrodes";
-import { BARE_SILVER_CHLORIDE, EMPTY_MAPPING, electrodeNamed, headerTokens, matchHeaders, temperatureScale, type TemperatureScale } from "../tables";
+import {
+  BARE_SILVER_CHLORIDE,
+  EMPTY_MAPPING,
+  electrodeNamed,
+  headerTokens,
+  matchHeaders,
+  temperatureScale,
+  type TemperatureScale,
+} from "../tables";
 import type { CsvFormat } from "./csv-format";
 import { clip, type EvaluationPlan, type MetalTarget } from "./evaluate";
 import { UsageError, type CliOptions } from "./options";
@@ -60,13 +68,20 @@ function electrodeOf(potentialHeader: string, option: string | undefined): strin
   const named = option ?? electrodeNamed(headerTokens(potentialHeader));
   const shown = clip(potentialHeader, 60);
   if (named === null) {
-    throw new UsageError(`the header "${shown}" does not say which reference electrode the readings are against; give --electrode (e.g. SHE, SCE, AgCl-3M)`);
+    throw new UsageError(
+      `the header "${shown}" does not say which reference electrode the readings are against; give --electrode (e.g. SHE, SCE, AgCl-3M)`,
+    );
   }
   const found = getElectrodes().lookup(named);
   if ("error" in found) {
     if (option === undefined && named === BARE_SILVER_CHLORIDE) {
-      const fillings = getElectrodes().all().filter((e) => e.id.startsWith("AgCl")).map((e) => e.id);
-      throw new UsageError(`the header "${shown}" names a silver chloride electrode but not its filling (they read several mV apart); give --electrode with one of ${fillings.join(", ")}`);
+      const fillings = getElectrodes()
+        .all()
+        .filter((e) => e.id.startsWith("AgCl"))
+        .map((e) => e.id);
+      throw new UsageError(
+        `the header "${shown}" names a silver chloride electrode but not its filling (they read several mV apart); give --electrode with one of ${fillings.join(", ")}`,
+      );
     }
     throw new UsageError(`--electrode: ${found.error}`);
   }
@@ -79,11 +94,15 @@ function targetsOf(options: CliOptions, metalColumn: number | null): MetalTarget
   const targets: MetalTarget[] = [];
   for (const m of options.metals) {
     const symbol = db.resolveMetal(m);
-    if (!symbol) throw new UsageError(`--metal: "${clip(m, 40)}" is not a metal in the database (${db.metals().join(", ")})`);
+    if (!symbol)
+      throw new UsageError(`--metal: "${clip(m, 40)}" is not a metal in the database (${db.metals().join(", ")})`);
     if (!targets.some((t) => t.symbol === symbol)) targets.push({ prefix: symbol, symbol });
   }
   if (metalColumn !== null) targets.push({ prefix: "metal", symbol: null });
-  if (targets.length === 0) throw new UsageError("no metal to evaluate: give --metal Fe,Cu,… or a column naming each row's metal (--metal-column)");
+  if (targets.length === 0)
+    throw new UsageError(
+      "no metal to evaluate: give --metal Fe,Cu,… or a column naming each row's metal (--metal-column)",
+    );
   return targets;
 }
 
@@ -103,17 +122,35 @@ export function planFromHeader(headers: string[], options: CliOptions, format: C
   const ph = pick(options.phColumn, auto.pH, "--ph-column");
   if (ph === null) throw new UsageError(`no pH column found among ${headerList(headers)}; name it with --ph-column`);
   const potential = pick(options.potentialColumn, auto.potential, "--potential-column");
-  if (potential === null) throw new UsageError(`no potential column found among ${headerList(headers)}; name it with --potential-column`);
+  if (potential === null)
+    throw new UsageError(`no potential column found among ${headerList(headers)}; name it with --potential-column`);
   const temperatureColumn = pick(options.temperatureColumn, auto.temperature, "--temperature-column");
-  const metalColumn = pick(options.metalColumn === "auto" ? undefined : options.metalColumn, auto.metal, "--metal-column");
-  const mapping = { ...EMPTY_MAPPING, pH: ph, potential, temperature: temperatureColumn ?? -1, metal: metalColumn ?? -1, id: auto.id, site: auto.site };
+  const metalColumn = pick(
+    options.metalColumn === "auto" ? undefined : options.metalColumn,
+    auto.metal,
+    "--metal-column",
+  );
+  const mapping = {
+    ...EMPTY_MAPPING,
+    pH: ph,
+    potential,
+    temperature: temperatureColumn ?? -1,
+    metal: metalColumn ?? -1,
+    id: auto.id,
+    site: auto.site,
+  };
   const ligands = planWater(headers, options, mapping, (option, what) => pick(option, -1, what) as number);
   const taken = [...Object.values(mapping).filter((i) => i >= 0), ...ligands.map((l) => l.column)];
   const ionic = planIonic(headers, options, taken, (option, what) => pick(option, -1, what) as number);
   const potentialHeader = headers[potential];
   const unit = options.unit ?? unitFromHeader(potentialHeader);
-  if (unit === null) throw new UsageError(`the header "${clip(potentialHeader, 60)}" does not say whether the readings are in V or mV; give --unit V or --unit mV`);
-  const scale: TemperatureScale = options.temperatureUnit ?? (temperatureColumn === null ? "C" : temperatureScale(headerTokens(headers[temperatureColumn])));
+  if (unit === null)
+    throw new UsageError(
+      `the header "${clip(potentialHeader, 60)}" does not say whether the readings are in V or mV; give --unit V or --unit mV`,
+    );
+  const scale: TemperatureScale =
+    options.temperatureUnit ??
+    (temperatureColumn === null ? "C" : temperatureScale(headerTokens(headers[temperatureColumn])));
   return {
     headers,
     phColumn: ph,

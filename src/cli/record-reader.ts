@@ -15,7 +15,11 @@ export interface InputRow {
 export class MalformedCsvError extends Error {}
 
 /** Fields of a quoted record starting at `start`, or null when its closing quote is not in `text` yet. */
-function parseQuotedRecord(text: string, start: number, delimiter: string): { fields: string[]; next: number; breaks: number } | null {
+function parseQuotedRecord(
+  text: string,
+  start: number,
+  delimiter: string,
+): { fields: string[]; next: number; breaks: number } | null {
   const fields: string[] = [];
   let field = "";
   let breaks = 0;
@@ -110,7 +114,8 @@ export class RecordSplitter {
       return;
     }
     const record = parseQuotedRecord(text, 0, this.delimiter);
-    if (record === null || record.next < text.length) throw new MalformedCsvError(`line ${this.line}: a quoted field is not closed before the end of the file`);
+    if (record === null || record.next < text.length)
+      throw new MalformedCsvError(`line ${this.line}: a quoted field is not closed before the end of the file`);
     this.emit(null, record.fields, out);
   }
 

@@ -15,10 +15,19 @@ function baseName(path: string): string {
 }
 
 /** The caption lines under a diagram's legend. */
-function captionOf(options: CliOptions, plan: EvaluationPlan, drawn: number, total: number, celsius: number, totals: string): string[] {
+function captionOf(
+  options: CliOptions,
+  plan: EvaluationPlan,
+  drawn: number,
+  total: number,
+  celsius: number,
+  totals: string,
+): string[] {
   const caption = [
     `${total.toLocaleString("en-US")} samples from ${baseName(options.input)}${drawn < total ? ` (${drawn.toLocaleString("en-US")} drawn, chosen at random)` : ""}.`,
-    plan.temperatureColumn === null ? `Drawn at ${celsius} °C.` : `Drawn at ${celsius} °C, the samples' median; each sample's result columns use its own temperature.`,
+    plan.temperatureColumn === null
+      ? `Drawn at ${celsius} °C.`
+      : `Drawn at ${celsius} °C, the samples' median; each sample's result columns use its own temperature.`,
   ];
   if (plan.ligands.length > 0) {
     caption.push(

@@ -43,11 +43,19 @@ const MAX_RECORD_CHARS = 64 * 1024 * 1024;
 const WRITE_CHARS = 1 << 20;
 
 /** Entry point: parses argv, runs, returns the exit code. Never throws. */
-export async function runCli(argv: readonly string[], streams: CliStreams, fns: WorksheetFunctions = worksheetFunctions): Promise<number> {
+export async function runCli(
+  argv: readonly string[],
+  streams: CliStreams,
+  fns: WorksheetFunctions = worksheetFunctions,
+): Promise<number> {
   return (await runCommand(argv, streams, fns)).code;
 }
 
-export async function runCommand(argv: readonly string[], streams: CliStreams, fns: WorksheetFunctions = worksheetFunctions): Promise<RunResult> {
+export async function runCommand(
+  argv: readonly string[],
+  streams: CliStreams,
+  fns: WorksheetFunctions = worksheetFunctions,
+): Promise<RunResult> {
   let command;
   try {
     command = parseCommandLine(argv);
@@ -86,8 +94,10 @@ class RunFailure extends Error {
   }
 }
 
-const cannotRead = (options: CliOptions, error: unknown): RunFailure => new RunFailure(EXIT.io, `cannot read the input "${clip(options.input, 200)}": ${reason(error)}`);
-const cannotWrite = (options: CliOptions, error: unknown): RunFailure => new RunFailure(EXIT.io, `cannot write the output "${clip(options.output, 200)}": ${reason(error)}`);
+const cannotRead = (options: CliOptions, error: unknown): RunFailure =>
+  new RunFailure(EXIT.io, `cannot read the input "${clip(options.input, 200)}": ${reason(error)}`);
+const cannotWrite = (options: CliOptions, error: unknown): RunFailure =>
+  new RunFailure(EXIT.io, `cannot write the output "${clip(options.output, 200)}": ${reason(error)}`);
 
 /** The input's size; refuses a missing input and an output that is the input. */
 function checkPaths(options: CliOptions): number {
@@ -100,19 +110,31 @@ function checkPaths(options: CliOptions): number {
     throw cannotRead(options, error);
   }
   if (options.output !== "-" && sameFile(options.input, options.output)) {
-    throw new RunFailure(EXIT.usage, `the output "${clip(options.output, 200)}" is the input file; give another -o (the input is left untouched)`);
+    throw new RunFailure(
+      EXIT.usage,
+      `the output "${clip(options.output, 200)}" is the input file; give another -o (the input is left untouched)`,
+    );
   }
   return size;
 }
 
-export async function runWithOptions(options: CliOptions, streams: CliStreams, fns: WorksheetFunctions = worksheetFunctions): Promise<RunResult> {
+export async function runWithOptions(
+  options: CliOptions,
+  streams: CliStreams,
+  fns: WorksheetFunctions = worksheetFunctions,
+): Promise<RunResult> {
   const started = Date.now();
   let output: SafeOutput | null = null;
   try {
     const size = checkPaths(options);
     let format: CsvFormat;
     try {
-      format = { ...DEFAULT_FORMAT, ...probeInput(options.input, options.delimiter, options.decimalMark), rawText: options.rawText, fullPrecision: options.fullPrecision };
+      format = {
+        ...DEFAULT_FORMAT,
+        ...probeInput(options.input, options.delimiter, options.decimalMark),
+        rawText: options.rawText,
+        fullPrecision: options.fullPrecision,
+      };
     } catch (error) {
       throw cannotRead(options, error);
     }
@@ -147,9 +169,18 @@ export async function runWithOptions(options: CliOptions, streams: CliStreams, f
 }
 
 /** After the results are in place: the message count, the diagrams and the summary. */
-async function finish(options: CliOptions, streams: CliStreams, run: StreamedRun, plan: EvaluationPlan, started: number): Promise<RunResult> {
+async function finish(
+  options: CliOptions,
+  streams: CliStreams,
+  run: StreamedRun,
+  plan: EvaluationPlan,
+  started: number,
+): Promise<RunResult> {
   const err = streams.stderr;
-  if (run.messageCount > options.maxMessages) err.write(`${PROGRAM}: … ${run.messageCount - options.maxMessages} more messages not shown (the errors column has the errors)\n`);
+  if (run.messageCount > options.maxMessages)
+    err.write(
+      `${PROGRAM}: … ${run.messageCount - options.maxMessages} more messages not shown (the errors column has the errors)\n`,
+    );
   let svgFiles: string[] = [];
   let diagramFailure: string | null = null;
   if (options.svgDir !== null) {
@@ -170,7 +201,10 @@ async function finish(options: CliOptions, streams: CliStreams, run: StreamedRun
     regimes: run.regimes,
     svgFiles,
     header: outputHeader(plan),
-    notes: plan.ionic && (plan.ionic.kind !== "ideal" || plan.ionic.ignored.length > 0) ? [ionicSummary(plan.ionic, plan.headers)] : [],
+    notes:
+      plan.ionic && (plan.ionic.kind !== "ideal" || plan.ionic.ignored.length > 0)
+        ? [ionicSummary(plan.ionic, plan.headers)]
+        : [],
   };
   if (!options.quiet) (options.output === "-" ? err : streams.stdout).write(summaryText(summary));
   if (diagramFailure !== null) {
@@ -219,21 +253,24 @@ class StreamedRun {
     try {
       for await (const chunk of source as AsyncIterable<string>) {
         splitter.push(chunk, pending);
-        if (splitter.pending > MAX_RECORD_CHARS) throw new MalformedCsvError(`a record runs past ${MAX_RECORD_CHARS / 1048576} MiB (an unclosed quote?)`);
+        if (splitter.pending > MAX_RECORD_CHARS)
+          throw new MalformedCsvError(`a record runs past ${MAX_RECORD_CHARS / 1048576} MiB (an unclosed quote?)`);
         if (plan === null && pending.length > 0) {
           plan = this.planOf(pending.shift()!);
           out = await openOutput(plan);
           out.on("error", (e) => (state.failed ??= e));
           await this.write(out, textLine(outputHeader(plan), format), state);
         }
-        if (plan !== null && out !== null && pending.length >= options.batchSize) pending = await this.flush(plan, out, pending, state, false);
+        if (plan !== null && out !== null && pending.length >= options.batchSize)
+          pending = await this.flush(plan, out, pending, state, false);
         this.progress?.update(source.bytesRead, this.rows);
       }
       splitter.end(pending);
     } catch (error) {
       source.destroy();
       if (error instanceof UsageError || error instanceof RunFailure) throw error;
-      if (state.failed !== null || (error as { code?: string })?.code === "EPIPE") throw cannotWrite(options, state.failed ?? error);
+      if (state.failed !== null || (error as { code?: string })?.code === "EPIPE")
+        throw cannotWrite(options, state.failed ?? error);
       throw cannotRead(options, error);
     }
     if (plan === null && pending.length > 0) {
@@ -242,7 +279,8 @@ class StreamedRun {
       out.on("error", (e) => (state.failed ??= e));
       await this.write(out, textLine(outputHeader(plan), format), state);
     }
-    if (plan === null || out === null) throw new RunFailure(EXIT.io, `the input "${clip(options.input, 200)}" has no header row`);
+    if (plan === null || out === null)
+      throw new RunFailure(EXIT.io, `the input "${clip(options.input, 200)}" has no header row`);
     await this.flush(plan, out, pending, state, true);
     this.progress?.update(this.size, this.rows, true);
     this.progress?.clear();
@@ -257,7 +295,13 @@ class StreamedRun {
   }
 
   /** Evaluates and writes the rows in batches; all of them when `all`, else whole batches (the rest is returned). */
-  private async flush(plan: EvaluationPlan, out: Writable, rows: InputRow[], state: { failed: unknown }, all: boolean): Promise<InputRow[]> {
+  private async flush(
+    plan: EvaluationPlan,
+    out: Writable,
+    rows: InputRow[],
+    state: { failed: unknown },
+    all: boolean,
+  ): Promise<InputRow[]> {
     const size = this.options.batchSize;
     let start = 0;
     // batches' lines are written together, about 1 MiB at a time (one write per batch costs more than the batch)
@@ -283,7 +327,13 @@ class StreamedRun {
     if (n === width) return row;
     if (n < width) return { line: row.line, fields: [...row.fields, ...new Array<string>(width - n).fill("")] };
     const extra = row.fields.slice(width);
-    if (extra.some((f) => f.trim() !== "")) this.message({ line: row.line, column: null, text: `${n} fields, the header has ${width}; the fields after column ${width} are not written`, kind: "blank" });
+    if (extra.some((f) => f.trim() !== ""))
+      this.message({
+        line: row.line,
+        column: null,
+        text: `${n} fields, the header has ${width}; the fields after column ${width} are not written`,
+        kind: "blank",
+      });
     return { line: row.line, fields: row.fields.slice(0, width) };
   }
 
@@ -333,7 +383,8 @@ export function reason(error: unknown): string {
     if (e.code === "ENOENT") return "no such file";
     if (e.code === "EACCES") return "permission denied";
     if (e.code === "EISDIR") return "it is a directory";
-    if (e.code === "ENOSPC") return "no space left on the device (the disk is full); any previous results are left as they were";
+    if (e.code === "ENOSPC")
+      return "no space left on the device (the disk is full); any previous results are left as they were";
     return clip(e.message ?? e.code, 300);
   }
   return clip(error instanceof Error ? error.message : String(error), 300);

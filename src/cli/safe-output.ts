@@ -6,7 +6,18 @@
  * renamed over and are written directly.
  */
 import { once } from "node:events";
-import { closeSync, createWriteStream, fsyncSync, mkdirSync, openSync, realpathSync, renameSync, statSync, unlinkSync, type WriteStream } from "node:fs";
+import {
+  closeSync,
+  createWriteStream,
+  fsyncSync,
+  mkdirSync,
+  openSync,
+  realpathSync,
+  renameSync,
+  statSync,
+  unlinkSync,
+  type WriteStream,
+} from "node:fs";
 import { basename, dirname, join, resolve } from "node:path";
 
 /** Temporary files being written right now, removed by abortAllOutputs on an interrupt. */
@@ -64,7 +75,10 @@ export class SafeOutput {
   }
 
   /** Creates the temporary file beside `target` (or opens a special file directly). */
-  static async open(target: string, opener: StreamOpener = (p) => createWriteStream(p, { flags: "wx" })): Promise<SafeOutput> {
+  static async open(
+    target: string,
+    opener: StreamOpener = (p) => createWriteStream(p, { flags: "wx" }),
+  ): Promise<SafeOutput> {
     if (isSpecialFile(target)) {
       const stream = createWriteStream(target, { flags: "a" });
       await once(stream, "open");

@@ -6,7 +6,9 @@ declare const __REDOX_CELLS_VERSION__: string | undefined;
 export function version(): string {
   if (typeof __REDOX_CELLS_VERSION__ === "string") return __REDOX_CELLS_VERSION__;
   try {
-    const pkg = JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version?: string };
+    const pkg = JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as {
+      version?: string;
+    };
     return pkg.version ?? "unknown";
   } catch {
     return "unknown";

@@ -15,7 +15,17 @@
  */
 import { getDatabase } from "../chemistry/database";
 import type { LigandName } from "../chemistry/ligand-cells";
-import { alkalinityFactor, matchWaterColumns, molalFactor, waterColumnAt, WATER_UNITS, type ColumnMapping, type FormulaParts, type WaterColumnRole, type WaterUnit } from "../tables";
+import {
+  alkalinityFactor,
+  matchWaterColumns,
+  molalFactor,
+  waterColumnAt,
+  WATER_UNITS,
+  type ColumnMapping,
+  type FormulaParts,
+  type WaterColumnRole,
+  type WaterUnit,
+} from "../tables";
 import { UsageError, type CliOptions } from "./options";
 
 /** One ligand argument fed from a column. */
@@ -30,7 +40,12 @@ export interface LigandInput {
 }
 
 /** Output column of the total actually passed to the functions. */
-export const LIGAND_OUTPUT: Readonly<Record<LigandName, string>> = { carbonate: "DIC_mol_kg", chloride: "chloride_mol_kg", sulfur: "sulfur_mol_kg", phosphate: "phosphate_mol_kg" };
+export const LIGAND_OUTPUT: Readonly<Record<LigandName, string>> = {
+  carbonate: "DIC_mol_kg",
+  chloride: "chloride_mol_kg",
+  sulfur: "sulfur_mol_kg",
+  phosphate: "phosphate_mol_kg",
+};
 
 /** g/mol of formula parts from the element records. */
 function molarMass(parts: FormulaParts): number {
@@ -43,15 +58,40 @@ function molarMass(parts: FormulaParts): number {
   return sum;
 }
 
-const OWN_ION: Readonly<Record<WaterColumnRole, FormulaParts>> = { alkalinity: {}, chloride: { Cl: 1 }, sulfate: { S: 1, O: 4 }, dic: { C: 1 }, phosphate: { P: 1 } };
-const WHAT: Readonly<Record<WaterColumnRole, string>> = { alkalinity: "alkalinity", chloride: "chloride", sulfate: "sulfate", dic: "DIC", phosphate: "orthophosphate" };
-const LIGAND_OF: Readonly<Record<WaterColumnRole, LigandName>> = { alkalinity: "carbonate", chloride: "chloride", sulfate: "sulfur", dic: "carbonate", phosphate: "phosphate" };
+const OWN_ION: Readonly<Record<WaterColumnRole, FormulaParts>> = {
+  alkalinity: {},
+  chloride: { Cl: 1 },
+  sulfate: { S: 1, O: 4 },
+  dic: { C: 1 },
+  phosphate: { P: 1 },
+};
+const WHAT: Readonly<Record<WaterColumnRole, string>> = {
+  alkalinity: "alkalinity",
+  chloride: "chloride",
+  sulfate: "sulfate",
+  dic: "DIC",
+  phosphate: "orthophosphate",
+};
+const LIGAND_OF: Readonly<Record<WaterColumnRole, LigandName>> = {
+  alkalinity: "carbonate",
+  chloride: "chloride",
+  sulfate: "sulfur",
+  dic: "carbonate",
+  phosphate: "phosphate",
+};
 
 /** The input for a column serving `role`, in the unit its header names (units.ts). */
 function inputFor(role: WaterColumnRole, column: number, unit: WaterUnit): LigandInput {
   const words = `${WHAT[role]} in ${WATER_UNITS[unit].words}`;
-  if (role === "alkalinity") return { ligand: "carbonate", column, kind: "alkalinity", factor: alkalinityFactor(unit), unit: words };
-  return { ligand: LIGAND_OF[role], column, kind: "total", factor: molalFactor(unit, OWN_ION[role], molarMass), unit: words };
+  if (role === "alkalinity")
+    return { ligand: "carbonate", column, kind: "alkalinity", factor: alkalinityFactor(unit), unit: words };
+  return {
+    ligand: LIGAND_OF[role],
+    column,
+    kind: "total",
+    factor: molalFactor(unit, OWN_ION[role], molarMass),
+    unit: words,
+  };
 }
 
 /**
@@ -76,8 +116,15 @@ export function planWater(
 
   const dic = choose(options.dicColumn, auto.dic?.index ?? -1, "--dic-column");
   const alkalinity = choose(options.alkalinityColumn, auto.alkalinity?.index ?? -1, "--alkalinity-column");
-  if (dic !== null && alkalinity !== null && options.dicColumn !== undefined && options.alkalinityColumn !== undefined) {
-    throw new UsageError("--dic-column and --alkalinity-column both give the carbonate; name one of them (or set the other to none)");
+  if (
+    dic !== null &&
+    alkalinity !== null &&
+    options.dicColumn !== undefined &&
+    options.alkalinityColumn !== undefined
+  ) {
+    throw new UsageError(
+      "--dic-column and --alkalinity-column both give the carbonate; name one of them (or set the other to none)",
+    );
   }
   // a measured DIC wins over one derived from alkalinity, unless the alkalinity column was named
   if (dic !== null && options.alkalinityColumn === undefined) inputs.push(inputFor("dic", dic, unitOf("dic", dic)));

@@ -16,9 +16,31 @@ export interface WorksheetFunctions {
   /** REDOX.WATERMARGIN(pH, potential, [temperature], [overpotential]) */
   waterMargin(pH: CellInput, potential: CellInput, temperature?: CellInput, overpotential?: CellInput): CellOutput[][];
   /** REDOX.SPECIES(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength]) */
-  species(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput, phosphate?: CellInput, ionicStrength?: CellInput): CellOutput[][];
+  species(
+    element: CellInput,
+    pH: CellInput,
+    potential: CellInput,
+    temperature?: CellInput,
+    activity?: CellInput,
+    carbonate?: CellInput,
+    chloride?: CellInput,
+    sulfur?: CellInput,
+    phosphate?: CellInput,
+    ionicStrength?: CellInput,
+  ): CellOutput[][];
   /** REDOX.REGIME(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength]) */
-  regime(element: CellInput, pH: CellInput, potential: CellInput, temperature?: CellInput, activity?: CellInput, carbonate?: CellInput, chloride?: CellInput, sulfur?: CellInput, phosphate?: CellInput, ionicStrength?: CellInput): CellOutput[][];
+  regime(
+    element: CellInput,
+    pH: CellInput,
+    potential: CellInput,
+    temperature?: CellInput,
+    activity?: CellInput,
+    carbonate?: CellInput,
+    chloride?: CellInput,
+    sulfur?: CellInput,
+    phosphate?: CellInput,
+    ionicStrength?: CellInput,
+  ): CellOutput[][];
   /** REDOX.BOUNDARY(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [direction]) */
   boundary(
     element: CellInput,

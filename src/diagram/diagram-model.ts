@@ -79,9 +79,17 @@ export function shownRegions(system: MetalSystem, window: AxisWindow, scale: Dis
     scale.toSHE(window.pHMin, window.eMax),
     scale.toSHE(window.pHMax, window.eMax),
   ];
-  const sheWindow = { pHMin: window.pHMin, pHMax: window.pHMax, eMin: Math.min(...corners) - 1e-6, eMax: Math.max(...corners) + 1e-6 };
+  const sheWindow = {
+    pHMin: window.pHMin,
+    pHMax: window.pHMax,
+    eMin: Math.min(...corners) - 1e-6,
+    eMax: Math.max(...corners) + 1e-6,
+  };
   // with ligands the regions are traced from the point engine, so they agree with REDOX.SPECIES (region-tracing.ts)
-  const regions: Region[] = system.ligandTotals && hasLigands(system.ligandTotals) ? tracedRegions(getDatabase(), system, sheWindow) : diagramRegions(system, sheWindow);
+  const regions: Region[] =
+    system.ligandTotals && hasLigands(system.ligandTotals)
+      ? tracedRegions(getDatabase(), system, sheWindow)
+      : diagramRegions(system, sheWindow);
   const clip: HalfPlane[] = [
     { a: -window.eMax, b: 0, c: 1 }, // E ≤ eMax
     { a: window.eMin, b: 0, c: -1 }, // E ≥ eMin
@@ -95,7 +103,13 @@ export function shownRegions(system: MetalSystem, window: AxisWindow, scale: Dis
     for (const h of clip) polygon = clipPolygon(polygon, h);
     if (polygon.length < 3 || Math.abs(polygonArea(polygon)) <= minArea) continue;
     const s = system.species[region.species];
-    out.push({ species: region.species, formula: region.formula, regime: s.regime, charge: s.species.charge, vertices: polygon });
+    out.push({
+      species: region.species,
+      formula: region.formula,
+      regime: s.regime,
+      charge: s.species.charge,
+      vertices: polygon,
+    });
   }
   return out;
 }

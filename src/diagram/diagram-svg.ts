@@ -77,13 +77,29 @@ const BARE = { top: 10, left: 54, right: 12, bottom: 44 } as const;
  * means a drawing without title, legend and caption.
  */
 export function diagramLayout(width: number, height: number, captionLines = 0): PlotArea {
-  if (captionLines < 0) return { left: BARE.left, top: BARE.top, width: Math.max(40, width - BARE.left - BARE.right), height: Math.max(40, height - BARE.top - BARE.bottom) };
+  if (captionLines < 0)
+    return {
+      left: BARE.left,
+      top: BARE.top,
+      width: Math.max(40, width - BARE.left - BARE.right),
+      height: Math.max(40, height - BARE.top - BARE.bottom),
+    };
   const bottom = 22 + 20 + 26 + captionLines * CAPTION_LINE + 6;
-  return { left: LEFT_BAND, top: TITLE_BAND, width: Math.max(40, width - LEFT_BAND - RIGHT_BAND), height: Math.max(40, height - TITLE_BAND - bottom) };
+  return {
+    left: LEFT_BAND,
+    top: TITLE_BAND,
+    width: Math.max(40, width - LEFT_BAND - RIGHT_BAND),
+    height: Math.max(40, height - TITLE_BAND - bottom),
+  };
 }
 
 export function escapeXml(text: string): string {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&apos;");
+  return text
+    .replace(/&/g, "&amp;")
+    .replace(/</g, "&lt;")
+    .replace(/>/g, "&gt;")
+    .replace(/"/g, "&quot;")
+    .replace(/'/g, "&apos;");
 }
 
 const fixed = (v: number, digits = 2) => Number(v.toFixed(digits)).toString();
@@ -91,7 +107,9 @@ const fixed = (v: number, digits = 2) => Number(v.toFixed(digits)).toString();
 /** Width (px) of a typeset formula at a font size — a fixed-advance estimate for sans-serif text. */
 export function formulaWidth(segments: readonly Segment[], size: number): number {
   let w = 0;
-  for (const s of segments) for (const ch of s.text) w += (s.kind === "normal" ? size : size * 0.72) * (/[A-Z(]|[\u2212+]/.test(ch) ? 0.66 : ch === ")" ? 0.36 : 0.56);
+  for (const s of segments)
+    for (const ch of s.text)
+      w += (s.kind === "normal" ? size : size * 0.72) * (/[A-Z(]|[\u2212+]/.test(ch) ? 0.66 : ch === ")" ? 0.36 : 0.56);
   return w;
 }
 
@@ -107,7 +125,10 @@ function segmentsSvg(segments: readonly Segment[]): string {
 
 /** "10⁻⁶" for powers of ten, otherwise "2.5 × 10⁻⁵". */
 export function formatActivity(a: number): string {
-  const sup = (text: string) => text.replace(/-/g, "\u207b").replace(/[0-9]/g, (d) => "\u2070\u00b9\u00b2\u00b3\u2074\u2075\u2076\u2077\u2078\u2079"[Number(d)]);
+  const sup = (text: string) =>
+    text
+      .replace(/-/g, "\u207b")
+      .replace(/[0-9]/g, (d) => "\u2070\u00b9\u00b2\u00b3\u2074\u2075\u2076\u2077\u2078\u2079"[Number(d)]);
   const exponent = Math.floor(Math.log10(a) + 1e-9);
   const mantissa = a / 10 ** exponent;
   if (Math.abs(mantissa - 1) < 1e-9) return exponent === 0 ? "1" : `10${sup(String(exponent))}`;
@@ -174,11 +195,19 @@ type PixelRegion = { region: ShownRegion; pixels: (readonly [number, number])[];
 
 /** Region fills by regime, shades stepping per species so neighbours differ. */
 function pixelRegions(o: DiagramSvgOptions, axes: Axes): PixelRegion[] {
-  const shadeIndex: Record<Regime, Map<number, number>> = { immunity: new Map(), passivation: new Map(), corrosion: new Map() };
+  const shadeIndex: Record<Regime, Map<number, number>> = {
+    immunity: new Map(),
+    passivation: new Map(),
+    corrosion: new Map(),
+  };
   return o.regions.map((r) => {
     const shades = shadeIndex[r.regime];
     if (!shades.has(r.species)) shades.set(r.species, shades.size);
-    return { region: r, pixels: r.vertices.map(([pH, e]) => [axes.x(pH), axes.y(e)] as const), fill: regionFill(r.regime, shades.get(r.species)!) };
+    return {
+      region: r,
+      pixels: r.vertices.map(([pH, e]) => [axes.x(pH), axes.y(e)] as const),
+      fill: regionFill(r.regime, shades.get(r.species)!),
+    };
   });
 }
 
@@ -202,16 +231,27 @@ function waterSvg(o: DiagramSvgOptions, axes: Axes): string {
     const dv = (o.kineticOverpotential ?? KINETIC_OVERPOTENTIAL) * (o.unit === "mV" ? 1000 : 1);
     const up = { intercept: o.water.oxygen.intercept + dv, slope: o.water.oxygen.slope };
     const down = { intercept: o.water.hydrogen.intercept - dv, slope: o.water.hydrogen.slope };
-    out.push(`<path class="rc-kinetic-band" d="${bandPath(axes, w, o.water.oxygen, up)}" fill="${WATER_BAND}" fill-opacity="0.07"/>`);
-    out.push(`<path class="rc-kinetic-band" d="${bandPath(axes, w, down, o.water.hydrogen)}" fill="${WATER_BAND}" fill-opacity="0.07"/>`);
-    for (const l of [up, down]) out.push(`<path d="${linePath(axes, w, l)}" stroke="${WATER_LINE}" stroke-width="0.8" stroke-opacity="0.5" stroke-dasharray="2 4" fill="none"/>`);
+    out.push(
+      `<path class="rc-kinetic-band" d="${bandPath(axes, w, o.water.oxygen, up)}" fill="${WATER_BAND}" fill-opacity="0.07"/>`,
+    );
+    out.push(
+      `<path class="rc-kinetic-band" d="${bandPath(axes, w, down, o.water.hydrogen)}" fill="${WATER_BAND}" fill-opacity="0.07"/>`,
+    );
+    for (const l of [up, down])
+      out.push(
+        `<path d="${linePath(axes, w, l)}" stroke="${WATER_LINE}" stroke-width="0.8" stroke-opacity="0.5" stroke-dasharray="2 4" fill="none"/>`,
+      );
   }
-  out.push(`<path class="rc-water-band" d="${bandPath(axes, w, o.water.hydrogen, o.water.oxygen)}" fill="${WATER_BAND}" fill-opacity="0.16"/>`);
+  out.push(
+    `<path class="rc-water-band" d="${bandPath(axes, w, o.water.hydrogen, o.water.oxygen)}" fill="${WATER_BAND}" fill-opacity="0.16"/>`,
+  );
   for (const [l, name] of [
     [o.water.oxygen, "O2/H2O"],
     [o.water.hydrogen, "H+/H2"],
   ] as const) {
-    out.push(`<path class="rc-water-line" data-couple="${name}" d="${linePath(axes, w, l)}" stroke="${WATER_LINE}" stroke-width="1.4" stroke-dasharray="7 4" fill="none"/>`);
+    out.push(
+      `<path class="rc-water-line" data-couple="${name}" d="${linePath(axes, w, l)}" stroke="${WATER_LINE}" stroke-width="1.4" stroke-dasharray="7 4" fill="none"/>`,
+    );
   }
   out.push(`</g>`);
   return out.join("\n");
@@ -230,8 +270,16 @@ export interface KeyEntry {
 /** The labels as SVG and the numbered key for regions too small for their formula. */
 function labelsSvg(regions: readonly PixelRegion[]): { svg: string; key: KeyEntry[] } {
   const segments = regions.map((r) => formulaSegments(r.region.formula, r.region.charge));
-  const plans: LabelPlan[] = planLabels(regions.map((r, i) => ({ key: r.region.formula, pixels: r.pixels, width: (size: number) => formulaWidth(segments[i], size) * LABEL_WIDTH_SAFETY })));
-  const out = [`<g class="rc-labels" fill="${LABEL_TEXT}" text-anchor="middle" pointer-events="none" paint-order="stroke" stroke="#ffffff" stroke-width="3" stroke-opacity="0.75" stroke-linejoin="round">`];
+  const plans: LabelPlan[] = planLabels(
+    regions.map((r, i) => ({
+      key: r.region.formula,
+      pixels: r.pixels,
+      width: (size: number) => formulaWidth(segments[i], size) * LABEL_WIDTH_SAFETY,
+    })),
+  );
+  const out = [
+    `<g class="rc-labels" fill="${LABEL_TEXT}" text-anchor="middle" pointer-events="none" paint-order="stroke" stroke="#ffffff" stroke-width="3" stroke-opacity="0.75" stroke-linejoin="round">`,
+  ];
   const key: KeyEntry[] = [];
   for (const p of plans) {
     const formula = regions[p.piece].region.formula;
@@ -241,10 +289,14 @@ function labelsSvg(regions: readonly PixelRegion[]): { svg: string; key: KeyEntr
     }
     const y = fixed(p.y + p.size * 0.35, 1);
     if (p.kind === "formula") {
-      out.push(`<text class="rc-label" data-formula="${escapeXml(formula)}" data-fits="true" x="${fixed(p.x, 1)}" y="${y}" font-size="${p.size}">${segmentsSvg(segments[p.piece])}</text>`);
+      out.push(
+        `<text class="rc-label" data-formula="${escapeXml(formula)}" data-fits="true" x="${fixed(p.x, 1)}" y="${y}" font-size="${p.size}">${segmentsSvg(segments[p.piece])}</text>`,
+      );
     } else {
       key.push({ number: p.number, formula, marked: true });
-      out.push(`<text class="rc-label rc-key-number" data-formula="${escapeXml(formula)}" data-key="${p.number}" x="${fixed(p.x, 1)}" y="${y}" font-size="${p.size}" font-weight="600">${p.number}</text>`);
+      out.push(
+        `<text class="rc-label rc-key-number" data-formula="${escapeXml(formula)}" data-key="${p.number}" x="${fixed(p.x, 1)}" y="${y}" font-size="${p.size}" font-weight="600">${p.number}</text>`,
+      );
     }
   }
   out.push(`</g>`);
@@ -254,23 +306,39 @@ function labelsSvg(regions: readonly PixelRegion[]): { svg: string; key: KeyEntr
 function axesSvg(o: DiagramSvgOptions, area: PlotArea, axes: Axes): string {
   const w = o.window;
   const out = [`<g class="rc-axes" fill="${AXIS_TEXT}" font-size="11">`];
-  out.push(`<rect x="${area.left}" y="${area.top}" width="${area.width}" height="${area.height}" fill="none" stroke="${AXIS_TEXT}" stroke-width="1"/>`);
+  out.push(
+    `<rect x="${area.left}" y="${area.top}" width="${area.width}" height="${area.height}" fill="none" stroke="${AXIS_TEXT}" stroke-width="1"/>`,
+  );
   for (const t of niceTicks(w.pHMin, w.pHMax, Math.max(3, Math.round(area.width / 55)))) {
     const x = fixed(axes.x(t));
-    out.push(`<path d="M${x} ${area.top + area.height}v5" stroke="${AXIS_TEXT}"/><text x="${x}" y="${area.top + area.height + 17}" text-anchor="middle">${formatTick(t)}</text>`);
+    out.push(
+      `<path d="M${x} ${area.top + area.height}v5" stroke="${AXIS_TEXT}"/><text x="${x}" y="${area.top + area.height + 17}" text-anchor="middle">${formatTick(t)}</text>`,
+    );
   }
   for (const t of niceTicks(w.eMin, w.eMax, Math.max(3, Math.round(area.height / 45)))) {
     const y = fixed(axes.y(t));
-    out.push(`<path d="M${area.left} ${y}h-5" stroke="${AXIS_TEXT}"/><text x="${area.left - 8}" y="${fixed(axes.y(t) + 4)}" text-anchor="end">${formatTick(t)}</text>`);
+    out.push(
+      `<path d="M${area.left} ${y}h-5" stroke="${AXIS_TEXT}"/><text x="${area.left - 8}" y="${fixed(axes.y(t) + 4)}" text-anchor="end">${formatTick(t)}</text>`,
+    );
   }
-  out.push(`<text class="rc-axis-title" x="${area.left + area.width / 2}" y="${area.top + area.height + 36}" text-anchor="middle" font-size="13">pH</text>`);
-  out.push(`<text class="rc-axis-title" transform="translate(14 ${area.top + area.height / 2}) rotate(-90)" text-anchor="middle" font-size="13">${escapeXml(o.axisTitle)}</text>`);
+  out.push(
+    `<text class="rc-axis-title" x="${area.left + area.width / 2}" y="${area.top + area.height + 36}" text-anchor="middle" font-size="13">pH</text>`,
+  );
+  out.push(
+    `<text class="rc-axis-title" transform="translate(14 ${area.top + area.height / 2}) rotate(-90)" text-anchor="middle" font-size="13">${escapeXml(o.axisTitle)}</text>`,
+  );
   out.push(`</g>`);
   return out.join("\n");
 }
 
 /** Title, subtitle, legend and caption inside the SVG (exports, command line). */
-function chromeSvg(o: DiagramSvgOptions, area: PlotArea, title: string, subtitle: string, caption: readonly string[]): string {
+function chromeSvg(
+  o: DiagramSvgOptions,
+  area: PlotArea,
+  title: string,
+  subtitle: string,
+  caption: readonly string[],
+): string {
   const out = [
     `<g class="rc-chrome" fill="${AXIS_TEXT}"><text class="rc-title" x="${area.left}" y="19" font-size="15" font-weight="600">${escapeXml(title)}</text>`,
     `<text class="rc-subtitle" x="${area.left}" y="36" font-size="11.5">${escapeXml(subtitle)}</text></g>`,
@@ -290,7 +358,9 @@ function chromeSvg(o: DiagramSvgOptions, area: PlotArea, title: string, subtitle
   );
   out.push(`<g class="rc-legend" font-size="11" fill="${AXIS_TEXT}">${legend.join("")}</g>`);
   if (caption.length > 0) {
-    out.push(`<g class="rc-caption" font-size="10" fill="${AXIS_TEXT}">${caption.map((line, i) => `<text x="${area.left}" y="${legendY + 28 + i * CAPTION_LINE}">${escapeXml(line)}</text>`).join("")}</g>`);
+    out.push(
+      `<g class="rc-caption" font-size="10" fill="${AXIS_TEXT}">${caption.map((line, i) => `<text x="${area.left}" y="${legendY + 28 + i * CAPTION_LINE}">${escapeXml(line)}</text>`).join("")}</g>`,
+    );
   }
   return out.join("\n");
 }
@@ -299,7 +369,10 @@ function chromeSvg(o: DiagramSvgOptions, area: PlotArea, title: string, subtitle
 function samplesSvg(o: DiagramSvgOptions, axes: Axes): string {
   const w = o.window;
   const titles = o.sampleTitles !== false;
-  const shown = o.omitSamples === true ? 0 : o.samples.filter((s) => s.pH >= w.pHMin && s.pH <= w.pHMax && s.E >= w.eMin && s.E <= w.eMax).length;
+  const shown =
+    o.omitSamples === true
+      ? 0
+      : o.samples.filter((s) => s.pH >= w.pHMin && s.pH <= w.pHMax && s.E >= w.eMin && s.E <= w.eMax).length;
   const out = [
     `<g class="rc-samples" stroke="${MARKER_OUTLINE}" stroke-width="1"${shown > 0 ? ` tabindex="0" role="group" aria-label="${shown} samples: arrow keys step through them in pH order, Enter selects the row"` : ""}>`,
   ];

@@ -20,7 +20,12 @@ export function formulaSegments(formula: string, charge: number): Segment[] {
   if (charge !== 0) {
     const sign = charge > 0 ? "+" : "-";
     const magnitude = Math.abs(charge);
-    for (const suffix of [`^${magnitude}${sign}`, ` ${magnitude}${sign}`, `${magnitude === 1 ? "" : magnitude}${sign}`, sign.repeat(magnitude)]) {
+    for (const suffix of [
+      `^${magnitude}${sign}`,
+      ` ${magnitude}${sign}`,
+      `${magnitude === 1 ? "" : magnitude}${sign}`,
+      sign.repeat(magnitude),
+    ]) {
       if (body.endsWith(suffix)) {
         body = body.slice(0, body.length - suffix.length);
         chargeText = (magnitude === 1 ? "" : String(magnitude)) + (charge > 0 ? "+" : "\u2212");
@@ -37,7 +42,10 @@ export function formulaSegments(formula: string, charge: number): Segment[] {
   for (let i = 0; i < body.length; i++) {
     const ch = body[i];
     const prev = i > 0 ? body[i - 1] : "";
-    const isCount = /[0-9]/.test(ch) && i > 0 && (/[A-Za-z)\]]/.test(prev) || (/[0-9]/.test(prev) && segments[segments.length - 1]?.kind === "sub"));
+    const isCount =
+      /[0-9]/.test(ch) &&
+      i > 0 &&
+      (/[A-Za-z)\]]/.test(prev) || (/[0-9]/.test(prev) && segments[segments.length - 1]?.kind === "sub"));
     push(ch, isCount ? "sub" : "normal");
   }
   if (chargeText) push(chargeText, "sup");

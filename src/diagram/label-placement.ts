@@ -45,7 +45,12 @@ function edgesOf(polygon: readonly Pixel[], width: number, height: number): Edge
     // inward normal: left of the edge for a counter-clockwise polygon (positive shoelace area)
     const nx = (-dy / length) * orientation;
     const ny = (dx / length) * orientation;
-    edges.push({ nx, ny, offset: nx * p[0] + ny * p[1], need: (Math.abs(nx) * width) / 2 + (Math.abs(ny) * height) / 2 });
+    edges.push({
+      nx,
+      ny,
+      offset: nx * p[0] + ny * p[1],
+      need: (Math.abs(nx) * width) / 2 + (Math.abs(ny) * height) / 2,
+    });
   }
   return edges;
 }
@@ -111,7 +116,8 @@ function segmentDistance(p: Pixel, a: Pixel, b: Pixel): number {
 
 /** Whether two convex polygons touch: a vertex of either lies within `tolerance` px of the other's boundary. */
 export function polygonsTouch(a: readonly Pixel[], b: readonly Pixel[], tolerance = 0.75): boolean {
-  const near = (p: Pixel, polygon: readonly Pixel[]) => polygon.some((v, i) => segmentDistance(p, v, polygon[(i + 1) % polygon.length]) <= tolerance);
+  const near = (p: Pixel, polygon: readonly Pixel[]) =>
+    polygon.some((v, i) => segmentDistance(p, v, polygon[(i + 1) % polygon.length]) <= tolerance);
   return a.some((p) => near(p, b)) || b.some((p) => near(p, a));
 }
 
@@ -120,7 +126,9 @@ export function polygonsTouch(a: readonly Pixel[], b: readonly Pixel[], toleranc
  * directly or through each other. A species split by a ligand boundary into adjacent pieces is then labelled
  * once. Returns a group number per piece (pieces alone get their own).
  */
-export function touchingGroups(pieces: readonly { readonly key: string; readonly pixels: readonly Pixel[] }[]): number[] {
+export function touchingGroups(
+  pieces: readonly { readonly key: string; readonly pixels: readonly Pixel[] }[],
+): number[] {
   const parent = pieces.map((_, i) => i);
   const root = (i: number): number => (parent[i] === i ? i : (parent[i] = root(parent[i])));
   for (let i = 0; i < pieces.length; i++) {

@@ -3,7 +3,12 @@
  */
 import { LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
 
-export const LIGAND_WORDS: Readonly<Record<LigandName, string>> = { carbonate: "DIC", chloride: "Cl", sulfur: "S", phosphate: "P" };
+export const LIGAND_WORDS: Readonly<Record<LigandName, string>> = {
+  carbonate: "DIC",
+  chloride: "Cl",
+  sulfur: "S",
+  phosphate: "P",
+};
 
 /** "DIC 1.35, Cl 2 mmol/kg" — totals in mmol/kg with three significant figures; "" without ligands. */
 export function formatTotals(totals: LigandTotals): string {

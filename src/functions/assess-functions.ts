@@ -16,7 +16,15 @@ import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } 
 import type { PointEngine } from "../chemistry/point-engine";
 import { DISSOLVED_UNITS, engineIn, unitArg } from "./stability-functions";
 
-export const ASSESS_COLUMNS = ["species", "regime", "boundary above (V)", "boundary below (V)", "water margin (V)", "dissolved", "controlling solid"] as const;
+export const ASSESS_COLUMNS = [
+  "species",
+  "regime",
+  "boundary above (V)",
+  "boundary below (V)",
+  "water margin (V)",
+  "dissolved",
+  "controlling solid",
+] as const;
 const WIDTH = ASSESS_COLUMNS.length;
 // Held in a module constant: in a sandboxed host each global lookup per cell is slow.
 const isFiniteNumber = Number.isFinite;
@@ -34,20 +42,37 @@ interface Water {
 }
 
 /** Equilibrium dissolved metal (mol/kg) and the controlling solid (the point engine set to the row's water, as REDOX.DISSOLVED), or #N/A. */
-function dissolvedWithSolid(engine: PointEngine, pH: number, E: number): { total: number; controllingSolid: string } | CellError {
+function dissolvedWithSolid(
+  engine: PointEngine,
+  pH: number,
+  E: number,
+): { total: number; controllingSolid: string } | CellError {
   const { total, solid } = dissolvedAtPoint(engine, pH, E);
   const controllingSolid = engine.table.species[solid].formula;
-  if (!(total <= MAX_DISSOLVED)) return notAvailable(`no solid forms here: ${controllingSolid}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);
+  if (!(total <= MAX_DISSOLVED))
+    return notAvailable(
+      `no solid forms here: ${controllingSolid}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`,
+    );
   return { total, controllingSolid };
 }
 
 /** The seven answers for one sample, in ASSESS_COLUMNS order (the same engine calls as the single functions). */
 function assessRow(element: string, pH: number, E: number, water: Water, unit: string): CellOutput[] {
-  const engine = engineIn(element, water.celsius, water.activity, water.carbonate, water.chloride, water.sulfur, water.phosphate, water.ionicStrength);
+  const engine = engineIn(
+    element,
+    water.celsius,
+    water.activity,
+    water.carbonate,
+    water.chloride,
+    water.sulfur,
+    water.phosphate,
+    water.ionicStrength,
+  );
   if (engine instanceof CellError) return ASSESS_COLUMNS.map(() => engine); // e.g. above 100 °C without S° (temperature-range.ts)
   const dominant = engine.table.species[engine.dominant(pH, E)];
   const boundary = (direction: 1 | -1): CellOutput =>
-    pointBoundary(engine, pH, E, direction)?.E ?? notAvailable(`no boundary ${direction > 0 ? "above" : "below"} this point between −3 and +3 V`);
+    pointBoundary(engine, pH, E, direction)?.E ??
+    notAvailable(`no boundary ${direction > 0 ? "above" : "below"} this point between −3 and +3 V`);
   const above = boundary(1);
   const below = boundary(-1);
   const dissolved = dissolvedWithSolid(engine, pH, E); // the engine already holds this row's water
@@ -65,19 +90,27 @@ function assessRow(element: string, pH: number, E: number, water: Water, unit: s
 
 /** Reads the header switch: omitted, blank, FALSE or 0 → no header; TRUE or 1 → header. */
 function readHeader(header: CellInput): boolean | CellError {
-  const value = Array.isArray(header) ? (header.length === 1 && header[0].length === 1 ? header[0][0] : undefined) : header;
+  const value = Array.isArray(header)
+    ? header.length === 1 && header[0].length === 1
+      ? header[0][0]
+      : undefined
+    : header;
   if (Array.isArray(header) && value === undefined) return valueError("header: give one cell (TRUE for a header row)");
   if (isBlank(value) || value === false || value === 0) return false;
   if (value === true || value === 1) return true;
   if (typeof value === "string" && /^\s*(true|false)\s*$/i.test(value)) return /true/i.test(value);
-  return valueError(`header: expected TRUE or FALSE, got ${typeof value === "string" ? `the text "${value.slice(0, 24)}"` : String(value)}`);
+  return valueError(
+    `header: expected TRUE or FALSE, got ${typeof value === "string" ? `the text "${value.slice(0, 24)}"` : String(value)}`,
+  );
 }
 
 /** Samples must come as single cells or columns: the answer has one row per sample. */
 function widthProblem(inputs: readonly CellInput[]): CellError | null {
   for (const input of inputs) {
     if (Array.isArray(input) && Array.isArray(input[0]) && input[0].length > 1) {
-      return valueError(`give single cells or columns: ASSESS answers one row per sample (got a range ${input.length}×${input[0].length})`);
+      return valueError(
+        `give single cells or columns: ASSESS answers one row per sample (got a range ${input.length}×${input[0].length})`,
+      );
     }
   }
   return null;
@@ -86,7 +119,8 @@ function widthProblem(inputs: readonly CellInput[]): CellError | null {
 /** Names the unit in the dissolved column's header. */
 function headerRow(unit: CellInput): CellOutput[] {
   const chosen = mapCells([unitArg], [unit], (u) => u)[0][0];
-  const name = typeof chosen === "string" && chosen !== "" ? chosen.replace("mg/l", "mg/L").replace("ug/l", "µg/L") : "mol/kg";
+  const name =
+    typeof chosen === "string" && chosen !== "" ? chosen.replace("mg/l", "mg/L").replace("ug/l", "µg/L") : "mol/kg";
   return ASSESS_COLUMNS.map((c) => (c === "dissolved" ? `dissolved (${name})` : c));
 }
 
@@ -105,19 +139,53 @@ export function assessAt(
   unit?: CellInput,
   header?: CellInput,
 ): CellOutput[][] {
-  const inputs = [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, unit];
+  const inputs = [
+    element,
+    pH,
+    potential,
+    temperature,
+    activity,
+    carbonate,
+    chloride,
+    sulfur,
+    phosphate,
+    ionicStrength,
+    unit,
+  ];
   const wantHeader = readHeader(header);
   const problem = wantHeader instanceof CellError ? wantHeader : widthProblem(inputs);
   if (problem) return [[toHostError(problem)]];
   const rows: CellOutput[][] = [];
   const cells = mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg, unitArg],
+    [
+      elementArg,
+      pHArg,
+      potentialArg(),
+      temperatureArg,
+      activityArg,
+      carbonateArg,
+      chlorideArg,
+      sulfurArg,
+      phosphateArg,
+      ionicStrengthArg,
+      unitArg,
+    ],
     inputs,
     (el, p, e, t, a, co3, cl, s, po4, i, u) =>
-      rows.push(assessRow(el, p, e, { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, phosphate: po4, ionicStrength: i }, u)) - 1,
+      rows.push(
+        assessRow(
+          el,
+          p,
+          e,
+          { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, phosphate: po4, ionicStrength: i },
+          u,
+        ),
+      ) - 1,
   );
   // a blank row stays blank, a row with a bad cell shows its error in every column, others their seven answers
-  const out = cells.map(([cell]) => (typeof cell === "number" ? finishRow(rows[cell]) : new Array<CellOutput>(WIDTH).fill(cell)));
+  const out = cells.map(([cell]) =>
+    typeof cell === "number" ? finishRow(rows[cell]) : new Array<CellOutput>(WIDTH).fill(cell),
+  );
   return wantHeader ? [headerRow(unit), ...out] : out;
 }
 
@@ -129,6 +197,7 @@ function finishRow(row: CellOutput[]): CellOutput[] {
 
 function finishCell(value: CellOutput): CellOutput {
   if (value instanceof CellError) return toHostError(value);
-  if (typeof value === "number" && !isFiniteNumber(value)) return toHostError(notAvailable("no finite answer exists at this input"));
+  if (typeof value === "number" && !isFiniteNumber(value))
+    return toHostError(notAvailable("no finite answer exists at this input"));
   return value;
 }

@@ -9,7 +9,18 @@
  * argument; nothing here throws, and no NaN or Infinity reaches a cell. An error cell inside a range (Excel passes it
  * in because functions.json sets allowErrorForDataTypeAny) gives an error in that position only.
  */
-import { basicValueOf, CellError, CellInput, CellOutput, CellScalar, inputErrorCode, isBlank, notAvailable, toHostError, valueError } from "./cell-values";
+import {
+  basicValueOf,
+  CellError,
+  CellInput,
+  CellOutput,
+  CellScalar,
+  inputErrorCode,
+  isBlank,
+  notAvailable,
+  toHostError,
+  valueError,
+} from "./cell-values";
 
 /** How one argument is read from a cell. */
 export interface ArgSpec<T> {
@@ -44,7 +55,16 @@ export function numberArg(
     outOfRange?: (x: number) => string;
   } = {},
 ): ArgSpec<number> {
-  const { min, max, minExclusive = false, optional = false, defaultValue, unit = "", measured = false, outOfRange } = options;
+  const {
+    min,
+    max,
+    minExclusive = false,
+    optional = false,
+    defaultValue,
+    unit = "",
+    measured = false,
+    outOfRange,
+  } = options;
   const suffix = unit ? ` ${unit}` : "";
   const rangeText = (): string => {
     const low = min === undefined ? "" : `${minExclusive ? "above" : "at least"} ${min}${suffix}`;
@@ -52,7 +72,8 @@ export function numberArg(
     return [low, high].filter(Boolean).join(" and ");
   };
   // the closed interval a plain number may take without further checks (an excluded bound is left to parse)
-  const low = min === undefined ? -Number.MAX_VALUE : minExclusive ? Math.max(min, 0) * (1 + 1e-15) + Number.MIN_VALUE : min;
+  const low =
+    min === undefined ? -Number.MAX_VALUE : minExclusive ? Math.max(min, 0) * (1 + 1e-15) + Number.MIN_VALUE : min;
   const high = max === undefined ? Number.MAX_VALUE : max;
   return {
     name,
@@ -63,11 +84,13 @@ export function numberArg(
     parse(value) {
       let x: number;
       if (typeof value === "number") x = value;
-      else if (typeof value === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(value)) x = Number(value);
+      else if (typeof value === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(value))
+        x = Number(value);
       else return valueError(`${name}: expected a number, got ${describe(value)}`, name);
       if (!isFiniteNumber(x)) return valueError(`${name}: expected a finite number, got ${x}`, name);
       const below = min !== undefined && (minExclusive ? x <= min : x < min);
-      if (below || (max !== undefined && x > max)) return valueError(outOfRange ? outOfRange(x) : `${name}: ${x} is out of range (${rangeText()})`, name);
+      if (below || (max !== undefined && x > max))
+        return valueError(outOfRange ? outOfRange(x) : `${name}: ${x} is out of range (${rangeText()})`, name);
       return x;
     },
   };
@@ -128,7 +151,8 @@ export function mapCells<A extends unknown[]>(
   const shapes: Shape[] = [];
   for (let i = 0; i < count; i++) {
     const shape = shapeOf(inputs[i]);
-    if (shape === null) return [[toHostError(valueError(`${specs[i].name}: the range is empty or not rectangular`, specs[i].name))]];
+    if (shape === null)
+      return [[toHostError(valueError(`${specs[i].name}: the range is empty or not rectangular`, specs[i].name))]];
     shapes.push(shape);
   }
   let rows = 1;
@@ -252,7 +276,8 @@ function varyingColumn(index: number, spec: ArgSpec<unknown>, range: CellScalar[
     const cells = range[r];
     for (let c = 0; c < shape.cols; c++) {
       const value = cells[c];
-      if (typeof value !== "number" || !(value >= accepts.low && value <= accepts.high)) return { ...base, plain: null };
+      if (typeof value !== "number" || !(value >= accepts.low && value <= accepts.high))
+        return { ...base, plain: null };
       plain[r * shape.cols + c] = value;
     }
   }
@@ -265,7 +290,8 @@ function parseCell<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<
     if (spec.optional && !(given && spec.measured)) return spec.defaultValue as T;
     return BLANK;
   }
-  if (typeof value !== "number" && typeof value !== "string" && typeof value !== "boolean") return parseObject(spec, value, given);
+  if (typeof value !== "number" && typeof value !== "string" && typeof value !== "boolean")
+    return parseObject(spec, value, given);
   return spec.parse(value);
 }
 
@@ -273,7 +299,8 @@ function parseCell<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<
 function parseObject<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<T> {
   const code = inputErrorCode(value);
   if (code === "#N/A") return notAvailable(`${spec.name}: the cell holds #N/A (no value)`);
-  if (code !== null) return valueError(`${spec.name}: the cell holds the error ${code.slice(0, 12)}; correct that cell`, spec.name);
+  if (code !== null)
+    return valueError(`${spec.name}: the cell holds the error ${code.slice(0, 12)}; correct that cell`, spec.name);
   const basic = basicValueOf(value);
   if (basic !== undefined) return parseCell(spec, basic, given);
   return valueError(`${spec.name}: the cell holds an unreadable value`, spec.name);
@@ -289,7 +316,8 @@ function safeCompute<A extends unknown[]>(compute: (...args: A) => CellOutput, a
 
 function finish(value: CellOutput): CellOutput {
   if (value instanceof CellError) return toHostError(value);
-  if (typeof value === "number" && !isFiniteNumber(value)) return toHostError(notAvailable("no finite answer exists at this input"));
+  if (typeof value === "number" && !isFiniteNumber(value))
+    return toHostError(notAvailable("no finite answer exists at this input"));
   return value;
 }
 
@@ -314,5 +342,7 @@ function cellAt(input: CellInput, r: number, c: number): unknown {
 
 function shapeError(specs: readonly ArgSpec<unknown>[], shapes: Shape[]): CellError {
   const described = specs.map((s, i) => `${s.name} ${shapes[i].rows}×${shapes[i].cols}`).join(", ");
-  return valueError(`ranges of different shapes cannot be combined (${described}); use ranges of the same size or single cells`);
+  return valueError(
+    `ranges of different shapes cannot be combined (${described}); use ranges of the same size or single cells`,
+  );
 }

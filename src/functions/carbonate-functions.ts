@@ -15,7 +15,10 @@ const CARBONIC_MAX_CELSIUS = 100;
 
 export function dicAt(alkalinity: CellInput, pH: CellInput, temperature?: CellInput): CellOutput[][] {
   return mapCells([alkalinityArg, pHArg, temperatureArg], [alkalinity, pH, temperature], (alk, p, t) => {
-    if (t > CARBONIC_MAX_CELSIUS) return valueError(`temperature: ${t} °C is outside 0 to ${CARBONIC_MAX_CELSIUS} °C, the range of the carbonic-acid constants (Plummer & Busenberg 1982)`);
+    if (t > CARBONIC_MAX_CELSIUS)
+      return valueError(
+        `temperature: ${t} °C is outside 0 to ${CARBONIC_MAX_CELSIUS} °C, the range of the carbonic-acid constants (Plummer & Busenberg 1982)`,
+      );
     try {
       return dicFromAlkalinity(alk, p, t);
     } catch (error) {

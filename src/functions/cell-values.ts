@@ -53,7 +53,8 @@ export function toHostError(error: CellError): CellOutput {
 }
 
 /** Wrong kind, unknown name or out-of-range input: #VALUE! with a message naming argument, value and expectation. */
-export const valueError = (message: string, argument?: string): CellError => new CellError("#VALUE!", message, argument);
+export const valueError = (message: string, argument?: string): CellError =>
+  new CellError("#VALUE!", message, argument);
 /** No answer exists at valid input: #N/A with its reason. */
 export const notAvailable = (message: string): CellError => new CellError("#N/A", message);
 

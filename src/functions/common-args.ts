@@ -1,7 +1,15 @@
 /**
  * Argument readers shared by the worksheet functions (ranges and defaults: docs/method.md, Domain).
  */
-import { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_ACTIVITY, MAX_CELSIUS, MIN_CELSIUS, PH_MAX, PH_MIN } from "../chemistry/domain";
+import {
+  DEFAULT_ACTIVITY,
+  DEFAULT_CELSIUS,
+  MAX_ACTIVITY,
+  MAX_CELSIUS,
+  MIN_CELSIUS,
+  PH_MAX,
+  PH_MIN,
+} from "../chemistry/domain";
 import { getDatabase } from "../chemistry/database";
 import { numberArg, textArg } from "./broadcast";
 import { valueError } from "./cell-values";
@@ -32,11 +40,19 @@ export const temperatureArg = numberArg("temperature", {
   measured: true,
   defaultValue: DEFAULT_CELSIUS,
 });
-export const activityArg = numberArg("activity", { min: 0, minExclusive: true, max: MAX_ACTIVITY, optional: true, defaultValue: DEFAULT_ACTIVITY });
+export const activityArg = numberArg("activity", {
+  min: 0,
+  minExclusive: true,
+  max: MAX_ACTIVITY,
+  optional: true,
+  defaultValue: DEFAULT_ACTIVITY,
+});
 
 /** A metal by symbol or name ("Fe", "iron"), case-insensitive. */
 export const elementArg = textArg("element", (text) => {
   const db = getDatabase();
   const symbol = db.resolveMetal(text);
-  return symbol ?? valueError(`element: "${text}" is not a metal in the database (${db.metals().join(", ")})`, "element");
+  return (
+    symbol ?? valueError(`element: "${text}" is not a metal in the database (${db.metals().join(", ")})`, "element")
+  );
 });

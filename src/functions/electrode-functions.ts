@@ -32,7 +32,8 @@ const READING_UNITS: Readonly<Record<string, { unit: ReadingUnit; volts: number 
 /** "V" (default) or "mV", case-insensitive. */
 export const readingUnitArg = textArg(
   "unit",
-  (text) => ownEntry(READING_UNITS, text.toLowerCase()) ?? valueError(`unit: expected "V" or "mV", got "${text.slice(0, 24)}"`),
+  (text) =>
+    ownEntry(READING_UNITS, text.toLowerCase()) ?? valueError(`unit: expected "V" or "mV", got "${text.slice(0, 24)}"`),
   { optional: true, defaultValue: READING_UNITS.v },
 );
 
@@ -58,19 +59,39 @@ function electrodePotential(electrode: Electrode, celsius: number, pH: number | 
 }
 
 /** REDOX.TOSHE(reading, electrode, [temperature], [pH], [unit]) → V vs SHE. */
-export function toSHEAt(reading: CellInput, electrode: CellInput, temperature?: CellInput, pH?: CellInput, unit?: CellInput): CellOutput[][] {
-  return mapCells([readingArg, electrodeArg, temperatureArg, electrodePHArg, readingUnitArg], [reading, electrode, temperature, pH, unit], (r, el, t, p, u) => {
-    const volts = readingVolts(r, u);
-    if (volts instanceof CellError) return volts;
-    const offset = electrodePotential(el, t, p);
-    return offset instanceof CellError ? offset : volts + offset;
-  });
+export function toSHEAt(
+  reading: CellInput,
+  electrode: CellInput,
+  temperature?: CellInput,
+  pH?: CellInput,
+  unit?: CellInput,
+): CellOutput[][] {
+  return mapCells(
+    [readingArg, electrodeArg, temperatureArg, electrodePHArg, readingUnitArg],
+    [reading, electrode, temperature, pH, unit],
+    (r, el, t, p, u) => {
+      const volts = readingVolts(r, u);
+      if (volts instanceof CellError) return volts;
+      const offset = electrodePotential(el, t, p);
+      return offset instanceof CellError ? offset : volts + offset;
+    },
+  );
 }
 
 /** REDOX.FROMSHE(potential, electrode, [temperature], [pH], [unit]) → reading against the electrode, in `unit`. */
-export function fromSHEAt(potential: CellInput, electrode: CellInput, temperature?: CellInput, pH?: CellInput, unit?: CellInput): CellOutput[][] {
-  return mapCells([potentialArg(), electrodeArg, temperatureArg, electrodePHArg, readingUnitArg], [potential, electrode, temperature, pH, unit], (e, el, t, p, u) => {
-    const offset = electrodePotential(el, t, p);
-    return offset instanceof CellError ? offset : (e - offset) / u.volts;
-  });
+export function fromSHEAt(
+  potential: CellInput,
+  electrode: CellInput,
+  temperature?: CellInput,
+  pH?: CellInput,
+  unit?: CellInput,
+): CellOutput[][] {
+  return mapCells(
+    [potentialArg(), electrodeArg, temperatureArg, electrodePHArg, readingUnitArg],
+    [potential, electrode, temperature, pH, unit],
+    (e, el, t, p, u) => {
+      const offset = electrodePotential(el, t, p);
+      return offset instanceof CellError ? offset : (e - offset) / u.volts;
+    },
+  );
 }

@@ -55,7 +55,13 @@ export function watermargin(pH: any[][], potential: any[][], temperature?: any[]
  * @param {any[][]} [unit] Unit of the reading: "V" (default) or "mV". The result is always in V vs SHE.
  * @returns {any[][]} Potential in V vs SHE.
  */
-export function toshe(reading: any[][], electrode: any[][], temperature?: any[][], pH?: any[][], unit?: any[][]): any[][] {
+export function toshe(
+  reading: any[][],
+  electrode: any[][],
+  temperature?: any[][],
+  pH?: any[][],
+  unit?: any[][],
+): any[][] {
   return toSHEAt(reading, electrode, temperature, pH, unit);
 }
 
@@ -69,7 +75,13 @@ export function toshe(reading: any[][], electrode: any[][], temperature?: any[][
  * @param {any[][]} [unit] Unit of the result: "V" (default) or "mV".
  * @returns {any[][]} The reading against the electrode, in V or mV.
  */
-export function fromshe(potential: any[][], electrode: any[][], temperature?: any[][], pH?: any[][], unit?: any[][]): any[][] {
+export function fromshe(
+  potential: any[][],
+  electrode: any[][],
+  temperature?: any[][],
+  pH?: any[][],
+  unit?: any[][],
+): any[][] {
   return fromSHEAt(potential, electrode, temperature, pH, unit);
 }
 
@@ -130,8 +142,30 @@ export function slope(temperature?: any[][]): any[][] {
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @returns {any[][]} Formula of the dominant species.
  */
-export function species(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][]): any[][] {
-  return speciesAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength);
+export function species(
+  element: any[][],
+  pH: any[][],
+  potential: any[][],
+  temperature?: any[][],
+  activity?: any[][],
+  carbonate?: any[][],
+  chloride?: any[][],
+  sulfur?: any[][],
+  phosphate?: any[][],
+  ionicStrength?: any[][],
+): any[][] {
+  return speciesAt(
+    element,
+    pH,
+    potential,
+    temperature,
+    activity,
+    carbonate,
+    chloride,
+    sulfur,
+    phosphate,
+    ionicStrength,
+  );
 }
 
 /**
@@ -149,7 +183,18 @@ export function species(element: any[][], pH: any[][], potential: any[][], tempe
  * @param {any[][]} [ionicStrength] Ionic strength in mol/kg, 0 to 0.5 (REDOX.IONICSTRENGTH estimates it from conductivity or TDS); blank = ideal dilute solution. Activity coefficients of charged species by the Davies equation.
  * @returns {any[][]} immunity, passivation or corrosion.
  */
-export function regime(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][]): any[][] {
+export function regime(
+  element: any[][],
+  pH: any[][],
+  potential: any[][],
+  temperature?: any[][],
+  activity?: any[][],
+  carbonate?: any[][],
+  chloride?: any[][],
+  sulfur?: any[][],
+  phosphate?: any[][],
+  ionicStrength?: any[][],
+): any[][] {
   return regimeAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength);
 }
 
@@ -169,8 +214,32 @@ export function regime(element: any[][], pH: any[][], potential: any[][], temper
  * @param {any[][]} [direction] 1 for the boundary above (default), -1 for the one below.
  * @returns {any[][]} Potential of the boundary in volts vs SHE.
  */
-export function boundary(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], direction?: any[][]): any[][] {
-  return boundaryFrom(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, direction);
+export function boundary(
+  element: any[][],
+  pH: any[][],
+  potential: any[][],
+  temperature?: any[][],
+  activity?: any[][],
+  carbonate?: any[][],
+  chloride?: any[][],
+  sulfur?: any[][],
+  phosphate?: any[][],
+  ionicStrength?: any[][],
+  direction?: any[][],
+): any[][] {
+  return boundaryFrom(
+    element,
+    pH,
+    potential,
+    temperature,
+    activity,
+    carbonate,
+    chloride,
+    sulfur,
+    phosphate,
+    ionicStrength,
+    direction,
+  );
 }
 
 /**
@@ -183,7 +252,13 @@ export function boundary(element: any[][], pH: any[][], potential: any[][], temp
  * @param {any[][]} [activity] Activity of the dissolved species. Default 1e-6.
  * @returns {any[][]} Equilibrium potential in volts vs SHE.
  */
-export function couple(oxidized: any[][], reduced: any[][], pH: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+export function couple(
+  oxidized: any[][],
+  reduced: any[][],
+  pH: any[][],
+  temperature?: any[][],
+  activity?: any[][],
+): any[][] {
   return coupleAt(oxidized, reduced, pH, temperature, activity);
 }
 
@@ -202,7 +277,18 @@ export function couple(oxidized: any[][], reduced: any[][], pH: any[][], tempera
  * @param {any[][]} [unit] mol/kg (default), mg/L or ug/L.
  * @returns {any[][]} Dissolved metal in the chosen unit.
  */
-export function dissolved(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], unit?: any[][]): any[][] {
+export function dissolved(
+  element: any[][],
+  pH: any[][],
+  potential: any[][],
+  temperature?: any[][],
+  carbonate?: any[][],
+  chloride?: any[][],
+  sulfur?: any[][],
+  phosphate?: any[][],
+  ionicStrength?: any[][],
+  unit?: any[][],
+): any[][] {
   return dissolvedAt(element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, unit);
 }
 
@@ -257,8 +343,34 @@ export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): an
  * @param {any[][]} [header] TRUE for a header row above the answers.
  * @returns {any[][]} Seven columns per sample row.
  */
-export function assess(element: any[][], pH: any[][], potential: any[][], temperature?: any[][], activity?: any[][], carbonate?: any[][], chloride?: any[][], sulfur?: any[][], phosphate?: any[][], ionicStrength?: any[][], unit?: any[][], header?: any[][]): any[][] {
-  return assessAt(element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, unit, header);
+export function assess(
+  element: any[][],
+  pH: any[][],
+  potential: any[][],
+  temperature?: any[][],
+  activity?: any[][],
+  carbonate?: any[][],
+  chloride?: any[][],
+  sulfur?: any[][],
+  phosphate?: any[][],
+  ionicStrength?: any[][],
+  unit?: any[][],
+  header?: any[][],
+): any[][] {
+  return assessAt(
+    element,
+    pH,
+    potential,
+    temperature,
+    activity,
+    carbonate,
+    chloride,
+    sulfur,
+    phosphate,
+    ionicStrength,
+    unit,
+    header,
+  );
 }
 
 /**

@@ -36,7 +36,12 @@ export function engineIn(
   ionicStrength: number,
 ): PointEngine | CellError {
   if (celsius > CONSTANT_GIBBS_MAX_CELSIUS) {
-    const problem = temperatureProblem(getDatabase(), element, celsius, presentLigands(carbonate, chloride, sulfur, phosphate));
+    const problem = temperatureProblem(
+      getDatabase(),
+      element,
+      celsius,
+      presentLigands(carbonate, chloride, sulfur, phosphate),
+    );
     if (problem) return valueError(problem);
   }
   if (element !== lastElement || !lastEngine) {
@@ -49,12 +54,24 @@ export function engineIn(
 
 const directionArg = textArg<1 | -1>(
   "direction",
-  (text) => (text === "1" ? 1 : text === "-1" ? -1 : valueError(`direction: expected 1 (above) or -1 (below), got ${text}`)),
+  (text) =>
+    text === "1" ? 1 : text === "-1" ? -1 : valueError(`direction: expected 1 (above) or -1 (below), got ${text}`),
   { optional: true, defaultValue: 1 },
 );
 
 /** The point arguments every stability function shares, in the agreed order. */
-const POINT_ARGS = [elementArg, pHArg, potentialArg(), temperatureArg, activityArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg] as const;
+const POINT_ARGS = [
+  elementArg,
+  pHArg,
+  potentialArg(),
+  temperatureArg,
+  activityArg,
+  carbonateArg,
+  chlorideArg,
+  sulfurArg,
+  phosphateArg,
+  ionicStrengthArg,
+] as const;
 
 /** Reads the point arguments shared by SPECIES and REGIME and answers with `describe` of the dominant species. */
 function dominantAt(describe: (species: SystemSpecies) => string, inputs: readonly CellInput[]): CellOutput[][] {
@@ -77,7 +94,10 @@ export function speciesAt(
   phosphate?: CellInput,
   ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.formula, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength]);
+  return dominantAt(
+    (s) => s.formula,
+    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength],
+  );
 }
 
 export function regimeAt(
@@ -92,7 +112,10 @@ export function regimeAt(
   phosphate?: CellInput,
   ionicStrength?: CellInput,
 ): CellOutput[][] {
-  return dominantAt((s) => s.regime, [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength]);
+  return dominantAt(
+    (s) => s.regime,
+    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength],
+  );
 }
 
 export function boundaryFrom(
@@ -115,17 +138,30 @@ export function boundaryFrom(
       const engine = engineIn(el, t, a, co3, cl, s, po4, i);
       if (engine instanceof CellError) return engine;
       const crossing = pointBoundary(engine, p, e, d);
-      return crossing ? crossing.E : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
+      return crossing
+        ? crossing.E
+        : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
     },
   );
 }
 
 const speciesArg = (name: string) =>
-  textArg(name, (text) => getDatabase().lookup(text) ?? valueError(`${name}: "${text}" is not a species in the database`));
+  textArg(
+    name,
+    (text) => getDatabase().lookup(text) ?? valueError(`${name}: "${text}" is not a species in the database`),
+  );
 
-export function coupleAt(oxidized: CellInput, reduced: CellInput, pH: CellInput, temperature?: CellInput, activity?: CellInput): CellOutput[][] {
-  return mapCells([speciesArg("oxidized"), speciesArg("reduced"), pHArg, temperatureArg, activityArg], [oxidized, reduced, pH, temperature, activity], (ox, red, p, t, a) =>
-    couple(ox, red, p, t, a),
+export function coupleAt(
+  oxidized: CellInput,
+  reduced: CellInput,
+  pH: CellInput,
+  temperature?: CellInput,
+  activity?: CellInput,
+): CellOutput[][] {
+  return mapCells(
+    [speciesArg("oxidized"), speciesArg("reduced"), pHArg, temperatureArg, activityArg],
+    [oxidized, reduced, pH, temperature, activity],
+    (ox, red, p, t, a) => couple(ox, red, p, t, a),
   );
 }
 
@@ -138,10 +174,14 @@ function couple(ox: Species, red: Species, pH: number, celsius: number, activity
     if (error instanceof ReactionError) return valueError(`oxidized, reduced: ${error.message}`);
     throw error;
   }
-  if (Math.abs(reaction.electrons) < 1e-12) return notAvailable(`${ox.formula} and ${red.formula} have the same oxidation state`);
+  if (Math.abs(reaction.electrons) < 1e-12)
+    return notAvailable(`${ox.formula} and ${red.formula} have the same oxidation state`);
   if (celsius > CONSTANT_GIBBS_MAX_CELSIUS) {
     const missing = [ox, red].filter((sp) => sp.S === null).map((sp) => sp.formula);
-    if (missing.length) return valueError(`temperature ${celsius} °C: this couple is modelled 0–${CONSTANT_GIBBS_MAX_CELSIUS} °C only; above ${CONSTANT_GIBBS_MAX_CELSIUS} °C the records lack S° for ${missing.join(", ")}`);
+    if (missing.length)
+      return valueError(
+        `temperature ${celsius} °C: this couple is modelled 0–${CONSTANT_GIBBS_MAX_CELSIUS} °C only; above ${CONSTANT_GIBBS_MAX_CELSIUS} °C the records lack S° for ${missing.join(", ")}`,
+      );
   }
   // the couple's potential does not depend on which member is named first
   const [o, r] = reaction.electrons > 0 ? [ox, red] : [red, ox];
@@ -154,7 +194,14 @@ export const DISSOLVED_UNITS: Record<string, (atomicWeight: number) => number> =
   "mg/l": (w) => w * 1e3,
   "ug/l": (w) => w * 1e6,
 };
-const UNIT_ALIASES: Record<string, string> = { "µg/l": "ug/l", "μg/l": "ug/l", ppb: "ug/l", ppm: "mg/l", molal: "mol/kg", "mol/l": "mol/kg" };
+const UNIT_ALIASES: Record<string, string> = {
+  "µg/l": "ug/l",
+  "μg/l": "ug/l",
+  ppb: "ug/l",
+  ppm: "mg/l",
+  molal: "mol/kg",
+  "mol/l": "mol/kg",
+};
 
 export const unitArg = textArg(
   "unit",
@@ -179,14 +226,27 @@ export function dissolvedAt(
   unit?: CellInput,
 ): CellOutput[][] {
   return mapCells(
-    [elementArg, pHArg, potentialArg(), temperatureArg, carbonateArg, chlorideArg, sulfurArg, phosphateArg, ionicStrengthArg, unitArg],
+    [
+      elementArg,
+      pHArg,
+      potentialArg(),
+      temperatureArg,
+      carbonateArg,
+      chlorideArg,
+      sulfurArg,
+      phosphateArg,
+      ionicStrengthArg,
+      unitArg,
+    ],
     [element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, unit],
     (el, p, e, t, co3, cl, s, po4, i, u) => {
       const engine = engineIn(el, t, 1, co3, cl, s, po4, i);
       if (engine instanceof CellError) return engine;
       const { total, solid } = dissolvedAtPoint(engine, p, e);
       if (!(total <= MAX_DISSOLVED)) {
-        return notAvailable(`no solid forms here: ${engine.table.species[solid].formula}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`);
+        return notAvailable(
+          `no solid forms here: ${engine.table.species[solid].formula}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`,
+        );
       }
       const weight = getDatabase().element(el)?.atomicWeight ?? NaN;
       return total * DISSOLVED_UNITS[u](weight);
@@ -199,7 +259,8 @@ const STATE_WORDS: Record<string, string> = { s: "solid", l: "liquid", g: "gas",
 export function speciesTable(element: CellInput, temperature?: CellInput): CellOutput[][] {
   // one table per call: element and temperature must be single cells
   const single = mapCells([elementArg, temperatureArg], [element, temperature], (el, t) => `${el}|${t}`);
-  if (single.length !== 1 || single[0].length !== 1) return [[toHostError(valueError("element, temperature: give single cells; the table spills by itself"))]];
+  if (single.length !== 1 || single[0].length !== 1)
+    return [[toHostError(valueError("element, temperature: give single cells; the table spills by itself"))]];
   const only = single[0][0];
   if (typeof only !== "string" || only === "") return [[only]];
   const [el, t] = only.split("|");
@@ -210,8 +271,15 @@ export function speciesTable(element: CellInput, temperature?: CellInput): CellO
   const rows: CellOutput[][] = [header];
   for (const s of table.species.filter((_, i) => table.needs[i] === 0)) {
     // above 100 °C a record without S° has no temperature dependence to give: the cell is left empty
-    const g = s.species.S === null && celsius > CONSTANT_GIBBS_MAX_CELSIUS ? null : formationGibbsAt(db, s.species, celsius);
-    rows.push([s.formula, STATE_WORDS[s.species.state], s.species.name, g === null ? "" : Math.round(g / 10) / 100, s.species.source]);
+    const g =
+      s.species.S === null && celsius > CONSTANT_GIBBS_MAX_CELSIUS ? null : formationGibbsAt(db, s.species, celsius);
+    rows.push([
+      s.formula,
+      STATE_WORDS[s.species.state],
+      s.species.name,
+      g === null ? "" : Math.round(g / 10) / 100,
+      s.species.source,
+    ]);
   }
   return rows;
 }

@@ -16,24 +16,46 @@ const GAS_NAMES: Readonly<Record<string, WaterGas>> = { o2: "O2", oxygen: "O2", 
 /** "O2" (default) or "H2", case-insensitive; "oxygen" and "hydrogen" too. */
 export const gasArg = textArg<WaterGas>(
   "gas",
-  (text) => ownEntry(GAS_NAMES, text.toLowerCase().replace(/\(g\)$/, "")) ?? valueError(`gas: expected "O2" or "H2", got "${text.slice(0, 24)}"`),
+  (text) =>
+    ownEntry(GAS_NAMES, text.toLowerCase().replace(/\(g\)$/, "")) ??
+    valueError(`gas: expected "O2" or "H2", got "${text.slice(0, 24)}"`),
   { optional: true, defaultValue: "O2" },
 );
 /** Partial pressure of the gas in bar, > 0, default 1. */
-export const pressureArg = numberArg("pressure", { min: 0, minExclusive: true, optional: true, defaultValue: 1, unit: "bar" });
+export const pressureArg = numberArg("pressure", {
+  min: 0,
+  minExclusive: true,
+  optional: true,
+  defaultValue: 1,
+  unit: "bar",
+});
 /** Extra width (V, ≥ 0) added beyond each water line; default 0 (the thermodynamic window). */
 export const overpotentialArg = numberArg("overpotential", { min: 0, optional: true, defaultValue: 0, unit: "V" });
 const peArg = numberArg("pe");
 
 /** REDOX.WATERLINE(pH, [temperature], [gas], [pressure]) → V vs SHE. */
-export function waterLineAt(pH: CellInput, temperature?: CellInput, gas?: CellInput, pressure?: CellInput): CellOutput[][] {
-  return mapCells([pHArg, temperatureArg, gasArg, pressureArg], [pH, temperature, gas, pressure], (p, t, g, bar) => waterLine(p, t, g, bar));
+export function waterLineAt(
+  pH: CellInput,
+  temperature?: CellInput,
+  gas?: CellInput,
+  pressure?: CellInput,
+): CellOutput[][] {
+  return mapCells([pHArg, temperatureArg, gasArg, pressureArg], [pH, temperature, gas, pressure], (p, t, g, bar) =>
+    waterLine(p, t, g, bar),
+  );
 }
 
 /** REDOX.WATERMARGIN(pH, potential, [temperature], [overpotential]) → signed distance in V. */
-export function waterMarginAt(pH: CellInput, potential: CellInput, temperature?: CellInput, overpotential?: CellInput): CellOutput[][] {
-  return mapCells([pHArg, potentialArg(), temperatureArg, overpotentialArg], [pH, potential, temperature, overpotential], (p, e, t, eta) =>
-    waterMargin(p, e, t, eta),
+export function waterMarginAt(
+  pH: CellInput,
+  potential: CellInput,
+  temperature?: CellInput,
+  overpotential?: CellInput,
+): CellOutput[][] {
+  return mapCells(
+    [pHArg, potentialArg(), temperatureArg, overpotentialArg],
+    [pH, potential, temperature, overpotential],
+    (p, e, t, eta) => waterMargin(p, e, t, eta),
   );
 }
 

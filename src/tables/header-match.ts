@@ -12,7 +12,15 @@ import { type TemperatureScale, type WaterUnit } from "./units";
 
 export type ColumnRole = "pH" | "potential" | "temperature" | "id" | "site" | "dissolved" | "metal";
 
-export const COLUMN_ROLES: readonly ColumnRole[] = ["pH", "potential", "temperature", "id", "site", "dissolved", "metal"];
+export const COLUMN_ROLES: readonly ColumnRole[] = [
+  "pH",
+  "potential",
+  "temperature",
+  "id",
+  "site",
+  "dissolved",
+  "metal",
+];
 
 /** Column index per role, −1 when absent. */
 export type ColumnMapping = Record<ColumnRole, number>;
@@ -35,7 +43,15 @@ export interface HeaderMatch {
   readonly hints: HeaderHints;
 }
 
-export const EMPTY_MAPPING: ColumnMapping = { pH: -1, potential: -1, temperature: -1, id: -1, site: -1, dissolved: -1, metal: -1 };
+export const EMPTY_MAPPING: ColumnMapping = {
+  pH: -1,
+  potential: -1,
+  temperature: -1,
+  id: -1,
+  site: -1,
+  dissolved: -1,
+  metal: -1,
+};
 
 /** Lower-case word tokens of a header: "ORP (mV) vs Ag/AgCl" → orp, mv, vs, ag, agcl. */
 export function headerTokens(header: string): string[] {
@@ -67,7 +83,9 @@ function isTemperature(tokens: readonly string[]): boolean {
   if (has(tokens, "conductivity", "conductance", "ec", "sc", "spcond")) return false; // "Conductivity (µS/cm at 25 °C)"
   if (has(tokens, "temp", "temperature", "degc", "degf", "celsius", "fahrenheit", "kelvin")) return true;
   // "T", "T (C)", "t_c", "T °C", "T (K)"
-  return tokens[0] === "t" && tokens.length <= 3 && tokens.slice(1).every((t) => ["c", "f", "k", "degc", "degf"].includes(t));
+  return (
+    tokens[0] === "t" && tokens.length <= 3 && tokens.slice(1).every((t) => ["c", "f", "k", "degc", "degf"].includes(t))
+  );
 }
 
 /** The scale a temperature header names: °F ("°F", "fahrenheit", "F"), K ("K", "kelvin"), else °C. */
@@ -152,7 +170,9 @@ function dissolvedUnit(tokens: readonly string[]): HeaderHints["dissolvedUnit"] 
  * potential, temperature, dissolved, metal, id, site, and the first matching column (left to right) wins.
  */
 export function matchHeaders(headers: readonly unknown[], metal = "", metalName = ""): HeaderMatch {
-  const tokens = headers.map((h) => headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)));
+  const tokens = headers.map((h) =>
+    headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)),
+  );
   const mapping: ColumnMapping = { ...EMPTY_MAPPING };
   const taken = new Set<number>();
   const claim = (role: ColumnRole, test: (t: string[]) => boolean) => {
@@ -220,7 +240,11 @@ function isAlkalinity(tokens: readonly string[]): boolean {
 
 function isChloride(tokens: readonly string[]): boolean {
   // chlorine residual (Cl2, "free chlorine") is not chloride
-  if (has(tokens, "chlorine", "residual", "free", "combined", "chloramine") || (tokens.includes("cl") && tokens[tokens.indexOf("cl") + 1] === "2")) return false;
+  if (
+    has(tokens, "chlorine", "residual", "free", "combined", "chloramine") ||
+    (tokens.includes("cl") && tokens[tokens.indexOf("cl") + 1] === "2")
+  )
+    return false;
   return has(tokens, "chloride", "chlorides", "cl");
 }
 
@@ -243,7 +267,11 @@ function isPhosphate(tokens: readonly string[]): boolean {
 
 /** Orthophosphate "as P": "PO4-P", "ortho-P", "(mg/L as P)"; otherwise mg/L as PO4. */
 function phosphateAsP(tokens: readonly string[]): boolean {
-  return tokens.some((t, i) => t === "p" && (tokens[i - 1] === "as" || tokens[i - 1] === "ortho" || (tokens[i - 1] === "4" && tokens[i - 2] === "po")));
+  return tokens.some(
+    (t, i) =>
+      t === "p" &&
+      (tokens[i - 1] === "as" || tokens[i - 1] === "ortho" || (tokens[i - 1] === "4" && tokens[i - 2] === "po")),
+  );
 }
 
 /** A header naming dissolved inorganic carbon: "DIC", "TIC", "dissolved inorganic carbon (mmol/L)". */
@@ -266,7 +294,9 @@ function waterUnit(role: WaterColumnRole, tokens: readonly string[]): WaterUnit 
   if (role === "chloride") return has(tokens, "ug", "ppb") ? "ug/L" : "mg/L";
   if (role === "phosphate") return phosphateAsP(tokens) ? "mg/L P" : "mg/L PO4";
   // sulfate "as S" (SO4-S): the token "s" after "as", or "so 4 s"
-  const asS = tokens.some((t, i) => t === "s" && (tokens[i - 1] === "as" || (tokens[i - 1] === "4" && tokens[i - 2] === "so")));
+  const asS = tokens.some(
+    (t, i) => t === "s" && (tokens[i - 1] === "as" || (tokens[i - 1] === "4" && tokens[i - 2] === "so")),
+  );
   return asS ? "mg/L S" : "mg/L SO4";
 }
 
@@ -275,10 +305,18 @@ function waterUnit(role: WaterColumnRole, tokens: readonly string[]): WaterUnit 
  * first matching column (left to right) wins.
  */
 export function matchWaterColumns(headers: readonly unknown[], mapping: ColumnMapping = EMPTY_MAPPING): WaterColumns {
-  const tokens = headers.map((h) => headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)));
+  const tokens = headers.map((h) =>
+    headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h)),
+  );
   const taken = new Set(Object.values(mapping).filter((i) => i >= 0));
   const out: WaterColumns = {};
-  const tests: Record<WaterColumnRole, (t: readonly string[]) => boolean> = { alkalinity: isAlkalinity, chloride: isChloride, sulfate: isSulfate, dic: isDic, phosphate: isPhosphate };
+  const tests: Record<WaterColumnRole, (t: readonly string[]) => boolean> = {
+    alkalinity: isAlkalinity,
+    chloride: isChloride,
+    sulfate: isSulfate,
+    dic: isDic,
+    phosphate: isPhosphate,
+  };
   for (const role of WATER_COLUMN_ROLES) {
     const index = tokens.findIndex((t, i) => !taken.has(i) && t.length > 0 && tests[role](t));
     if (index < 0) continue;
@@ -291,5 +329,8 @@ export function matchWaterColumns(headers: readonly unknown[], mapping: ColumnMa
 /** A column the user chose for `role`, with the unit its header names (or the role's default unit). */
 export function waterColumnAt(role: WaterColumnRole, headers: readonly unknown[], index: number): WaterColumn {
   const h = headers[index];
-  return { index, unit: waterUnit(role, headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h))) };
+  return {
+    index,
+    unit: waterUnit(role, headerTokens(typeof h === "string" ? h : h === null || h === undefined ? "" : String(h))),
+  };
 }

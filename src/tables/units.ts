@@ -10,7 +10,9 @@ import { CACO3_GRAMS_PER_EQUIVALENT } from "../chemistry/alkalinity";
 export type TemperatureScale = "C" | "F" | "K";
 
 /** °C from a reading on each scale: °F (x − 32)·5/9; K x − 273.15 (ITS-90 definitions, common practice). */
-export const TEMPERATURE_SCALES: Readonly<Record<TemperatureScale, { readonly words: string; readonly toCelsius: (x: number) => number }>> = {
+export const TEMPERATURE_SCALES: Readonly<
+  Record<TemperatureScale, { readonly words: string; readonly toCelsius: (x: number) => number }>
+> = {
   C: { words: "°C", toCelsius: (x) => x },
   F: { words: "°F", toCelsius: (x) => ((x - 32) * 5) / 9 },
   K: { words: "K", toCelsius: (x) => x - 273.15 },
@@ -32,7 +34,19 @@ export const POTENTIAL_UNITS: Readonly<Record<PotentialUnit, number>> = { V: 1, 
  * orthophosphate mg/L as PO4 or as P,
  * mmol/L, µmol/L, or mol/kg.
  */
-export type WaterUnit = "mg/L CaCO3" | "meq/L" | "mg/L" | "ug/L" | "mmol/L" | "umol/L" | "mol/kg" | "mg/L SO4" | "mg/L S" | "mg/L C" | "mg/L PO4" | "mg/L P";
+export type WaterUnit =
+  | "mg/L CaCO3"
+  | "meq/L"
+  | "mg/L"
+  | "ug/L"
+  | "mmol/L"
+  | "umol/L"
+  | "mol/kg"
+  | "mg/L SO4"
+  | "mg/L S"
+  | "mg/L C"
+  | "mg/L PO4"
+  | "mg/L P";
 
 /** Parts of a formula whose molar mass a unit uses: { S: 1, O: 4 } for sulfate. */
 export type FormulaParts = Readonly<Record<string, number>>;

@@ -74,7 +74,8 @@ export class ExcelAdapter implements HostAdapter {
 
   constructor(options: ExcelAdapterOptions = {}) {
     this.excel = options.excel ?? (Excel as unknown as ExcelApi);
-    this.requirements = options.requirements ?? (typeof Office !== "undefined" ? (Office.context.requirements as Requirements) : null);
+    this.requirements =
+      options.requirements ?? (typeof Office !== "undefined" ? (Office.context.requirements as Requirements) : null);
     this.settings = options.settings ?? (Office.context.document.settings as unknown as SettingsStore);
     this.debounceMs = options.debounceMs ?? 300;
     this.headerSearchRows = options.headerSearchRows ?? 20;
@@ -89,7 +90,9 @@ export class ExcelAdapter implements HostAdapter {
     this.onTable = onTable;
     this.onStatus = onStatus;
     if (!this.supports(READ_SET)) {
-      onStatus(`This Excel does not offer ExcelApi ${READ_SET}, which the pane needs to read the selected rows. Update Excel, or open the pane's page in a browser and paste the rows.`);
+      onStatus(
+        `This Excel does not offer ExcelApi ${READ_SET}, which the pane needs to read the selected rows. Update Excel, or open the pane's page in a browser and paste the rows.`,
+      );
       return;
     }
     await this.excel.run(async (context) => {
@@ -112,7 +115,9 @@ export class ExcelAdapter implements HostAdapter {
     if (this.timer !== undefined) clearTimeout(this.timer);
     this.timer = setTimeout(() => {
       this.timer = undefined;
-      void this.read().catch((error: unknown) => this.onStatus(`Could not read the selection: ${(error as Error).message}`));
+      void this.read().catch((error: unknown) =>
+        this.onStatus(`Could not read the selection: ${(error as Error).message}`),
+      );
     }, this.debounceMs);
   }
 
@@ -137,8 +142,16 @@ export class ExcelAdapter implements HostAdapter {
       await context.sync();
       if (used.isNullObject) return { empty: true as const };
       block = used;
-      const where = { sheet: sheet.name, address: block.address, rowIndex: block.rowIndex, columnIndex: block.columnIndex, rowCount: block.rowCount, columnCount: block.columnCount };
-      if (this.last && !this.dirty && this.last.sheet === where.sheet && this.last.address === where.address) return null; // same block, nothing edited
+      const where = {
+        sheet: sheet.name,
+        address: block.address,
+        rowIndex: block.rowIndex,
+        columnIndex: block.columnIndex,
+        rowCount: block.rowCount,
+        columnCount: block.columnCount,
+      };
+      if (this.last && !this.dirty && this.last.sheet === where.sheet && this.last.address === where.address)
+        return null; // same block, nothing edited
       block.load("values");
       let above: Excel.Range | undefined;
       if (where.rowIndex > 0) {
@@ -148,16 +161,29 @@ export class ExcelAdapter implements HostAdapter {
       }
       await context.sync();
       this.valueReads++;
-      return { where, values: block.values as unknown[][], above: above ? (above.values as unknown[][]) : undefined, tableName: table ? table.name : "" };
+      return {
+        where,
+        values: block.values as unknown[][],
+        above: above ? (above.values as unknown[][]) : undefined,
+        tableName: table ? table.name : "",
+      };
     });
     if (!result) return;
     if ("empty" in result) {
-      this.onStatus("The selection holds no data: select the rows of the log (with their header row) or one cell inside them.");
+      this.onStatus(
+        "The selection holds no data: select the rows of the log (with their header row) or one cell inside them.",
+      );
       return;
     }
     this.dirty = false;
     const signature = JSON.stringify(result.values);
-    if (this.last && this.last.address === result.where.address && this.last.sheet === result.where.sheet && this.last.signature === signature) return;
+    if (
+      this.last &&
+      this.last.address === result.where.address &&
+      this.last.sheet === result.where.sheet &&
+      this.last.signature === signature
+    )
+      return;
     this.last = { ...result.where, signature };
     const rowNumbers = result.values.map((_, i) => result.where.rowIndex + i + 1);
     const source = `${result.tableName ? `table ${result.tableName}, ` : ""}${result.where.address}`;
@@ -182,17 +208,28 @@ export class ExcelAdapter implements HostAdapter {
 
   async insertPicture(picture: PictureRequest): Promise<void> {
     if (!this.supports(SHAPES_SET)) {
-      throw new Error(`inserting pictures needs ExcelApi ${SHAPES_SET} (shapes), which this Excel does not offer; use Download PNG and insert it by hand`);
+      throw new Error(
+        `inserting pictures needs ExcelApi ${SHAPES_SET} (shapes), which this Excel does not offer; use Download PNG and insert it by hand`,
+      );
     }
     const block = this.last;
     await this.excel.run(async (context) => {
-      const sheet = block ? context.workbook.worksheets.getItem(block.sheet) : context.workbook.worksheets.getActiveWorksheet();
+      const sheet = block
+        ? context.workbook.worksheets.getItem(block.sheet)
+        : context.workbook.worksheets.getActiveWorksheet();
       // the picture and caption inserted before on this sheet are replaced, not piled up
       const previous = [PICTURE_NAME, CAPTION_NAME].map((name) => sheet.shapes.getItemOrNullObject(name));
       for (const shape of previous) shape.load("isNullObject");
       await context.sync();
       for (const shape of previous) if (!shape.isNullObject) shape.delete();
-      const anchor = block ? sheet.getRangeByIndexes(block.rowIndex, block.columnIndex, Math.max(1, block.rowCount), Math.max(1, block.columnCount)) : context.workbook.getSelectedRange();
+      const anchor = block
+        ? sheet.getRangeByIndexes(
+            block.rowIndex,
+            block.columnIndex,
+            Math.max(1, block.rowCount),
+            Math.max(1, block.columnCount),
+          )
+        : context.workbook.getSelectedRange();
       anchor.load("left,top,width");
       await context.sync();
       const width = picture.widthPx * POINTS_PER_PIXEL;

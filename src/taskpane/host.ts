@@ -17,7 +17,9 @@ export interface PaneSettings {
    * Ligand totals as typed (text, blank = absent) and the header of a column chosen instead; `typed` records that
    * the user chose the typed total over a column found by its header.
    */
-  water?: Partial<Record<"carbonate" | "chloride" | "sulfur" | "phosphate", { total?: string; column?: string; typed?: boolean }>>;
+  water?: Partial<
+    Record<"carbonate" | "chloride" | "sulfur" | "phosphate", { total?: string; column?: string; typed?: boolean }>
+  >;
 }
 
 export interface PictureRequest {

@@ -17,13 +17,21 @@ import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
 import type { Database } from "../chemistry/database";
 import { hasLigands, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
-import { alkalinityFactor, isAlkalinityUnit, molalFactor, readNumber, type WaterColumn, type WaterColumnRole } from "../tables";
+import {
+  alkalinityFactor,
+  isAlkalinityUnit,
+  molalFactor,
+  readNumber,
+  type WaterColumn,
+  type WaterColumnRole,
+} from "../tables";
 import { formatTotals, LIGAND_WORDS } from "../diagram/water-words";
 
 export { formatTotals };
 
 /** Where each ligand's total comes from. */
-export type LigandSource = { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: WaterColumn };
+export type LigandSource =
+  { readonly kind: "typed"; readonly total: number | null } | { readonly kind: "column"; readonly column: WaterColumn };
 
 export type WaterSettings = Readonly<Record<LigandName, LigandSource>>;
 
@@ -36,7 +44,12 @@ export const PURE_WATER: WaterSettings = {
 };
 
 /** The column each ligand can be read from. */
-export const LIGAND_COLUMN: Readonly<Record<LigandName, WaterColumnRole>> = { carbonate: "alkalinity", chloride: "chloride", sulfur: "sulfate", phosphate: "phosphate" };
+export const LIGAND_COLUMN: Readonly<Record<LigandName, WaterColumnRole>> = {
+  carbonate: "alkalinity",
+  chloride: "chloride",
+  sulfur: "sulfate",
+  phosphate: "phosphate",
+};
 
 /** A row's value for one ligand: a total in mol/kg, or why none could be read. */
 export type RowTotal = number | { readonly problem: string };
@@ -67,19 +80,33 @@ function molarMass(db: Database, parts: Record<string, number>): number {
 }
 
 /** The ion a ligand column in plain mass units weighs (orthophosphate columns say as PO4 or as P). */
-const OWN_ION: Readonly<Record<LigandName, Record<string, number>>> = { carbonate: { C: 1 }, chloride: { Cl: 1 }, sulfur: { S: 1, O: 4 }, phosphate: { P: 1, O: 4 } };
+const OWN_ION: Readonly<Record<LigandName, Record<string, number>>> = {
+  carbonate: { C: 1 },
+  chloride: { Cl: 1 },
+  sulfur: { S: 1, O: 4 },
+  phosphate: { P: 1, O: 4 },
+};
 
 /**
  * One row's total (mol/kg) of `ligand` from its column cell. `pH` and `celsius` are the row's own (alkalinity needs
  * them). Blank, unreadable, negative or out-of-range values give a problem instead.
  */
-export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, cell: unknown, pH: number, celsius: number): RowTotal {
-  if (cell === null || cell === undefined || (typeof cell === "string" && cell.trim() === "")) return { problem: "blank" };
+export function rowTotal(
+  db: Database,
+  ligand: LigandName,
+  column: WaterColumn,
+  cell: unknown,
+  pH: number,
+  celsius: number,
+): RowTotal {
+  if (cell === null || cell === undefined || (typeof cell === "string" && cell.trim() === ""))
+    return { problem: "blank" };
   const value = numberIn(cell);
   if (value === null) return { problem: `"${String(cell).trim().slice(0, 20)}" is not a number` };
   if (value < 0) return { problem: `${value} is negative` };
   let total: number;
-  if (ligand === "carbonate" && !isAlkalinityUnit(column.unit)) total = value * molalFactor(column.unit, { C: 1 }, (parts) => molarMass(db, parts));
+  if (ligand === "carbonate" && !isAlkalinityUnit(column.unit))
+    total = value * molalFactor(column.unit, { C: 1 }, (parts) => molarMass(db, parts));
   else if (ligand === "carbonate") {
     const mgCaCO3 = value * alkalinityFactor(column.unit);
     if (mgCaCO3 === 0) return { problem: "alkalinity is 0" };
@@ -91,7 +118,8 @@ export function rowTotal(db: Database, ligand: LigandName, column: WaterColumn, 
     }
   } else total = value * molalFactor(column.unit, OWN_ION[ligand], (parts) => molarMass(db, parts));
   if (total === 0) return 0;
-  if (!(total > 0 && total <= MAX_LIGAND_TOTAL)) return { problem: `gives ${total.toPrecision(3)} mol/kg, outside 0–${MAX_LIGAND_TOTAL}` };
+  if (!(total > 0 && total <= MAX_LIGAND_TOTAL))
+    return { problem: `gives ${total.toPrecision(3)} mol/kg, outside 0–${MAX_LIGAND_TOTAL}` };
   return roundTotal(total);
 }
 
@@ -167,7 +195,9 @@ export function ligandNames(totals: LigandTotals): string {
  */
 export function waterCaption(water: ResolvedWater): string {
   if (!hasLigands(water.diagram)) return "";
-  const per = water.fromColumns.map((l) => `${LIGAND_WORDS[l]} is the median of the rows' ${LIGAND_COLUMN[l]} values and each sample uses its own`);
+  const per = water.fromColumns.map(
+    (l) => `${LIGAND_WORDS[l]} is the median of the rows' ${LIGAND_COLUMN[l]} values and each sample uses its own`,
+  );
   return (
     `Water: ${formatTotals(water.diagram)}${per.length > 0 ? ` (${per.join("; ")})` : ""}; ` +
     "each ligand is speciated exactly at every point from its total, ideal solution."

@@ -71,7 +71,11 @@ export function nearestMarker(pixels: MarkerPixels, px: number, py: number, maxD
 /** Positions k in pH order (then E), for keyboard stepping. */
 export function keyboardOrder(samples: readonly PlottedSample[], pixels: MarkerPixels): Int32Array {
   const order = Array.from(pixels.index.keys());
-  order.sort((a, b) => samples[pixels.index[a]].pH - samples[pixels.index[b]].pH || samples[pixels.index[a]].E - samples[pixels.index[b]].E);
+  order.sort(
+    (a, b) =>
+      samples[pixels.index[a]].pH - samples[pixels.index[b]].pH ||
+      samples[pixels.index[a]].E - samples[pixels.index[b]].E,
+  );
   return Int32Array.from(order);
 }
 
@@ -136,7 +140,10 @@ export class SampleCanvas {
     canvas.style.height = `${height}px`;
     canvas.tabIndex = 0;
     canvas.setAttribute("role", "img");
-    canvas.setAttribute("aria-label", `${pixels.x.length} samples. Arrow keys step through them in pH order; Enter selects the row.`);
+    canvas.setAttribute(
+      "aria-label",
+      `${pixels.x.length} samples. Arrow keys step through them in pH order; Enter selects the row.`,
+    );
     canvas.dataset.samples = String(pixels.x.length);
     const ctx = canvas.getContext("2d");
     if (ctx) {
@@ -186,11 +193,19 @@ export class SampleCanvas {
   }
 
   private key(event: KeyboardEvent): void {
-    const moves: Record<string, number> = { ArrowRight: 1, ArrowDown: 1, ArrowLeft: -1, ArrowUp: -1, PageDown: 50, PageUp: -50 };
+    const moves: Record<string, number> = {
+      ArrowRight: 1,
+      ArrowDown: 1,
+      ArrowLeft: -1,
+      ArrowUp: -1,
+      PageDown: 50,
+      PageUp: -50,
+    };
     if (event.key in moves) this.step(this.current + moves[event.key]);
     else if (event.key === "Home") this.step(0);
     else if (event.key === "End") this.step(this.order.length - 1);
-    else if ((event.key === "Enter" || event.key === " ") && this.current >= 0 && this.pixels) this.events.choose(this.pixels.index[this.order[this.current]]);
+    else if ((event.key === "Enter" || event.key === " ") && this.current >= 0 && this.pixels)
+      this.events.choose(this.pixels.index[this.order[this.current]]);
     else return;
     event.preventDefault();
   }

@@ -112,7 +112,8 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     const reasons: string[] = [];
     const pH = readNumber(cell(row, mapping.pH));
     const reading = readNumber(cell(row, mapping.potential));
-    const temperature = mapping.temperature >= 0 ? readNumber(cell(row, mapping.temperature)) : ({ blank: true } as Parsed);
+    const temperature =
+      mapping.temperature >= 0 ? readNumber(cell(row, mapping.temperature)) : ({ blank: true } as Parsed);
     if ("blank" in pH) reasons.push("pH is blank");
     else if ("error" in pH) reasons.push(`pH ${pH.error}`);
     else if (pH.value < PH_RANGE[0] || pH.value > PH_RANGE[1]) reasons.push(`pH ${pH.value} is outside −2…16`);
@@ -123,14 +124,19 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     if ("error" in temperature) reasons.push(`temperature ${temperature.error}`);
     else if ("value" in temperature) {
       celsius = toCelsius(temperature.value, options.temperatureUnit);
-      if (celsius < MIN_CELSIUS || celsius > MAX_CELSIUS) reasons.push(`temperature ${temperature.value} °${options.temperatureUnit} is outside ${MIN_CELSIUS}…${MAX_CELSIUS} °C`);
+      if (celsius < MIN_CELSIUS || celsius > MAX_CELSIUS)
+        reasons.push(
+          `temperature ${temperature.value} °${options.temperatureUnit} is outside ${MIN_CELSIUS}…${MAX_CELSIUS} °C`,
+        );
       else hasTemperature = true;
     }
     let eSHE = NaN;
     if ("value" in reading && "value" in pH && reasons.length === 0) {
       eSHE = reading.value * factor + electrodes.potential(electrode, celsius, pH.value);
       if (eSHE < E_RANGE[0] || eSHE > E_RANGE[1]) {
-        reasons.push(`potential ${reading.value} ${options.unit} is ${eSHE.toFixed(2)} V vs SHE, outside −3…+3 V (is the unit right?)`);
+        reasons.push(
+          `potential ${reading.value} ${options.unit} is ${eSHE.toFixed(2)} V vs SHE, outside −3…+3 V (is the unit right?)`,
+        );
       }
     }
     if (reasons.length > 0 || !("value" in pH)) {
@@ -139,15 +145,25 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
     }
     const idCell = cell(row, mapping.id);
     const siteCell = cell(row, mapping.site);
-    const id = [idCell, siteCell].filter((c) => c !== undefined && c !== null && String(c).trim() !== "").map((c) => String(c).trim())[0] ?? "";
+    const id =
+      [idCell, siteCell]
+        .filter((c) => c !== undefined && c !== null && String(c).trim() !== "")
+        .map((c) => String(c).trim())[0] ?? "";
     const dissolved = readNumber(cell(row, mapping.dissolved));
-    samples.push({ row: rowNumber, id, pH: pH.value, eSHE, dissolved: "value" in dissolved ? dissolved.value : undefined });
+    samples.push({
+      row: rowNumber,
+      id,
+      pH: pH.value,
+      eSHE,
+      dissolved: "value" in dissolved ? dissolved.value : undefined,
+    });
     indices.push(i);
     if (hasTemperature) temperatures.push(celsius);
     if (waterColumns.length === 0) rowTotals.push(NO_TOTALS);
     else {
       const totals: RowTotals = {};
-      for (const [ligand, column] of waterColumns) totals[ligand] = rowTotal(db!, ligand, column, cell(row, column.index), pH.value, celsius);
+      for (const [ligand, column] of waterColumns)
+        totals[ligand] = rowTotal(db!, ligand, column, cell(row, column.index), pH.value, celsius);
       rowTotals.push(totals);
     }
   });
@@ -167,7 +183,8 @@ export function tableFromBlock(
 ): SampleTable {
   const text = (row: readonly unknown[]) => row.map((c) => (c === null || c === undefined ? "" : String(c).trim()));
   const at = findHeaderRow(cells);
-  if (at >= 0) return { headers: text(cells[at]), rows: cells.slice(at + 1), rowNumbers: rowNumbers.slice(at + 1), source };
+  if (at >= 0)
+    return { headers: text(cells[at]), rows: cells.slice(at + 1), rowNumbers: rowNumbers.slice(at + 1), source };
   if (headersAbove && headersAbove.length > 0) {
     const above = findHeaderRow(headersAbove, headersAbove.length);
     if (above >= 0) return { headers: text(headersAbove[above]), rows: cells, rowNumbers, source };

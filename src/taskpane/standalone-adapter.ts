@@ -53,7 +53,9 @@ export class StandaloneAdapter implements HostAdapter {
         onStatus(`Could not load the demo data: ${(error as Error).message}`);
       }
     });
-    onStatus("Paste a table (with a header row: pH, potential, optionally temperature and sample id), open a CSV file, or load the demo data.");
+    onStatus(
+      "Paste a table (with a header row: pH, potential, optionally temperature and sample id), open a CSV file, or load the demo data.",
+    );
   }
 
   loadSettings(): PaneSettings | null {

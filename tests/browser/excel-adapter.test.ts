@@ -24,7 +24,10 @@ async function started(workbook: FakeWorkbook) {
   const tables: SampleTable[] = [];
   const status: string[] = [];
   const adapter = new ExcelAdapter({ excel: workbook.excel as never, settings: workbook.settings, debounceMs: 300 });
-  await adapter.start((t) => tables.push(t), (s) => status.push(s));
+  await adapter.start(
+    (t) => tables.push(t),
+    (s) => status.push(s),
+  );
   return { adapter, tables, status };
 }
 
@@ -33,7 +36,10 @@ describe("Excel adapter", () => {
   afterEach(() => vi.useRealTimers());
 
   it("reads the region around a selected cell and finds the header row below a title", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 4, col: 2, rows: 1, cols: 1 };
     const { tables } = await started(workbook);
     expect(tables).toHaveLength(1);
@@ -46,7 +52,10 @@ describe("Excel adapter", () => {
   });
 
   it("takes the header from above when only data rows are selected", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 3, cols: 5 };
     const { tables } = await started(workbook);
     expect(tables[0].headers[2]).toBe("pH (field)");
@@ -55,7 +64,12 @@ describe("Excel adapter", () => {
   });
 
   it("reads the whole Excel table the selection sits in", async () => {
-    const cells = [["Site", "pH", "Eh (V)", "T (C)"], ["Well 3", 6.9, 0.31, 11], ["Well 4", 7.3, 0.28, 12], ["Well 5", 8.0, -0.05, 10]];
+    const cells = [
+      ["Site", "pH", "Eh (V)", "T (C)"],
+      ["Well 3", 6.9, 0.31, 11],
+      ["Well 4", 7.3, 0.28, 12],
+      ["Well 5", 8.0, -0.05, 10],
+    ];
     const workbook = new FakeWorkbook("Wells", cells);
     workbook.tables.push({ name: "WellLog", sheet: "Wells", row: 0, col: 0, rows: 4, cols: 4 });
     workbook.selection = { sheet: "Wells", row: 2, col: 1, rows: 1, cols: 1 };
@@ -66,7 +80,10 @@ describe("Excel adapter", () => {
   });
 
   it("mV and V readings, blank and unreadable rows", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 1, cols: 1 };
     const { tables } = await started(workbook);
     const { mapping } = matchHeaders(tables[0].headers);
@@ -85,7 +102,10 @@ describe("Excel adapter", () => {
   });
 
   it("follows selection changes once per burst, and does not re-read an unchanged block", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 1, cols: 1 };
     const { tables } = await started(workbook);
     expect(workbook.valueReads).toBeGreaterThan(0);
@@ -116,7 +136,10 @@ describe("Excel adapter", () => {
   });
 
   it("selects a sample's row without re-reading the pane's own selection", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 4, cols: 5 };
     const { adapter, tables } = await started(workbook);
     await adapter.selectRow(6);
@@ -126,34 +149,65 @@ describe("Excel adapter", () => {
   });
 
   it("remembers the column mapping and scale in the workbook's settings", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     const { adapter } = await started(workbook);
     expect(adapter.loadSettings()).toBeNull();
-    await adapter.saveSettings({ columns: { potential: "ORP (mV) vs Ag/AgCl sat", dissolved: "" }, electrode: "AgCl-sat", unit: "mV" });
+    await adapter.saveSettings({
+      columns: { potential: "ORP (mV) vs Ag/AgCl sat", dissolved: "" },
+      electrode: "AgCl-sat",
+      unit: "mV",
+    });
     expect(workbook.saves).toBe(1);
-    expect(workbook.settingsStore.get(SETTINGS_KEY)).toEqual({ columns: { potential: "ORP (mV) vs Ag/AgCl sat", dissolved: "" }, electrode: "AgCl-sat", unit: "mV" });
+    expect(workbook.settingsStore.get(SETTINGS_KEY)).toEqual({
+      columns: { potential: "ORP (mV) vs Ag/AgCl sat", dissolved: "" },
+      electrode: "AgCl-sat",
+      unit: "mV",
+    });
     const again = new ExcelAdapter({ excel: workbook.excel as never, settings: workbook.settings });
     expect(again.loadSettings()?.columns?.potential).toBe("ORP (mV) vs Ag/AgCl sat");
   });
 
   it("inserts the picture beside the data with its caption", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 4, cols: 5 };
     const { adapter } = await started(workbook);
-    await adapter.insertPicture({ pngBase64: "iVBORw0KGgo=", widthPx: 800, heightPx: 600, caption: "Iron in water at 13 °C, activity 10⁻⁶, mV vs AgCl-sat. Samples: Log!A4:E7" });
+    await adapter.insertPicture({
+      pngBase64: "iVBORw0KGgo=",
+      widthPx: 800,
+      heightPx: 600,
+      caption: "Iron in water at 13 °C, activity 10⁻⁶, mV vs AgCl-sat. Samples: Log!A4:E7",
+    });
     const [image, caption] = workbook.shapes;
-    expect(image).toMatchObject({ kind: "image", content: "iVBORw0KGgo=", left: 5 * 64 + 12, top: 3 * 15, width: 600, height: 450, lockAspectRatio: true });
+    expect(image).toMatchObject({
+      kind: "image",
+      content: "iVBORw0KGgo=",
+      left: 5 * 64 + 12,
+      top: 3 * 15,
+      width: 600,
+      height: 450,
+      lockAspectRatio: true,
+    });
     expect(image.altTextDescription).toMatch(/Iron in water/);
     expect(caption).toMatchObject({ kind: "textbox", left: 5 * 64 + 12, top: 3 * 15 + 450 + 4, width: 600 });
     expect(caption.content).toMatch(/AgCl-sat/);
   });
 
   it("replaces the picture and caption it inserted before instead of adding more", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 4, cols: 5 };
     workbook.shapes.push({ kind: "image", content: "someone else's chart", name: "Chart 1" });
     const { adapter } = await started(workbook);
-    for (const caption of ["first", "second", "third"]) await adapter.insertPicture({ pngBase64: "iVBORw0KGgo=", widthPx: 800, heightPx: 600, caption });
+    for (const caption of ["first", "second", "third"])
+      await adapter.insertPicture({ pngBase64: "iVBORw0KGgo=", widthPx: 800, heightPx: 600, caption });
     expect(workbook.shapes.map((x) => [x.kind, x.name])).toEqual([
       ["image", "Chart 1"],
       ["image", "Redox Cells diagram"],
@@ -164,7 +218,10 @@ describe("Excel adapter", () => {
   });
 
   it("reads only the used part of a selection of whole columns", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 0, col: 0, rows: 1_048_576, cols: 5 };
     const { tables } = await started(workbook);
     expect(workbook.largestRead).toBeLessThanOrEqual(LOG.length * 5);
@@ -173,7 +230,10 @@ describe("Excel adapter", () => {
   });
 
   it("re-reads once after a burst of edits", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     workbook.selection = { sheet: "Log", row: 3, col: 0, rows: 4, cols: 5 };
     const { tables } = await started(workbook);
     const reads = workbook.valueReads;
@@ -185,16 +245,31 @@ describe("Excel adapter", () => {
   });
 
   it("says clearly which API set is missing", async () => {
-    const workbook = new FakeWorkbook("Log", LOG.map((r) => [...r]));
+    const workbook = new FakeWorkbook(
+      "Log",
+      LOG.map((r) => [...r]),
+    );
     const old = { isSetSupported: (_name: string, version?: string) => Number(version) < 1.4 };
     const status: string[] = [];
     const tables: SampleTable[] = [];
-    await new ExcelAdapter({ excel: workbook.excel as never, settings: workbook.settings, requirements: old }).start((t) => tables.push(t), (x) => status.push(x));
+    await new ExcelAdapter({ excel: workbook.excel as never, settings: workbook.settings, requirements: old }).start(
+      (t) => tables.push(t),
+      (x) => status.push(x),
+    );
     expect(tables).toHaveLength(0);
     expect(status.join(" ")).toMatch(/ExcelApi 1\.4/);
-    const noShapes = new ExcelAdapter({ excel: workbook.excel as never, settings: workbook.settings, requirements: { isSetSupported: (_n, v) => Number(v) < 1.9 } });
-    await noShapes.start(() => {}, () => {});
-    await expect(noShapes.insertPicture({ pngBase64: "x", widthPx: 10, heightPx: 10, caption: "" })).rejects.toThrow(/ExcelApi 1\.9.*Download PNG/);
+    const noShapes = new ExcelAdapter({
+      excel: workbook.excel as never,
+      settings: workbook.settings,
+      requirements: { isSetSupported: (_n, v) => Number(v) < 1.9 },
+    });
+    await noShapes.start(
+      () => {},
+      () => {},
+    );
+    await expect(noShapes.insertPicture({ pngBase64: "x", widthPx: 10, heightPx: 10, caption: "" })).rejects.toThrow(
+      /ExcelApi 1\.9.*Download PNG/,
+    );
     expect(workbook.shapes).toHaveLength(0);
   });
 });

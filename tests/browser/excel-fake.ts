@@ -80,12 +80,16 @@ export class FakeWorkbook {
       get values() {
         workbook.valueReads++;
         workbook.largestRead = Math.max(workbook.largestRead, rows * cols);
-        return Array.from({ length: rows }, (_, r) => Array.from({ length: cols }, (_, c) => cells[row + r]?.[col + c] ?? ""));
+        return Array.from({ length: rows }, (_, r) =>
+          Array.from({ length: cols }, (_, c) => cells[row + r]?.[col + c] ?? ""),
+        );
       },
       worksheet: workbook.worksheet(sheet),
       getTables() {
         const items = workbook.tables
-          .filter((t) => t.sheet === sheet && row >= t.row && row < t.row + t.rows && col >= t.col && col < t.col + t.cols)
+          .filter(
+            (t) => t.sheet === sheet && row >= t.row && row < t.row + t.rows && col >= t.col && col < t.col + t.cols,
+          )
           .map((t) => ({ name: t.name, getRange: () => workbook.range(sheet, t.row, t.col, t.rows, t.cols) }));
         return { load() {}, items };
       },
@@ -102,7 +106,13 @@ export class FakeWorkbook {
       select() {
         workbook.userSelects(row, col, rows, cols, sheet);
       },
-      getIntersectionOrNullObject(other: { rowIndex: number; columnIndex: number; rowCount: number; columnCount: number; isNullObject?: boolean }) {
+      getIntersectionOrNullObject(other: {
+        rowIndex: number;
+        columnIndex: number;
+        rowCount: number;
+        columnCount: number;
+        isNullObject?: boolean;
+      }) {
         const top = Math.max(row, other.rowIndex);
         const left = Math.max(col, other.columnIndex);
         const bottom = Math.min(row + rows, other.rowIndex + other.rowCount);
@@ -122,20 +132,33 @@ export class FakeWorkbook {
     return {
       name,
       load() {},
-      getRangeByIndexes: (row: number, col: number, rows: number, cols: number) => workbook.range(name, row, col, rows, cols),
+      getRangeByIndexes: (row: number, col: number, rows: number, cols: number) =>
+        workbook.range(name, row, col, rows, cols),
       getUsedRange: () => {
         // the block from A1 to the last non-blank cell (Excel's used range, values only)
         const cells = workbook.sheets.get(name)!;
         const filled = (v: unknown) => v !== "" && v !== null && v !== undefined;
         const lastRow = cells.reduce<number>((last, r, i) => (r.some(filled) ? i : last), -1);
-        const lastCol = cells.reduce<number>((last, r) => Math.max(last, r.reduce<number>((c, v, j) => (filled(v) ? j : c), -1)), -1);
-        if (lastRow < 0) return { load() {}, isNullObject: true, rowIndex: 0, columnIndex: 0, rowCount: 0, columnCount: 0 };
+        const lastCol = cells.reduce<number>(
+          (last, r) =>
+            Math.max(
+              last,
+              r.reduce<number>((c, v, j) => (filled(v) ? j : c), -1),
+            ),
+          -1,
+        );
+        if (lastRow < 0)
+          return { load() {}, isNullObject: true, rowIndex: 0, columnIndex: 0, rowCount: 0, columnCount: 0 };
         return workbook.range(name, 0, 0, lastRow + 1, lastCol + 1);
       },
       shapes: {
         getItemOrNullObject(shapeName: string) {
           const shape = workbook.shapes.find((x) => x.name === shapeName);
-          return { load() {}, isNullObject: !shape, delete: () => void (workbook.shapes = workbook.shapes.filter((x) => x !== shape)) };
+          return {
+            load() {},
+            isNullObject: !shape,
+            delete: () => void (workbook.shapes = workbook.shapes.filter((x) => x !== shape)),
+          };
         },
         addImage(base64: string) {
           const shape: FakeShape = { kind: "image", content: base64 };

@@ -39,7 +39,12 @@ afterAll(async () => {
   await pane?.close();
 });
 
-const hex = (rgb: string) => "#" + (rgb.match(/\d+/g) ?? []).slice(0, 3).map((v) => Number(v).toString(16).padStart(2, "0")).join("");
+const hex = (rgb: string) =>
+  "#" +
+  (rgb.match(/\d+/g) ?? [])
+    .slice(0, 3)
+    .map((v) => Number(v).toString(16).padStart(2, "0"))
+    .join("");
 
 describe("lead rows of the demo log in a water with carbonate, chloride and sulfur", () => {
   beforeAll(async () => {
@@ -49,10 +54,15 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
     await page.waitForSelector("#diagram .rc-sample");
     await page.selectOption("#metal", "Pb");
     await page.click("#ligands summary"); // the water settings are folded away under the diagram
-    const alkalinity = await page.$$eval("#carbonate-source option", (options) => options.find((o) => /alkalinity column/.test(o.textContent ?? ""))?.getAttribute("value"));
+    const alkalinity = await page.$$eval("#carbonate-source option", (options) =>
+      options.find((o) => /alkalinity column/.test(o.textContent ?? ""))?.getAttribute("value"),
+    );
     expect(alkalinity).toBeTruthy();
     await page.selectOption("#carbonate-source", alkalinity!);
-    for (const [id, value] of [["#chloride-total", String(CHLORIDE)], ["#sulfur-total", String(SULFUR)]]) {
+    for (const [id, value] of [
+      ["#chloride-total", String(CHLORIDE)],
+      ["#sulfur-total", String(SULFUR)],
+    ]) {
       await page.fill(id, value);
       await page.locator(id).blur(); // the input's change event redraws the diagram
     }
@@ -71,7 +81,11 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
     const rows = parsed.rows.slice(1).map((row, i) => ({ line: parsed.lines[i + 1], row }));
     const byLine = new Map(rows.map((r) => [r.line, r.row]));
     const markers = await page.$$eval("#diagram .rc-sample", (nodes) =>
-      nodes.map((n) => ({ row: Number(n.getAttribute("data-row")), regime: n.getAttribute("data-regime"), fill: getComputedStyle(n).fill })),
+      nodes.map((n) => ({
+        row: Number(n.getAttribute("data-row")),
+        regime: n.getAttribute("data-regime"),
+        fill: getComputedStyle(n).fill,
+      })),
     );
     expect(markers.length).toBeGreaterThan(15);
 
@@ -100,14 +114,27 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
     const svg = await page.evaluate(() => {
       const s = document.querySelector("#diagram svg")!;
       const a = (n: string) => Number(s.getAttribute(n));
-      return { window: { pHMin: a("data-ph-min"), pHMax: a("data-ph-max"), eMin: a("data-e-min"), eMax: a("data-e-max") } };
+      return {
+        window: { pHMin: a("data-ph-min"), pHMax: a("data-ph-max"), eMin: a("data-e-min"), eMax: a("data-e-max") },
+      };
     });
-    const system = buildLigandSystem(getDatabase(), "Pb", { celsius: c.celsius, activity: c.activity }, { carbonate: diagramDic, chloride: CHLORIDE, sulfur: SULFUR });
+    const system = buildLigandSystem(
+      getDatabase(),
+      "Pb",
+      { celsius: c.celsius, activity: c.activity },
+      { carbonate: diagramDic, chloride: CHLORIDE, sulfur: SULFUR },
+    );
     const regions = shownRegions(system, svg.window, displayScale("AgCl-sat", "mV", c.celsius));
     // every species is labelled in place, numbered, or (too small to mark) named in the key
-    const labels = new Set(await page.$$eval("#diagram text.rc-label, #region-key li", (nodes) => nodes.map((n) => n.getAttribute("data-formula"))));
+    const labels = new Set(
+      await page.$$eval("#diagram text.rc-label, #region-key li", (nodes) =>
+        nodes.map((n) => n.getAttribute("data-formula")),
+      ),
+    );
     for (const r of regions) expect(labels.has(r.formula), `label of ${r.formula}`).toBe(true);
-    const regimes = new Set(await page.$$eval("#diagram .rc-region", (nodes) => nodes.map((n) => n.getAttribute("data-formula"))));
+    const regimes = new Set(
+      await page.$$eval("#diagram .rc-region", (nodes) => nodes.map((n) => n.getAttribute("data-formula"))),
+    );
     expect(regimes).toEqual(new Set(regions.map((r) => r.formula)));
   });
 
@@ -136,14 +163,23 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
 describe("a large set on the canvas layer", () => {
   const count = CANVAS_SAMPLES + 500;
   // spread over the whole default window so that many markers stand alone
-  const inputs = syntheticSamples(count, 11).map((s) => ({ ...s, pH: -1.5 + ((s.pH - 4) / 6) * 17, eSHE: -1.8 + ((s.eSHE + 0.6) / 1.4) * 3.6 }));
+  const inputs = syntheticSamples(count, 11).map((s) => ({
+    ...s,
+    pH: -1.5 + ((s.pH - 4) / 6) * 17,
+    eSHE: -1.8 + ((s.eSHE + 0.6) / 1.4) * 3.6,
+  }));
 
   beforeAll(async () => {
     await page.evaluate(() => localStorage.clear()); // the first part chose lead, mV and Ag/AgCl; start afresh
     await pane.reload();
     await page.click("#paste-details summary");
-    const text = ["id,pH,E (V) vs SHE", ...inputs.map((s) => `${s.id},${s.pH.toFixed(3)},${s.eSHE.toFixed(4)}`)].join("\n");
-    await page.evaluate((value) => ((document.getElementById("paste-input") as HTMLTextAreaElement).value = value), text);
+    const text = ["id,pH,E (V) vs SHE", ...inputs.map((s) => `${s.id},${s.pH.toFixed(3)},${s.eSHE.toFixed(4)}`)].join(
+      "\n",
+    );
+    await page.evaluate(
+      (value) => ((document.getElementById("paste-input") as HTMLTextAreaElement).value = value),
+      text,
+    );
     await page.click("#draw-pasted");
     await page.waitForSelector("#diagram canvas.rc-sample-canvas");
   });
@@ -159,26 +195,42 @@ describe("a large set on the canvas layer", () => {
     expect(c.painted).toBe(count);
     // read the canvas at the centre of markers with no neighbour within 10 px (no overlap to blur the colour)
     // the test browser runs at device scale 1, so canvas pixels are CSS pixels
-    expect(await page.evaluate(() => (document.querySelector("#diagram canvas") as HTMLCanvasElement).width === Number(document.querySelector("#diagram svg")!.getAttribute("width")))).toBe(true);
-    const pixels = await page.evaluate((points: [number, number][]) => {
-      const svg = document.querySelector("#diagram svg")!;
-      const a = (n: string) => Number(svg.getAttribute(n));
-      const ctx = (document.querySelector("#diagram canvas") as HTMLCanvasElement).getContext("2d")!;
-      const xy = points.map(([pH, e]) => [
-        a("data-plot-left") + ((pH - a("data-ph-min")) / (a("data-ph-max") - a("data-ph-min"))) * a("data-plot-width"),
-        a("data-plot-top") + ((a("data-e-max") - e) / (a("data-e-max") - a("data-e-min"))) * a("data-plot-height"),
-      ]);
-      return xy.map(([x, y], i) => {
-        const alone = xy.every(([u, v], j) => j === i || Math.hypot(u - x, v - y) > 10);
-        const [r, g, b] = ctx.getImageData(Math.floor(x), Math.floor(y), 1, 1).data;
-        return { alone, rgb: `rgb(${r}, ${g}, ${b})` };
-      });
-    }, inputs.map((s) => [Number(s.pH.toFixed(3)), Number(s.eSHE.toFixed(4))] as [number, number]));
+    expect(
+      await page.evaluate(
+        () =>
+          (document.querySelector("#diagram canvas") as HTMLCanvasElement).width ===
+          Number(document.querySelector("#diagram svg")!.getAttribute("width")),
+      ),
+    ).toBe(true);
+    const pixels = await page.evaluate(
+      (points: [number, number][]) => {
+        const svg = document.querySelector("#diagram svg")!;
+        const a = (n: string) => Number(svg.getAttribute(n));
+        const ctx = (document.querySelector("#diagram canvas") as HTMLCanvasElement).getContext("2d")!;
+        const xy = points.map(([pH, e]) => [
+          a("data-plot-left") +
+            ((pH - a("data-ph-min")) / (a("data-ph-max") - a("data-ph-min"))) * a("data-plot-width"),
+          a("data-plot-top") + ((a("data-e-max") - e) / (a("data-e-max") - a("data-e-min"))) * a("data-plot-height"),
+        ]);
+        return xy.map(([x, y], i) => {
+          const alone = xy.every(([u, v], j) => j === i || Math.hypot(u - x, v - y) > 10);
+          const [r, g, b] = ctx.getImageData(Math.floor(x), Math.floor(y), 1, 1).data;
+          return { alone, rgb: `rgb(${r}, ${g}, ${b})` };
+        });
+      },
+      inputs.map((s) => [Number(s.pH.toFixed(3)), Number(s.eSHE.toFixed(4))] as [number, number]),
+    );
     let checked = 0;
     pixels.forEach((p, i) => {
       if (!p.alone) return;
       const s = inputs[i];
-      const regime = regimeAt(c.metal, Number(s.pH.toFixed(3)), Number(s.eSHE.toFixed(4)), c.celsius, c.activity)[0][0] as keyof typeof MARKER_FILLS;
+      const regime = regimeAt(
+        c.metal,
+        Number(s.pH.toFixed(3)),
+        Number(s.eSHE.toFixed(4)),
+        c.celsius,
+        c.activity,
+      )[0][0] as keyof typeof MARKER_FILLS;
       expect(hex(p.rgb), `sample ${s.id}`).toBe(MARKER_FILLS[regime]);
       checked++;
     });
@@ -213,18 +265,25 @@ describe("a log with a conductivity column (fixture, invented)", () => {
     await pane.reload();
     await page.click("#paste-details summary");
     const text = ["id,pH,Eh (V),Conductivity (µS/cm)", "A,7,-0.307,1000", "B,7,-0.307,", "C,7.5,-0.2,350"].join("\n");
-    await page.evaluate((value) => ((document.getElementById("paste-input") as HTMLTextAreaElement).value = value), text);
+    await page.evaluate(
+      (value) => ((document.getElementById("paste-input") as HTMLTextAreaElement).value = value),
+      text,
+    );
     await page.click("#draw-pasted");
     await page.waitForSelector("#diagram .rc-sample");
     await page.selectOption("#metal", "Pb");
-    await page.waitForFunction(() => /Ionic strength/.test(document.querySelector("#diagram-caption")?.textContent ?? ""));
+    await page.waitForFunction(() =>
+      /Ionic strength/.test(document.querySelector("#diagram-caption")?.textContent ?? ""),
+    );
   });
 
   it("answers each sample with its own ionic strength, says so in the caption and the hover", async () => {
     const caption = (await page.textContent("#diagram-caption")) ?? "";
     expect(caption).toMatch(/Ionic strength: each sample's own from "Conductivity \(µS\/cm\)"/);
     expect(caption).toMatch(/1 blank row answered without the correction/);
-    const species = await page.$$eval("#diagram .rc-sample", (nodes) => nodes.map((n) => n.getAttribute("data-species")));
+    const species = await page.$$eval("#diagram .rc-sample", (nodes) =>
+      nodes.map((n) => n.getAttribute("data-species")),
+    );
     expect(species.slice(0, 2)).toEqual(["Pb2+", "Pb(s)"]);
     await page.focus("#diagram .rc-samples");
     const texts: string[] = [];

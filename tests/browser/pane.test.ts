@@ -52,7 +52,12 @@ async function controls() {
       activity: Number(value("activity")),
       electrode: value("electrode"),
       unit: value("unit") as "V" | "mV",
-      window: { pHMin: attr("data-ph-min"), pHMax: attr("data-ph-max"), eMin: attr("data-e-min"), eMax: attr("data-e-max") },
+      window: {
+        pHMin: attr("data-ph-min"),
+        pHMax: attr("data-ph-max"),
+        eMin: attr("data-e-min"),
+        eMax: attr("data-e-max"),
+      },
       width: attr("width"),
       height: attr("height"),
       captionLines: -1, // the screen drawing has no caption inside: it is HTML under it
@@ -76,9 +81,15 @@ describe("standalone pane with the demo data pasted", () => {
     const regions = shownRegions(system, c.window, displayScale(c.electrode, c.unit, c.celsius));
     expect(regions.length).toBeGreaterThan(2);
     const labels = await page.$$eval("#diagram text.rc-label", (nodes) =>
-      nodes.map((n) => ({ formula: n.getAttribute("data-formula"), text: n.textContent, key: n.getAttribute("data-key") })),
+      nodes.map((n) => ({
+        formula: n.getAttribute("data-formula"),
+        text: n.textContent,
+        key: n.getAttribute("data-key"),
+      })),
     );
-    const key = await page.$$eval("#region-key li", (nodes) => nodes.map((n) => ({ formula: n.getAttribute("data-formula"), number: n.getAttribute("value") })));
+    const key = await page.$$eval("#region-key li", (nodes) =>
+      nodes.map((n) => ({ formula: n.getAttribute("data-formula"), number: n.getAttribute("value") })),
+    );
     for (const r of regions) {
       const label = labels.find((l) => l.formula === r.formula);
       const listed = key.find((k) => k.formula === r.formula);
@@ -111,7 +122,12 @@ describe("standalone pane with the demo data pasted", () => {
       });
     });
     expect(markers.length).toBeGreaterThan(30);
-    const hex = (rgb: string) => "#" + (rgb.match(/\d+/g) ?? []).slice(0, 3).map((v) => Number(v).toString(16).padStart(2, "0")).join("");
+    const hex = (rgb: string) =>
+      "#" +
+      (rgb.match(/\d+/g) ?? [])
+        .slice(0, 3)
+        .map((v) => Number(v).toString(16).padStart(2, "0"))
+        .join("");
     for (const m of markers) {
       const row = byLine.get(m.row)!;
       expect(row[col("pipe_metal")]).toBe(c.metal);
@@ -145,7 +161,11 @@ describe("standalone pane with the demo data pasted", () => {
     const row = await page.getAttribute("#diagram .rc-sample.rc-current", "data-row");
     await expect
       .poll(() => page.textContent("#point-info"))
-      .toMatch(new RegExp(`row ${row}\\): pH \\d+\\.\\d{2}, reading -?\\d+ mV vs AgCl-sat = -?\\d\\.\\d{3} V vs SHE at [\\d.]+ °C.*; .+, (immunity|passivation|corrosion); water margin`));
+      .toMatch(
+        new RegExp(
+          `row ${row}\\): pH \\d+\\.\\d{2}, reading -?\\d+ mV vs AgCl-sat = -?\\d\\.\\d{3} V vs SHE at [\\d.]+ °C.*; .+, (immunity|passivation|corrosion); water margin`,
+        ),
+      );
   });
 
   it("clears the info line when the metal changes", async () => {

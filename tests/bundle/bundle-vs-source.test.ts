@@ -16,10 +16,36 @@ const row = (...values: unknown[]) => [values];
 
 /** Argument sets per function id: each list is passed as is to both implementations. */
 const CASES: Record<string, Args[]> = {
-  WATERLINE: [[7], [column(0, 7, 14, null, "x")], [7, 60, "H2", 0.21], [row(4, 7), 25, "O2", column(1, 0.21)], [7, 25, "N2"], [7, 120]],
-  WATERMARGIN: [[7, 0.5], [column(2, 7, 12), column(1.5, 0, -1), 25, 0.6], [7, null], [20, 0]],
-  TOSHE: [[0.2, "SCE"], [column(595, null), "AgCl-sat", 7.3, null, "mV"], [612, "SCE"], [column(0.1, 0.2, null), "AgCl-sat", column(10, 25, 40)], [0.1, "RHE", 25, 7], [0.1, "RHE"], [0.1, "Ag/AgCl"], [0.1, "calomel", 90]],
-  FROMSHE: [[0.5, "CSE"], [column(0.5, -0.2), "AgCl-3M", 35], [0.5, "RHE", 25, column(0, 7, 14)], [0.5, "nowhere"]],
+  WATERLINE: [
+    [7],
+    [column(0, 7, 14, null, "x")],
+    [7, 60, "H2", 0.21],
+    [row(4, 7), 25, "O2", column(1, 0.21)],
+    [7, 25, "N2"],
+    [7, 120],
+  ],
+  WATERMARGIN: [
+    [7, 0.5],
+    [column(2, 7, 12), column(1.5, 0, -1), 25, 0.6],
+    [7, null],
+    [20, 0],
+  ],
+  TOSHE: [
+    [0.2, "SCE"],
+    [column(595, null), "AgCl-sat", 7.3, null, "mV"],
+    [612, "SCE"],
+    [column(0.1, 0.2, null), "AgCl-sat", column(10, 25, 40)],
+    [0.1, "RHE", 25, 7],
+    [0.1, "RHE"],
+    [0.1, "Ag/AgCl"],
+    [0.1, "calomel", 90],
+  ],
+  FROMSHE: [
+    [0.5, "CSE"],
+    [column(0.5, -0.2), "AgCl-3M", 35],
+    [0.5, "RHE", 25, column(0, 7, 14)],
+    [0.5, "nowhere"],
+  ],
   PE: [[0.4], [column(0.4, -0.2, null), 60], [true]],
   EH: [[7], [column(7, -3), 10], ["seven"]],
   NEUTRALPH: [[], [column(0, 25, 100)], [101]],
@@ -71,12 +97,35 @@ const CASES: Record<string, Args[]> = {
     ["Zn", 4, 0],
     ["Cu", 9, 0.2, 25, null, null, null, null, null, "furlongs"],
   ],
-  IONICSTRENGTH: [[500, "uS/cm"], [column(200, 400), "mg/L"], [1e6, "uS/cm"], [100, "ppm"]],
+  IONICSTRENGTH: [
+    [500, "uS/cm"],
+    [column(200, 400), "mg/L"],
+    [1e6, "uS/cm"],
+    [100, "ppm"],
+  ],
   SPECIESTABLE: [["Cr"], ["Pb", 60], [column("Fe", "Cu")], ["Xx"]],
-  DIC: [[120, 8], [column(50, 120, null), column(7, 8, 8.3), 10], [50, 3.5], ["lots", 8]],
+  DIC: [
+    [120, 8],
+    [column(50, 120, null), column(7, 8, 8.3), 10],
+    [50, 3.5],
+    ["lots", 8],
+  ],
   ASSESS: [
     ["Fe", 7, 0],
-    [column("Pb", "Fe", null, "Cu"), column(7.02, 8, 7, 9), column(0.81, -0.3, 0, 0.2), column(7.3, 13, 25, null), null, null, null, null, null, null, "ug/L", true],
+    [
+      column("Pb", "Fe", null, "Cu"),
+      column(7.02, 8, 7, 9),
+      column(0.81, -0.3, 0, 0.2),
+      column(7.3, 13, 25, null),
+      null,
+      null,
+      null,
+      null,
+      null,
+      null,
+      "ug/L",
+      true,
+    ],
     ["Pb", 7.2, 0.1, 12, 1e-6, 1.5e-3, 2e-3, 2e-4, null, 0.01, "mg/L", true],
     ["Pb", 7.5, 0.3, 15, 1e-6, 1e-3, 1e-3, null, 1.05e-5, null, "ug/L", true],
     ["Pb", 8, 0.4, 25, 1e-6, 1e-3],
@@ -112,7 +161,9 @@ describe("bundle answers as the sources", () => {
     cases.forEach((args, n) => {
       it(`${id} case ${n + 1}`, () => {
         const fromBundle = bundle.functions.get(id)!(...args) as unknown[][];
-        const fromSource = ((sources as Record<string, unknown>)[id.toLowerCase()] as (...a: unknown[]) => unknown[][])(...args);
+        const fromSource = ((sources as Record<string, unknown>)[id.toLowerCase()] as (...a: unknown[]) => unknown[][])(
+          ...args,
+        );
         expect(fromBundle.map((r) => r.map(comparable))).toEqual(fromSource.map((r) => r.map(comparable)));
       });
     });

@@ -40,7 +40,15 @@ describe("the harness itself", () => {
     expect(resultProblem(new StandInError(undefined as unknown as string))).toMatch(/unknown code/);
     expect(resultProblem([[1], [2, 3]], "matrix")).toMatch(/ragged/);
     expect(resultProblem([], "matrix")).toMatch(/no rows/);
-    expect(resultProblem([[1, ""], ["a", new StandInError("#N/A", "none")]], "matrix")).toBeNull();
+    expect(
+      resultProblem(
+        [
+          [1, ""],
+          ["a", new StandInError("#N/A", "none")],
+        ],
+        "matrix",
+      ),
+    ).toBeNull();
   });
 });
 
@@ -66,7 +74,25 @@ const hostileScalar: fc.Arbitrary<unknown> = fc.oneof(
   fc.double(), // includes NaN, ±Infinity, ±0, subnormals
   fc.integer({ min: -1_000_000, max: 1_000_000 }),
   fc.constantFrom(0, -0, 1, -1, 7, 25, 100, 1e308, -1e308, 5e-324, 1e-300, Number.MAX_SAFE_INTEGER, 2 ** 53 + 1),
-  fc.constantFrom("", " ", "abc", "7", " 7 ", "1e3", "NaN", "Infinity", "-", "#N/A", "TRUE", "Zn", "SHE", "O2", "H2", "ü—☃", "\u0000"),
+  fc.constantFrom(
+    "",
+    " ",
+    "abc",
+    "7",
+    " 7 ",
+    "1e3",
+    "NaN",
+    "Infinity",
+    "-",
+    "#N/A",
+    "TRUE",
+    "Zn",
+    "SHE",
+    "O2",
+    "H2",
+    "ü—☃",
+    "\u0000",
+  ),
   fc.string({ maxLength: 12 }),
   fc.boolean(),
   fc.constantFrom(null, undefined),
@@ -74,9 +100,21 @@ const hostileScalar: fc.Arbitrary<unknown> = fc.oneof(
 
 /** A 2-D range: rectangular, ragged, empty, or of blank cells. */
 const hostileMatrix: fc.Arbitrary<unknown> = fc.oneof(
-  fc.integer({ min: 1, max: 4 }).chain((w) => fc.array(fc.array(hostileScalar, { minLength: w, maxLength: w }), { minLength: 1, maxLength: 4 })),
+  fc
+    .integer({ min: 1, max: 4 })
+    .chain((w) => fc.array(fc.array(hostileScalar, { minLength: w, maxLength: w }), { minLength: 1, maxLength: 4 })),
   fc.array(fc.array(hostileScalar, { maxLength: 4 }), { maxLength: 4 }), // ragged and empty rows
-  fc.constantFrom([], [[]], [[""]], [["", ""], ["", ""]], [[null]], [[undefined]]),
+  fc.constantFrom(
+    [],
+    [[]],
+    [[""]],
+    [
+      ["", ""],
+      ["", ""],
+    ],
+    [[null]],
+    [[undefined]],
+  ),
 );
 
 function argumentFor(p: MetadataParameter): fc.Arbitrary<unknown> {

@@ -90,7 +90,8 @@ export function runInStandInRegistry(code: string, filename = "functions.js") {
   const associations = new Map<string, number>();
   const registry = {
     associate(id: unknown, fn: unknown): void {
-      if (typeof id !== "string" || id === "") throw new TypeError(`associate: id must be a non-empty string, got ${String(id)}`);
+      if (typeof id !== "string" || id === "")
+        throw new TypeError(`associate: id must be a non-empty string, got ${String(id)}`);
       if (typeof fn !== "function") throw new TypeError(`associate: ${id} is not bound to a function`);
       functions.set(id, fn as CustomFunction);
       associations.set(id, (associations.get(id) ?? 0) + 1);
@@ -160,7 +161,10 @@ export function resultProblem(value: unknown, dimensionality: "scalar" | "matrix
 
 export function safeString(value: unknown): string {
   try {
-    return JSON.stringify(value, (_k, v) => (typeof v === "number" && !Number.isFinite(v) ? String(v) : v))?.slice(0, 200) ?? String(value);
+    return (
+      JSON.stringify(value, (_k, v) => (typeof v === "number" && !Number.isFinite(v) ? String(v) : v))?.slice(0, 200) ??
+      String(value)
+    );
   } catch {
     return String(value);
   }
@@ -184,7 +188,11 @@ function containsError(value: unknown): StandInError | null {
  * the formula shows that error (a spilled column fails as a whole); with it, parameters of type `any` receive the
  * error cells in place (here as stand-in errors) and the function answers cell by cell.
  */
-export function callAsSpreadsheet(bundle: Pick<LoadedBundle, "functions" | "metadata">, id: string, args: unknown[]): unknown {
+export function callAsSpreadsheet(
+  bundle: Pick<LoadedBundle, "functions" | "metadata">,
+  id: string,
+  args: unknown[],
+): unknown {
   const meta = bundle.metadata.functions.find((f) => f.id === id);
   const fn = bundle.functions.get(id);
   if (!meta || !fn) throw new Error(`no function ${id}`);

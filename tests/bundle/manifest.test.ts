@@ -19,7 +19,8 @@ const parser = new XMLParser({
   attributeNamePrefix: "@",
   parseTagValue: false,
   trimValues: true,
-  isArray: (name) => ["bt:Image", "bt:Url", "bt:String", "Control", "Group", "Host", "Set", "ExtensionPoint", "Runtime"].includes(name),
+  isArray: (name) =>
+    ["bt:Image", "bt:Url", "bt:String", "Control", "Group", "Host", "Set", "ExtensionPoint", "Runtime"].includes(name),
 });
 const doc = parser.parse(manifestText) as Node;
 const app = doc.OfficeApp as Node;
@@ -51,7 +52,12 @@ const overrides = at(app, "VersionOverrides");
 const workbookHost = (at(overrides, "Hosts", "Host") as Node[] | undefined)?.find((h) => h["@xsi:type"] === "Workbook");
 const resources = at(overrides, "Resources");
 const resourceIds = (kind: string, list: string) =>
-  new Map<string, string>(((at(resources, kind, list) as Node[] | undefined) ?? []).map((n) => [n["@id"] as string, n["@DefaultValue"] as string]));
+  new Map<string, string>(
+    ((at(resources, kind, list) as Node[] | undefined) ?? []).map((n) => [
+      n["@id"] as string,
+      n["@DefaultValue"] as string,
+    ]),
+  );
 const images = resourceIds("bt:Images", "bt:Image");
 const urls = resourceIds("bt:Urls", "bt:Url");
 const shortStrings = resourceIds("bt:ShortStrings", "bt:String");
@@ -88,12 +94,16 @@ describe("manifest.xml is well formed and complete", () => {
   });
 
   it("declares custom functions (script, page, metadata) under the namespace REDOX", () => {
-    const cf = (at(workbookHost, "AllFormFactors", "ExtensionPoint") as Node[]).find((e) => e["@xsi:type"] === "CustomFunctions");
+    const cf = (at(workbookHost, "AllFormFactors", "ExtensionPoint") as Node[]).find(
+      (e) => e["@xsi:type"] === "CustomFunctions",
+    );
     expect(cf).toBeDefined();
     expect(urlOf(at(cf, "Script", "SourceLocation", "@resid"))).toBe(`${DEV_ORIGIN}/functions.js`);
     expect(urlOf(at(cf, "Metadata", "SourceLocation", "@resid"))).toBe(`${DEV_ORIGIN}/functions.json`);
     // Shared runtime: the custom-functions page is the runtime's page.
-    expect(at(cf, "Page", "SourceLocation", "@resid")).toBe((at(workbookHost, "Runtimes", "Runtime") as Node[])[0]["@resid"]);
+    expect(at(cf, "Page", "SourceLocation", "@resid")).toBe(
+      (at(workbookHost, "Runtimes", "Runtime") as Node[])[0]["@resid"],
+    );
     expect(shortStrings.get(at(cf, "Namespace", "@resid"))).toBe("REDOX");
   });
 
@@ -134,7 +144,8 @@ describe("manifest.xml and the build agree", () => {
   (function collect(node: unknown, key = ""): void {
     if (Array.isArray(node)) node.forEach((n) => collect(n, key));
     else if (node && typeof node === "object") Object.entries(node).forEach(([k, v]) => collect(v, k));
-    else if (typeof node === "string" && /^https?:\/\//i.test(node.trim()) && !key.startsWith("@xmlns")) named.push(node.trim());
+    else if (typeof node === "string" && /^https?:\/\//i.test(node.trim()) && !key.startsWith("@xmlns"))
+      named.push(node.trim());
   })(doc);
 
   it("names only URLs on the dev server", () => {
@@ -186,12 +197,14 @@ describe("functions.json matches the declared functions", () => {
   it("are exactly the @customfunction declarations of src/functions/functions.ts", () => {
     // id = the tag's first word, else the function's name, upper-cased (as the metadata generator does).
     const source = readFileSync(join(REPO_ROOT, "src/functions/functions.ts"), "utf8");
-    const declaredIds = [...source.matchAll(/\/\*\*((?:(?!\*\/)[\s\S])*?@customfunction\b[^\n]*)[\s\S]*?\*\/\s*(?:export\s+)?(?:async\s+)?function\s+([A-Za-z_$][\w$]*)/g)].map(
-      (m) => {
-        const tag = /@customfunction[ \t]+([^\s*]+)/.exec(m[1]);
-        return (tag ? tag[1] : m[2]).toUpperCase();
-      },
-    );
+    const declaredIds = [
+      ...source.matchAll(
+        /\/\*\*((?:(?!\*\/)[\s\S])*?@customfunction\b[^\n]*)[\s\S]*?\*\/\s*(?:export\s+)?(?:async\s+)?function\s+([A-Za-z_$][\w$]*)/g,
+      ),
+    ].map((m) => {
+      const tag = /@customfunction[ \t]+([^\s*]+)/.exec(m[1]);
+      return (tag ? tag[1] : m[2]).toUpperCase();
+    });
     expect(declaredIds.length).toBeGreaterThan(0);
     expect([...ids].sort()).toEqual([...declaredIds].sort());
   });

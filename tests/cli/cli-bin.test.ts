@@ -4,7 +4,17 @@
 // previous results as they were and no partial file.
 
 import { spawn, spawnSync } from "node:child_process";
-import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync } from "node:fs";
+import {
+  copyFileSync,
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  rmSync,
+  symlinkSync,
+  writeFileSync,
+} from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -12,7 +22,10 @@ import { REPO_ROOT } from "../bundle/harness";
 import { writeSyntheticLog } from "./synthetic-log";
 
 const PREBUILT = join(REPO_ROOT, "dist/cli");
-const pkg = JSON.parse(readFileSync(join(REPO_ROOT, "package.json"), "utf8")) as { bin: Record<string, string>; version: string };
+const pkg = JSON.parse(readFileSync(join(REPO_ROOT, "package.json"), "utf8")) as {
+  bin: Record<string, string>;
+  version: string;
+};
 
 let dir: string;
 beforeAll(() => {
@@ -25,7 +38,10 @@ afterAll(() => {
 describe("the package bin", () => {
   it("is bin/redox-cells.mjs and runs the prebuilt file: works with no sources, no node_modules, no compiler", () => {
     expect(pkg.bin["redox-cells"]).toBe("bin/redox-cells.mjs");
-    expect(existsSync(join(PREBUILT, "redox-cells.cjs")), "dist/cli/redox-cells.cjs is missing: run npm run build").toBe(true);
+    expect(
+      existsSync(join(PREBUILT, "redox-cells.cjs")),
+      "dist/cli/redox-cells.cjs is missing: run npm run build",
+    ).toBe(true);
     // a copy of the package with only the bin and the prebuilt files in it
     const copy = join(dir, "prebuilt-only");
     mkdirSync(join(copy, "bin"), { recursive: true });
@@ -34,7 +50,12 @@ describe("the package bin", () => {
     for (const f of readdirSync(PREBUILT)) copyFileSync(join(PREBUILT, f), join(copy, "dist/cli", f));
     const log = join(dir, "log.csv");
     writeFileSync(log, "id,pH,ORP_mV_AgCl_sat,temp_C,metal\nA,7,200,15,Fe\nB,7,oops,15,Cu\n");
-    const exec = (args: string[]) => spawnSync(process.execPath, [join(copy, "bin/redox-cells.mjs"), ...args], { encoding: "utf8", cwd: dir, timeout: 60_000 });
+    const exec = (args: string[]) =>
+      spawnSync(process.execPath, [join(copy, "bin/redox-cells.mjs"), ...args], {
+        encoding: "utf8",
+        cwd: dir,
+        timeout: 60_000,
+      });
     const version = exec(["--version"]);
     expect(version.status).toBe(0);
     expect(version.stdout).toBe(`redox-cells ${pkg.version}\n`);
@@ -50,12 +71,19 @@ describe("the package bin", () => {
     const copy = join(dir, "sources-only");
     mkdirSync(join(copy, "bin"), { recursive: true });
     copyFileSync(join(REPO_ROOT, "bin/redox-cells.mjs"), join(copy, "bin/redox-cells.mjs"));
-    for (const entry of ["src", "data", "node_modules", "package.json", "tsconfig.json"]) symlinkSync(join(REPO_ROOT, entry), join(copy, entry));
-    const help = spawnSync(process.execPath, [join(copy, "bin/redox-cells.mjs"), "--help"], { encoding: "utf8", timeout: 120_000 });
+    for (const entry of ["src", "data", "node_modules", "package.json", "tsconfig.json"])
+      symlinkSync(join(REPO_ROOT, entry), join(copy, entry));
+    const help = spawnSync(process.execPath, [join(copy, "bin/redox-cells.mjs"), "--help"], {
+      encoding: "utf8",
+      timeout: 120_000,
+    });
     expect(help.stderr).toBe("");
     expect(help.status).toBe(0);
     expect(help.stdout).toContain("Usage");
-    const usage = spawnSync(process.execPath, [join(copy, "bin/redox-cells.mjs"), "--no-such-option", "x.csv"], { encoding: "utf8", timeout: 120_000 });
+    const usage = spawnSync(process.execPath, [join(copy, "bin/redox-cells.mjs"), "--no-such-option", "x.csv"], {
+      encoding: "utf8",
+      timeout: 120_000,
+    });
     expect(usage.status).toBe(2);
   }, 240_000);
 
@@ -66,7 +94,11 @@ describe("the package bin", () => {
     mkdirSync(outDir);
     const output = join(outDir, "results.csv");
     writeFileSync(output, "previous results\n");
-    const child = spawn(process.execPath, [join(REPO_ROOT, "bin/redox-cells.mjs"), input, "-o", output, "--no-svg", "--quiet"], { stdio: ["ignore", "ignore", "pipe"] });
+    const child = spawn(
+      process.execPath,
+      [join(REPO_ROOT, "bin/redox-cells.mjs"), input, "-o", output, "--no-svg", "--quiet"],
+      { stdio: ["ignore", "ignore", "pipe"] },
+    );
     let stderr = "";
     child.stderr.on("data", (d: Buffer) => (stderr += d.toString()));
     const exited = new Promise<number | null>((resolve) => child.on("exit", (code) => resolve(code)));

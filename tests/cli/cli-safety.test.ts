@@ -3,7 +3,17 @@
 // Injection", owasp.org/www-community/attacks/CSV_Injection), bounded messages, precision, duplicate headers, a
 // failed diagram write. In process (runCommand); the spawned bin and a kill are in cli-bin.test.ts.
 
-import { createWriteStream, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync } from "node:fs";
+import {
+  createWriteStream,
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  rmSync,
+  symlinkSync,
+  writeFileSync,
+} from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { Writable } from "node:stream";
@@ -81,7 +91,8 @@ describe("safe output", () => {
       const real = stream._write.bind(stream);
       stream._write = (chunk: Buffer, encoding: BufferEncoding, done: (error?: Error | null) => void) => {
         written += chunk.length;
-        if (written > 64) return done(Object.assign(new Error("ENOSPC: no space left on device, write"), { code: "ENOSPC" }));
+        if (written > 64)
+          return done(Object.assign(new Error("ENOSPC: no space left on device, write"), { code: "ENOSPC" }));
         real(chunk, encoding, done);
       };
       return stream;
@@ -120,7 +131,10 @@ describe("safe output", () => {
 
 describe("one output row per input record", () => {
   it("keeps ids beginning with #, blank lines and lines of delimiters, each with a note; a # preamble is skipped", async () => {
-    const input = write("records.csv", "# a note before the header\n\nid,pH,Eh (V),temp,metal\n#1,7,0.2,20,Fe\n,,,,\n\n#2,8,0.1,20,Fe\n");
+    const input = write(
+      "records.csv",
+      "# a note before the header\n\nid,pH,Eh (V),temp,metal\n#1,7,0.2,20,Fe\n,,,,\n\n#2,8,0.1,20,Fe\n",
+    );
     const output = join(dir, "records-out.csv");
     const r = await run([input, "-o", output, "--no-svg", "--quiet"]);
     expect(r.code).toBe(0);
@@ -185,7 +199,15 @@ describe("bounded messages and precision", () => {
     expect(noPH.stderr.length).toBeLessThan(1500);
     const cell = "x".repeat(100_000);
     const output = join(dir, "huge-cell-out.csv");
-    const bad = await run([write("huge-cell.csv", `pH,Eh (V),${cell.slice(0, 5000)}\n${cell},0.2,Fe\n`), "-o", output, "-m", "Fe", "--no-svg", "--quiet"]);
+    const bad = await run([
+      write("huge-cell.csv", `pH,Eh (V),${cell.slice(0, 5000)}\n${cell},0.2,Fe\n`),
+      "-o",
+      output,
+      "-m",
+      "Fe",
+      "--no-svg",
+      "--quiet",
+    ]);
     expect(bad.code).toBe(1);
     expect(bad.stderr.length).toBeLessThan(1500);
     const errors = (parseSync(readFileSync(output, "utf8")) as string[][])[1].at(-1)!;

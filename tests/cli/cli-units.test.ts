@@ -44,11 +44,22 @@ const write = (name: string, text: string): string => {
 async function results(name: string, text: string, args: string[] = [], delimiter = ",") {
   const output = join(dir, `${name}-out.csv`);
   const r = await run([write(name, text), "-o", output, "--no-svg", "--quiet", "--full-precision", ...args]);
-  const rows = r.code <= 1 ? (parseSync(readFileSync(output, "utf8"), { columns: true, delimiter }) as Record<string, string>[]) : [];
+  const rows =
+    r.code <= 1
+      ? (parseSync(readFileSync(output, "utf8"), { columns: true, delimiter }) as Record<string, string>[])
+      : [];
   return { r, rows, raw: r.code <= 1 ? readFileSync(output, "utf8") : "" };
 }
 
-const RESULTS = ["E_SHE_V", "water_margin_V", "metal_species", "metal_regime", "metal_boundary_above_V", "metal_boundary_below_V", "metal_dissolved_ug_L"];
+const RESULTS = [
+  "E_SHE_V",
+  "water_margin_V",
+  "metal_species",
+  "metal_regime",
+  "metal_boundary_above_V",
+  "metal_boundary_below_V",
+  "metal_dissolved_ug_L",
+];
 const resultsOf = (row: Record<string, string>) => RESULTS.map((c) => row[c]);
 
 describe("temperature scales", () => {
@@ -67,14 +78,19 @@ describe("temperature scales", () => {
     for (const header of ["T (K)", "temperature_K", "Temperature kelvin"]) {
       const kelvin = await results("k.csv", `pH,ORP_mV_AgCl_sat,${header},metal\n7,200,288.15,Fe\n`);
       expect(kelvin.r.code, header).toBe(0);
-      expect(resultsOf(kelvin.rows[0]).map((x) => (Number.isFinite(Number(x)) ? Number(Number(x).toPrecision(9)) : x))).toEqual(
+      expect(
+        resultsOf(kelvin.rows[0]).map((x) => (Number.isFinite(Number(x)) ? Number(Number(x).toPrecision(9)) : x)),
+      ).toEqual(
         resultsOf(celsius.rows[0]).map((x) => (Number.isFinite(Number(x)) ? Number(Number(x).toPrecision(9)) : x)),
       );
     }
   });
 
   it("--temperature-unit overrides the header; an out-of-range converted value names the conversion", async () => {
-    const forced = await results("forced.csv", "pH,ORP_mV_AgCl_sat,temp,metal\n7,200,59,Fe\n", ["--temperature-unit", "F"]);
+    const forced = await results("forced.csv", "pH,ORP_mV_AgCl_sat,temp,metal\n7,200,59,Fe\n", [
+      "--temperature-unit",
+      "F",
+    ]);
     const celsius = await results("c3.csv", "pH,ORP_mV_AgCl_sat,temp,metal\n7,200,15,Fe\n");
     expect(resultsOf(forced.rows[0])).toEqual(resultsOf(celsius.rows[0]));
     const hot = await results("hotf.csv", "pH,ORP_mV_AgCl_sat,Temp (°F),metal\n7,200,250,Fe\n");
@@ -90,7 +106,8 @@ describe("reference electrode from the header", () => {
     const bare = await results("agcl.csv", text);
     expect(bare.r.code).toBe(2);
     expect(bare.r.stderr).toContain("names a silver chloride electrode but not its filling");
-    for (const filling of ["AgCl-sat", "AgCl-3.5M", "AgCl-3M", "AgCl-1M", "AgCl-sea"]) expect(bare.r.stderr).toContain(filling);
+    for (const filling of ["AgCl-sat", "AgCl-3.5M", "AgCl-3M", "AgCl-1M", "AgCl-sea"])
+      expect(bare.r.stderr).toContain(filling);
     const named = await results("agcl3.csv", text, ["--electrode", "AgCl-3M"]);
     expect(named.r.code).toBe(0);
     const sat = await results("agclsat.csv", text, ["--electrode", "AgCl-sat"]);
@@ -134,7 +151,12 @@ describe("decimal commas", () => {
     const forced = await results("sc-forced.csv", semicolon, ["--decimal", "point"], ";");
     expect(forced.r.code).toBe(1);
     expect(forced.r.stderr).toContain(`column "pH": expected a number, got the text "8,1"`);
-    const forcedComma = await results("sc-forced2.csv", "pH;ORP_mV_AgCl_sat;temp_C;metal\n7;200;15;Fe\n", ["--decimal", "comma"], ";");
+    const forcedComma = await results(
+      "sc-forced2.csv",
+      "pH;ORP_mV_AgCl_sat;temp_C;metal\n7;200;15;Fe\n",
+      ["--decimal", "comma"],
+      ";",
+    );
     expect(forcedComma.r.code).toBe(0);
     expect((await run([write("c.csv", point), "--decimal", "comma", "--delimiter", ","])).code).toBe(2);
   });

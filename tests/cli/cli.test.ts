@@ -125,9 +125,41 @@ describe("a generated 200 000-row log", () => {
         expectedText(waterMarginAt(pH, ePassed, t)[0][0], "volts"),
         expectedText(speciesAt(metal, pH, ePassed, t)[0][0]),
         expectedText(regimeAt(metal, pH, ePassed, t)[0][0]),
-        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, undefined, 1)[0][0], "volts"),
-        expectedText(boundaryFrom(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, undefined, -1)[0][0], "volts"),
-        expectedText(dissolvedAt(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, "ug/L")[0][0]),
+        expectedText(
+          boundaryFrom(
+            metal,
+            pH,
+            ePassed,
+            t,
+            undefined,
+            undefined,
+            undefined,
+            undefined,
+            undefined,
+            undefined,
+            1,
+          )[0][0],
+          "volts",
+        ),
+        expectedText(
+          boundaryFrom(
+            metal,
+            pH,
+            ePassed,
+            t,
+            undefined,
+            undefined,
+            undefined,
+            undefined,
+            undefined,
+            undefined,
+            -1,
+          )[0][0],
+          "volts",
+        ),
+        expectedText(
+          dissolvedAt(metal, pH, ePassed, t, undefined, undefined, undefined, undefined, undefined, "ug/L")[0][0],
+        ),
       ];
       const got = record.slice(SYNTHETIC_HEADER.length, SYNTHETIC_HEADER.length + 7);
       expect(got, `row ${index + 1}`).toEqual(expected);
@@ -137,7 +169,9 @@ describe("a generated 200 000-row log", () => {
     expect(compared).toBeGreaterThan(250);
 
     const badRow = sample.get(1_000)!;
-    expect(badRow.slice(SYNTHETIC_HEADER.length + 1, SYNTHETIC_HEADER.length + 7).every((c) => c === "#VALUE!")).toBe(true);
+    expect(badRow.slice(SYNTHETIC_HEADER.length + 1, SYNTHETIC_HEADER.length + 7).every((c) => c === "#VALUE!")).toBe(
+      true,
+    );
     expect(badRow[badRow.length - 1]).toBe(`pH: expected a number, got the text "7,3" (#VALUE!)`);
     const outOfRange = sample.get(199_999)!;
     expect(outOfRange[SYNTHETIC_HEADER.length + 2]).toBe("#VALUE!");
@@ -167,9 +201,23 @@ describe("small files", () => {
     // the results use the input's delimiter
     const rows = parseSync(readFileSync(join(dir, "blank-out.csv"), "utf8"), { delimiter: ";" }) as string[][];
     expect(rows[0]).toEqual([
-      "site", "pH", "Eh (V)", "temp", "E_SHE_V", "water_margin_V",
-      "Cu_species", "Cu_regime", "Cu_boundary_above_V", "Cu_boundary_below_V", "Cu_dissolved_ug_L",
-      "Fe_species", "Fe_regime", "Fe_boundary_above_V", "Fe_boundary_below_V", "Fe_dissolved_ug_L", "errors",
+      "site",
+      "pH",
+      "Eh (V)",
+      "temp",
+      "E_SHE_V",
+      "water_margin_V",
+      "Cu_species",
+      "Cu_regime",
+      "Cu_boundary_above_V",
+      "Cu_boundary_below_V",
+      "Cu_dissolved_ug_L",
+      "Fe_species",
+      "Fe_regime",
+      "Fe_boundary_above_V",
+      "Fe_boundary_below_V",
+      "Fe_dissolved_ug_L",
+      "errors",
     ]);
     expect(rows[1][4]).toBe("0.5"); // Eh is on the SHE scale already
     expect(rows[1][6]).toBe(expectedText(speciesAt("Cu", 7, 0.5, 20)[0][0]));
@@ -213,7 +261,9 @@ describe("small files", () => {
     expect(noPH.code).toBe(2);
     expect(noPH.stderr).toContain("no pH column found");
     const ok = write("usage2.csv", "pH,ORP\n7,200\n");
-    expect((await run([ok, "-m", "Unobtainium", "-e", "SCE", "-u", "mV"])).stderr).toContain(`--metal: "Unobtainium" is not a metal`);
+    expect((await run([ok, "-m", "Unobtainium", "-e", "SCE", "-u", "mV"])).stderr).toContain(
+      `--metal: "Unobtainium" is not a metal`,
+    );
     expect((await run([ok, "-m", "Fe", "-e", "XYZ", "-u", "mV"])).code).toBe(2);
     const noUnit = await run([ok, "-m", "Fe", "-e", "SCE"]);
     expect(noUnit.code).toBe(2);
@@ -236,7 +286,8 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
     writeFileSync(path, text);
     return path;
   };
-  const read = (name: string) => parseSync(readFileSync(join(dir, name), "utf8"), { columns: true }) as Record<string, string>[];
+  const read = (name: string) =>
+    parseSync(readFileSync(join(dir, name), "utf8"), { columns: true }) as Record<string, string>[];
   // atomic weights from the element records, as the command line converts mg/L (1 L taken as 1 kg)
   const weight = (symbol: string) => getDatabase().element(symbol)!.atomicWeight;
 
@@ -250,12 +301,30 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
     );
     const r = await run([input, "-o", join(dir, "water-out.csv"), "--no-svg", "--quiet"]);
     expect(r.code).toBe(0);
-    expect(r.stderr).toContain(`line 4, column "Alkalinity (mg/L CaCO3)": blank; this row is evaluated without carbonate`);
+    expect(r.stderr).toContain(
+      `line 4, column "Alkalinity (mg/L CaCO3)": blank; this row is evaluated without carbonate`,
+    );
     const rows = read("water-out.csv");
     expect(Object.keys(rows[0])).toEqual([
-      "site", "pH", "ORP_mV_AgCl_sat", "temp_C", "pipe_metal", "Alkalinity (mg/L CaCO3)", "Chloride mg/L", "Sulfate mg/L",
-      "E_SHE_V", "water_margin_V", "DIC_mol_kg", "chloride_mol_kg", "sulfur_mol_kg",
-      "metal_species", "metal_regime", "metal_boundary_above_V", "metal_boundary_below_V", "metal_dissolved_ug_L", "errors",
+      "site",
+      "pH",
+      "ORP_mV_AgCl_sat",
+      "temp_C",
+      "pipe_metal",
+      "Alkalinity (mg/L CaCO3)",
+      "Chloride mg/L",
+      "Sulfate mg/L",
+      "E_SHE_V",
+      "water_margin_V",
+      "DIC_mol_kg",
+      "chloride_mol_kg",
+      "sulfur_mol_kg",
+      "metal_species",
+      "metal_regime",
+      "metal_boundary_above_V",
+      "metal_boundary_below_V",
+      "metal_dissolved_ug_L",
+      "errors",
     ]);
     const cases: Array<[string, number, number, number, number | string, number | string, number | string]> = [
       // metal, pH, reading mV, °C, alkalinity, chloride mg/L, sulfate mg/L
@@ -275,9 +344,21 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
       expect(row.sulfur_mol_kg).toBe(sulfur === "" ? "" : formatNumber(sulfur));
       expect(row.metal_species).toBe(expectedText(speciesAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
       expect(row.metal_regime).toBe(expectedText(regimeAt(metal, pH, e, t, undefined, dic, chloride, sulfur)[0][0]));
-      expect(row.metal_boundary_above_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, undefined, 1)[0][0], "volts"));
-      expect(row.metal_boundary_below_V).toBe(expectedText(boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, undefined, -1)[0][0], "volts"));
-      expect(row.metal_dissolved_ug_L).toBe(expectedText(dissolvedAt(metal, pH, e, t, dic, chloride, sulfur, undefined, undefined, "ug/L")[0][0]));
+      expect(row.metal_boundary_above_V).toBe(
+        expectedText(
+          boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, undefined, 1)[0][0],
+          "volts",
+        ),
+      );
+      expect(row.metal_boundary_below_V).toBe(
+        expectedText(
+          boundaryFrom(metal, pH, e, t, undefined, dic, chloride, sulfur, undefined, undefined, -1)[0][0],
+          "volts",
+        ),
+      );
+      expect(row.metal_dissolved_ug_L).toBe(
+        expectedText(dissolvedAt(metal, pH, e, t, dic, chloride, sulfur, undefined, undefined, "ug/L")[0][0]),
+      );
       if (row.metal_species !== expectedText(speciesAt(metal, pH, e, t)[0][0])) carbonateMattered = true;
     });
     // the water changes at least one answer here (lead carbonates at pH 7.2 with 80 mg/L alkalinity)
@@ -292,7 +373,15 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
       expect(pureRows[i].metal_species).toBe(expectedText(speciesAt(metal, pH, e, t)[0][0]));
     });
 
-    const noChloride = await run([input, "-o", join(dir, "water-nocl.csv"), "--no-svg", "--quiet", "--chloride-column", "none"]);
+    const noChloride = await run([
+      input,
+      "-o",
+      join(dir, "water-nocl.csv"),
+      "--no-svg",
+      "--quiet",
+      "--chloride-column",
+      "none",
+    ]);
     expect(Object.keys(read("water-nocl.csv")[0])).toEqual(expect.not.arrayContaining(["chloride_mol_kg"]));
     expect(noChloride.code).toBe(0);
   });
@@ -312,8 +401,12 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
       expect(rows[0].phosphate_mol_kg).toBe(formatNumber(perMg));
       expect(rows[1].phosphate_mol_kg).toBe("");
       const e = toSHEAt(0.35, "AgCl-sat", 15)[0][0] as number;
-      expect(rows[0].metal_dissolved_ug_L).toBe(expectedText(dissolvedAt("Pb", 7.5, e, 15, 1e-3, undefined, undefined, perMg, undefined, "ug/L")[0][0]));
-      expect(rows[1].metal_dissolved_ug_L).toBe(expectedText(dissolvedAt("Pb", 7.5, e, 15, 1e-3, undefined, undefined, undefined, undefined, "ug/L")[0][0]));
+      expect(rows[0].metal_dissolved_ug_L).toBe(
+        expectedText(dissolvedAt("Pb", 7.5, e, 15, 1e-3, undefined, undefined, perMg, undefined, "ug/L")[0][0]),
+      );
+      expect(rows[1].metal_dissolved_ug_L).toBe(
+        expectedText(dissolvedAt("Pb", 7.5, e, 15, 1e-3, undefined, undefined, undefined, undefined, "ug/L")[0][0]),
+      );
       // orthophosphate lowers equilibrium lead (hydroxypyromorphite instead of cerussite)
       expect(Number(rows[0].metal_dissolved_ug_L)).toBeLessThan(Number(rows[1].metal_dissolved_ug_L) / 3);
     }
@@ -321,14 +414,34 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
 
   it("a DIC column (mmol/L) is used before the alkalinity; named columns and units from the header", async () => {
     const input = write("dic.csv", "pH,Eh_V,metal,alk,DIC mmol/L,total S mol/kg\n7.5,-0.3,Fe,100,2.1,0.0004\n");
-    const r = await run([input, "-o", join(dir, "dic-out.csv"), "--no-svg", "--quiet", "--sulfur-column", "total S mol/kg"]);
+    const r = await run([
+      input,
+      "-o",
+      join(dir, "dic-out.csv"),
+      "--no-svg",
+      "--quiet",
+      "--sulfur-column",
+      "total S mol/kg",
+    ]);
     expect(r.code).toBe(0);
     const [row] = read("dic-out.csv");
     expect(row.DIC_mol_kg).toBe(formatNumber(2.1 / 1000));
     expect(row.sulfur_mol_kg).toBe("0.0004");
-    expect(row.metal_species).toBe(expectedText(speciesAt("Fe", 7.5, -0.3, undefined, undefined, 0.0021, undefined, 0.0004)[0][0]));
+    expect(row.metal_species).toBe(
+      expectedText(speciesAt("Fe", 7.5, -0.3, undefined, undefined, 0.0021, undefined, 0.0004)[0][0]),
+    );
     // naming the alkalinity column takes the carbonate from it instead
-    const alk = await run([input, "-o", join(dir, "dic-alk.csv"), "--no-svg", "--quiet", "--alkalinity-column", "alk", "--dic-column", "none"]);
+    const alk = await run([
+      input,
+      "-o",
+      join(dir, "dic-alk.csv"),
+      "--no-svg",
+      "--quiet",
+      "--alkalinity-column",
+      "alk",
+      "--dic-column",
+      "none",
+    ]);
     expect(alk.code).toBe(0);
     expect(read("dic-alk.csv")[0].DIC_mol_kg).toBe(formatNumber(dicAt(100, 7.5)[0][0] as number));
     const both = await run([input, "--no-svg", "--alkalinity-column", "alk", "--dic-column", "5"]);
@@ -337,7 +450,10 @@ describe("water columns: alkalinity, DIC, chloride and sulfate feed [carbonate],
   });
 
   it("bad water cells: messages name the column; an unusable alkalinity passes REDOX.DIC's error on, as a worksheet does", async () => {
-    const input = write("water-bad.csv", "pH,Eh_V,metal,alkalinity,chloride\n7,0.3,Cu,lots,10\n7,0.3,Cu,50,-5\n11.5,0.3,Cu,5,10\n");
+    const input = write(
+      "water-bad.csv",
+      "pH,Eh_V,metal,alkalinity,chloride\n7,0.3,Cu,lots,10\n7,0.3,Cu,50,-5\n11.5,0.3,Cu,5,10\n",
+    );
     const r = await run([input, "-o", join(dir, "water-bad-out.csv"), "--no-svg", "--quiet"]);
     expect(r.code).toBe(1);
     expect(r.stderr).toContain(`line 2, column "alkalinity": expected a number, got the text "lots" (#VALUE!)`);

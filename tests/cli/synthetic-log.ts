@@ -5,7 +5,6 @@ import { createWriteStream } from "node:fs";
 import { once } from "node:events";
 import { mulberry32 } from "../../src/cli/seeded-random";
 
-
 export const SYNTHETIC_HEADER = ["id", "pH", "ORP_mV_AgCl_sat", "temp_C", "metal"];
 const METALS = ["Fe", "Cu", "Zn", "Pb"];
 

@@ -15,7 +15,14 @@ import { parse } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { runCommand } from "../../src/cli/run";
 import { dissolvedAt } from "../../src/functions/stability-functions";
-import { callFunction, loadBundle, REPO_ROOT, StandInError, type LoadedBundle, type MetadataFunction } from "../bundle/harness";
+import {
+  callFunction,
+  loadBundle,
+  REPO_ROOT,
+  StandInError,
+  type LoadedBundle,
+  type MetadataFunction,
+} from "../bundle/harness";
 import { calls, evaluate, isError, parseFormula, type Node, type Value } from "../../scripts/workbook-formula";
 
 const WORKBOOK = join(REPO_ROOT, "data/demo/demo-workbook.xlsx");
@@ -53,7 +60,13 @@ beforeAll(async () => {
         const value = cell.value as { formula?: string; sharedFormula?: string } | null;
         if (value && typeof value === "object" && ("formula" in value || "sharedFormula" in value)) {
           const formula = cell.formula;
-          formulas.push({ address: `${ws.name}!${cell.address}`, row: Number(cell.row), column: cell.address.replace(/\d+$/, ""), formula, ast: parseFormula(formula) });
+          formulas.push({
+            address: `${ws.name}!${cell.address}`,
+            row: Number(cell.row),
+            column: cell.address.replace(/\d+$/, ""),
+            formula,
+            ast: parseFormula(formula),
+          });
         }
       });
     });
@@ -63,7 +76,10 @@ beforeAll(async () => {
   const out = join(tmp, "results.csv");
   const sink = new PassThrough();
   sink.resume();
-  const { code } = await runCommand([LOG, "-o", out, "--no-svg", "--quiet", "--max-messages", "0", "--full-precision"], { stdout: sink, stderr: sink });
+  const { code } = await runCommand(
+    [LOG, "-o", out, "--no-svg", "--quiet", "--max-messages", "0", "--full-precision"],
+    { stdout: sink, stderr: sink },
+  );
   expect([0, 1]).toContain(code);
   cliRows = parse(readFileSync(out, "utf8"), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
 });
@@ -94,7 +110,9 @@ describe("demo workbook formulas", () => {
         used.add(fn.id);
         const required = fn.parameters.filter((p) => !p.optional).length;
         if (call.argCount < required || call.argCount > fn.parameters.length) {
-          problems.push(`${f.address}: ${call.name} takes ${required}–${fn.parameters.length} arguments, got ${call.argCount}`);
+          problems.push(
+            `${f.address}: ${call.name} takes ${required}–${fn.parameters.length} arguments, got ${call.argCount}`,
+          );
         }
       }
     }
@@ -117,7 +135,8 @@ describe("demo workbook formulas", () => {
       if (formula) value = evaluate(formula.ast, context);
       else {
         const raw = sheet.getCell(address).value;
-        value = raw === null || raw === undefined ? null : raw instanceof Date ? raw.getTime() : (raw as number | string);
+        value =
+          raw === null || raw === undefined ? null : raw instanceof Date ? raw.getTime() : (raw as number | string);
       }
       memo.set(address, value);
       return value;
@@ -128,7 +147,9 @@ describe("demo workbook formulas", () => {
         const fn = declared(name)!;
         const fnImpl = bundle.functions.get(fn.id)!;
         // the spreadsheet passes every declared parameter, a single cell as a 1×1 range, an omitted one as null
-        const passed = fn.parameters.map((p, i) => (i < args.length && args[i] !== undefined ? (p.dimensionality === "matrix" ? [[args[i]]] : args[i]) : null));
+        const passed = fn.parameters.map((p, i) =>
+          i < args.length && args[i] !== undefined ? (p.dimensionality === "matrix" ? [[args[i]]] : args[i]) : null,
+        );
         const out = fnImpl(...passed) as unknown;
         const cell = Array.isArray(out) ? (out as unknown[][])[0][0] : out;
         return cell as Value;
@@ -171,19 +192,32 @@ describe("demo workbook formulas", () => {
         // DIC through the source functions; orthophosphate adds only solids, so it can never raise the dissolved metal
         const e = Number(cli.E_SHE_V);
         const dic = cli.DIC_mol_kg === "" ? undefined : Number(cli.DIC_mol_kg);
-        const ready = cli.metal_dissolved_ug_L !== "" && !cli.metal_dissolved_ug_L.startsWith("#") && Number.isFinite(e);
+        const ready =
+          cli.metal_dissolved_ug_L !== "" && !cli.metal_dissolved_ug_L.startsWith("#") && Number.isFinite(e);
         if (!ready) {
           compared++;
           continue;
         }
-        const value = dissolvedAt(cli.pipe_metal, Number(cli.pH), e, Number(cli.temp_C), dic, undefined, undefined, 1.053e-5, undefined, "ug/L")[0][0];
+        const value = dissolvedAt(
+          cli.pipe_metal,
+          Number(cli.pH),
+          e,
+          Number(cli.temp_C),
+          dic,
+          undefined,
+          undefined,
+          1.053e-5,
+          undefined,
+          "ug/L",
+        )[0][0];
         expected = typeof value === "number" ? String(value) : (value as { code: string }).code;
         if (typeof value === "number") expect(value).toBeLessThanOrEqual(Number(cli.metal_dissolved_ug_L) * (1 + 1e-9));
       }
       // a blank temperature is a missing measurement: the command line leaves the row blank (the workbook's formulas
       // give blank there once the functions treat a blank temperature cell so too)
       if (cli.temp_C.trim() === "") {
-        if (expected !== "") mismatches.push(`${f.address} (${sampleId}, ${columnName}): blank temperature, command line "${expected}"`);
+        if (expected !== "")
+          mismatches.push(`${f.address} (${sampleId}, ${columnName}): blank temperature, command line "${expected}"`);
         compared++;
         continue;
       }
@@ -191,27 +225,44 @@ describe("demo workbook formulas", () => {
       compared++;
       // the cached result the file carries is what the built add-in computes for the formula
       const result = (sheet.getCell(f.address.split("!")[1]).value as { result?: unknown }).result;
-      const cachedText = result && typeof result === "object" && "error" in result ? (result as { error: string }).error : (result ?? ""); // an empty text result reads back as undefined
+      const cachedText =
+        result && typeof result === "object" && "error" in result
+          ? (result as { error: string }).error
+          : (result ?? ""); // an empty text result reads back as undefined
       const gotText = isError(got) ? got.code : (got ?? "");
-      if (typeof gotText === "number" ? Math.abs(gotText - Number(cachedText)) > 1e-12 * Math.max(1, Math.abs(gotText)) : cachedText !== gotText) {
-        mismatches.push(`${f.address} (${sampleId}, ${columnName}): cached ${String(cachedText)}, add-in ${String(gotText)}`);
+      if (
+        typeof gotText === "number"
+          ? Math.abs(gotText - Number(cachedText)) > 1e-12 * Math.max(1, Math.abs(gotText))
+          : cachedText !== gotText
+      ) {
+        mismatches.push(
+          `${f.address} (${sampleId}, ${columnName}): cached ${String(cachedText)}, add-in ${String(gotText)}`,
+        );
       }
       if (isError(got)) {
         errorsSeen++;
-        if (got.code !== expected) mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook ${got.code}, command line ${expected}`);
+        if (got.code !== expected)
+          mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook ${got.code}, command line ${expected}`);
       } else if (typeof got === "number") {
         numbers++;
         const want = Number(expected);
-        if (!(Math.abs(got - want) <= 1e-9 * Math.max(1, Math.abs(got)))) mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook ${got}, command line ${expected}`);
+        if (!(Math.abs(got - want) <= 1e-9 * Math.max(1, Math.abs(got))))
+          mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook ${got}, command line ${expected}`);
       } else if ((got ?? "") !== expected) {
-        mismatches.push(`${f.address} (${sampleId}, ${columnName}): workbook "${String(got)}", command line "${expected}"`);
+        mismatches.push(
+          `${f.address} (${sampleId}, ${columnName}): workbook "${String(got)}", command line "${expected}"`,
+        );
       }
     }
     expect(mismatches.slice(0, 20)).toEqual([]);
     expect(compared).toBe(formulas.length);
     // the what-if is not vacuous: orthophosphate lowers equilibrium lead on some lead rows
     const letterOf = (name: string) => [...header].find(([, h]) => h === name)![0];
-    const leadRows = formulas.filter((f) => header.get(f.column) === "what_if_1mg_PO4_ug_L" && sheet.getCell(`${letterOf("pipe_metal")}${f.row}`).value === "Pb");
+    const leadRows = formulas.filter(
+      (f) =>
+        header.get(f.column) === "what_if_1mg_PO4_ug_L" &&
+        sheet.getCell(`${letterOf("pipe_metal")}${f.row}`).value === "Pb",
+    );
     const lowered = leadRows.filter((f) => {
       const whatIf = cellValue(f.column, f.row);
       const now = cellValue(letterOf("pipe_dissolved_ug_L"), f.row);
@@ -225,6 +276,8 @@ describe("demo workbook formulas", () => {
     // lead and copper samples in both the workbook and the command line)
     expect(cliRows.filter((r) => r.metal_species.includes("CO3")).length).toBeGreaterThan(0);
     expect(cliRows.filter((r) => Number(r.DIC_mol_kg) > 0).length).toBeGreaterThan(cliRows.length / 2);
-    expect(await callFunction(bundle.functions.get("TOSHE")!, [[[0.5]], [["AgCl-sat"]], null, null])).not.toBeInstanceOf(StandInError);
+    expect(
+      await callFunction(bundle.functions.get("TOSHE")!, [[[0.5]], [["AgCl-sat"]], null, null]),
+    ).not.toBeInstanceOf(StandInError);
   });
 });

@@ -43,7 +43,8 @@ function splitArguments(text: string): string[] {
 function arithmetic(text: string): number {
   const [first, ...rest] = text.split(/([*/])/).map((t) => t.trim());
   let value = Number(first);
-  for (let i = 0; i < rest.length; i += 2) value = rest[i] === "*" ? value * Number(rest[i + 1]) : value / Number(rest[i + 1]);
+  for (let i = 0; i < rest.length; i += 2)
+    value = rest[i] === "*" ? value * Number(rest[i + 1]) : value / Number(rest[i + 1]);
   if (!Number.isFinite(value)) throw new Error(`unreadable number ${text}`);
   return value;
 }
@@ -73,7 +74,9 @@ describe("README function reference", () => {
   it("gives every function of functions.json a heading, and no heading to a function it lacks", () => {
     const ids = new Set(bundle.metadata.functions.map((f) => f.id));
     // a heading may name several functions: "#### `REDOX.PE(…)` and `REDOX.EH(…)`"
-    const headings = [...readme.matchAll(/^#### .*$/gm)].flatMap((m) => [...m[0].matchAll(/`REDOX\.([A-Z]+)\(/g)].map((n) => n[1]));
+    const headings = [...readme.matchAll(/^#### .*$/gm)].flatMap((m) =>
+      [...m[0].matchAll(/`REDOX\.([A-Z]+)\(/g)].map((n) => n[1]),
+    );
     expect(new Set(headings)).toEqual(ids);
   });
 
@@ -91,7 +94,10 @@ const DOCUMENTS = ["README.md", "docs/worked-examples.md", "docs/ligands.md", "d
 describe("formula examples in the README and docs, evaluated through the built bundle", () => {
   for (const document of DOCUMENTS) {
     const text = readFileSync(join(REPO_ROOT, document), "utf8");
-    const examples = [...text.matchAll(/^=(REDOX\.[A-Z]+\(.*\))\s+→\s+(.+)$/gm)].map((m) => ({ formula: m[1], stated: m[2].trim() }));
+    const examples = [...text.matchAll(/^=(REDOX\.[A-Z]+\(.*\))\s+→\s+(.+)$/gm)].map((m) => ({
+      formula: m[1],
+      stated: m[2].trim(),
+    }));
     if (document !== "docs/cli.md") {
       it(`${document} has literal examples`, () => expect(examples.length).toBeGreaterThanOrEqual(4));
     }
@@ -110,7 +116,11 @@ describe("formula examples in the README and docs, evaluated through the built b
           const expected = Number(figure);
           const decimals = figure.includes(".") && !/E/i.test(figure) ? figure.split(".")[1].length : 0;
           // "about" allows 10 %; a plain figure must round to what is printed (half a unit of its last digit)
-          const tolerance = numeric[1] ? 0.1 * Math.abs(expected) : /E/i.test(figure) ? 0.005 * Math.abs(expected) : 0.5 * 10 ** -decimals + 1e-12;
+          const tolerance = numeric[1]
+            ? 0.1 * Math.abs(expected)
+            : /E/i.test(figure)
+              ? 0.005 * Math.abs(expected)
+              : 0.5 * 10 ** -decimals + 1e-12;
           expect(typeof value).toBe("number");
           expect(Math.abs((value as number) - expected)).toBeLessThanOrEqual(tolerance);
         } else {
@@ -138,7 +148,9 @@ describe("figures quoted about the demo data are the ones the code computes (scr
   it("the README's worked example uses a real row of the workbook (data start in row 3) and the docs the demo's counts", () => {
     expect(figures["worked-row"]).toMatch(/is row 3 of the workbook/);
     expect(readme).not.toMatch(/\b[A-Z]2\/1000|\(C2, F2/);
-    const blocks = [...FIGURE_DOCUMENTS].map((d) => [...figureBlocks(readFileSync(join(REPO_ROOT, d), "utf8")).keys()]).flat();
+    const blocks = [...FIGURE_DOCUMENTS]
+      .map((d) => [...figureBlocks(readFileSync(join(REPO_ROOT, d), "utf8")).keys()])
+      .flat();
     expect(blocks.sort()).toEqual(["mill-lane", "regimes-per-site", "worked-row"]);
   });
 });
@@ -151,7 +163,8 @@ describe("README essentials", () => {
 
   it("has the cautions section the pane links to", () => {
     expect(readme).toMatch(/^## Cautions$/m);
-    for (const phrase of ["not how fast", "laboratory", "regulators", "licensed corrosion professionals"]) expect(readme).toContain(phrase);
+    for (const phrase of ["not how fast", "laboratory", "regulators", "licensed corrosion professionals"])
+      expect(readme).toContain(phrase);
   });
 
   it("the pane's caution link leads to a built page carrying README's cautions", () => {
@@ -159,7 +172,8 @@ describe("README essentials", () => {
     const target = /id="?caution-link"?[^>]*href="?([^"#\s>]+)/.exec(pane)?.[1];
     expect(target).toBe("cautions.html");
     const page = readFileSync(join(bundle.dist, target!), "utf8");
-    for (const phrase of ["not how fast", "laboratory analysis", "licensed corrosion professionals"]) expect(page).toContain(phrase);
+    for (const phrase of ["not how fast", "laboratory analysis", "licensed corrosion professionals"])
+      expect(page).toContain(phrase);
   });
 
   it("shows a screenshot that exists in the repository", () => {

@@ -17,7 +17,10 @@ import { boundary, dissolved, regime, species } from "../../src/functions/functi
 
 const db = getDatabase();
 const metals = db.metals();
-const total = fc.oneof(fc.constant(0), fc.double({ min: -6, max: 0, noNaN: true }).map((l) => 10 ** l));
+const total = fc.oneof(
+  fc.constant(0),
+  fc.double({ min: -6, max: 0, noNaN: true }).map((l) => 10 ** l),
+);
 const conditions = fc.record({
   metal: fc.constantFrom(...metals),
   celsius: fc.double({ min: 0, max: 100, noNaN: true }),
@@ -28,8 +31,20 @@ const conditions = fc.record({
   phosphate: total,
   ionicStrength: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 0.5, noNaN: true })),
 });
-const point = fc.record({ pH: fc.double({ min: -2, max: 16, noNaN: true }), E: fc.double({ min: -2.5, max: 2.5, noNaN: true }) });
-type Conditions = { metal: string; celsius: number; logActivity: number; carbonate: number; chloride: number; sulfur: number; phosphate: number; ionicStrength: number };
+const point = fc.record({
+  pH: fc.double({ min: -2, max: 16, noNaN: true }),
+  E: fc.double({ min: -2.5, max: 2.5, noNaN: true }),
+});
+type Conditions = {
+  metal: string;
+  celsius: number;
+  logActivity: number;
+  carbonate: number;
+  chloride: number;
+  sulfur: number;
+  phosphate: number;
+  ionicStrength: number;
+};
 const engineIn = (c: Conditions) => {
   const engine = pointEngine(db, c.metal);
   engine.setWater(c.celsius, 10 ** c.logActivity, c.carbonate, c.chloride, c.sulfur, c.ionicStrength, c.phosphate);
@@ -43,7 +58,8 @@ describe("point engine properties with ligands", () => {
         const engine = engineIn(c);
         const winner = engine.dominant(pH, E);
         const g = engine.g(winner, pH, E);
-        for (let i = 0; i < engine.size; i++) if (engine.available(i)) expect(g).toBeLessThanOrEqual(engine.g(i, pH, E));
+        for (let i = 0; i < engine.size; i++)
+          if (engine.available(i)) expect(g).toBeLessThanOrEqual(engine.g(i, pH, E));
       }),
       { numRuns: 300 },
     );
@@ -52,7 +68,15 @@ describe("point engine properties with ligands", () => {
   it("the approximate ligand cells drawn for diagrams tile the rectangle", () => {
     fc.assert(
       fc.property(conditions, fc.array(point, { minLength: 15, maxLength: 15 }), (c, points) => {
-        expectRegionsTile(buildLigandSystem(db, c.metal, { celsius: c.celsius, activity: 10 ** c.logActivity }, { carbonate: c.carbonate, chloride: c.chloride, sulfur: c.sulfur }), points);
+        expectRegionsTile(
+          buildLigandSystem(
+            db,
+            c.metal,
+            { celsius: c.celsius, activity: 10 ** c.logActivity },
+            { carbonate: c.carbonate, chloride: c.chloride, sulfur: c.sulfur },
+          ),
+          points,
+        );
       }),
       { numRuns: 50 },
     );
@@ -84,12 +108,16 @@ describe("point engine properties with ligands", () => {
         const crossing = pointBoundary(engine, pH, E, 1);
         if (!crossing) return;
         const t = engine.table;
-        const [solid, ion] = t.dissolved[crossing.below] ? [crossing.above, crossing.below] : [crossing.below, crossing.above];
+        const [solid, ion] = t.dissolved[crossing.below]
+          ? [crossing.above, crossing.below]
+          : [crossing.below, crossing.above];
         if (t.dissolved[solid] || !t.dissolved[ion]) return; // not a solid–ion boundary
         const part = dissolvedParts(engine, solid, pH, crossing.E).find((p) => p.species === ion)!;
         // the threshold is a molality (activity γ·threshold with an ionic strength): exact on straight boundaries; a bent one (sulfur) is bracketed to 1e-7 V,
         // i.e. within |dΔg/dE|·1e-7·F/RT < 1e-3 in ln a
-        expect(Math.abs(Math.log(part.molality) - c.logActivity * Math.LN10)).toBeLessThan(engine.hasSulfur ? 1e-3 : 1e-5);
+        expect(Math.abs(Math.log(part.molality) - c.logActivity * Math.LN10)).toBeLessThan(
+          engine.hasSulfur ? 1e-3 : 1e-5,
+        );
       }),
       { numRuns: 300 },
     );

@@ -20,7 +20,11 @@ export function insideConvex(polygon: readonly Point[], p: Point): boolean {
   return true;
 }
 
-export function expectRegionsTile(system: MetalSystem, points: readonly { pH: number; E: number }[], window = TILING_WINDOW): void {
+export function expectRegionsTile(
+  system: MetalSystem,
+  points: readonly { pH: number; E: number }[],
+  window = TILING_WINDOW,
+): void {
   const regions = diagramRegions(system, window);
   const total = regions.reduce((sum, r) => sum + Math.abs(polygonArea(r.vertices)), 0);
   const box = (window.pHMax - window.pHMin) * (window.eMax - window.eMin);

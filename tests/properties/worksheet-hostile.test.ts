@@ -21,9 +21,45 @@ const FUNCTIONS: { id: string; fn: Fn; arity: number; argNames: string[] }[] = [
 ];
 
 const hostileText = fc.constantFrom(
-  "NaN", "Infinity", "-Infinity", "1e999", "-1e999", "", " ", "  7 ", "7,5", "0x10", "1e", ".", "-", "#VALUE!", "#N/A",
-  "null", "undefined", "true", "SCE", "rhe", "Ag/AgCl", "AgCl-3M", "copper sulfate", "O2", "h2", "oxygen", "CO2",
-  "\u0000", "💧", "a".repeat(300), "25", "-5", "101", "16.0001", "mV", "V", "constructor", "__proto__", "toString",
+  "NaN",
+  "Infinity",
+  "-Infinity",
+  "1e999",
+  "-1e999",
+  "",
+  " ",
+  "  7 ",
+  "7,5",
+  "0x10",
+  "1e",
+  ".",
+  "-",
+  "#VALUE!",
+  "#N/A",
+  "null",
+  "undefined",
+  "true",
+  "SCE",
+  "rhe",
+  "Ag/AgCl",
+  "AgCl-3M",
+  "copper sulfate",
+  "O2",
+  "h2",
+  "oxygen",
+  "CO2",
+  "\u0000",
+  "💧",
+  "a".repeat(300),
+  "25",
+  "-5",
+  "101",
+  "16.0001",
+  "mV",
+  "V",
+  "constructor",
+  "__proto__",
+  "toString",
 );
 const hostileNumber = fc.oneof(
   fc.double(), // includes NaN, ±Infinity, −0, subnormals
@@ -45,7 +81,12 @@ const rectangle = fc
   .chain(([r, c]) => fc.array(fc.array(cell, { minLength: c, maxLength: c }), { minLength: r, maxLength: r }));
 const ragged = fc.array(fc.array(cell, { maxLength: 4 }), { maxLength: 4 });
 const nested = fc.array(fc.array(fc.oneof(cell, fc.array(cell, { maxLength: 3 })), { maxLength: 3 }), { maxLength: 3 });
-const argument = fc.oneof({ weight: 3, arbitrary: cell }, { weight: 3, arbitrary: rectangle }, { weight: 1, arbitrary: ragged }, { weight: 1, arbitrary: nested });
+const argument = fc.oneof(
+  { weight: 3, arbitrary: cell },
+  { weight: 3, arbitrary: rectangle },
+  { weight: 1, arbitrary: ragged },
+  { weight: 1, arbitrary: nested },
+);
 
 // Excel shows a message only with #VALUE! and #N/A: no other code may come out
 const CODES = new Set(["#VALUE!", "#N/A"]);
@@ -67,7 +108,10 @@ function problem(result: unknown, argNames: string[]): string | null {
         if (!CODES.has(v.code)) return `unknown code ${v.code}`;
         if (!v.message) return "error without message";
         // the message names an argument, or is the shape message naming all of them
-        if (!argNames.some((n) => v.message.startsWith(`${n}:`)) && !v.message.startsWith("ranges of different shapes")) {
+        if (
+          !argNames.some((n) => v.message.startsWith(`${n}:`)) &&
+          !v.message.startsWith("ranges of different shapes")
+        ) {
           return `message does not name an argument: ${v.message}`;
         }
       } else return `cell of type ${typeof v}`;
@@ -80,14 +124,17 @@ describe("hostile input never throws and never yields NaN/Infinity", () => {
   for (const { id, fn, arity, argNames } of FUNCTIONS) {
     it(id, () => {
       fc.assert(
-        fc.property(fc.integer({ min: 0, max: arity }).chain((n) => fc.array(argument, { minLength: n, maxLength: n })), (args) => {
-          let result: unknown;
-          expect(() => {
-            result = fn(...args);
-          }).not.toThrow();
-          const p = problem(result, argNames);
-          if (p) throw new Error(`${id}(${JSON.stringify(args)}): ${p}`);
-        }),
+        fc.property(
+          fc.integer({ min: 0, max: arity }).chain((n) => fc.array(argument, { minLength: n, maxLength: n })),
+          (args) => {
+            let result: unknown;
+            expect(() => {
+              result = fn(...args);
+            }).not.toThrow();
+            const p = problem(result, argNames);
+            if (p) throw new Error(`${id}(${JSON.stringify(args)}): ${p}`);
+          },
+        ),
         { numRuns: 1500 },
       );
     });
@@ -95,7 +142,13 @@ describe("hostile input never throws and never yields NaN/Infinity", () => {
 });
 
 describe("valid input gives numbers of the broadcast shape", () => {
-  const column = (arb: fc.Arbitrary<number>) => fc.integer({ min: 1, max: 5 }).chain((n) => fc.array(arb.map((v) => [v]), { minLength: n, maxLength: n }));
+  const column = (arb: fc.Arbitrary<number>) =>
+    fc.integer({ min: 1, max: 5 }).chain((n) =>
+      fc.array(
+        arb.map((v) => [v]),
+        { minLength: n, maxLength: n },
+      ),
+    );
   const pH = fc.double({ min: -2, max: 16, noNaN: true });
   const celsius = fc.double({ min: 0, max: 60, noNaN: true });
   const volts = fc.double({ min: -3, max: 3, noNaN: true });
@@ -115,16 +168,34 @@ describe("valid input gives numbers of the broadcast shape", () => {
   });
 
   it("FROMSHE undoes TOSHE for every electrode in its range", () => {
-    const electrodes = ["SHE", "SCE", "AgCl-sat", "AgCl-3.5M", "AgCl-3M", "AgCl-1M", "AgCl-sea", "CSE", "MSE", "HgO-1M", "RHE"];
+    const electrodes = [
+      "SHE",
+      "SCE",
+      "AgCl-sat",
+      "AgCl-3.5M",
+      "AgCl-3M",
+      "AgCl-1M",
+      "AgCl-sea",
+      "CSE",
+      "MSE",
+      "HgO-1M",
+      "RHE",
+    ];
     // readings within ±2 V keep the potential vs SHE inside the ±3 V the functions accept (electrodes lie within 1 V of SHE)
     const reading2 = fc.double({ min: -2, max: 2, noNaN: true });
     fc.assert(
-      fc.property(reading2, fc.constantFrom(...electrodes), fc.double({ min: 0, max: 40, noNaN: true }), pH, (reading, electrode, t, p) => {
-        const she = toshe([[reading]], [[electrode]], [[t]], [[p]])[0][0] as number;
-        const back = fromshe([[she]], [[electrode]], [[t]], [[p]])[0][0] as number;
-        expect(typeof she).toBe("number");
-        expect(back).toBeCloseTo(reading, 9);
-      }),
+      fc.property(
+        reading2,
+        fc.constantFrom(...electrodes),
+        fc.double({ min: 0, max: 40, noNaN: true }),
+        pH,
+        (reading, electrode, t, p) => {
+          const she = toshe([[reading]], [[electrode]], [[t]], [[p]])[0][0] as number;
+          const back = fromshe([[she]], [[electrode]], [[t]], [[p]])[0][0] as number;
+          expect(typeof she).toBe("number");
+          expect(back).toBeCloseTo(reading, 9);
+        },
+      ),
     );
   });
 

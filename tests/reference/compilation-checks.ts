@@ -43,7 +43,8 @@ export interface ConstantCase {
   independent: boolean;
 }
 
-const potentialOfCase = (c: PotentialCase) => (c.pair ? standardPotential(db, c.pair[0], c.pair[1], 25) : potentialOf(c.reaction!));
+const potentialOfCase = (c: PotentialCase) =>
+  c.pair ? standardPotential(db, c.pair[0], c.pair[1], 25) : potentialOf(c.reaction!);
 
 /** E° within 10 mV of the tabulated value (0.5 mV for records derived from that value). */
 export function checkPotentials(title: string, cases: readonly PotentialCase[]): void {
@@ -77,7 +78,12 @@ export function checkDisagreements(title: string, cases: readonly Disagreement[]
  * log K within 0.5 of the published constant (0.01 for round trips); every metal covered by a constant —
  * an independent one unless `roundTripsCount` (a group where some metal has only a round trip, said in its test).
  */
-export function checkConstants(title: string, cases: readonly ConstantCase[], metals: readonly string[], roundTripsCount = false): void {
+export function checkConstants(
+  title: string,
+  cases: readonly ConstantCase[],
+  metals: readonly string[],
+  roundTripsCount = false,
+): void {
   describe(title, () => {
     for (const c of cases) {
       const kind = c.independent ? "independent" : "derivation round trip";
@@ -87,7 +93,9 @@ export function checkConstants(title: string, cases: readonly ConstantCase[], me
     }
     it(`every metal of the group has at least one ${roundTripsCount ? "" : "independent "}constant checked`, () => {
       for (const m of metals) {
-        const covered = cases.some((c) => (c.independent || roundTripsCount) && Object.keys(c.reaction).some((f) => db.species(f)?.system === m));
+        const covered = cases.some(
+          (c) => (c.independent || roundTripsCount) && Object.keys(c.reaction).some((f) => db.species(f)?.system === m),
+        );
         expect(covered, m).toBe(true);
       }
     });

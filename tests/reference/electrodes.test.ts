@@ -19,7 +19,7 @@ const byId = (id: string) => {
 const agclStandard = (t: number) => 0.23659 - 4.8564e-4 * t - 3.4205e-6 * t * t + 5.869e-9 * t ** 3;
 // E°(Hg2Cl2/Hg) = 0.26808 V at 25 °C (Bard, Parsons & Jordan 1985, from memory) with dE°/dT = −0.30 mV/K from the
 // NBS 1982 entropies of Hg(l), Cl−, Hg2Cl2(s) and H2(g) (Wagman et al. 1982, from memory)
-const calomelStandard = (t: number) => 0.26808 - 0.30e-3 * (t - 25);
+const calomelStandard = (t: number) => 0.26808 - 0.3e-3 * (t - 25);
 // SCE polynomial of Sawyer, Sobkowiak & Roberts 1995 (from memory)
 const sceSawyer = (t: number) => 0.2412 - 6.61e-4 * (t - 25) - 1.75e-6 * (t - 25) ** 2 - 9.0e-10 * (t - 25) ** 3;
 const nernst = (celsius: number) => (8.314462618 * (celsius + 273.15) * Math.LN10) / 96485.33212;
@@ -35,46 +35,156 @@ interface Case {
 }
 
 const at25: Case[] = [
-  { id: "SHE", celsius: 25, value: 0, tolerance: 0.003, source: "IUPAC convention (common practice)", independent: true },
-  { id: "SCE", celsius: 25, value: 0.2412, tolerance: 0.003, source: "Bard & Faulkner 2001, Electrochemical Methods, reference electrode table (from memory)", independent: false },
-  { id: "SCE", celsius: 25, value: 0.2415, tolerance: 0.003, source: "Ives & Janz 1961, Reference Electrodes, saturated calomel at 25 °C (from memory)", independent: true },
-  { id: "AgCl-sat", celsius: 25, value: 0.197, tolerance: 0.003, source: "Bard & Faulkner 2001, Ag/AgCl saturated KCl (from memory)", independent: false },
+  {
+    id: "SHE",
+    celsius: 25,
+    value: 0,
+    tolerance: 0.003,
+    source: "IUPAC convention (common practice)",
+    independent: true,
+  },
+  {
+    id: "SCE",
+    celsius: 25,
+    value: 0.2412,
+    tolerance: 0.003,
+    source: "Bard & Faulkner 2001, Electrochemical Methods, reference electrode table (from memory)",
+    independent: false,
+  },
+  {
+    id: "SCE",
+    celsius: 25,
+    value: 0.2415,
+    tolerance: 0.003,
+    source: "Ives & Janz 1961, Reference Electrodes, saturated calomel at 25 °C (from memory)",
+    independent: true,
+  },
+  {
+    id: "AgCl-sat",
+    celsius: 25,
+    value: 0.197,
+    tolerance: 0.003,
+    source: "Bard & Faulkner 2001, Ag/AgCl saturated KCl (from memory)",
+    independent: false,
+  },
   {
     id: "AgCl-sat",
     celsius: 25,
     value: agclStandard(25) + sceSawyer(25) - calomelStandard(25),
     tolerance: 0.003,
-    source: "derived: the saturated-KCl chloride term is the same for SCE and Ag/AgCl, so E = E°(AgCl/Ag) [Bates & Bower 1954] + E(SCE) [Sawyer et al. 1995] − E°(Hg2Cl2/Hg) [Bard, Parsons & Jordan 1985] (all from memory)",
+    source:
+      "derived: the saturated-KCl chloride term is the same for SCE and Ag/AgCl, so E = E°(AgCl/Ag) [Bates & Bower 1954] + E(SCE) [Sawyer et al. 1995] − E°(Hg2Cl2/Hg) [Bard, Parsons & Jordan 1985] (all from memory)",
     independent: true,
   },
-  { id: "AgCl-3.5M", celsius: 25, value: 0.205, tolerance: 0.003, source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 3.5 M KCl (from memory)", independent: false },
-  { id: "AgCl-3M", celsius: 25, value: 0.209, tolerance: 0.003, source: "manufacturers' tables for Ag/AgCl 3 mol/L KCl, 0.207–0.210 V (from memory)", independent: true },
-  { id: "AgCl-1M", celsius: 25, value: 0.235, tolerance: 0.003, source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 1 M KCl (from memory)", independent: false },
+  {
+    id: "AgCl-3.5M",
+    celsius: 25,
+    value: 0.205,
+    tolerance: 0.003,
+    source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 3.5 M KCl (from memory)",
+    independent: false,
+  },
+  {
+    id: "AgCl-3M",
+    celsius: 25,
+    value: 0.209,
+    tolerance: 0.003,
+    source: "manufacturers' tables for Ag/AgCl 3 mol/L KCl, 0.207–0.210 V (from memory)",
+    independent: true,
+  },
+  {
+    id: "AgCl-1M",
+    celsius: 25,
+    value: 0.235,
+    tolerance: 0.003,
+    source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 1 M KCl (from memory)",
+    independent: false,
+  },
   {
     id: "AgCl-1M",
     celsius: 25,
     value: agclStandard(25) - nernst(25) * Math.log10(1.033 * 0.604),
     tolerance: 0.003,
-    source: "derived: E°(AgCl/Ag) of Bates & Bower 1954 with a(Cl−) = m·γ±, 1 mol/L KCl = 1.033 mol/kg, γ± = 0.604 (Robinson & Stokes, Electrolyte Solutions 1959) (from memory)",
+    source:
+      "derived: E°(AgCl/Ag) of Bates & Bower 1954 with a(Cl−) = m·γ±, 1 mol/L KCl = 1.033 mol/kg, γ± = 0.604 (Robinson & Stokes, Electrolyte Solutions 1959) (from memory)",
     independent: true,
   },
-  { id: "AgCl-sea", celsius: 25, value: 0.25, tolerance: 0.003, source: "DNV-RP-B401 / NACE SP0176, Ag/AgCl/seawater +0.25 V vs SHE (from memory)", independent: false },
-  { id: "CSE", celsius: 25, value: 0.316, tolerance: 0.003, source: "Peabody, Control of Pipeline Corrosion 2001; NACE practice, Cu/CuSO4 +0.316 V vs SHE (from memory)", independent: false },
-  { id: "MSE", celsius: 25, value: 0.64, tolerance: 0.003, source: "Bard & Faulkner 2001, Hg/Hg2SO4 saturated K2SO4 (from memory)", independent: false },
-  { id: "HgO-1M", celsius: 25, value: 0.098, tolerance: 0.003, source: "Hg/HgO in 1 M KOH, value used throughout the alkaline-electrolysis literature (from memory)", independent: false },
-  { id: "RHE", celsius: 25, pH: 7, value: -0.414, tolerance: 0.003, source: "common practice: RHE at pH 7 lies 0.414 V below SHE", independent: true },
+  {
+    id: "AgCl-sea",
+    celsius: 25,
+    value: 0.25,
+    tolerance: 0.003,
+    source: "DNV-RP-B401 / NACE SP0176, Ag/AgCl/seawater +0.25 V vs SHE (from memory)",
+    independent: false,
+  },
+  {
+    id: "CSE",
+    celsius: 25,
+    value: 0.316,
+    tolerance: 0.003,
+    source: "Peabody, Control of Pipeline Corrosion 2001; NACE practice, Cu/CuSO4 +0.316 V vs SHE (from memory)",
+    independent: false,
+  },
+  {
+    id: "MSE",
+    celsius: 25,
+    value: 0.64,
+    tolerance: 0.003,
+    source: "Bard & Faulkner 2001, Hg/Hg2SO4 saturated K2SO4 (from memory)",
+    independent: false,
+  },
+  {
+    id: "HgO-1M",
+    celsius: 25,
+    value: 0.098,
+    tolerance: 0.003,
+    source: "Hg/HgO in 1 M KOH, value used throughout the alkaline-electrolysis literature (from memory)",
+    independent: false,
+  },
+  {
+    id: "RHE",
+    celsius: 25,
+    pH: 7,
+    value: -0.414,
+    tolerance: 0.003,
+    source: "common practice: RHE at pH 7 lies 0.414 V below SHE",
+    independent: true,
+  },
 ];
 
 const otherTemperature: Case[] = [
-  { id: "SHE", celsius: 80, value: 0, tolerance: 0.005, source: "IUPAC convention: zero at every temperature (common practice)", independent: true },
-  { id: "RHE", celsius: 60, pH: 7, value: -7 * 0.066104, tolerance: 0.005, source: "Nernst equation, k(60 °C) = 0.066104 V (common practice)", independent: true },
-  { id: "SCE", celsius: 40, value: 0.2309, tolerance: 0.005, source: "Sawyer et al. 1995 polynomial evaluated by hand at 40 °C (from memory)", independent: false },
+  {
+    id: "SHE",
+    celsius: 80,
+    value: 0,
+    tolerance: 0.005,
+    source: "IUPAC convention: zero at every temperature (common practice)",
+    independent: true,
+  },
+  {
+    id: "RHE",
+    celsius: 60,
+    pH: 7,
+    value: -7 * 0.066104,
+    tolerance: 0.005,
+    source: "Nernst equation, k(60 °C) = 0.066104 V (common practice)",
+    independent: true,
+  },
+  {
+    id: "SCE",
+    celsius: 40,
+    value: 0.2309,
+    tolerance: 0.005,
+    source: "Sawyer et al. 1995 polynomial evaluated by hand at 40 °C (from memory)",
+    independent: false,
+  },
   {
     id: "AgCl-sat",
     celsius: 40,
     value: agclStandard(40) + sceSawyer(40) - calomelStandard(40),
     tolerance: 0.005,
-    source: "derived as at 25 °C from Bates & Bower 1954, Sawyer et al. 1995 and Bard, Parsons & Jordan 1985 (from memory)",
+    source:
+      "derived as at 25 °C from Bates & Bower 1954, Sawyer et al. 1995 and Bard, Parsons & Jordan 1985 (from memory)",
     independent: true,
   },
   {
@@ -82,20 +192,43 @@ const otherTemperature: Case[] = [
     celsius: 50,
     value: agclStandard(50) - nernst(50) * Math.log10(1.033 * 0.6),
     tolerance: 0.005,
-    source: "derived: Bates & Bower 1954 E° at 50 °C with γ±(KCl, 1 mol/kg, 50 °C) = 0.600 (Harned & Owen, The Physical Chemistry of Electrolytic Solutions 1958) (from memory)",
+    source:
+      "derived: Bates & Bower 1954 E° at 50 °C with γ±(KCl, 1 mol/kg, 50 °C) = 0.600 (Harned & Owen, The Physical Chemistry of Electrolytic Solutions 1958) (from memory)",
     independent: true,
   },
-  { id: "CSE", celsius: 5, value: 0.298, tolerance: 0.005, source: "pipeline practice: E = 0.316 + 0.0009 (t − 25) V vs SHE, NACE / Peabody 2001 (from memory)", independent: false },
-  { id: "HgO-1M", celsius: 50, value: 0.098 - 25 * 1.12e-3, tolerance: 0.005, source: "Bratsch 1989, dE°/dT of HgO/Hg −1.12 mV/K, applied to the 1 M KOH value (from memory)", independent: false },
+  {
+    id: "CSE",
+    celsius: 5,
+    value: 0.298,
+    tolerance: 0.005,
+    source: "pipeline practice: E = 0.316 + 0.0009 (t − 25) V vs SHE, NACE / Peabody 2001 (from memory)",
+    independent: false,
+  },
+  {
+    id: "HgO-1M",
+    celsius: 50,
+    value: 0.098 - 25 * 1.12e-3,
+    tolerance: 0.005,
+    source: "Bratsch 1989, dE°/dT of HgO/Hg −1.12 mV/K, applied to the 1 M KOH value (from memory)",
+    independent: false,
+  },
   {
     id: "AgCl-3.5M",
     celsius: 50,
     value: 0.205 - 25 * 0.73e-3,
     tolerance: 0.005,
-    source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 3.5 M KCl: 0.205 V, dE/dT −0.73 mV/K, applied linearly (from memory)",
+    source:
+      "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 3.5 M KCl: 0.205 V, dE/dT −0.73 mV/K, applied linearly (from memory)",
     independent: true,
   },
-  { id: "MSE", celsius: 40, value: 0.64 - 15 * 0.83e-3, tolerance: 0.005, source: "Bratsch 1989, dE°/dT of Hg2SO4/Hg −0.83 mV/K, applied to the saturated K2SO4 value (from memory)", independent: false },
+  {
+    id: "MSE",
+    celsius: 40,
+    value: 0.64 - 15 * 0.83e-3,
+    tolerance: 0.005,
+    source: "Bratsch 1989, dE°/dT of Hg2SO4/Hg −0.83 mV/K, applied to the saturated K2SO4 value (from memory)",
+    independent: false,
+  },
 ];
 
 describe("reference electrodes vs SHE", () => {
@@ -122,8 +255,25 @@ describe("reference electrodes vs SHE", () => {
   });
 
   it("every electrode of README's electrode table is in the data, each citing its sources", () => {
-    const ids = ["SHE", "SCE", "AgCl-sat", "AgCl-3.5M", "AgCl-3M", "AgCl-1M", "AgCl-sea", "CSE", "MSE", "HgO-1M", "RHE"];
-    expect(table.all().map((e) => e.id).sort()).toEqual([...ids].sort());
+    const ids = [
+      "SHE",
+      "SCE",
+      "AgCl-sat",
+      "AgCl-3.5M",
+      "AgCl-3M",
+      "AgCl-1M",
+      "AgCl-sea",
+      "CSE",
+      "MSE",
+      "HgO-1M",
+      "RHE",
+    ];
+    expect(
+      table
+        .all()
+        .map((e) => e.id)
+        .sort(),
+    ).toEqual([...ids].sort());
     for (const e of table.all()) {
       expect(e.citation.length).toBeGreaterThan(10);
       expect(e.temperatureCitation.length).toBeGreaterThan(10);

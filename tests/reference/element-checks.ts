@@ -12,7 +12,8 @@ import { buildSystem, pairBoundary } from "../../src/chemistry/system";
 
 const db = getDatabase();
 
-export const ATLAS = "Pourbaix 1974, Atlas of Electrochemical Equilibria in Aqueous Solutions, 2nd English ed. (from memory)";
+export const ATLAS =
+  "Pourbaix 1974, Atlas of Electrochemical Equilibria in Aqueous Solutions, 2nd English ed. (from memory)";
 export const SMITH_MARTELL =
   "Smith & Martell, Critical Stability Constants vol. 4 (1976) and NIST Standard Reference Database 46, critically selected constants, 25 °C, I = 0 (from memory)";
 
@@ -98,12 +99,17 @@ export function checkDiagramLines(title: string, lines: readonly DiagramLine[]):
         const boundary = boundaryOf(line);
         expect(boundary?.kind).toBe(line.kind);
         if (boundary?.kind === "vertical") {
-          expect(Math.abs(boundary.pH - line.pH0!), `pH ${boundary.pH.toFixed(3)} vs ${line.pH0}`).toBeLessThanOrEqual(0.5 / (line.h ?? 1));
+          expect(Math.abs(boundary.pH - line.pH0!), `pH ${boundary.pH.toFixed(3)} vs ${line.pH0}`).toBeLessThanOrEqual(
+            0.5 / (line.h ?? 1),
+          );
           return;
         }
         if (boundary?.kind !== "line") return;
         const expected = line.e0! + line.logCoef! * LOG_A;
-        expect(Math.abs(boundary.intercept - expected), `intercept ${boundary.intercept.toFixed(4)} V vs ${expected.toFixed(4)} V`).toBeLessThanOrEqual(line.derived ? 0.002 : 0.03);
+        expect(
+          Math.abs(boundary.intercept - expected),
+          `intercept ${boundary.intercept.toFixed(4)} V vs ${expected.toFixed(4)} V`,
+        ).toBeLessThanOrEqual(line.derived ? 0.002 : 0.03);
         expect(Math.abs(boundary.slope - -line.hPerN! * K25)).toBeLessThan(1e-12);
       });
     }

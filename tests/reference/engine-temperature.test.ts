@@ -18,9 +18,24 @@ function slopeMilliVoltPerKelvin(ox: string, red: string): number {
 
 describe("isothermal temperature coefficients dE°/dT (V vs SHE)", () => {
   const cases = [
-    { ox: "Ag+", red: "Ag(s)", value: -0.989, source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)" },
-    { ox: "Zn2+", red: "Zn(s)", value: 0.119, source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)" },
-    { ox: "Cu2+", red: "Cu(s)", value: 0.008, source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)" },
+    {
+      ox: "Ag+",
+      red: "Ag(s)",
+      value: -0.989,
+      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)",
+    },
+    {
+      ox: "Zn2+",
+      red: "Zn(s)",
+      value: 0.119,
+      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)",
+    },
+    {
+      ox: "Cu2+",
+      red: "Cu(s)",
+      value: 0.008,
+      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)",
+    },
   ];
   for (const c of cases) {
     it(`${c.ox}/${c.red}: ${c.value} mV/K — ${c.source}`, () => {

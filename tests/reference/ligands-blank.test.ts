@@ -13,10 +13,11 @@ const metals = db.metals();
 // a column of points covering the diagram, as a worksheet range
 const pHs: number[] = [];
 const Es: number[] = [];
-for (let pH = -1; pH <= 15; pH += 2) for (let E = -1.6; E <= 1.6; E += 0.4) {
-  pHs.push(pH);
-  Es.push(Number(E.toFixed(2)));
-}
+for (let pH = -1; pH <= 15; pH += 2)
+  for (let E = -1.6; E <= 1.6; E += 0.4) {
+    pHs.push(pH);
+    Es.push(Number(E.toFixed(2)));
+  }
 const col = (xs: unknown[]) => xs.map((x) => [x]) as any[][];
 
 describe("blank ligand arguments change nothing", () => {
@@ -47,7 +48,12 @@ describe("blank ligand arguments change nothing", () => {
   it("buildLigandSystem with no ligand gives the planes of buildSystem bit for bit", () => {
     for (const metal of metals) {
       const plain = buildSystem(db, metal, { celsius: 40, activity: 1e-5 });
-      const viaLigands = buildLigandSystem(db, metal, { celsius: 40, activity: 1e-5 }, { carbonate: 0, chloride: 0, sulfur: 0 });
+      const viaLigands = buildLigandSystem(
+        db,
+        metal,
+        { celsius: 40, activity: 1e-5 },
+        { carbonate: 0, chloride: 0, sulfur: 0 },
+      );
       expect(viaLigands.species.map((s) => s.formula)).toEqual(plain.species.map((s) => s.formula));
       expect(viaLigands.cells.length).toBe(1);
       expect(Array.from(viaLigands.cells[0].a)).toEqual(Array.from(plain.cells[0].a));
@@ -57,6 +63,8 @@ describe("blank ligand arguments change nothing", () => {
   });
 
   it("a ligand does change the answer where it should: lead at pH 8, +0.4 V with 1 mmol/kg DIC", () => {
-    expect(species([["Pb"]], [[8]], [[0.4]])[0][0]).not.toBe(species([["Pb"]], [[8]], [[0.4]], undefined, undefined, [[1e-3]])[0][0]);
+    expect(species([["Pb"]], [[8]], [[0.4]])[0][0]).not.toBe(
+      species([["Pb"]], [[8]], [[0.4]], undefined, undefined, [[1e-3]])[0][0],
+    );
   });
 });

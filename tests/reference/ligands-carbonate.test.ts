@@ -18,8 +18,10 @@ import { dic } from "../../src/functions/functions";
 import { CellError } from "../../src/functions/cell-values";
 
 const db = getDatabase();
-const HD = "Harned, H.S., Davis, R., J. Am. Chem. Soc. 65, 2030 (1943), as tabulated by Plummer & Busenberg 1982, GCA 46:1011 (from memory)";
-const HS = "Harned, H.S., Scholes, S.R., J. Am. Chem. Soc. 63, 1706 (1941), as tabulated by Plummer & Busenberg 1982, GCA 46:1011 (from memory)";
+const HD =
+  "Harned, H.S., Davis, R., J. Am. Chem. Soc. 65, 2030 (1943), as tabulated by Plummer & Busenberg 1982, GCA 46:1011 (from memory)";
+const HS =
+  "Harned, H.S., Scholes, S.R., J. Am. Chem. Soc. 63, 1706 (1941), as tabulated by Plummer & Busenberg 1982, GCA 46:1011 (from memory)";
 const PB60 = "Plummer & Busenberg 1982, GCA 46:1011, log K(T) fit evaluated at 60 °C (from memory)";
 
 const CASES: { what: "pK1" | "pK2" | "logKH"; celsius: number; value: number; source: string }[] = [
@@ -61,7 +63,10 @@ describe("carbonate ligand cells follow pK1 and pK2 of the records", () => {
       for (const total of [1e-4, 1e-2]) {
         const cells = ligandOwnCells(db, "carbonate", total, celsius);
         expect(cells.map((c) => c.ligands[0].species.formula).sort()).toEqual(["CO2(aq)", "CO32-", "HCO3-"]);
-        const edges = cells.flatMap((c) => c.region).filter((h) => h.c === 0 && h.b !== 0).map((h) => Math.abs(h.a / h.b));
+        const edges = cells
+          .flatMap((c) => c.region)
+          .filter((h) => h.c === 0 && h.b !== 0)
+          .map((h) => Math.abs(h.a / h.b));
         const pK1 = fromSpecies("pK1", celsius);
         const pK2 = fromSpecies("pK2", celsius);
         expect(edges.some((x) => Math.abs(x - pK1) < 1e-9)).toBe(true);
@@ -121,6 +126,8 @@ describe("dissolved inorganic carbon from alkalinity (hand calculations)", () =>
     expect(out[4][0]).toBe("");
     const hot = dic([[100]], [[7.5]], [[150]]);
     expect((hot[0][0] as CellError).code).toBe("#VALUE!"); // the fits' range, not the engine's 0–300 °C
-    expect((hot[0][0] as CellError).message).toMatch(/^temperature: 150 °C is outside 0 to 100 °C.*Plummer & Busenberg/);
+    expect((hot[0][0] as CellError).message).toMatch(
+      /^temperature: 150 °C is outside 0 to 100 °C.*Plummer & Busenberg/,
+    );
   });
 });

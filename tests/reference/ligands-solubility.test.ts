@@ -19,7 +19,12 @@ const SM = "Smith & Martell 1976, Critical Stability Constants vol. 4 (from memo
 
 const SOLUBILITY: { solid: string; reaction: Record<string, number>; logK: number; source: string }[] = [
   { solid: "cerussite", reaction: { "PbCO3(s)": -1, "Pb2+": 1, "CO32-": 1 }, logK: -13.13, source: SM },
-  { solid: "siderite", reaction: { "FeCO3(s)": -1, "Fe2+": 1, "CO32-": 1 }, logK: -10.8, source: "Bruno, Wersin & Stumm 1992, Geochim. Cosmochim. Acta 56:1149 (from memory; other studies −10.5 to −10.9)" },
+  {
+    solid: "siderite",
+    reaction: { "FeCO3(s)": -1, "Fe2+": 1, "CO32-": 1 },
+    logK: -10.8,
+    source: "Bruno, Wersin & Stumm 1992, Geochim. Cosmochim. Acta 56:1149 (from memory; other studies −10.5 to −10.9)",
+  },
   { solid: "smithsonite", reaction: { "ZnCO3(s)": -1, "Zn2+": 1, "CO32-": 1 }, logK: -10.0, source: SM },
   { solid: "silver carbonate", reaction: { "Ag2CO3(s)": -1, "Ag+": 2, "CO32-": 1 }, logK: -11.09, source: SM },
   { solid: "anglesite", reaction: { "PbSO4(s)": -1, "Pb2+": 1, "SO42-": 1 }, logK: -7.79, source: SM },
@@ -30,13 +35,15 @@ const SOLUBILITY: { solid: string; reaction: Record<string, number>; logK: numbe
     solid: "sphalerite",
     reaction: { "ZnS(s)": -1, "H+": -1, "Zn2+": 1, "HS-": 1 },
     logK: -11.5,
-    source: "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., sulfide solubility table, ZnS + H+ = Zn2+ + HS- (from memory)",
+    source:
+      "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., sulfide solubility table, ZnS + H+ = Zn2+ + HS- (from memory)",
   },
   {
     solid: "acanthite",
     reaction: { "Ag2S(s)": -1, "H+": -1, "Ag+": 2, "HS-": 1 },
     logK: -36.2,
-    source: "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., sulfide solubility table, Ag2S + H+ = 2Ag+ + HS- (from memory)",
+    source:
+      "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., sulfide solubility table, Ag2S + H+ = 2Ag+ + HS- (from memory)",
   },
 ];
 
@@ -100,7 +107,8 @@ describe("lead in carbonate water: hand calculation of the dissolved total from 
     // log a(Pb2+) in equilibrium with each candidate solid
     const candidates: Record<string, number> = {
       "PbCO3(s)": lk({ "PbCO3(s)": -1, "Pb2+": 1, "CO32-": 1 }) - logCO3,
-      "Pb3(CO3)2(OH)2(s)": (lk({ "Pb3(CO3)2(OH)2(s)": -1, "H+": -2, "Pb2+": 3, "CO32-": 2, "H2O(l)": 2 }) - 2 * pH - 2 * logCO3) / 3,
+      "Pb3(CO3)2(OH)2(s)":
+        (lk({ "Pb3(CO3)2(OH)2(s)": -1, "H+": -2, "Pb2+": 3, "CO32-": 2, "H2O(l)": 2 }) - 2 * pH - 2 * logCO3) / 3,
       "PbO(s)": lk({ "PbO(s)": -1, "H+": -2, "Pb2+": 1, "H2O(l)": 1 }) - 2 * pH,
     };
     const [solid, logPb] = Object.entries(candidates).sort((p, q) => p[1] - q[1])[0];
@@ -144,8 +152,12 @@ describe("lead in carbonate water: hand calculation of the dissolved total from 
       const gC = speciesPotential(system, cerussite, pHBoundary, E);
       const gH = speciesPotential(system, hydro, pHBoundary, E);
       expect(Math.abs(gC - gH)).toBeLessThan(1e-9);
-      expect(speciesPotential(system, cerussite, pHBoundary - 0.1, E)).toBeLessThan(speciesPotential(system, hydro, pHBoundary - 0.1, E));
-      expect(speciesPotential(system, cerussite, pHBoundary + 0.1, E)).toBeGreaterThan(speciesPotential(system, hydro, pHBoundary + 0.1, E));
+      expect(speciesPotential(system, cerussite, pHBoundary - 0.1, E)).toBeLessThan(
+        speciesPotential(system, hydro, pHBoundary - 0.1, E),
+      );
+      expect(speciesPotential(system, cerussite, pHBoundary + 0.1, E)).toBeGreaterThan(
+        speciesPotential(system, hydro, pHBoundary + 0.1, E),
+      );
     }
   });
 });
@@ -189,7 +201,9 @@ describe("lead carbonates: the cerussite/hydrocerussite equilibrium pCO2", () =>
   const recordsLogP = () => lk({ "PbCO3(s)": -3, "H2O(l)": -1, "Pb3(CO3)2(OH)2(s)": 1, "CO2(g)": 1 });
   it("the records reproduce Schock's constants within 0.01: cerussite −13.13, hydrocerussite −17.46", () => {
     expect(Math.abs(lk({ "PbCO3(s)": -1, "Pb2+": 1, "CO32-": 1 }) - -13.13)).toBeLessThanOrEqual(0.01);
-    expect(Math.abs(lk({ "Pb3(CO3)2(OH)2(s)": -1, "H+": -2, "Pb2+": 3, "CO32-": 2, "H2O(l)": 2 }) - -17.46)).toBeLessThanOrEqual(0.01);
+    expect(
+      Math.abs(lk({ "Pb3(CO3)2(OH)2(s)": -1, "H+": -2, "Pb2+": 3, "CO32-": 2, "H2O(l)": 2 }) - -17.46),
+    ).toBeLessThanOrEqual(0.01);
   });
   it("with the records: log pCO2 = −3.8 ± 0.1 (by hand from Schock's pair and the records' carbonic acid)", () => {
     const byHand = 3 * -13.13 - -17.46 + logKCO2;
@@ -204,6 +218,8 @@ describe("lead carbonates: the cerussite/hydrocerussite equilibrium pCO2", () =>
   it("at DIC 1e-3 and pH 7.5 the records give cerussite; at pH 9.5 and DIC 4e-4 hydrocerussite (as lead scales show; common practice)", () => {
     const water = { celsius: 25, activity: 1e-6, carbonate: 1e-3, chloride: 0, sulfur: 0, ionicStrength: 0 };
     expect(dissolvedEquilibrium(db, "Pb", 7.5, 0.3, water).controllingSolid).toBe("PbCO3(s)");
-    expect(dissolvedEquilibrium(db, "Pb", 9.5, 0.3, { ...water, carbonate: 4e-4 }).controllingSolid).toBe("Pb3(CO3)2(OH)2(s)");
+    expect(dissolvedEquilibrium(db, "Pb", 9.5, 0.3, { ...water, carbonate: 4e-4 }).controllingSolid).toBe(
+      "Pb3(CO3)2(OH)2(s)",
+    );
   });
 });

@@ -15,7 +15,18 @@
 import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
 import { reactionLogK } from "../../src/chemistry/reaction";
-import { BARD, BM, checkConstants, checkDisagreements, checkPotentials, ConstantCase, CRC, Disagreement, NBS, PotentialCase } from "./compilation-checks";
+import {
+  BARD,
+  BM,
+  checkConstants,
+  checkDisagreements,
+  checkPotentials,
+  ConstantCase,
+  CRC,
+  Disagreement,
+  NBS,
+  PotentialCase,
+} from "./compilation-checks";
 import { buildSystem, dominantSpecies, pairBoundary } from "../../src/chemistry/system";
 import { FARADAY, GAS_CONSTANT, LN10, T0, nernstFactor } from "../../src/chemistry/constants";
 
@@ -204,48 +215,248 @@ checkDisagreements("group A metals: documented disagreements between compilation
 
 const constants: ConstantCase[] = [
   // independent: NBS records against Baes & Mesmer
-  { label: "Fe3+ + H2O = FeOH2+ + H+, log*β11", reaction: { "Fe3+": -1, "H2O(l)": -1, "FeOH2+": 1, "H+": 1 }, logK: -2.19, source: `${BM}, iron(III)`, independent: true },
-  { label: "2Fe3+ + 2H2O = Fe2(OH)2 4+ + 2H+, log*β22", reaction: { "Fe3+": -2, "H2O(l)": -2, "Fe2(OH)24+": 1, "H+": 2 }, logK: -2.95, source: `${BM}, iron(III)`, independent: true },
-  { label: "Fe2+ + 3H2O = Fe(OH)3- + 3H+, log*β13 (as HFeO2- + H2O)", reaction: { "Fe2+": -1, "H2O(l)": -2, "HFeO2-": 1, "H+": 3 }, logK: -31.0, source: `${BM}, iron(II)`, independent: true },
-  { label: "Cu2+ + 4H2O = Cu(OH)4 2- + 4H+, log*β14 (as CuO2 2- + 2H2O)", reaction: { "Cu2+": -1, "H2O(l)": -2, "CuO22-": 1, "H+": 4 }, logK: -39.6, source: `${BM}, copper(II)`, independent: true },
-  { label: "ZnO (zincite) + 2H+ = Zn2+ + H2O, log*Ks10", reaction: { "ZnO(s)": -1, "H+": -2, "Zn2+": 1, "H2O(l)": 1 }, logK: 11.14, source: `${BM}, zinc`, independent: true },
-  { label: "PbO (litharge) + 2H+ = Pb2+ + H2O, log*Ks10", reaction: { "PbO(s)": -1, "H+": -2, "Pb2+": 1, "H2O(l)": 1 }, logK: 12.7, source: `${BM}, lead(II)`, independent: true },
-  { label: "Pb2+ + 3H2O = Pb(OH)3- + 3H+, log*β13 (as HPbO2- + H2O)", reaction: { "Pb2+": -1, "H2O(l)": -2, "HPbO2-": 1, "H+": 3 }, logK: -28.06, source: `${BM}, lead(II)`, independent: true },
-  { label: "Ni2+ + H2O = NiOH+ + H+, log*β11", reaction: { "Ni2+": -1, "H2O(l)": -1, "NiOH+": 1, "H+": 1 }, logK: -9.86, source: `${BM}, nickel(II)`, independent: true },
-  { label: "HCrO4- = CrO4 2- + H+, log K", reaction: { "HCrO4-": -1, "CrO42-": 1, "H+": 1 }, logK: -6.51, source: `${BM}, chromium(VI) (value recalled with low confidence as to the table; the commonly cited pKa)`, independent: true },
-  { label: "2HCrO4- = Cr2O7 2- + H2O, log K", reaction: { "HCrO4-": -2, "Cr2O72-": 1, "H2O(l)": 1 }, logK: 1.52, source: `${BM}, chromium(VI) (value recalled with low confidence as to the table)`, independent: true },
-  { label: "Al3+ + H2O = AlOH2+ + H+, log*β11", reaction: { "Al3+": -1, "H2O(l)": -1, "AlOH2+": 1, "H+": 1 }, logK: -4.97, source: `${BM}, aluminium`, independent: true },
-  { label: "Mn2+ + H2O = MnOH+ + H+, log*β11", reaction: { "Mn2+": -1, "H2O(l)": -1, "MnOH+": 1, "H+": 1 }, logK: -10.59, source: `${BM}, manganese(II)`, independent: true },
-  { label: "Mn2+ + 3H2O = Mn(OH)3- + 3H+, log*β13 (as HMnO2- + H2O)", reaction: { "Mn2+": -1, "H2O(l)": -2, "HMnO2-": 1, "H+": 3 }, logK: -34.8, source: `${BM}, manganese(II)`, independent: true },
-  { label: "Mn(OH)2 + 2H+ = Mn2+ + 2H2O, log*Ks10", reaction: { "Mn(OH)2(s)": -1, "H+": -2, "Mn2+": 1, "H2O(l)": 2 }, logK: 15.2, source: `${BM}, manganese(II)`, independent: true },
+  {
+    label: "Fe3+ + H2O = FeOH2+ + H+, log*β11",
+    reaction: { "Fe3+": -1, "H2O(l)": -1, "FeOH2+": 1, "H+": 1 },
+    logK: -2.19,
+    source: `${BM}, iron(III)`,
+    independent: true,
+  },
+  {
+    label: "2Fe3+ + 2H2O = Fe2(OH)2 4+ + 2H+, log*β22",
+    reaction: { "Fe3+": -2, "H2O(l)": -2, "Fe2(OH)24+": 1, "H+": 2 },
+    logK: -2.95,
+    source: `${BM}, iron(III)`,
+    independent: true,
+  },
+  {
+    label: "Fe2+ + 3H2O = Fe(OH)3- + 3H+, log*β13 (as HFeO2- + H2O)",
+    reaction: { "Fe2+": -1, "H2O(l)": -2, "HFeO2-": 1, "H+": 3 },
+    logK: -31.0,
+    source: `${BM}, iron(II)`,
+    independent: true,
+  },
+  {
+    label: "Cu2+ + 4H2O = Cu(OH)4 2- + 4H+, log*β14 (as CuO2 2- + 2H2O)",
+    reaction: { "Cu2+": -1, "H2O(l)": -2, "CuO22-": 1, "H+": 4 },
+    logK: -39.6,
+    source: `${BM}, copper(II)`,
+    independent: true,
+  },
+  {
+    label: "ZnO (zincite) + 2H+ = Zn2+ + H2O, log*Ks10",
+    reaction: { "ZnO(s)": -1, "H+": -2, "Zn2+": 1, "H2O(l)": 1 },
+    logK: 11.14,
+    source: `${BM}, zinc`,
+    independent: true,
+  },
+  {
+    label: "PbO (litharge) + 2H+ = Pb2+ + H2O, log*Ks10",
+    reaction: { "PbO(s)": -1, "H+": -2, "Pb2+": 1, "H2O(l)": 1 },
+    logK: 12.7,
+    source: `${BM}, lead(II)`,
+    independent: true,
+  },
+  {
+    label: "Pb2+ + 3H2O = Pb(OH)3- + 3H+, log*β13 (as HPbO2- + H2O)",
+    reaction: { "Pb2+": -1, "H2O(l)": -2, "HPbO2-": 1, "H+": 3 },
+    logK: -28.06,
+    source: `${BM}, lead(II)`,
+    independent: true,
+  },
+  {
+    label: "Ni2+ + H2O = NiOH+ + H+, log*β11",
+    reaction: { "Ni2+": -1, "H2O(l)": -1, "NiOH+": 1, "H+": 1 },
+    logK: -9.86,
+    source: `${BM}, nickel(II)`,
+    independent: true,
+  },
+  {
+    label: "HCrO4- = CrO4 2- + H+, log K",
+    reaction: { "HCrO4-": -1, "CrO42-": 1, "H+": 1 },
+    logK: -6.51,
+    source: `${BM}, chromium(VI) (value recalled with low confidence as to the table; the commonly cited pKa)`,
+    independent: true,
+  },
+  {
+    label: "2HCrO4- = Cr2O7 2- + H2O, log K",
+    reaction: { "HCrO4-": -2, "Cr2O72-": 1, "H2O(l)": 1 },
+    logK: 1.52,
+    source: `${BM}, chromium(VI) (value recalled with low confidence as to the table)`,
+    independent: true,
+  },
+  {
+    label: "Al3+ + H2O = AlOH2+ + H+, log*β11",
+    reaction: { "Al3+": -1, "H2O(l)": -1, "AlOH2+": 1, "H+": 1 },
+    logK: -4.97,
+    source: `${BM}, aluminium`,
+    independent: true,
+  },
+  {
+    label: "Mn2+ + H2O = MnOH+ + H+, log*β11",
+    reaction: { "Mn2+": -1, "H2O(l)": -1, "MnOH+": 1, "H+": 1 },
+    logK: -10.59,
+    source: `${BM}, manganese(II)`,
+    independent: true,
+  },
+  {
+    label: "Mn2+ + 3H2O = Mn(OH)3- + 3H+, log*β13 (as HMnO2- + H2O)",
+    reaction: { "Mn2+": -1, "H2O(l)": -2, "HMnO2-": 1, "H+": 3 },
+    logK: -34.8,
+    source: `${BM}, manganese(II)`,
+    independent: true,
+  },
+  {
+    label: "Mn(OH)2 + 2H+ = Mn2+ + 2H2O, log*Ks10",
+    reaction: { "Mn(OH)2(s)": -1, "H+": -2, "Mn2+": 1, "H2O(l)": 2 },
+    logK: 15.2,
+    source: `${BM}, manganese(II)`,
+    independent: true,
+  },
   // derivation round trips (species built from these very constants)
-  { label: "Fe2+ + H2O = FeOH+ + H+", reaction: { "Fe2+": -1, "H2O(l)": -1, "FeOH+": 1, "H+": 1 }, logK: -9.5, source: BM, independent: false },
-  { label: "Fe3+ + 2H2O = Fe(OH)2+ + 2H+", reaction: { "Fe3+": -1, "H2O(l)": -2, "Fe(OH)2+": 1, "H+": 2 }, logK: -5.67, source: BM, independent: false },
-  { label: "Fe3+ + 4H2O = Fe(OH)4- + 4H+", reaction: { "Fe3+": -1, "H2O(l)": -4, "Fe(OH)4-": 1, "H+": 4 }, logK: -21.6, source: BM, independent: false },
-  { label: "Cu2+ + H2O = CuOH+ + H+", reaction: { "Cu2+": -1, "H2O(l)": -1, "CuOH+": 1, "H+": 1 }, logK: -8.0, source: BM, independent: false },
-  { label: "2Cu2+ + 2H2O = Cu2(OH)2 2+ + 2H+", reaction: { "Cu2+": -2, "H2O(l)": -2, "Cu2(OH)22+": 1, "H+": 2 }, logK: -10.36, source: BM, independent: false },
-  { label: "Zn2+ + H2O = ZnOH+ + H+", reaction: { "Zn2+": -1, "H2O(l)": -1, "ZnOH+": 1, "H+": 1 }, logK: -8.96, source: BM, independent: false },
-  { label: "Zn2+ + 3H2O = Zn(OH)3- + 3H+", reaction: { "Zn2+": -1, "H2O(l)": -3, "Zn(OH)3-": 1, "H+": 3 }, logK: -28.4, source: BM, independent: false },
-  { label: "Zn2+ + 4H2O = Zn(OH)4 2- + 4H+", reaction: { "Zn2+": -1, "H2O(l)": -4, "Zn(OH)42-": 1, "H+": 4 }, logK: -41.2, source: BM, independent: false },
-  { label: "Pb2+ + H2O = PbOH+ + H+", reaction: { "Pb2+": -1, "H2O(l)": -1, "PbOH+": 1, "H+": 1 }, logK: -7.71, source: BM, independent: false },
-  { label: "Pb2+ + 2H2O = Pb(OH)2(aq) + 2H+", reaction: { "Pb2+": -1, "H2O(l)": -2, "Pb(OH)2(aq)": 1, "H+": 2 }, logK: -17.12, source: BM, independent: false },
-  { label: "4Ni2+ + 4H2O = Ni4(OH)4 4+ + 4H+", reaction: { "Ni2+": -4, "H2O(l)": -4, "Ni4(OH)44+": 1, "H+": 4 }, logK: -27.74, source: BM, independent: false },
-  { label: "Cr3+ + H2O = CrOH2+ + H+", reaction: { "Cr3+": -1, "H2O(l)": -1, "CrOH2+": 1, "H+": 1 }, logK: -4.0, source: BM, independent: false },
-  { label: "Cr3+ + 2H2O = Cr(OH)2+ + 2H+", reaction: { "Cr3+": -1, "H2O(l)": -2, "Cr(OH)2+": 1, "H+": 2 }, logK: -9.7, source: BM, independent: false },
-  { label: "Cr3+ + 4H2O = Cr(OH)4- + 4H+", reaction: { "Cr3+": -1, "H2O(l)": -4, "Cr(OH)4-": 1, "H+": 4 }, logK: -27.4, source: BM, independent: false },
-  { label: "Al3+ + 2H2O = Al(OH)2+ + 2H+", reaction: { "Al3+": -1, "H2O(l)": -2, "Al(OH)2+": 1, "H+": 2 }, logK: -9.3, source: BM, independent: false },
-  { label: "NiO(s) + H2O = HNiO2- + H+ (Ni(OH)2 + H2O = Ni(OH)3- + H+ in base: log*Ks10 10.8 + log*β13 −29.0)", reaction: { "NiO(s)": -1, "H2O(l)": -1, "HNiO2-": 1, "H+": 1 }, logK: -18.2, source: BM, independent: false },
+  {
+    label: "Fe2+ + H2O = FeOH+ + H+",
+    reaction: { "Fe2+": -1, "H2O(l)": -1, "FeOH+": 1, "H+": 1 },
+    logK: -9.5,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Fe3+ + 2H2O = Fe(OH)2+ + 2H+",
+    reaction: { "Fe3+": -1, "H2O(l)": -2, "Fe(OH)2+": 1, "H+": 2 },
+    logK: -5.67,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Fe3+ + 4H2O = Fe(OH)4- + 4H+",
+    reaction: { "Fe3+": -1, "H2O(l)": -4, "Fe(OH)4-": 1, "H+": 4 },
+    logK: -21.6,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Cu2+ + H2O = CuOH+ + H+",
+    reaction: { "Cu2+": -1, "H2O(l)": -1, "CuOH+": 1, "H+": 1 },
+    logK: -8.0,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "2Cu2+ + 2H2O = Cu2(OH)2 2+ + 2H+",
+    reaction: { "Cu2+": -2, "H2O(l)": -2, "Cu2(OH)22+": 1, "H+": 2 },
+    logK: -10.36,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Zn2+ + H2O = ZnOH+ + H+",
+    reaction: { "Zn2+": -1, "H2O(l)": -1, "ZnOH+": 1, "H+": 1 },
+    logK: -8.96,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Zn2+ + 3H2O = Zn(OH)3- + 3H+",
+    reaction: { "Zn2+": -1, "H2O(l)": -3, "Zn(OH)3-": 1, "H+": 3 },
+    logK: -28.4,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Zn2+ + 4H2O = Zn(OH)4 2- + 4H+",
+    reaction: { "Zn2+": -1, "H2O(l)": -4, "Zn(OH)42-": 1, "H+": 4 },
+    logK: -41.2,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Pb2+ + H2O = PbOH+ + H+",
+    reaction: { "Pb2+": -1, "H2O(l)": -1, "PbOH+": 1, "H+": 1 },
+    logK: -7.71,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Pb2+ + 2H2O = Pb(OH)2(aq) + 2H+",
+    reaction: { "Pb2+": -1, "H2O(l)": -2, "Pb(OH)2(aq)": 1, "H+": 2 },
+    logK: -17.12,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "4Ni2+ + 4H2O = Ni4(OH)4 4+ + 4H+",
+    reaction: { "Ni2+": -4, "H2O(l)": -4, "Ni4(OH)44+": 1, "H+": 4 },
+    logK: -27.74,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Cr3+ + H2O = CrOH2+ + H+",
+    reaction: { "Cr3+": -1, "H2O(l)": -1, "CrOH2+": 1, "H+": 1 },
+    logK: -4.0,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Cr3+ + 2H2O = Cr(OH)2+ + 2H+",
+    reaction: { "Cr3+": -1, "H2O(l)": -2, "Cr(OH)2+": 1, "H+": 2 },
+    logK: -9.7,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Cr3+ + 4H2O = Cr(OH)4- + 4H+",
+    reaction: { "Cr3+": -1, "H2O(l)": -4, "Cr(OH)4-": 1, "H+": 4 },
+    logK: -27.4,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "Al3+ + 2H2O = Al(OH)2+ + 2H+",
+    reaction: { "Al3+": -1, "H2O(l)": -2, "Al(OH)2+": 1, "H+": 2 },
+    logK: -9.3,
+    source: BM,
+    independent: false,
+  },
+  {
+    label: "NiO(s) + H2O = HNiO2- + H+ (Ni(OH)2 + H2O = Ni(OH)3- + H+ in base: log*Ks10 10.8 + log*β13 −29.0)",
+    reaction: { "NiO(s)": -1, "H2O(l)": -1, "HNiO2-": 1, "H+": 1 },
+    logK: -18.2,
+    source: BM,
+    independent: false,
+  },
 ];
 
-checkConstants("group A metals: hydrolysis and solubility constants within 0.5 log units of Baes & Mesmer", constants, METALS);
+checkConstants(
+  "group A metals: hydrolysis and solubility constants within 0.5 log units of Baes & Mesmer",
+  constants,
+  METALS,
+);
 
 /**
  * Constants where the data (NBS 1982 or Robie & Hemingway 1995) and Baes & Mesmer differ by more than 0.5 log
  * units. The data are not adjusted; the difference is pinned so that it cannot change unnoticed.
  */
 const constantDisagreements: (ConstantCase & { follows: number; followsSource: string })[] = [
-  { label: "Cu2+ + 3H2O = Cu(OH)3- + 3H+, log*β13 (as HCuO2- + H2O)", reaction: { "Cu2+": -1, "H2O(l)": -2, "HCuO2-": 1, "H+": 3 }, logK: -26.9, source: BM, independent: true, follows: -26.33, followsSource: `${NBS}, ΔG°f(HCuO2-) = −258.5 kJ/mol` },
-  { label: "Ni(OH)2 + 2H+ = Ni2+ + 2H2O, log*Ks10", reaction: { "Ni(OH)2(s)": -1, "H+": -2, "Ni2+": 1, "H2O(l)": 2 }, logK: 10.8, source: BM, independent: true, follows: 12.73, followsSource: `${NBS}, ΔG°f(Ni(OH)2) = −447.2 kJ/mol` },
+  {
+    label: "Cu2+ + 3H2O = Cu(OH)3- + 3H+, log*β13 (as HCuO2- + H2O)",
+    reaction: { "Cu2+": -1, "H2O(l)": -2, "HCuO2-": 1, "H+": 3 },
+    logK: -26.9,
+    source: BM,
+    independent: true,
+    follows: -26.33,
+    followsSource: `${NBS}, ΔG°f(HCuO2-) = −258.5 kJ/mol`,
+  },
+  {
+    label: "Ni(OH)2 + 2H+ = Ni2+ + 2H2O, log*Ks10",
+    reaction: { "Ni(OH)2(s)": -1, "H+": -2, "Ni2+": 1, "H2O(l)": 2 },
+    logK: 10.8,
+    source: BM,
+    independent: true,
+    follows: 12.73,
+    followsSource: `${NBS}, ΔG°f(Ni(OH)2) = −447.2 kJ/mol`,
+  },
   {
     label: "Ni2+ + 3H2O = Ni(OH)3- + 3H+, log*β13 (as HNiO2- + H2O)",
     reaction: { "Ni2+": -1, "H2O(l)": -2, "HNiO2-": 1, "H+": 3 },
@@ -253,10 +464,27 @@ const constantDisagreements: (ConstantCase & { follows: number; followsSource: s
     source: BM,
     independent: true,
     follows: -30.64,
-    followsSource: "HNiO2- anchored on NBS NiO through Baes & Mesmer's solubility in base (log K −18.2), NBS NiO being 1.6 log units more soluble than their Ni(OH)2",
+    followsSource:
+      "HNiO2- anchored on NBS NiO through Baes & Mesmer's solubility in base (log K −18.2), NBS NiO being 1.6 log units more soluble than their Ni(OH)2",
   },
-  { label: "Al3+ + 4H2O = Al(OH)4- + 4H+, log*β14", reaction: { "Al3+": -1, "H2O(l)": -4, "Al(OH)4-": 1, "H+": 4 }, logK: -23.0, source: BM, independent: true, follows: -22.46, followsSource: `${NBS}, ΔG°f(Al(OH)4-) = −1305.3 kJ/mol` },
-  { label: "Al(OH)3 (gibbsite) + 3H+ = Al3+ + 3H2O, log*Ks10", reaction: { "Al(OH)3(s)": -1, "H+": -3, "Al3+": 1, "H2O(l)": 3 }, logK: 8.2, source: BM, independent: true, follows: 7.27, followsSource: `Robie & Hemingway 1995 gibbsite with ${NBS} Al3+` },
+  {
+    label: "Al3+ + 4H2O = Al(OH)4- + 4H+, log*β14",
+    reaction: { "Al3+": -1, "H2O(l)": -4, "Al(OH)4-": 1, "H+": 4 },
+    logK: -23.0,
+    source: BM,
+    independent: true,
+    follows: -22.46,
+    followsSource: `${NBS}, ΔG°f(Al(OH)4-) = −1305.3 kJ/mol`,
+  },
+  {
+    label: "Al(OH)3 (gibbsite) + 3H+ = Al3+ + 3H2O, log*Ks10",
+    reaction: { "Al(OH)3(s)": -1, "H+": -3, "Al3+": 1, "H2O(l)": 3 },
+    logK: 8.2,
+    source: BM,
+    independent: true,
+    follows: 7.27,
+    followsSource: `Robie & Hemingway 1995 gibbsite with ${NBS} Al3+`,
+  },
 ];
 
 describe("group A metals: documented disagreements with Baes & Mesmer", () => {
@@ -294,31 +522,202 @@ const LOG_A = Math.log10(ACTIVITY);
 
 const atlasLines: AtlasLine[] = [
   // iron (Atlas chapter on iron, anhydrous oxides)
-  { metal: "Fe", pair: ["Fe3+", "Fe2+"], equation: "E = 0.771 + 0.0591 log(Fe3+/Fe2+)", kind: "line", e0: 0.771, hPerN: 0, logCoef: 0, source: ATLAS },
-  { metal: "Fe", pair: ["Fe2O3(s)", "Fe3O4(s)"], equation: "E = 0.221 − 0.0591 pH", kind: "line", e0: 0.221, hPerN: 1, logCoef: 0, source: ATLAS },
-  { metal: "Fe", pair: ["Fe3O4(s)", "Fe(s)"], equation: "E = −0.085 − 0.0591 pH", kind: "line", e0: -0.085, hPerN: 1, logCoef: 0, source: ATLAS },
-  { metal: "Fe", pair: ["HFeO2-", "Fe(s)"], equation: "E = 0.493 − 0.0886 pH + 0.0295 log(HFeO2-)", kind: "line", e0: 0.493, hPerN: 1.5, logCoef: 0.0295, source: ATLAS },
-  { metal: "Fe", pair: ["Fe3O4(s)", "HFeO2-"], equation: "E = −1.819 + 0.0295 pH − 0.0886 log(HFeO2-)", kind: "line", e0: -1.819, hPerN: -0.5, logCoef: -0.0886, source: ATLAS },
+  {
+    metal: "Fe",
+    pair: ["Fe3+", "Fe2+"],
+    equation: "E = 0.771 + 0.0591 log(Fe3+/Fe2+)",
+    kind: "line",
+    e0: 0.771,
+    hPerN: 0,
+    logCoef: 0,
+    source: ATLAS,
+  },
+  {
+    metal: "Fe",
+    pair: ["Fe2O3(s)", "Fe3O4(s)"],
+    equation: "E = 0.221 − 0.0591 pH",
+    kind: "line",
+    e0: 0.221,
+    hPerN: 1,
+    logCoef: 0,
+    source: ATLAS,
+  },
+  {
+    metal: "Fe",
+    pair: ["Fe3O4(s)", "Fe(s)"],
+    equation: "E = −0.085 − 0.0591 pH",
+    kind: "line",
+    e0: -0.085,
+    hPerN: 1,
+    logCoef: 0,
+    source: ATLAS,
+  },
+  {
+    metal: "Fe",
+    pair: ["HFeO2-", "Fe(s)"],
+    equation: "E = 0.493 − 0.0886 pH + 0.0295 log(HFeO2-)",
+    kind: "line",
+    e0: 0.493,
+    hPerN: 1.5,
+    logCoef: 0.0295,
+    source: ATLAS,
+  },
+  {
+    metal: "Fe",
+    pair: ["Fe3O4(s)", "HFeO2-"],
+    equation: "E = −1.819 + 0.0295 pH − 0.0886 log(HFeO2-)",
+    kind: "line",
+    e0: -1.819,
+    hPerN: -0.5,
+    logCoef: -0.0886,
+    source: ATLAS,
+  },
   // copper
-  { metal: "Cu", pair: ["Cu2+", "Cu(s)"], equation: "E = 0.337 + 0.0295 log(Cu2+)", kind: "line", e0: 0.337, hPerN: 0, logCoef: 0.0295, source: ATLAS },
-  { metal: "Cu", pair: ["Cu2O(s)", "Cu(s)"], equation: "E = 0.471 − 0.0591 pH", kind: "line", e0: 0.471, hPerN: 1, logCoef: 0, source: ATLAS },
-  { metal: "Cu", pair: ["Cu2+", "Cu2O(s)"], equation: "E = 0.203 + 0.0591 pH + 0.0591 log(Cu2+)", kind: "line", e0: 0.203, hPerN: -1, logCoef: 0.0591, source: ATLAS },
-  { metal: "Cu", pair: ["CuO(s)", "Cu2O(s)"], equation: "E = 0.669 − 0.0591 pH", kind: "line", e0: 0.669, hPerN: 1, logCoef: 0, source: ATLAS },
+  {
+    metal: "Cu",
+    pair: ["Cu2+", "Cu(s)"],
+    equation: "E = 0.337 + 0.0295 log(Cu2+)",
+    kind: "line",
+    e0: 0.337,
+    hPerN: 0,
+    logCoef: 0.0295,
+    source: ATLAS,
+  },
+  {
+    metal: "Cu",
+    pair: ["Cu2O(s)", "Cu(s)"],
+    equation: "E = 0.471 − 0.0591 pH",
+    kind: "line",
+    e0: 0.471,
+    hPerN: 1,
+    logCoef: 0,
+    source: ATLAS,
+  },
+  {
+    metal: "Cu",
+    pair: ["Cu2+", "Cu2O(s)"],
+    equation: "E = 0.203 + 0.0591 pH + 0.0591 log(Cu2+)",
+    kind: "line",
+    e0: 0.203,
+    hPerN: -1,
+    logCoef: 0.0591,
+    source: ATLAS,
+  },
+  {
+    metal: "Cu",
+    pair: ["CuO(s)", "Cu2O(s)"],
+    equation: "E = 0.669 − 0.0591 pH",
+    kind: "line",
+    e0: 0.669,
+    hPerN: 1,
+    logCoef: 0,
+    source: ATLAS,
+  },
   // zinc
-  { metal: "Zn", pair: ["Zn2+", "Zn(s)"], equation: "E = −0.763 + 0.0295 log(Zn2+)", kind: "line", e0: -0.763, hPerN: 0, logCoef: 0.0295, source: ATLAS },
+  {
+    metal: "Zn",
+    pair: ["Zn2+", "Zn(s)"],
+    equation: "E = −0.763 + 0.0295 log(Zn2+)",
+    kind: "line",
+    e0: -0.763,
+    hPerN: 0,
+    logCoef: 0.0295,
+    source: ATLAS,
+  },
   // lead
-  { metal: "Pb", pair: ["Pb2+", "Pb(s)"], equation: "E = −0.126 + 0.0295 log(Pb2+)", kind: "line", e0: -0.126, hPerN: 0, logCoef: 0.0295, source: ATLAS },
-  { metal: "Pb", pair: ["PbO(s)", "Pb(s)"], equation: "E = 0.248 − 0.0591 pH (red PbO)", kind: "line", e0: 0.248, hPerN: 1, logCoef: 0, source: ATLAS },
-  { metal: "Pb", pair: ["PbO2(s)", "Pb2+"], equation: "E = 1.449 − 0.1182 pH − 0.0295 log(Pb2+)", kind: "line", e0: 1.449, hPerN: 2, logCoef: -0.0295, source: ATLAS },
+  {
+    metal: "Pb",
+    pair: ["Pb2+", "Pb(s)"],
+    equation: "E = −0.126 + 0.0295 log(Pb2+)",
+    kind: "line",
+    e0: -0.126,
+    hPerN: 0,
+    logCoef: 0.0295,
+    source: ATLAS,
+  },
+  {
+    metal: "Pb",
+    pair: ["PbO(s)", "Pb(s)"],
+    equation: "E = 0.248 − 0.0591 pH (red PbO)",
+    kind: "line",
+    e0: 0.248,
+    hPerN: 1,
+    logCoef: 0,
+    source: ATLAS,
+  },
+  {
+    metal: "Pb",
+    pair: ["PbO2(s)", "Pb2+"],
+    equation: "E = 1.449 − 0.1182 pH − 0.0295 log(Pb2+)",
+    kind: "line",
+    e0: 1.449,
+    hPerN: 2,
+    logCoef: -0.0295,
+    source: ATLAS,
+  },
   // nickel
-  { metal: "Ni", pair: ["Ni2+", "Ni(s)"], equation: "E = −0.250 + 0.0295 log(Ni2+)", kind: "line", e0: -0.25, hPerN: 0, logCoef: 0.0295, source: ATLAS },
+  {
+    metal: "Ni",
+    pair: ["Ni2+", "Ni(s)"],
+    equation: "E = −0.250 + 0.0295 log(Ni2+)",
+    kind: "line",
+    e0: -0.25,
+    hPerN: 0,
+    logCoef: 0.0295,
+    source: ATLAS,
+  },
   // chromium
-  { metal: "Cr", pair: ["Cr2+", "Cr(s)"], equation: "E = −0.913 + 0.0295 log(Cr2+)", kind: "line", e0: -0.913, hPerN: 0, logCoef: 0.0295, source: ATLAS },
-  { metal: "Cr", pair: ["Cr3+", "Cr2+"], equation: "E = −0.408 + 0.0591 log(Cr3+/Cr2+)", kind: "line", e0: -0.408, hPerN: 0, logCoef: 0, source: ATLAS },
-  { metal: "Cr", pair: ["Cr2O3(s)", "Cr(s)"], equation: "E = −0.579 − 0.0591 pH (anhydrous Cr2O3)", kind: "line", e0: -0.579, hPerN: 1, logCoef: 0, source: ATLAS },
+  {
+    metal: "Cr",
+    pair: ["Cr2+", "Cr(s)"],
+    equation: "E = −0.913 + 0.0295 log(Cr2+)",
+    kind: "line",
+    e0: -0.913,
+    hPerN: 0,
+    logCoef: 0.0295,
+    source: ATLAS,
+  },
+  {
+    metal: "Cr",
+    pair: ["Cr3+", "Cr2+"],
+    equation: "E = −0.408 + 0.0591 log(Cr3+/Cr2+)",
+    kind: "line",
+    e0: -0.408,
+    hPerN: 0,
+    logCoef: 0,
+    source: ATLAS,
+  },
+  {
+    metal: "Cr",
+    pair: ["Cr2O3(s)", "Cr(s)"],
+    equation: "E = −0.579 − 0.0591 pH (anhydrous Cr2O3)",
+    kind: "line",
+    e0: -0.579,
+    hPerN: 1,
+    logCoef: 0,
+    source: ATLAS,
+  },
   // aluminium
-  { metal: "Al", pair: ["Al3+", "Al(s)"], equation: "E = −1.663 + 0.0197 log(Al3+)", kind: "line", e0: -1.663, hPerN: 0, logCoef: 0.0197, source: ATLAS },
-  { metal: "Al", pair: ["Al(OH)3(s)", "Al(s)"], equation: "E = −1.550 − 0.0591 pH (hydrargillite Al2O3·3H2O)", kind: "line", e0: -1.55, hPerN: 1, logCoef: 0, source: ATLAS },
+  {
+    metal: "Al",
+    pair: ["Al3+", "Al(s)"],
+    equation: "E = −1.663 + 0.0197 log(Al3+)",
+    kind: "line",
+    e0: -1.663,
+    hPerN: 0,
+    logCoef: 0.0197,
+    source: ATLAS,
+  },
+  {
+    metal: "Al",
+    pair: ["Al(OH)3(s)", "Al(s)"],
+    equation: "E = −1.550 − 0.0591 pH (hydrargillite Al2O3·3H2O)",
+    kind: "line",
+    e0: -1.55,
+    hPerN: 1,
+    logCoef: 0,
+    source: ATLAS,
+  },
 ];
 
 const systems = new Map(METALS.map((m) => [m, buildSystem(db, m, { celsius: 25, activity: ACTIVITY })]));
@@ -330,13 +729,20 @@ describe("group A metals: boundary equations at 25 °C, activity 1e-6, against P
       expect(boundary?.kind).toBe(line.kind);
       if (boundary?.kind !== "line") return;
       const expected = line.e0! + line.logCoef! * LOG_A;
-      expect(Math.abs(boundary.intercept - expected), `intercept ${boundary.intercept.toFixed(4)} V vs ${expected.toFixed(4)} V`).toBeLessThanOrEqual(0.030);
+      expect(
+        Math.abs(boundary.intercept - expected),
+        `intercept ${boundary.intercept.toFixed(4)} V vs ${expected.toFixed(4)} V`,
+      ).toBeLessThanOrEqual(0.03);
       // slope exact: −(h/n)·RT ln10/F, whatever the data
       expect(Math.abs(boundary.slope - -line.hPerN! * K25)).toBeLessThan(1e-12);
     });
   }
   it("the Atlas set covers Fe, Cu, Zn, Pb, Ni, Cr and Al", () => {
-    for (const m of ["Fe", "Cu", "Zn", "Pb", "Ni", "Cr", "Al"]) expect(atlasLines.some((l) => l.metal === m), m).toBe(true);
+    for (const m of ["Fe", "Cu", "Zn", "Pb", "Ni", "Cr", "Al"])
+      expect(
+        atlasLines.some((l) => l.metal === m),
+        m,
+      ).toBe(true);
   });
 });
 
@@ -360,31 +766,79 @@ interface AtlasDisagreement extends AtlasLine {
 
 const atlasDisagreements: AtlasDisagreement[] = [
   {
-    metal: "Fe", pair: ["Fe2+", "Fe(s)"], equation: "E = −0.440 + 0.0295 log(Fe2+)", kind: "line", e0: -0.44, hPerN: 0, logCoef: 0.0295, source: ATLAS,
-    predicted: FE2_SHIFT / (2 * FARADAY), why: "one Fe2+ oxidised, 2 e−",
+    metal: "Fe",
+    pair: ["Fe2+", "Fe(s)"],
+    equation: "E = −0.440 + 0.0295 log(Fe2+)",
+    kind: "line",
+    e0: -0.44,
+    hPerN: 0,
+    logCoef: 0.0295,
+    source: ATLAS,
+    predicted: FE2_SHIFT / (2 * FARADAY),
+    why: "one Fe2+ oxidised, 2 e−",
   },
   {
-    metal: "Fe", pair: ["Fe2O3(s)", "Fe2+"], equation: "E = 0.728 − 0.1773 pH − 0.0591 log(Fe2+)", kind: "line", e0: 0.728, hPerN: 3, logCoef: -0.0591, source: ATLAS,
-    predicted: (-2 * FE2_SHIFT) / (2 * FARADAY), why: "two Fe2+ formed, 2 e−",
+    metal: "Fe",
+    pair: ["Fe2O3(s)", "Fe2+"],
+    equation: "E = 0.728 − 0.1773 pH − 0.0591 log(Fe2+)",
+    kind: "line",
+    e0: 0.728,
+    hPerN: 3,
+    logCoef: -0.0591,
+    source: ATLAS,
+    predicted: (-2 * FE2_SHIFT) / (2 * FARADAY),
+    why: "two Fe2+ formed, 2 e−",
   },
   {
-    metal: "Fe", pair: ["Fe3O4(s)", "Fe2+"], equation: "E = 0.980 − 0.2364 pH − 0.0886 log(Fe2+)", kind: "line", e0: 0.98, hPerN: 4, logCoef: -0.0886, source: ATLAS,
-    predicted: (-3 * FE2_SHIFT) / (2 * FARADAY), why: "three Fe2+ formed, 2 e−",
+    metal: "Fe",
+    pair: ["Fe3O4(s)", "Fe2+"],
+    equation: "E = 0.980 − 0.2364 pH − 0.0886 log(Fe2+)",
+    kind: "line",
+    e0: 0.98,
+    hPerN: 4,
+    logCoef: -0.0886,
+    source: ATLAS,
+    predicted: (-3 * FE2_SHIFT) / (2 * FARADAY),
+    why: "three Fe2+ formed, 2 e−",
   },
   {
-    metal: "Fe", pair: ["Fe2O3(s)", "Fe3+"], equation: "log(Fe3+) = −0.72 − 3 pH", kind: "vertical", pH0: -0.72 / 3, logCoefPH: -1 / 3, h: 3, source: ATLAS,
+    metal: "Fe",
+    pair: ["Fe2O3(s)", "Fe3+"],
+    equation: "log(Fe3+) = −0.72 − 3 pH",
+    kind: "vertical",
+    pH0: -0.72 / 3,
+    logCoefPH: -1 / 3,
+    h: 3,
+    source: ATLAS,
     // Fe2O3 + 6H+ = 2Fe3+ + 3H2O: ΔG°r rises by 2·shift → log K falls by 2·shift/(RT ln10) → pH of the line falls by that/6
-    predicted: -(2 * FE3_SHIFT) / (GAS_CONSTANT * T0 * LN10) / 6, why: "two Fe3+ formed, six H+",
+    predicted: -(2 * FE3_SHIFT) / (GAS_CONSTANT * T0 * LN10) / 6,
+    why: "two Fe3+ formed, six H+",
   },
   {
-    metal: "Cu", pair: ["Cu2+", "CuO(s)"], equation: "log(Cu2+) = 7.89 − 2 pH", kind: "vertical", pH0: 7.89 / 2, logCoefPH: -1 / 2, h: 2, source: ATLAS,
-    predicted: (7.35 - 7.89) / 2, why: "tenorite log*Ks10 7.35 (NBS 1982) against 7.89 (Atlas)",
+    metal: "Cu",
+    pair: ["Cu2+", "CuO(s)"],
+    equation: "log(Cu2+) = 7.89 − 2 pH",
+    kind: "vertical",
+    pH0: 7.89 / 2,
+    logCoefPH: -1 / 2,
+    h: 2,
+    source: ATLAS,
+    predicted: (7.35 - 7.89) / 2,
+    why: "tenorite log*Ks10 7.35 (NBS 1982) against 7.89 (Atlas)",
   },
   {
     // 2CrO4 2- + 10H+ + 6e- = Cr2O3 + 5H2O: NBS Cr2O3 −1058.1 against the Atlas's −1046.8 kJ/mol, NBS CrO4 2- −727.75
     // against Latimer's −736.8 kJ/mol (−176.1 kcal, from memory): E° 1.362 V here, 1.311 V in the Atlas
-    metal: "Cr", pair: ["CrO42-", "Cr2O3(s)"], equation: "E = 1.311 − 0.0985 pH + 0.0197 log(CrO4 2-)", kind: "line", e0: 1.311, hPerN: 10 / 6, logCoef: 0.0197, source: ATLAS,
-    predicted: (-(-1058.1 - -1046.8) + 2 * (-727.75 - -736.8)) * 1000 / (6 * FARADAY), why: "Cr2O3 (NBS −1058.1, Atlas −1046.8 kJ/mol) and CrO4 2- (NBS −727.75, Latimer −736.8 kJ/mol), 6 e−",
+    metal: "Cr",
+    pair: ["CrO42-", "Cr2O3(s)"],
+    equation: "E = 1.311 − 0.0985 pH + 0.0197 log(CrO4 2-)",
+    kind: "line",
+    e0: 1.311,
+    hPerN: 10 / 6,
+    logCoef: 0.0197,
+    source: ATLAS,
+    predicted: ((-(-1058.1 - -1046.8) + 2 * (-727.75 - -736.8)) * 1000) / (6 * FARADAY),
+    why: "Cr2O3 (NBS −1058.1, Atlas −1046.8 kJ/mol) and CrO4 2- (NBS −727.75, Latimer −736.8 kJ/mol), 6 e−",
   },
 ];
 
@@ -397,13 +851,19 @@ describe("group A metals: Atlas lines where the Atlas used other data", () => {
         const atlas = line.e0! + line.logCoef! * LOG_A;
         const offset = boundary.intercept - atlas;
         expect(Math.abs(offset)).toBeGreaterThan(0.03);
-        expect(Math.abs(offset - line.predicted), `offset ${offset.toFixed(4)} V, predicted ${line.predicted.toFixed(4)} V`).toBeLessThanOrEqual(0.010);
+        expect(
+          Math.abs(offset - line.predicted),
+          `offset ${offset.toFixed(4)} V, predicted ${line.predicted.toFixed(4)} V`,
+        ).toBeLessThanOrEqual(0.01);
         expect(Math.abs(boundary.slope - -line.hPerN! * K25)).toBeLessThan(1e-12);
       } else if (boundary?.kind === "vertical") {
         const atlas = line.pH0! + line.logCoefPH! * LOG_A;
         const offset = boundary.pH - atlas;
         expect(Math.abs(offset)).toBeGreaterThan(0.5 / line.h!);
-        expect(Math.abs(offset - line.predicted), `offset ${offset.toFixed(3)} pH, predicted ${line.predicted.toFixed(3)}`).toBeLessThanOrEqual(0.05);
+        expect(
+          Math.abs(offset - line.predicted),
+          `offset ${offset.toFixed(3)} pH, predicted ${line.predicted.toFixed(3)}`,
+        ).toBeLessThanOrEqual(0.05);
       }
     });
   }

@@ -6,7 +6,15 @@ import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
 import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "../../src/chemistry/constants";
 import { ehFromPe, peFromEh } from "../../src/chemistry/pe";
-import { kw, neutralPH, pKw, recordsPKw, waterLine, waterMargin, waterStandardPotential } from "../../src/chemistry/water";
+import {
+  kw,
+  neutralPH,
+  pKw,
+  recordsPKw,
+  waterLine,
+  waterMargin,
+  waterStandardPotential,
+} from "../../src/chemistry/water";
 import { CellError } from "../../src/functions/cell-values";
 import { neutralPHAt, slopeAt, waterLineAt, waterMarginAt } from "../../src/functions/water-functions";
 
@@ -14,19 +22,28 @@ const mathjs = create({ gasConstantDependencies, faradayDependencies });
 
 describe("physical constants", () => {
   it("R matches mathjs's built-in gas constant (CODATA 2018, exact N_A·k)", () => {
-    const reference = { value: mathjs.gasConstant.toNumber("J / (mol K)"), source: "mathjs 15 physical constant gasConstant (CODATA 2018)" };
+    const reference = {
+      value: mathjs.gasConstant.toNumber("J / (mol K)"),
+      source: "mathjs 15 physical constant gasConstant (CODATA 2018)",
+    };
     expect(Math.abs(GAS_CONSTANT - reference.value) / reference.value).toBeLessThan(1e-9);
     expect(GAS_CONSTANT).toBeCloseTo(8.314462618, 9); // CODATA 2018, Tiesinga et al., Rev. Mod. Phys. 93, 025010 (2021)
   });
 
   it("F matches mathjs's built-in Faraday constant (CODATA 2018, exact N_A·e)", () => {
-    const reference = { value: mathjs.faraday.toNumber("C / mol"), source: "mathjs 15 physical constant faraday (CODATA 2018)" };
+    const reference = {
+      value: mathjs.faraday.toNumber("C / mol"),
+      source: "mathjs 15 physical constant faraday (CODATA 2018)",
+    };
     expect(Math.abs(FARADAY - reference.value) / reference.value).toBeLessThan(1e-9);
     expect(FARADAY).toBeCloseTo(96485.33212, 5); // CODATA 2018, Tiesinga et al. (2021)
   });
 
   it("Nernst factor RT ln10 / F is 0.059159 V at 25 °C", () => {
-    const reference = { value: 0.059159, source: "Bard & Faulkner, Electrochemical Methods, 2nd ed. 2001, 0.05916 V at 25 °C (from memory)" };
+    const reference = {
+      value: 0.059159,
+      source: "Bard & Faulkner, Electrochemical Methods, 2nd ed. 2001, 0.05916 V at 25 °C (from memory)",
+    };
     expect(Math.abs(nernstFactor(T0) - reference.value)).toBeLessThan(5e-7);
   });
 
@@ -40,12 +57,18 @@ describe("physical constants", () => {
 
 describe("water lines from the species data", () => {
   it("E°(O2/H2O) is 1.229 V at 25 °C", () => {
-    const reference = { value: 1.229, source: "Bard, Parsons & Jordan, Standard Potentials in Aqueous Solution (1985), O2/H2O (from memory)" };
+    const reference = {
+      value: 1.229,
+      source: "Bard, Parsons & Jordan, Standard Potentials in Aqueous Solution (1985), O2/H2O (from memory)",
+    };
     expect(Math.abs(waterStandardPotential("O2", 25) - reference.value)).toBeLessThan(0.001);
   });
 
   it("dE°/dT of O2/H2O is −0.846 mV/K at 25 °C", () => {
-    const reference = { value: -0.846e-3, source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table of temperature coefficients (from memory)" };
+    const reference = {
+      value: -0.846e-3,
+      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table of temperature coefficients (from memory)",
+    };
     const slope = (waterStandardPotential("O2", 26) - waterStandardPotential("O2", 24)) / 2;
     expect(Math.abs(slope - reference.value)).toBeLessThan(0.01e-3);
   });
@@ -70,7 +93,10 @@ describe("water lines from the species data", () => {
   });
 
   it("O2/H2O at pH 7 is pe 13.75 (0.813 V), and pe° of the couple is 20.75", () => {
-    const peW = { value: 13.75, source: "Stumm & Morgan, Aquatic Chemistry, 3rd ed. 1996, Table 8.1, pe°(W) of O2(g)/H2O (from memory)" };
+    const peW = {
+      value: 13.75,
+      source: "Stumm & Morgan, Aquatic Chemistry, 3rd ed. 1996, Table 8.1, pe°(W) of O2(g)/H2O (from memory)",
+    };
     const pe0 = { value: 20.75, source: "Stumm & Morgan 1996, Table 8.1, pe° of O2(g)/H2O (from memory)" };
     expect(Math.abs(peFromEh(waterLine(7)) - peW.value)).toBeLessThan(0.03);
     expect(Math.abs(peFromEh(waterStandardPotential("O2")) - pe0.value)).toBeLessThan(0.03);
@@ -108,14 +134,20 @@ describe("ion product of water", () => {
     [80, 12.598],
     [90, 12.416],
     [100, 12.252],
-  ].map(([celsius, value]) => ({ celsius, value, source: "Bandura & Lvov 2006, J. Phys. Chem. Ref. Data 35:15 (from memory)" }));
+  ].map(([celsius, value]) => ({
+    celsius,
+    value,
+    source: "Bandura & Lvov 2006, J. Phys. Chem. Ref. Data 35:15 (from memory)",
+  }));
 
   // the species records (constant ΔCp°r) against the published values: a check of data/species/water.json
   const residuals = bandura.map((r) => ({ celsius: r.celsius, residual: recordsPKw(r.celsius) - r.value }));
 
   it("prints the residuals against Bandura & Lvov", () => {
     // informational: the figures behind the two checks below
-    console.log(residuals.map((r) => `${r.celsius} °C: ${r.residual >= 0 ? "+" : ""}${r.residual.toFixed(3)}`).join(", "));
+    console.log(
+      residuals.map((r) => `${r.celsius} °C: ${r.residual >= 0 ? "+" : ""}${r.residual.toFixed(3)}`).join(", "),
+    );
     expect(residuals.length).toBe(11);
   });
 

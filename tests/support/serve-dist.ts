@@ -33,10 +33,13 @@ function fileFor(root: string, urlPath: string): string | null {
 }
 
 export async function serveDist(): Promise<{ server: Server; origin: string }> {
-  if (!existsSync(join(DIST, "taskpane.html"))) throw new Error(`${DIST}/taskpane.html is missing: build first (npm run build, or set REDOX_DIST)`);
+  if (!existsSync(join(DIST, "taskpane.html")))
+    throw new Error(`${DIST}/taskpane.html is missing: build first (npm run build, or set REDOX_DIST)`);
   const server = createServer((request, response) => {
     const path = new URL(request.url ?? "/", "http://localhost").pathname;
-    const file = path.startsWith("/office-js/") ? fileFor(OFFICE_JS_DIR, path.slice("/office-js/".length)) : fileFor(DIST, path === "/" ? "taskpane.html" : path);
+    const file = path.startsWith("/office-js/")
+      ? fileFor(OFFICE_JS_DIR, path.slice("/office-js/".length))
+      : fileFor(DIST, path === "/" ? "taskpane.html" : path);
     if (!file) {
       response.writeHead(404).end("not found");
       return;
@@ -55,7 +58,13 @@ export async function launchChromium(): Promise<BrowserContext> {
   return chromium.launchPersistentContext(mkdtempSync(join(tmpdir(), "redox-chromium-")), {
     executablePath: CHROMIUM,
     headless: true,
-    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update"],
+    args: [
+      "--headless",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-background-networking",
+      "--disable-component-update",
+    ],
     acceptDownloads: true,
     viewport: { width: 1000, height: 1600 },
     deviceScaleFactor: 1,
@@ -68,7 +77,11 @@ export async function routeOfficeJs(page: Page): Promise<void> {
     const path = new URL(route.request().url()).pathname.replace(/^\/lib\/1\/hosted\//, "");
     const file = fileFor(OFFICE_JS_DIR, path);
     if (!file) return route.fulfill({ status: 404, body: "" });
-    await route.fulfill({ status: 200, contentType: TYPES[extname(file)] ?? "text/javascript", body: readFileSync(file) });
+    await route.fulfill({
+      status: 200,
+      contentType: TYPES[extname(file)] ?? "text/javascript",
+      body: readFileSync(file),
+    });
   });
 }
 

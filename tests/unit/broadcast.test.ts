@@ -7,7 +7,9 @@ import { CellError, CellOutput, valueError } from "../../src/functions/cell-valu
 const x = numberArg("x");
 const y = numberArg("y", { min: 0, max: 10 });
 const opt = numberArg("scale", { optional: true, defaultValue: 2 });
-const word = textArg("word", (t) => (t.toLowerCase() === "up" ? 1 : t.toLowerCase() === "down" ? -1 : valueError(`word: expected "up" or "down"`)));
+const word = textArg("word", (t) =>
+  t.toLowerCase() === "up" ? 1 : t.toLowerCase() === "down" ? -1 : valueError(`word: expected "up" or "down"`),
+);
 
 const add = (a: CellInput2, b: CellInput2) => mapCells([x, y], [a, b], (p, q) => p + q);
 type CellInput2 = Parameters<typeof mapCells>[1][number];
@@ -24,7 +26,21 @@ describe("shapes and broadcasting", () => {
   });
 
   it("ranges of the same shape combine cell by cell", () => {
-    expect(add([[1, 2], [3, 4]], [[10, 2], [3, 0]])).toEqual([[11, 4], [6, 4]]);
+    expect(
+      add(
+        [
+          [1, 2],
+          [3, 4],
+        ],
+        [
+          [10, 2],
+          [3, 0],
+        ],
+      ),
+    ).toEqual([
+      [11, 4],
+      [6, 4],
+    ]);
   });
 
   it("a 1×1 argument broadcasts over a range", () => {
@@ -33,7 +49,10 @@ describe("shapes and broadcasting", () => {
   });
 
   it("a row and a column broadcast to a table", () => {
-    expect(add([[1, 2, 3]], [[0], [10]])).toEqual([[1, 2, 3], [11, 12, 13]]);
+    expect(add([[1, 2, 3]], [[0], [10]])).toEqual([
+      [1, 2, 3],
+      [11, 12, 13],
+    ]);
   });
 
   it("shapes that cannot broadcast give one #VALUE! naming every argument's shape", () => {
@@ -99,7 +118,9 @@ describe("error cells passed in by the spreadsheet", () => {
 
   it("rich cell values are read by their plain value; rich errors keep their code", () => {
     expect(add([[{ type: "Double", basicValue: 3 } as never]], 1)).toEqual([[4]]);
-    expect(err(add([[{ type: "Error", basicValue: "#REF!", errorType: "Ref" } as never]], 1)[0][0]).message).toContain("#REF!");
+    expect(err(add([[{ type: "Error", basicValue: "#REF!", errorType: "Ref" } as never]], 1)[0][0]).message).toContain(
+      "#REF!",
+    );
   });
 });
 
@@ -171,7 +192,10 @@ describe("host error values", () => {
         readonly message?: string,
       ) {}
     }
-    g.CustomFunctions = { Error: HostError, ErrorCode: { invalidValue: "#VALUE!", invalidNumber: "#NUM!", notAvailable: "#N/A" } };
+    g.CustomFunctions = {
+      Error: HostError,
+      ErrorCode: { invalidValue: "#VALUE!", invalidNumber: "#NUM!", notAvailable: "#N/A" },
+    };
     const out = add("q", 1)[0][0] as unknown as HostError;
     expect(out).toBeInstanceOf(HostError);
     expect(out.code).toBe("#VALUE!");

@@ -19,7 +19,9 @@ import { reactionLogK } from "../../src/chemistry/reaction";
 import { GAS_CONSTANT, LN10, T0 } from "../../src/chemistry/constants";
 
 const SPECIES_DIR = join(__dirname, "..", "..", "data", "species");
-const filesOnDisk = readdirSync(SPECIES_DIR).filter((f) => f.endsWith(".json")).sort();
+const filesOnDisk = readdirSync(SPECIES_DIR)
+  .filter((f) => f.endsWith(".json"))
+  .sort();
 
 /**
  * Records whose compilation gives ΔG°f, ΔH°f and S° that agree only loosely, with the reason. Each entry must keep
@@ -45,7 +47,10 @@ describe("data files: registration and schema", () => {
       const content = JSON.parse(readFileSync(join(SPECIES_DIR, file), "utf8"));
       const files = [{ path: `data/species/${file}`, content }];
       if (file !== "water.json") {
-        files.push({ path: "data/species/water.json", content: JSON.parse(readFileSync(join(SPECIES_DIR, "water.json"), "utf8")) });
+        files.push({
+          path: "data/species/water.json",
+          content: JSON.parse(readFileSync(join(SPECIES_DIR, "water.json"), "utf8")),
+        });
       }
       expect(() => new Database(files, ELEMENTS_FILE)).not.toThrow();
     });
@@ -128,10 +133,15 @@ describe("data files: thermodynamic consistency", () => {
       const misfit = Math.abs(calc - s.dGf / 1000);
       const loose = LOOSE[s.formula];
       if (loose) {
-        expect(misfit, `${s.formula}: documented misfit (${loose.reason}) is no longer there`).toBeGreaterThan(DEFAULT_TOLERANCE_KJ);
+        expect(misfit, `${s.formula}: documented misfit (${loose.reason}) is no longer there`).toBeGreaterThan(
+          DEFAULT_TOLERANCE_KJ,
+        );
         expect(misfit).toBeLessThanOrEqual(loose.tolerance);
       } else {
-        expect(misfit, `${s.formula}: ΔG°f ${s.dGf / 1000} kJ/mol, ΔH°f − TΔfS° = ${calc.toFixed(2)}`).toBeLessThanOrEqual(DEFAULT_TOLERANCE_KJ);
+        expect(
+          misfit,
+          `${s.formula}: ΔG°f ${s.dGf / 1000} kJ/mol, ΔH°f − TΔfS° = ${calc.toFixed(2)}`,
+        ).toBeLessThanOrEqual(DEFAULT_TOLERANCE_KJ);
       }
     });
   }

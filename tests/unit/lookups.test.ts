@@ -14,7 +14,11 @@ import { ElectrodeTable, getElectrodes } from "../../src/chemistry/electrodes";
 import { ownEntry } from "../../src/chemistry/own-entry";
 
 const INHERITED = Object.getOwnPropertyNames(Object.prototype).concat(["prototype", "__proto__"]);
-const hostile = fc.oneof(fc.constantFrom(...INHERITED), fc.constantFrom(...INHERITED).map((s) => s.toUpperCase()), fc.string({ maxLength: 8 }).map((s) => `__${s}`));
+const hostile = fc.oneof(
+  fc.constantFrom(...INHERITED),
+  fc.constantFrom(...INHERITED).map((s) => s.toUpperCase()),
+  fc.string({ maxLength: 8 }).map((s) => `__${s}`),
+);
 
 describe("own keys only", () => {
   it("ownEntry finds a table's own keys and nothing inherited", () => {
@@ -42,6 +46,8 @@ describe("own keys only", () => {
     expect(() => new ElectrodeTable(electrodes)).toThrow(/source key "constructor" is not in references/);
     const water = JSON.parse(readFileSync(join(__dirname, "..", "..", "data", "species", "water.json"), "utf8"));
     water.species[0].source = "toString";
-    expect(() => new Database([{ path: "data/species/water.json", content: water }], ELEMENTS_FILE)).toThrow(/source key "toString"/);
+    expect(() => new Database([{ path: "data/species/water.json", content: water }], ELEMENTS_FILE)).toThrow(
+      /source key "toString"/,
+    );
   });
 });

@@ -97,7 +97,18 @@ describe("pane, command line and worksheet functions on every demo row", () => {
           species: speciesAt(metal, pH, e as number, t, 1e-6, co3)[0][0],
           regime: regimeAt(metal, pH, e as number, t, 1e-6, co3)[0][0],
           margin: waterMarginAt(pH, e as number, t)[0][0],
-          dissolved: dissolvedAt(metal, pH, e as number, t, co3, undefined, undefined, undefined, undefined, "ug/L")[0][0],
+          dissolved: dissolvedAt(
+            metal,
+            pH,
+            e as number,
+            t,
+            co3,
+            undefined,
+            undefined,
+            undefined,
+            undefined,
+            "ug/L",
+          )[0][0],
         };
         if (cellOf(row[m.temperature]) === "") {
           // a blank temperature in a column is a missing measurement: no answer in the pane or the command line

@@ -22,10 +22,14 @@ describe("axis transforms", () => {
   it("inverts exactly", () => {
     const axes = makeAxes(window, area);
     fc.assert(
-      fc.property(fc.double({ min: -2, max: 16, noNaN: true }), fc.double({ min: -2, max: 2, noNaN: true }), (pH, E) => {
-        expect(axes.pHAt(axes.x(pH))).toBeCloseTo(pH, 9);
-        expect(axes.eAt(axes.y(E))).toBeCloseTo(E, 9);
-      }),
+      fc.property(
+        fc.double({ min: -2, max: 16, noNaN: true }),
+        fc.double({ min: -2, max: 2, noNaN: true }),
+        (pH, E) => {
+          expect(axes.pHAt(axes.x(pH))).toBeCloseTo(pH, 9);
+          expect(axes.eAt(axes.y(E))).toBeCloseTo(E, 9);
+        },
+      ),
     );
   });
 

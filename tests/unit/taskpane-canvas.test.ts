@@ -25,8 +25,14 @@ describe("canvas markers", () => {
 
   it("reads the axes back from an SVG's data attributes", () => {
     const attributes: Record<string, string> = {
-      "data-ph-min": "0", "data-ph-max": "14", "data-e-min": "-1", "data-e-max": "1",
-      "data-plot-left": "60", "data-plot-top": "40", "data-plot-width": "700", "data-plot-height": "500",
+      "data-ph-min": "0",
+      "data-ph-max": "14",
+      "data-e-min": "-1",
+      "data-e-max": "1",
+      "data-plot-left": "60",
+      "data-plot-top": "40",
+      "data-plot-width": "700",
+      "data-plot-height": "500",
     };
     const fake = { getAttribute: (name: string) => attributes[name] ?? null } as unknown as Element;
     const back = axesOfSvg(fake);
@@ -36,11 +42,17 @@ describe("canvas markers", () => {
   it("finds the nearest marker within the pick distance (brute force agrees)", () => {
     fc.assert(
       fc.property(
-        fc.array(fc.tuple(fc.double({ min: 0, max: 14, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true })), { minLength: 1, maxLength: 60 }),
+        fc.array(fc.tuple(fc.double({ min: 0, max: 14, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true })), {
+          minLength: 1,
+          maxLength: 60,
+        }),
         fc.double({ min: 50, max: 770, noNaN: true }),
         fc.double({ min: 30, max: 550, noNaN: true }),
         (points, px, py) => {
-          const p = markerPixels(points.map(([pH, E]) => sample(pH, E)), axes);
+          const p = markerPixels(
+            points.map(([pH, E]) => sample(pH, E)),
+            axes,
+          );
           const k = nearestMarker(p, px, py, 6);
           const distances = Array.from(p.x, (x, i) => Math.hypot(x - px, p.y[i] - py));
           const best = Math.min(...distances);

@@ -4,14 +4,31 @@ import { parseDelimited } from "../../src/tables";
 
 describe("header matching on realistic spellings", () => {
   it("the invented demo log's header (snake case with units and electrode)", () => {
-    const headers = "site,pipe_material,pipe_metal,sample_id,date,pH,ORP_mV_AgCl_sat,temp_C,alkalinity_mg_L_CaCO3,Fe_ug_L,Cu_ug_L,Pb_ug_L,note".split(",");
+    const headers =
+      "site,pipe_material,pipe_metal,sample_id,date,pH,ORP_mV_AgCl_sat,temp_C,alkalinity_mg_L_CaCO3,Fe_ug_L,Cu_ug_L,Pb_ug_L,note".split(
+        ",",
+      );
     const { mapping, hints } = matchHeaders(headers, "Pb", "lead");
     expect(mapping).toEqual({ pH: 5, potential: 6, temperature: 7, dissolved: 11, metal: 2, id: 3, site: 0 });
-    expect(hints).toEqual({ potentialUnit: "mV", electrode: "AgCl-sat", temperatureUnit: "C", temperatureScale: "C", dissolvedUnit: "ug/L" });
+    expect(hints).toEqual({
+      potentialUnit: "mV",
+      electrode: "AgCl-sat",
+      temperatureUnit: "C",
+      temperatureScale: "C",
+      dissolvedUnit: "ug/L",
+    });
   });
 
   it("a field sheet with spaces, brackets and symbols", () => {
-    const headers = ["Sample ID", "Location", "Date", "Temperature (°C)", "pH (field)", "ORP (mV)", "Dissolved iron (mg/L)"];
+    const headers = [
+      "Sample ID",
+      "Location",
+      "Date",
+      "Temperature (°C)",
+      "pH (field)",
+      "ORP (mV)",
+      "Dissolved iron (mg/L)",
+    ];
     const { mapping, hints } = matchHeaders(headers, "Fe", "iron");
     expect(mapping).toMatchObject({ id: 0, site: 1, temperature: 3, pH: 4, potential: 5, dissolved: 6, metal: -1 });
     expect(hints.potentialUnit).toBe("mV");
@@ -65,7 +82,13 @@ describe("pasted and opened text", () => {
     expect(parsed.lines).toEqual([2, 3, 4]);
   });
   it("reads TSV copied from a spreadsheet and semicolon CSV", () => {
-    expect(parseDelimited("pH\tORP\n7.2\t410\n").rows).toEqual([["pH", "ORP"], ["7.2", "410"]]);
-    expect(parseDelimited("pH;ORP\n7,2;410").rows).toEqual([["pH", "ORP"], ["7,2", "410"]]);
+    expect(parseDelimited("pH\tORP\n7.2\t410\n").rows).toEqual([
+      ["pH", "ORP"],
+      ["7.2", "410"],
+    ]);
+    expect(parseDelimited("pH;ORP\n7,2;410").rows).toEqual([
+      ["pH", "ORP"],
+      ["7,2", "410"],
+    ]);
   });
 });

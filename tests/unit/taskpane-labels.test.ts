@@ -9,7 +9,12 @@ import { formulaSegments, segmentsText } from "../../src/diagram/formula-markup"
 
 /** Whether every corner of the box centred at (x, y) lies inside the convex polygon (either orientation). */
 function boxInside(polygon: readonly Pixel[], x: number, y: number, w: number, h: number): boolean {
-  const corners: Pixel[] = [[x - w / 2, y - h / 2], [x + w / 2, y - h / 2], [x + w / 2, y + h / 2], [x - w / 2, y + h / 2]];
+  const corners: Pixel[] = [
+    [x - w / 2, y - h / 2],
+    [x + w / 2, y - h / 2],
+    [x + w / 2, y + h / 2],
+    [x - w / 2, y + h / 2],
+  ];
   let sign = 0;
   for (let i = 0; i < polygon.length; i++) {
     const p = polygon[i];
@@ -26,7 +31,12 @@ function boxInside(polygon: readonly Pixel[], x: number, y: number, w: number, h
 
 describe("label placement", () => {
   it("centres a box in a rectangle", () => {
-    const rect: Pixel[] = [[0, 0], [200, 0], [200, 100], [0, 100]];
+    const rect: Pixel[] = [
+      [0, 0],
+      [200, 0],
+      [200, 100],
+      [0, 100],
+    ];
     const p = placeLabel(rect, 40, 10);
     expect(p.x).toBeCloseTo(100, 0);
     expect(p.y).toBeCloseTo(50, 0);
@@ -36,7 +46,11 @@ describe("label placement", () => {
 
   it("finds the room in the wide part of a wedge, not at its centroid", () => {
     // triangle with its wide end on the right: the centroid (x = 133) is tighter than further right
-    const wedge: Pixel[] = [[0, 50], [300, 0], [300, 100]];
+    const wedge: Pixel[] = [
+      [0, 50],
+      [300, 0],
+      [300, 100],
+    ];
     const p = placeLabel(wedge, 60, 14);
     expect(p.fits).toBe(true);
     expect(p.x).toBeGreaterThan(200);
@@ -44,14 +58,25 @@ describe("label placement", () => {
   });
 
   it("reports when the text cannot fit", () => {
-    const sliver: Pixel[] = [[0, 0], [100, 0], [100, 4], [0, 4]];
+    const sliver: Pixel[] = [
+      [0, 0],
+      [100, 0],
+      [100, 4],
+      [0, 4],
+    ];
     expect(placeLabel(sliver, 40, 12).fits).toBe(false);
   });
 
   it("random convex polygons: a fitting label's box lies inside, and no grid point has more room", () => {
     const polygonArb = fc
       .array(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }), { minLength: 3, maxLength: 9 })
-      .chain((angles) => fc.tuple(fc.constant([...angles].sort((a, b) => a - b)), fc.double({ min: 30, max: 200, noNaN: true }), fc.double({ min: 0.3, max: 1, noNaN: true })));
+      .chain((angles) =>
+        fc.tuple(
+          fc.constant([...angles].sort((a, b) => a - b)),
+          fc.double({ min: 30, max: 200, noNaN: true }),
+          fc.double({ min: 0.3, max: 1, noNaN: true }),
+        ),
+      );
     fc.assert(
       fc.property(polygonArb, ([angles, radius, squash]) => {
         const unique = angles.filter((a, i) => i === 0 || a - angles[i - 1] > 1e-3);
@@ -60,7 +85,10 @@ describe("label placement", () => {
         const p = placeLabel(polygon, 30, 12);
         if (p.fits) expect(boxInside(polygon, p.x, p.y, 30, 12)).toBe(true);
         for (let i = 0; i <= 20; i++)
-          for (let j = 0; j <= 20; j++) expect(roomAt(polygon, 30, 12, 300 - radius + (i * radius) / 10, 300 - radius + (j * radius) / 10)).toBeLessThanOrEqual(p.room + 0.5);
+          for (let j = 0; j <= 20; j++)
+            expect(
+              roomAt(polygon, 30, 12, 300 - radius + (i * radius) / 10, 300 - radius + (j * radius) / 10),
+            ).toBeLessThanOrEqual(p.room + 0.5);
       }),
       { numRuns: 60 },
     );

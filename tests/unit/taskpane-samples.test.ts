@@ -36,7 +36,10 @@ describe("reading samples", () => {
     expect(r.skipped[4].reason).toMatch(/is the unit right/);
   });
   it("V instead of mV changes the reading a thousandfold", () => {
-    const r = readSamples({ ...table, rows: [["a", 7, 0.41, 25]], rowNumbers: [2] }, { mapping, electrode: "SHE", unit: "V", temperatureUnit: "C", celsius: 25 });
+    const r = readSamples(
+      { ...table, rows: [["a", 7, 0.41, 25]], rowNumbers: [2] },
+      { mapping, electrode: "SHE", unit: "V", temperatureUnit: "C", celsius: 25 },
+    );
     expect(r.samples[0].eSHE).toBeCloseTo(0.41, 12);
   });
   it("reads numbers strictly", () => {
@@ -51,14 +54,17 @@ describe("reading samples", () => {
     const parsed = parseDelimited(readFileSync(new URL("../../data/demo/sample-log.csv", import.meta.url), "utf8"));
     const [headers, ...rows] = parsed.rows;
     const match = matchHeaders(headers, "Fe", "iron");
-    const r = readSamples({ headers, rows, rowNumbers: parsed.lines.slice(1), source: "demo" }, {
-      mapping: match.mapping,
-      electrode: match.hints.electrode!,
-      unit: match.hints.potentialUnit!,
-      temperatureUnit: "C",
-      celsius: 25,
-      onlyMetal: "Fe",
-    });
+    const r = readSamples(
+      { headers, rows, rowNumbers: parsed.lines.slice(1), source: "demo" },
+      {
+        mapping: match.mapping,
+        electrode: match.hints.electrode!,
+        unit: match.hints.potentialUnit!,
+        temperatureUnit: "C",
+        celsius: 25,
+        onlyMetal: "Fe",
+      },
+    );
     expect(r.samples.length).toBeGreaterThan(50);
     expect(r.otherMetal).toBeGreaterThan(100);
     expect(r.samples.length + r.skipped.length + r.otherMetal).toBe(rows.length);

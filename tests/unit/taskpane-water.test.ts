@@ -12,8 +12,23 @@ import { buildSystem } from "../../src/chemistry/system";
 import { regimeAt, speciesAt } from "../../src/functions/stability-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
 import { matchHeaders, matchWaterColumns, waterColumnAt } from "../../src/tables";
-import { formatTotals, PURE_WATER, resolveWater, roundTotal, rowTotal, waterCaption, WaterSettings } from "../../src/taskpane/ligand-inputs";
-import { defaultWindow, displayScale, plotSamples, SampleInput, shownRegions, shownWaterLines } from "../../src/diagram/diagram-model";
+import {
+  formatTotals,
+  PURE_WATER,
+  resolveWater,
+  roundTotal,
+  rowTotal,
+  waterCaption,
+  WaterSettings,
+} from "../../src/taskpane/ligand-inputs";
+import {
+  defaultWindow,
+  displayScale,
+  plotSamples,
+  SampleInput,
+  shownRegions,
+  shownWaterLines,
+} from "../../src/diagram/diagram-model";
 import { diagramLayout, renderDiagram, sampleText } from "../../src/diagram/diagram-svg";
 import { makeAxes } from "../../src/diagram/axes";
 import { touchingGroups } from "../../src/diagram/label-placement";
@@ -24,13 +39,23 @@ const db = getDatabase();
 
 describe("water columns by header", () => {
   it("finds the invented demo log's alkalinity column and leaves the main mapping as it was", () => {
-    const headers = "site,pipe_material,pipe_metal,sample_id,date,pH,ORP_mV_AgCl_sat,temp_C,alkalinity_mg_L_CaCO3,Fe_ug_L,Cu_ug_L,Pb_ug_L,note".split(",");
+    const headers =
+      "site,pipe_material,pipe_metal,sample_id,date,pH,ORP_mV_AgCl_sat,temp_C,alkalinity_mg_L_CaCO3,Fe_ug_L,Cu_ug_L,Pb_ug_L,note".split(
+        ",",
+      );
     const { mapping } = matchHeaders(headers, "Pb", "lead");
     expect(matchWaterColumns(headers, mapping)).toEqual({ alkalinity: { index: 8, unit: "mg/L CaCO3" } });
   });
 
   it("reads realistic spellings and their units", () => {
-    const headers = ["Sample ID", "pH", "ORP (mV)", "Total alkalinity (mg/L as CaCO3)", "Chloride (mg/L)", "Sulphate, mg/L"];
+    const headers = [
+      "Sample ID",
+      "pH",
+      "ORP (mV)",
+      "Total alkalinity (mg/L as CaCO3)",
+      "Chloride (mg/L)",
+      "Sulphate, mg/L",
+    ];
     expect(matchWaterColumns(headers, matchHeaders(headers).mapping)).toEqual({
       alkalinity: { index: 3, unit: "mg/L CaCO3" },
       chloride: { index: 4, unit: "mg/L" },
@@ -63,7 +88,9 @@ describe("row values → ligand totals", () => {
     expect(got).toBe(roundTotal(expected));
     expect(Math.abs(Math.log10(got / expected))).toBeLessThanOrEqual(0.005 + 1e-12);
     // meq/L: 1 meq/L = 50.04 mg/L as CaCO3 (half the molar mass of CaCO3, 100.087 g/mol — common practice)
-    expect(rowTotal(db, "carbonate", { index: 0, unit: "meq/L" }, 2, 7.8, 12)).toBe(roundTotal(dicFromAlkalinity(2 * 50.0435, 7.8, 12)));
+    expect(rowTotal(db, "carbonate", { index: 0, unit: "meq/L" }, 2, 7.8, 12)).toBe(
+      roundTotal(dicFromAlkalinity(2 * 50.0435, 7.8, 12)),
+    );
   });
 
   it("chloride and sulfate by their molar masses (hand calculation, atomic weights of data/elements.json)", () => {
@@ -79,7 +106,8 @@ describe("row values → ligand totals", () => {
   });
 
   it("blank, text, negative and impossible values give a reason, never a number", () => {
-    for (const cell of [null, "", "  ", "<5", "n/a", -3, "1,5"]) expect(typeof rowTotal(db, "carbonate", alk, cell, 7.5, 20)).toBe("object");
+    for (const cell of [null, "", "  ", "<5", "n/a", -3, "1,5"])
+      expect(typeof rowTotal(db, "carbonate", alk, cell, 7.5, 20)).toBe("object");
     // hydroxide alone exceeds 1 mg/L as CaCO3 at pH 12
     expect(rowTotal(db, "carbonate", alk, 1, 12, 25)).toHaveProperty("problem");
   });
@@ -110,13 +138,20 @@ describe("the diagram's and each sample's water", () => {
       sulfur: { kind: "typed", total: null },
       phosphate: { kind: "typed", total: null },
     };
-    const r = resolveWater(settings, [{ carbonate: 1e-3 }, { carbonate: { problem: "blank" } }, { carbonate: 3e-3 }, { carbonate: 2e-3 }]);
+    const r = resolveWater(settings, [
+      { carbonate: 1e-3 },
+      { carbonate: { problem: "blank" } },
+      { carbonate: 3e-3 },
+      { carbonate: 2e-3 },
+    ]);
     expect(r.diagram).toEqual({ carbonate: roundTotal(2e-3), chloride: 5e-4 }); // median of 1, 2, 3 mmol/kg
     expect(r.perSample.map((t) => t.carbonate)).toEqual([1e-3, roundTotal(2e-3), 3e-3, 2e-3]);
     expect(r.perSample.every((t) => t.chloride === 5e-4)).toBe(true);
     expect(r.fallbacks).toEqual({ carbonate: 1 });
     expect(formatTotals(r.diagram)).toBe("DIC 2, Cl 0.5 mmol/kg");
-    expect(waterCaption(r)).toMatch(/^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' alkalinity values.*\); each ligand is speciated exactly at every point/);
+    expect(waterCaption(r)).toMatch(
+      /^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' alkalinity values.*\); each ligand is speciated exactly at every point/,
+    );
     const none = resolveWater(settings, [{ carbonate: { problem: "blank" } }]);
     expect(none.unusable).toEqual(["carbonate"]);
     expect(none.diagram).toEqual({ chloride: 5e-4 });
@@ -134,31 +169,77 @@ describe("the diagram's and each sample's water", () => {
       source: "test",
     };
     const mapping = matchHeaders(table.headers).mapping;
-    const read = readSamples(table, { mapping, electrode: "SHE", unit: "V", temperatureUnit: "C", celsius: 21, waterColumns: { carbonate: { index: 3, unit: "mg/L CaCO3" } } });
-    expect(read.rowTotals).toEqual([{ carbonate: roundTotal(dicFromAlkalinity(95, 7.4, 8)) }, { carbonate: roundTotal(dicFromAlkalinity(140, 8.1, 21)) }, { carbonate: { problem: "blank" } }]);
-    expect(readSamples(table, { mapping, electrode: "SHE", unit: "V", temperatureUnit: "C", celsius: 21 }).rowTotals).toEqual([{}, {}, {}]);
+    const read = readSamples(table, {
+      mapping,
+      electrode: "SHE",
+      unit: "V",
+      temperatureUnit: "C",
+      celsius: 21,
+      waterColumns: { carbonate: { index: 3, unit: "mg/L CaCO3" } },
+    });
+    expect(read.rowTotals).toEqual([
+      { carbonate: roundTotal(dicFromAlkalinity(95, 7.4, 8)) },
+      { carbonate: roundTotal(dicFromAlkalinity(140, 8.1, 21)) },
+      { carbonate: { problem: "blank" } },
+    ]);
+    expect(
+      readSamples(table, { mapping, electrode: "SHE", unit: "V", temperatureUnit: "C", celsius: 21 }).rowTotals,
+    ).toEqual([{}, {}, {}]);
   });
 });
 
 describe("samples in a water with ligands", () => {
   it("species and regime of every sample equal REDOX.SPECIES and REDOX.REGIME given the same totals", () => {
     const scale = displayScale("SHE", "V", 15);
-    const waters = [{ carbonate: 2e-3 }, { carbonate: 6e-4, chloride: 1e-3 }, { carbonate: 1e-3, sulfur: 2e-4 }, { chloride: 3e-3 }, {}];
+    const waters = [
+      { carbonate: 2e-3 },
+      { carbonate: 6e-4, chloride: 1e-3 },
+      { carbonate: 1e-3, sulfur: 2e-4 },
+      { chloride: 3e-3 },
+      {},
+    ];
     for (const metal of ["Pb", "Cu", "Fe"]) {
       const diagram = buildLigandSystem(db, metal, { celsius: 15, activity: 1e-6 }, waters[0]);
-      const systems = new Map(waters.map((w) => [JSON.stringify(w), buildLigandSystem(db, metal, { celsius: 15, activity: 1e-6 }, w)]));
+      const systems = new Map(
+        waters.map((w) => [JSON.stringify(w), buildLigandSystem(db, metal, { celsius: 15, activity: 1e-6 }, w)]),
+      );
       fc.assert(
-        fc.property(fc.array(fc.tuple(fc.double({ min: 3, max: 11, noNaN: true }), fc.double({ min: -0.7, max: 1.1, noNaN: true }), fc.nat(waters.length - 1)), { minLength: 1, maxLength: 20 }), (points) => {
-          const inputs: SampleInput[] = points.map(([pH, e, w], i) => ({ row: i + 2, id: "", pH, eSHE: e, ligands: waters[w] }));
-          const plotted = plotSamples(diagram, inputs, scale, (s) => systems.get(JSON.stringify(s.ligands))!);
-          plotted.forEach((p, i) => {
-            const w = waters[points[i][2]];
-            const args = [metal, p.pH, p.eSHE, 15, 1e-6, w.carbonate ?? null, w.chloride ?? null, w.sulfur ?? null] as const;
-            expect(p.formula).toBe(speciesAt(...args)[0][0]);
-            expect(p.regime).toBe(regimeAt(...args)[0][0]);
-            expect(p.ligands).toBe(w);
-          });
-        }),
+        fc.property(
+          fc.array(
+            fc.tuple(
+              fc.double({ min: 3, max: 11, noNaN: true }),
+              fc.double({ min: -0.7, max: 1.1, noNaN: true }),
+              fc.nat(waters.length - 1),
+            ),
+            { minLength: 1, maxLength: 20 },
+          ),
+          (points) => {
+            const inputs: SampleInput[] = points.map(([pH, e, w], i) => ({
+              row: i + 2,
+              id: "",
+              pH,
+              eSHE: e,
+              ligands: waters[w],
+            }));
+            const plotted = plotSamples(diagram, inputs, scale, (s) => systems.get(JSON.stringify(s.ligands))!);
+            plotted.forEach((p, i) => {
+              const w = waters[points[i][2]];
+              const args = [
+                metal,
+                p.pH,
+                p.eSHE,
+                15,
+                1e-6,
+                w.carbonate ?? null,
+                w.chloride ?? null,
+                w.sulfur ?? null,
+              ] as const;
+              expect(p.formula).toBe(speciesAt(...args)[0][0]);
+              expect(p.regime).toBe(regimeAt(...args)[0][0]);
+              expect(p.ligands).toBe(w);
+            });
+          },
+        ),
         { numRuns: 30 },
       );
     }
@@ -181,21 +262,45 @@ describe("samples in a water with ligands", () => {
     const regions = shownRegions(system, window, scale);
     const formulas = new Set(regions.map((r) => r.formula));
     expect(regions.length).toBeGreaterThan(formulas.size); // some species are split by a ligand boundary
-    const drawn = renderDiagram({ system, window, regions, samples: [], water: shownWaterLines(25, scale), axisTitle: scale.axisTitle, unit: "V", width: 800, height: 650 });
+    const drawn = renderDiagram({
+      system,
+      window,
+      regions,
+      samples: [],
+      water: shownWaterLines(25, scale),
+      axisTitle: scale.axisTitle,
+      unit: "V",
+      width: 800,
+      height: 650,
+    });
     const svg = drawn.svg;
     // each species: its formula in place, or a number in place with the formula in the key, or the key alone
-    const inPlace = [...svg.matchAll(/class="rc-label[^"]*" data-formula="([^"]+)"/g)].map((m) => m[1].replace(/&amp;/g, "&"));
+    const inPlace = [...svg.matchAll(/class="rc-label[^"]*" data-formula="([^"]+)"/g)].map((m) =>
+      m[1].replace(/&amp;/g, "&"),
+    );
     const labelled = new Set([...inPlace, ...drawn.key.map((k) => k.formula)]);
     for (const f of formulas) expect(labelled.has(f), f).toBe(true);
     // touching pieces of one species read as one region and carry one label
     const labels = inPlace.length + drawn.key.filter((k) => !k.marked).length;
     expect(labels).toBeLessThan(regions.length);
     const axes = makeAxes(window, diagramLayout(800, 650, 0));
-    expect(labels).toBe(new Set(touchingGroups(regions.map((r) => ({ key: r.formula, pixels: r.vertices.map(([x, y]) => [axes.x(x), axes.y(y)] as const) })))).size);
+    expect(labels).toBe(
+      new Set(
+        touchingGroups(
+          regions.map((r) => ({ key: r.formula, pixels: r.vertices.map(([x, y]) => [axes.x(x), axes.y(y)] as const) })),
+        ),
+      ).size,
+    );
   });
 
   it("groups touching pieces of the same species only", () => {
-    const square = (x: number, y: number) => [[x, y], [x + 10, y], [x + 10, y + 10], [x, y + 10]] as const;
+    const square = (x: number, y: number) =>
+      [
+        [x, y],
+        [x + 10, y],
+        [x + 10, y + 10],
+        [x, y + 10],
+      ] as const;
     const groups = touchingGroups([
       { key: "A", pixels: square(0, 0) },
       { key: "A", pixels: square(10, 0) }, // shares an edge with the first
