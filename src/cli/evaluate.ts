@@ -236,7 +236,18 @@ export function evaluateBatch(plan: EvaluationPlan, rows: readonly InputRow[], f
   return { ...result, lines: out, messages };
 }
 
-function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): BatchResult {
+/** The argument columns every function takes: pH, the reading as E vs SHE, the temperature, and the water margin. */
+interface SampleColumns {
+  readonly pH: CellScalar[][];
+  readonly temperature: CellInput;
+  /** REDOX.TOSHE's cells: E vs SHE, or the error of a reading that failed to convert. */
+  readonly eShe: CellOutput[][];
+  readonly potential: CellScalar[][];
+  readonly margin: CellOutput[][];
+}
+
+/** Reads pH, reading and temperature columns and converts the readings to E vs SHE (Nernst, per electrode). */
+function sampleColumns(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): SampleColumns {
   const n = rows.length;
   const f = plan.format;
   const pH = numericColumn(rows, plan.phColumn, f);
@@ -271,9 +282,27 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     potential[r] = [e instanceof CellError ? "" : (e as number | string)];
   }
   const margin = fns.waterMargin(pH, potential, temperature, plan.overpotential);
+  return { pH, temperature, eShe, potential, margin };
+}
 
-  // The water: each ligand's argument column, the cells of its output column, and (for carbonate from alkalinity)
-  // REDOX.DIC's errors, which the spreadsheet passes on to every function taking the carbonate.
+/** The water of a batch: ligand and ionic-strength arguments, their output cells, and the errors passed on. */
+interface WaterColumns {
+  readonly ligandArgs: Partial<Record<LigandName, CellScalar[][]>>;
+  readonly ligandCells: CellOutput[][][];
+  /** REDOX.DIC's errors (carbonate from alkalinity), passed on to every function taking the carbonate. */
+  readonly carbonateErrors: (CellError | null)[] | null;
+  readonly ionic: ReturnType<typeof ionicColumn>;
+}
+
+/** Each ligand's argument column and output cells (carbonate from alkalinity via REDOX.DIC), then the ionic strength. */
+function waterColumns(
+  plan: EvaluationPlan,
+  rows: readonly InputRow[],
+  fns: WorksheetFunctions,
+  samples: SampleColumns,
+): WaterColumns {
+  const f = plan.format;
+  const { pH, temperature } = samples;
   const ligandArgs: Partial<Record<LigandName, CellScalar[][]>> = {};
   const ligandCells: CellOutput[][][] = [];
   let carbonateErrors: (CellError | null)[] | null = null;
@@ -292,12 +321,34 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       );
     }
   }
-  const { carbonate, chloride, sulfur, phosphate } = ligandArgs;
   const ionic = ionicColumn(plan, rows, fns);
-  const ionicStrength = ionic?.argument;
   if (ionic) ligandCells.push(ionic.cells);
+  return { ligandArgs, ligandCells, carbonateErrors, ionic };
+}
 
-  const perTarget = plan.targets.map((t) => {
+/** One metal's result columns: species, regime, the boundaries above and below, and the dissolved amount. */
+interface TargetColumns {
+  readonly target: MetalTarget;
+  readonly element: CellInput;
+  readonly species: CellOutput[][];
+  readonly regime: CellOutput[][];
+  readonly above: CellOutput[][];
+  readonly below: CellOutput[][];
+  readonly dissolved: CellOutput[][];
+}
+
+/** Calls the stability functions once per metal target over the whole batch (as a worksheet range would). */
+function targetColumns(
+  plan: EvaluationPlan,
+  rows: readonly InputRow[],
+  fns: WorksheetFunctions,
+  samples: SampleColumns,
+  water: WaterColumns,
+): TargetColumns[] {
+  const { pH, potential, temperature } = samples;
+  const { carbonate, chloride, sulfur, phosphate } = water.ligandArgs;
+  const ionicStrength = water.ionic?.argument;
+  return plan.targets.map((t) => {
     const element: CellInput = t.symbol ?? textColumn(rows, plan.metalColumn as number);
     return {
       target: t,
@@ -366,43 +417,191 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       ),
     };
   });
+}
 
-  const argColumns = argumentColumns(plan);
-  // a total converted from the column's unit is named in mol/kg by the functions: say where it came from
+/** Notes added to messages about converted arguments: the functions name them in mol/kg or °C, say the source unit. */
+function argumentNotes(plan: EvaluationPlan, ionic: WaterColumns["ionic"]): Record<string, string> {
+  const scale = plan.temperatureScale;
   const argNotes: Record<string, string> = {};
   for (const l of plan.ligands)
     if (l.kind === "total" && l.factor !== 1) argNotes[l.ligand] = ` (converted from ${l.unit})`;
   if (ionic?.note) argNotes[ionic.note.arg] = ionic.note.text;
   if (scale !== "C") argNotes.temperature = ` (°C, converted from the column's ${scale === "F" ? "°F" : "K"})`;
+  return argNotes;
+}
+
+/** The message of a row whose results are all left blank (a blank record, a missing temperature), or null. */
+function skippedRowMessage(plan: EvaluationPlan, row: InputRow, missingTemperature: number | null): RowMessage | null {
+  if (isBlank(row.fields[plan.phColumn]) && row.fields.every(isBlank)) {
+    return {
+      line: row.line,
+      column: null,
+      text: "a record of blank cells; its results are left blank",
+      kind: "blank",
+    };
+  }
+  if (missingTemperature !== null && isBlank(row.fields[missingTemperature])) {
+    const text = "blank: a missing measurement, this row's results are left blank (--temperature gives a default)";
+    return { line: row.line, column: plan.headers[missingTemperature], text, kind: "blank" };
+  }
+  return null;
+}
+
+/** Writes a row's result cells in output order; an error passed on fills every metal's five cells. */
+function fillRowCells(
+  cells: CellOutput[],
+  r: number,
+  e: CellOutput,
+  margin: CellOutput,
+  ligandCells: readonly CellOutput[][][],
+  perTarget: readonly TargetColumns[],
+  passOn: CellError | null,
+): void {
+  let k = 0;
+  cells[k++] = e;
+  cells[k++] = margin;
+  for (const c of ligandCells) cells[k++] = c[r][0];
+  for (const p of perTarget) {
+    if (passOn) {
+      for (let j = 0; j < 5; j++) cells[k++] = passOn;
+    } else {
+      cells[k++] = p.species[r][0];
+      cells[k++] = p.regime[r][0];
+      cells[k++] = p.above[r][0];
+      cells[k++] = p.below[r][0];
+      cells[k++] = p.dissolved[r][0];
+    }
+  }
+}
+
+/** A row's error messages, one per distinct problem, tied to the input column at fault; null when there are none. */
+function rowProblems(
+  cells: readonly CellOutput[],
+  line: number,
+  argColumns: Record<string, string | null>,
+  argNotes: Record<string, string>,
+): RowMessage[] | null {
+  let problems: RowMessage[] | null = null;
+  for (const c of cells) {
+    if (!(c instanceof CellError)) continue;
+    const [arg, rest] = splitMessage(c);
+    if (
+      !SERIOUS.has(c.code) &&
+      !(c.code === "#N/A" && arg !== null && Object.prototype.hasOwnProperty.call(argColumns, arg))
+    )
+      continue;
+    const col = arg !== null && arg in argColumns ? argColumns[arg] : null;
+    const text = clip(
+      col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`,
+    );
+    problems ??= [];
+    if (!problems.some((m) => m.column === col && m.text === text))
+      problems.push({ line, column: col, text, kind: "error" });
+  }
+  return problems;
+}
+
+/**
+ * Messages for the blank cells of an error-free row: a blank required cell leaves the results blank (returns true);
+ * otherwise a blank ligand or ionic-strength cell means the row is evaluated without it.
+ */
+function pushBlankMessages(plan: EvaluationPlan, row: InputRow, messages: RowMessage[]): boolean {
+  const blanks: string[] = [];
+  if (isBlank(row.fields[plan.phColumn])) blanks.push(plan.headers[plan.phColumn]);
+  if (isBlank(row.fields[plan.potentialColumn])) blanks.push(plan.headers[plan.potentialColumn]);
+  if (plan.metalColumn !== null && isBlank(row.fields[plan.metalColumn])) blanks.push(plan.headers[plan.metalColumn]);
+  if (blanks.length > 0) {
+    for (const b of blanks)
+      messages.push({ line: row.line, column: b, text: "blank; this row's results are left blank", kind: "blank" });
+    return true;
+  }
+  for (const l of plan.ligands) {
+    if (isBlank(row.fields[l.column]))
+      messages.push({
+        line: row.line,
+        column: plan.headers[l.column],
+        text: `blank; this row is evaluated without ${l.ligand}`,
+        kind: "blank",
+      });
+  }
+  if (plan.ionic?.kind === "column" && isBlank(row.fields[plan.ionic.column.index])) {
+    const text = "blank; this row is evaluated without the ionic-strength correction (ideal solution)";
+    messages.push({ line: row.line, column: plan.headers[plan.ionic.column.index], text, kind: "blank" });
+  }
+  return false;
+}
+
+/** Where a row's regimes are counted and its diagram points collected. */
+interface RowTally {
+  readonly regimes: Map<string, Map<string, number>>;
+  readonly points: SamplePoint[];
+}
+
+/** Counts a converted row's regimes per metal and, for diagrams, adds its sample points (25 °C where blank). */
+function tallyRow(
+  plan: EvaluationPlan,
+  r: number,
+  line: number,
+  e: number,
+  samples: SampleColumns,
+  ligandArgs: WaterColumns["ligandArgs"],
+  perTarget: readonly TargetColumns[],
+  tally: RowTally,
+): void {
+  const { temperature } = samples;
+  const pHValue = Number(samples.pH[r][0]);
+  const tCell = Array.isArray(temperature) ? temperature[r][0] : temperature;
+  const celsius = isBlank(tCell) ? 25 : Number(tCell);
+  let ligands: LigandTotals | undefined;
+  for (const l of plan.ligands) {
+    const x = ligandArgs[l.ligand]![r][0];
+    if (typeof x === "number" && x > 0) (ligands ??= {})[l.ligand] = x;
+  }
+  for (const p of perTarget) {
+    const regime = p.regime[r][0];
+    const species = p.species[r][0];
+    if (typeof regime !== "string" || regime === "" || typeof species !== "string") continue;
+    const counts = tally.regimes.get(p.target.prefix)!;
+    counts.set(regime, (counts.get(regime) ?? 0) + 1);
+    if (!plan.diagrams) continue;
+    const symbol = p.target.symbol ?? String((p.element as CellScalar[][])[r][0]).trim();
+    const point: SamplePoint = { symbol, pH: pHValue, E: e, regime, species, celsius, line };
+    tally.points.push(ligands ? { ...point, ligands } : point);
+  }
+}
+
+/** The errors cell: each problem prefixed by its column. */
+function errorsText(problems: readonly RowMessage[]): string {
+  return problems.map((m) => (m.column ? `${clip(m.column)}: ${m.text}` : m.text)).join("; ");
+}
+
+/** Evaluates rows in the order given: whole-batch columns through the functions, then one output line per row. */
+function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): BatchResult {
+  const n = rows.length;
+  const samples = sampleColumns(plan, rows, fns);
+  const water = waterColumns(plan, rows, fns, samples);
+  const perTarget = targetColumns(plan, rows, fns, samples, water);
+  const { eShe, margin } = samples;
+  const { ligandCells, carbonateErrors, ionic } = water;
+  const argColumns = argumentColumns(plan);
+  const argNotes = argumentNotes(plan, ionic);
   const kinds = cellKinds(ligandCells.length, perTarget.length);
   const missingTemperature =
     plan.temperatureColumn !== null && plan.fixedTemperature === undefined ? plan.temperatureColumn : null;
   const out: string[] = new Array(n);
   const messages: RowMessage[] = [];
-  const regimes = new Map<string, Map<string, number>>();
-  for (const p of perTarget) regimes.set(p.target.prefix, new Map());
-  const points: SamplePoint[] = [];
+  const tally: RowTally = { regimes: new Map(), points: [] };
+  for (const p of perTarget) tally.regimes.set(p.target.prefix, new Map());
   let errorRows = 0;
   let blankRows = 0;
   const cellCount = 2 + ligandCells.length + 5 * perTarget.length;
 
-  const rowCells: CellOutput[] = new Array(cellCount);
+  const cells: CellOutput[] = new Array(cellCount); // reused: each row's line is written before the next row
   for (let r = 0; r < n; r++) {
     const row = rows[r];
-    if (isBlank(row.fields[plan.phColumn]) && row.fields.every(isBlank)) {
-      messages.push({
-        line: row.line,
-        column: null,
-        text: "a record of blank cells; its results are left blank",
-        kind: "blank",
-      });
-      out[r] = blankLine(plan, row, cellCount);
-      blankRows++;
-      continue;
-    }
-    if (missingTemperature !== null && isBlank(row.fields[missingTemperature])) {
-      const text = "blank: a missing measurement, this row's results are left blank (--temperature gives a default)";
-      messages.push({ line: row.line, column: plan.headers[missingTemperature], text, kind: "blank" });
+    const skipped = skippedRowMessage(plan, row, missingTemperature);
+    if (skipped !== null) {
+      messages.push(skipped);
       out[r] = blankLine(plan, row, cellCount);
       blankRows++;
       continue;
@@ -411,101 +610,17 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     const eError = e instanceof CellError ? e : null;
     // the spreadsheet passes an error in an argument cell straight through: the potential first, then the carbonate
     const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]) ?? ionic?.errors[r] ?? null;
-    const cells = rowCells; // reused: each row's line is written before the next row
-    let k = 0;
-    cells[k++] = e;
-    cells[k++] = eError ?? margin[r][0];
-    for (const c of ligandCells) cells[k++] = c[r][0];
-    for (const p of perTarget) {
-      if (passOn) {
-        for (let j = 0; j < 5; j++) cells[k++] = passOn;
-      } else {
-        cells[k++] = p.species[r][0];
-        cells[k++] = p.regime[r][0];
-        cells[k++] = p.above[r][0];
-        cells[k++] = p.below[r][0];
-        cells[k++] = p.dissolved[r][0];
-      }
-    }
-    // messages: one per distinct problem in the row
-    let problems: RowMessage[] | null = null;
-    for (const c of cells) {
-      if (!(c instanceof CellError)) continue;
-      const [arg, rest] = splitMessage(c);
-      if (
-        !SERIOUS.has(c.code) &&
-        !(c.code === "#N/A" && arg !== null && Object.prototype.hasOwnProperty.call(argColumns, arg))
-      )
-        continue;
-      const col = arg !== null && arg in argColumns ? argColumns[arg] : null;
-      const text = clip(
-        col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`,
-      );
-      problems ??= [];
-      if (!problems.some((m) => m.column === col && m.text === text))
-        problems.push({ line: row.line, column: col, text, kind: "error" });
-    }
+    fillRowCells(cells, r, e, eError ?? margin[r][0], ligandCells, perTarget, passOn);
+    const problems = rowProblems(cells, row.line, argColumns, argNotes);
     if (problems !== null) {
       errorRows++;
       for (const m of problems) messages.push(m);
-    } else {
-      const blanks: string[] = [];
-      if (isBlank(row.fields[plan.phColumn])) blanks.push(plan.headers[plan.phColumn]);
-      if (isBlank(row.fields[plan.potentialColumn])) blanks.push(plan.headers[plan.potentialColumn]);
-      if (plan.metalColumn !== null && isBlank(row.fields[plan.metalColumn]))
-        blanks.push(plan.headers[plan.metalColumn]);
-      if (blanks.length > 0) {
-        blankRows++;
-        for (const b of blanks)
-          messages.push({ line: row.line, column: b, text: "blank; this row's results are left blank", kind: "blank" });
-      } else {
-        for (const l of plan.ligands) {
-          if (isBlank(row.fields[l.column]))
-            messages.push({
-              line: row.line,
-              column: plan.headers[l.column],
-              text: `blank; this row is evaluated without ${l.ligand}`,
-              kind: "blank",
-            });
-        }
-        if (plan.ionic?.kind === "column" && isBlank(row.fields[plan.ionic.column.index])) {
-          const text = "blank; this row is evaluated without the ionic-strength correction (ideal solution)";
-          messages.push({ line: row.line, column: plan.headers[plan.ionic.column.index], text, kind: "blank" });
-        }
-      }
-    }
-
+    } else if (pushBlankMessages(plan, row, messages)) blankRows++;
     // regime counts and diagram points
-    if (typeof e === "number" && !passOn) {
-      const pHValue = Number(pH[r][0]);
-      const tCell = Array.isArray(temperature) ? temperature[r][0] : temperature;
-      const celsius = isBlank(tCell) ? 25 : Number(tCell);
-      let ligands: LigandTotals | undefined;
-      for (const l of plan.ligands) {
-        const x = ligandArgs[l.ligand]![r][0];
-        if (typeof x === "number" && x > 0) (ligands ??= {})[l.ligand] = x;
-      }
-      for (const p of perTarget) {
-        const regime = p.regime[r][0];
-        const species = p.species[r][0];
-        if (typeof regime !== "string" || regime === "" || typeof species !== "string") continue;
-        const counts = regimes.get(p.target.prefix)!;
-        counts.set(regime, (counts.get(regime) ?? 0) + 1);
-        if (!plan.diagrams) continue;
-        const symbol = p.target.symbol ?? String((p.element as CellScalar[][])[r][0]).trim();
-        const point: SamplePoint = { symbol, pH: pHValue, E: e, regime, species, celsius, line: row.line };
-        points.push(ligands ? { ...point, ligands } : point);
-      }
-    }
-
-    out[r] = outputLine(
-      plan,
-      row,
-      cells,
-      kinds,
-      problems === null ? "" : problems.map((m) => (m.column ? `${clip(m.column)}: ${m.text}` : m.text)).join("; "),
-    );
+    if (typeof e === "number" && !passOn) tallyRow(plan, r, row.line, e, samples, water.ligandArgs, perTarget, tally);
+    out[r] = outputLine(plan, row, cells, kinds, problems === null ? "" : errorsText(problems));
   }
+  const { regimes, points } = tally;
   for (const [prefix, counts] of regimes) if (counts.size === 0) regimes.delete(prefix);
   return { lines: out, messages, errorRows, blankRows, regimes, points };
 }
