@@ -138,21 +138,16 @@ type Parsed<T> = T | CellError | typeof BLANK;
 
 type SpecsOf<A extends unknown[]> = { [K in keyof A]: ArgSpec<A[K]> };
 
-/**
- * Applies `compute` cell by cell over broadcast arguments. `compute` receives parsed values and returns a number,
- * text, "" for blank, or a CellError. The result always has at least one cell.
- */
-export function mapCells<A extends unknown[]>(
+/** The arguments' shapes and the shape they broadcast to, or the error of an empty or mismatched range. */
+function broadcastShape<A extends unknown[]>(
   specs: SpecsOf<A>,
   inputs: readonly CellInput[],
-  compute: (...args: A) => CellOutput,
-): CellOutput[][] {
+): { shapes: Shape[]; rows: number; cols: number } | CellError {
   const count = specs.length;
   const shapes: Shape[] = [];
   for (let i = 0; i < count; i++) {
     const shape = shapeOf(inputs[i]);
-    if (shape === null)
-      return [[toHostError(valueError(`${specs[i].name}: the range is empty or not rectangular`, specs[i].name))]];
+    if (shape === null) return valueError(`${specs[i].name}: the range is empty or not rectangular`, specs[i].name);
     shapes.push(shape);
   }
   let rows = 1;
@@ -160,21 +155,28 @@ export function mapCells<A extends unknown[]>(
   for (let i = 0; i < count; i++) {
     const s = shapes[i];
     if (s.rows !== 1) {
-      if (rows !== 1 && rows !== s.rows) return [[toHostError(shapeError(specs, shapes))]];
+      if (rows !== 1 && rows !== s.rows) return shapeError(specs, shapes);
       rows = s.rows;
     }
     if (s.cols !== 1) {
-      if (cols !== 1 && cols !== s.cols) return [[toHostError(shapeError(specs, shapes))]];
+      if (cols !== 1 && cols !== s.cols) return shapeError(specs, shapes);
       cols = s.cols;
     }
   }
+  return { shapes, rows, cols };
+}
 
-  // Arguments given as one cell are parsed once, before the loop; only ranges are read cell by cell.
+/** Single-cell arguments parsed once into `args`; the indices of the ranges, read cell by cell in the row loop. */
+function constantArguments<A extends unknown[]>(
+  specs: SpecsOf<A>,
+  inputs: readonly CellInput[],
+  shapes: readonly Shape[],
+): { args: unknown[]; varying: number[]; constantError: number; constantBlank: boolean } {
   const args: unknown[] = specs.map(() => undefined);
   const varying: number[] = [];
   let constantError = -1; // index of the first single-cell argument holding an error
   let constantBlank = false;
-  for (let i = 0; i < count; i++) {
+  for (let i = 0; i < specs.length; i++) {
     const s = shapes[i];
     if (s.rows !== 1 || s.cols !== 1) {
       varying.push(i);
@@ -188,6 +190,24 @@ export function mapCells<A extends unknown[]>(
       args[i] = parsed;
     } else args[i] = parsed;
   }
+  return { args, varying, constantError, constantBlank };
+}
+
+/**
+ * Applies `compute` cell by cell over broadcast arguments. `compute` receives parsed values and returns a number,
+ * text, "" for blank, or a CellError. The result always has at least one cell.
+ */
+export function mapCells<A extends unknown[]>(
+  specs: SpecsOf<A>,
+  inputs: readonly CellInput[],
+  compute: (...args: A) => CellOutput,
+): CellOutput[][] {
+  const shape = broadcastShape(specs, inputs);
+  if (shape instanceof CellError) return [[toHostError(shape)]];
+  const { shapes, rows, cols } = shape;
+
+  // Arguments given as one cell are parsed once, before the loop; only ranges are read cell by cell.
+  const { args, varying, constantError, constantBlank } = constantArguments(specs, inputs, shapes);
   const columns = varying.map((i) => varyingColumn(i, specs[i], inputs[i] as CellScalar[][], shapes[i]));
   const varyingCount = columns.length;
 
