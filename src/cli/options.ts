@@ -286,11 +286,10 @@ export const OPTION_SPEC = {
 
 export type ParsedCommand = { kind: "help" } | { kind: "version" } | { kind: "run"; options: CliOptions };
 
-/** Parses argv (without node and script). Throws UsageError for anything wrong. */
-export function parseCommandLine(argv: readonly string[]): ParsedCommand {
-  let parsed;
+/** argv read against OPTION_SPEC; a parse failure becomes a UsageError with its message. */
+function readArgs(argv: readonly string[]) {
   try {
-    parsed = parseArgs({
+    return parseArgs({
       args: [...argv],
       allowPositionals: true,
       strict: true,
@@ -299,71 +298,128 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
   } catch (error) {
     throw new UsageError(error instanceof Error ? error.message : String(error));
   }
+}
+
+/** The option values as parseArgs reads them. */
+type OptionValues = ReturnType<typeof readArgs>["values"];
+
+/** The one input file among the positionals. */
+function inputFile(positionals: readonly string[]): string {
+  if (positionals.length === 0) throw new UsageError("no input file given");
+  if (positionals.length > 1)
+    throw new UsageError(`one input file at a time (got ${positionals.length}: ${positionals.join(", ")})`);
+  return positionals[0];
+}
+
+/** --unit: V or mV (and their spelled-out names). */
+function potentialUnitOption(text: string | undefined): PotentialUnitOption | undefined {
+  if (text === undefined) return undefined;
+  const u = text.trim().toLowerCase();
+  if (u === "v" || u === "volt" || u === "volts") return "V";
+  if (u === "mv" || u === "millivolt" || u === "millivolts") return "mV";
+  throw new UsageError(`--unit: expected V or mV, got "${text}"`);
+}
+
+/** --dissolved-unit: ug/L (default, also ppb), mg/L (also ppm) or mol/kg; µ and μ read as u. */
+function dissolvedUnitOption(text: string | undefined): DissolvedUnit {
+  if (text === undefined) return "ug/L";
+  const key = text.trim().toLowerCase().replace(/[µμ]/g, "u");
+  const known: Record<string, DissolvedUnit> = {
+    "ug/l": "ug/L",
+    ppb: "ug/L",
+    "mg/l": "mg/L",
+    ppm: "mg/L",
+    "mol/kg": "mol/kg",
+  };
+  if (!Object.prototype.hasOwnProperty.call(known, key))
+    throw new UsageError(`--dissolved-unit: expected ug/L, mg/L or mol/kg, got "${text}"`);
+  return known[key];
+}
+
+/** --delimiter: one character, or "tab". */
+function delimiterOption(text: string | undefined): string | undefined {
+  if (text === undefined) return undefined;
+  const d = text === "tab" || text === "\\t" ? "\t" : text;
+  if (d.length !== 1) throw new UsageError(`--delimiter: expected one character or "tab", got "${text}"`);
+  return d;
+}
+
+/** --decimal: comma or point; the comma needs a delimiter other than the comma. */
+function decimalMarkOption(text: string | undefined, delimiter: string | undefined): DecimalMark | undefined {
+  if (text === undefined) return undefined;
+  let decimalMark: DecimalMark;
+  const key = text.trim().toLowerCase();
+  if (key === "comma" || key === ",") decimalMark = ",";
+  else if (key === "point" || key === "." || key === "dot") decimalMark = ".";
+  else throw new UsageError(`--decimal: expected comma or point, got "${text.slice(0, 40)}"`);
+  if (decimalMark === "," && delimiter === ",")
+    throw new UsageError("--decimal comma needs a delimiter other than the comma (--delimiter ';' or tab)");
+  return decimalMark;
+}
+
+/** --temperature-unit: C, F or K (a leading ° allowed). */
+function temperatureUnitOption(text: string | undefined): TemperatureScale | undefined {
+  if (text === undefined) return undefined;
+  const key = text.trim().toUpperCase().replace(/^°/, "");
+  if (key !== "C" && key !== "F" && key !== "K")
+    throw new UsageError(`--temperature-unit: expected C, F or K, got "${text.slice(0, 40)}"`);
+  return key;
+}
+
+/** A column option: undefined when not given, null for "none", else the column as written. */
+function columnOption(text: string | undefined): string | null | undefined {
+  return text === undefined ? undefined : text.trim().toLowerCase() === "none" ? null : text;
+}
+
+/** The numeric options, each checked against its range (in this order), with their defaults. */
+function numericOptions(v: OptionValues) {
+  return {
+    ionicStrength: numberOption(
+      "ionic-strength",
+      v["ionic-strength"],
+      (x) => x >= 0 && x <= 0.5,
+      "an ionic strength from 0 to 0.5 mol/kg (the Davies equation's range)",
+    ),
+    temperature: numberOption(
+      "temperature",
+      v.temperature,
+      (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS,
+      `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`,
+    ),
+    activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,
+    overpotential:
+      numberOption("overpotential", v.overpotential, (x) => x >= 0 && x <= 3, "a number of volts from 0 to 3") ?? 0,
+    maxMessages:
+      numberOption("max-messages", v["max-messages"], (x) => Number.isInteger(x) && x >= 0, "a whole number ≥ 0") ??
+      DEFAULT_MAX_MESSAGES,
+    batchSize:
+      numberOption(
+        "batch-size",
+        v["batch-size"],
+        (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000,
+        "a whole number from 1 to 1000000",
+      ) ?? DEFAULT_BATCH_SIZE,
+  };
+}
+
+/** Parses argv (without node and script). Throws UsageError for anything wrong. */
+export function parseCommandLine(argv: readonly string[]): ParsedCommand {
+  const parsed = readArgs(argv);
   const v = parsed.values;
   if (v.help) return { kind: "help" };
   if (v.version) return { kind: "version" };
-  if (parsed.positionals.length === 0) throw new UsageError("no input file given");
-  if (parsed.positionals.length > 1)
-    throw new UsageError(
-      `one input file at a time (got ${parsed.positionals.length}: ${parsed.positionals.join(", ")})`,
-    );
-  const input = parsed.positionals[0];
-
-  let unit: PotentialUnitOption | undefined;
-  if (v.unit !== undefined) {
-    const u = v.unit.trim().toLowerCase();
-    if (u === "v" || u === "volt" || u === "volts") unit = "V";
-    else if (u === "mv" || u === "millivolt" || u === "millivolts") unit = "mV";
-    else throw new UsageError(`--unit: expected V or mV, got "${v.unit}"`);
-  }
-
-  let dissolvedUnit: DissolvedUnit = "ug/L";
-  if (v["dissolved-unit"] !== undefined) {
-    const key = v["dissolved-unit"].trim().toLowerCase().replace(/[µμ]/g, "u");
-    const known: Record<string, DissolvedUnit> = {
-      "ug/l": "ug/L",
-      ppb: "ug/L",
-      "mg/l": "mg/L",
-      ppm: "mg/L",
-      "mol/kg": "mol/kg",
-    };
-    if (!Object.prototype.hasOwnProperty.call(known, key))
-      throw new UsageError(`--dissolved-unit: expected ug/L, mg/L or mol/kg, got "${v["dissolved-unit"]}"`);
-    dissolvedUnit = known[key];
-  }
-
-  let delimiter: string | undefined;
-  if (v.delimiter !== undefined) {
-    const d = v.delimiter === "tab" || v.delimiter === "\\t" ? "\t" : v.delimiter;
-    if (d.length !== 1) throw new UsageError(`--delimiter: expected one character or "tab", got "${v.delimiter}"`);
-    delimiter = d;
-  }
-
-  let decimalMark: DecimalMark | undefined;
-  if (v.decimal !== undefined) {
-    const key = v.decimal.trim().toLowerCase();
-    if (key === "comma" || key === ",") decimalMark = ",";
-    else if (key === "point" || key === "." || key === "dot") decimalMark = ".";
-    else throw new UsageError(`--decimal: expected comma or point, got "${v.decimal.slice(0, 40)}"`);
-    if (decimalMark === "," && delimiter === ",")
-      throw new UsageError("--decimal comma needs a delimiter other than the comma (--delimiter ';' or tab)");
-  }
-
-  let temperatureUnit: TemperatureScale | undefined;
-  if (v["temperature-unit"] !== undefined) {
-    const key = v["temperature-unit"].trim().toUpperCase().replace(/^°/, "");
-    if (key !== "C" && key !== "F" && key !== "K")
-      throw new UsageError(`--temperature-unit: expected C, F or K, got "${v["temperature-unit"].slice(0, 40)}"`);
-    temperatureUnit = key;
-  }
-
+  const input = inputFile(parsed.positionals);
+  const unit = potentialUnitOption(v.unit);
+  const dissolvedUnit = dissolvedUnitOption(v["dissolved-unit"]);
+  const delimiter = delimiterOption(v.delimiter);
+  const decimalMark = decimalMarkOption(v.decimal, delimiter);
+  const temperatureUnit = temperatureUnitOption(v["temperature-unit"]);
   const metals = (v.metal ?? [])
     .flatMap((m) => m.split(","))
     .map((m) => m.trim())
     .filter((m) => m !== "");
-  const columnOption = (text: string | undefined): string | null | undefined =>
-    text === undefined ? undefined : text.trim().toLowerCase() === "none" ? null : text;
   const metalColumnOption = columnOption(v["metal-column"]);
+  const numbers = numericOptions(v);
 
   const output = v.output ?? defaultOutput(input);
   const options: CliOptions = {
@@ -382,25 +438,14 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     phosphateColumn: columnOption(v["phosphate-column"]),
     pureWater: v["pure-water"] ?? false,
     ionicStrengthColumn: columnOption(v["ionic-strength-column"]),
-    ionicStrength: numberOption(
-      "ionic-strength",
-      v["ionic-strength"],
-      (x) => x >= 0 && x <= 0.5,
-      "an ionic strength from 0 to 0.5 mol/kg (the Davies equation's range)",
-    ),
+    ionicStrength: numbers.ionicStrength,
     ideal: v.ideal ?? false,
-    temperature: numberOption(
-      "temperature",
-      v.temperature,
-      (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS,
-      `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`,
-    ),
+    temperature: numbers.temperature,
     electrode: v.electrode,
     unit,
-    activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,
+    activity: numbers.activity,
     dissolvedUnit,
-    overpotential:
-      numberOption("overpotential", v.overpotential, (x) => x >= 0 && x <= 3, "a number of volts from 0 to 3") ?? 0,
+    overpotential: numbers.overpotential,
     temperatureUnit,
     delimiter,
     decimalMark,
@@ -408,17 +453,9 @@ export function parseCommandLine(argv: readonly string[]): ParsedCommand {
     fullPrecision: v["full-precision"] ?? false,
     keepInput: !v["no-keep-input"],
     progress: v["no-progress"] ? false : v.progress ? true : "auto",
-    maxMessages:
-      numberOption("max-messages", v["max-messages"], (x) => Number.isInteger(x) && x >= 0, "a whole number ≥ 0") ??
-      DEFAULT_MAX_MESSAGES,
+    maxMessages: numbers.maxMessages,
     quiet: v.quiet ?? false,
-    batchSize:
-      numberOption(
-        "batch-size",
-        v["batch-size"],
-        (x) => Number.isInteger(x) && x >= 1 && x <= 1_000_000,
-        "a whole number from 1 to 1000000",
-      ) ?? DEFAULT_BATCH_SIZE,
+    batchSize: numbers.batchSize,
   };
   return { kind: "run", options };
 }
