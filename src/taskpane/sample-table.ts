@@ -5,7 +5,7 @@
  * otherwise at the diagram's temperature. Pure: no host, no DOM.
  */
 import { PH_MAX, PH_MIN } from "../chemistry/domain";
-import { getElectrodes } from "../chemistry/electrodes";
+import { getElectrodes, type Electrode, type ElectrodeTable } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
 import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import type { LigandName } from "../chemistry/ligand-cells";
@@ -82,13 +82,54 @@ const NO_TOTALS: RowTotals = Object.freeze({});
 const PH_RANGE = [PH_MIN, PH_MAX] as const; // docs/method.md, Domain
 const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (docs/method.md, Domain)
 
+/** Why a row cannot be drawn (empty when it can), with its pH, temperature (°C) and E vs SHE as read. */
+function checkRow(
+  row: readonly unknown[],
+  options: ReadOptions,
+  electrodes: ElectrodeTable,
+  electrode: Electrode,
+): { reasons: string[]; pH: Parsed; celsius: number; hasTemperature: boolean; eSHE: number } {
+  const { mapping } = options;
+  const factor = options.unit === "mV" ? 1e-3 : 1;
+  const cell = (index: number) => (index >= 0 ? row[index] : undefined);
+  const reasons: string[] = [];
+  const pH = readNumber(cell(mapping.pH));
+  const reading = readNumber(cell(mapping.potential));
+  const temperature = mapping.temperature >= 0 ? readNumber(cell(mapping.temperature)) : ({ blank: true } as Parsed);
+  if ("blank" in pH) reasons.push("pH is blank");
+  else if ("error" in pH) reasons.push(`pH ${pH.error}`);
+  else if (pH.value < PH_RANGE[0] || pH.value > PH_RANGE[1]) reasons.push(`pH ${pH.value} is outside −2…16`);
+  if ("blank" in reading) reasons.push("potential is blank");
+  else if ("error" in reading) reasons.push(`potential ${reading.error}`);
+  let celsius = options.celsius;
+  let hasTemperature = false;
+  if ("error" in temperature) reasons.push(`temperature ${temperature.error}`);
+  else if ("value" in temperature) {
+    celsius = toCelsius(temperature.value, options.temperatureUnit);
+    if (celsius < MIN_CELSIUS || celsius > MAX_CELSIUS)
+      reasons.push(
+        `temperature ${temperature.value} °${options.temperatureUnit} is outside ${MIN_CELSIUS}…${MAX_CELSIUS} °C`,
+      );
+    else hasTemperature = true;
+  }
+  let eSHE = NaN;
+  if ("value" in reading && "value" in pH && reasons.length === 0) {
+    eSHE = reading.value * factor + electrodes.potential(electrode, celsius, pH.value);
+    if (eSHE < E_RANGE[0] || eSHE > E_RANGE[1]) {
+      reasons.push(
+        `potential ${reading.value} ${options.unit} is ${eSHE.toFixed(2)} V vs SHE, outside −3…+3 V (is the unit right?)`,
+      );
+    }
+  }
+  return { reasons, pH, celsius, hasTemperature, eSHE };
+}
+
 export function readSamples(table: SampleTable, options: ReadOptions): ReadResult {
   const { mapping } = options;
   const electrodes = getElectrodes();
   const found = electrodes.lookup(options.electrode);
   if ("error" in found) throw new Error(found.error);
   const electrode = found.electrode;
-  const factor = options.unit === "mV" ? 1e-3 : 1;
   const samples: SampleInput[] = [];
   const temperatures: number[] = [];
   const skipped: SkippedRow[] = [];
@@ -109,36 +150,7 @@ export function readSamples(table: SampleTable, options: ReadOptions): ReadResul
         return;
       }
     }
-    const reasons: string[] = [];
-    const pH = readNumber(cell(row, mapping.pH));
-    const reading = readNumber(cell(row, mapping.potential));
-    const temperature =
-      mapping.temperature >= 0 ? readNumber(cell(row, mapping.temperature)) : ({ blank: true } as Parsed);
-    if ("blank" in pH) reasons.push("pH is blank");
-    else if ("error" in pH) reasons.push(`pH ${pH.error}`);
-    else if (pH.value < PH_RANGE[0] || pH.value > PH_RANGE[1]) reasons.push(`pH ${pH.value} is outside −2…16`);
-    if ("blank" in reading) reasons.push("potential is blank");
-    else if ("error" in reading) reasons.push(`potential ${reading.error}`);
-    let celsius = options.celsius;
-    let hasTemperature = false;
-    if ("error" in temperature) reasons.push(`temperature ${temperature.error}`);
-    else if ("value" in temperature) {
-      celsius = toCelsius(temperature.value, options.temperatureUnit);
-      if (celsius < MIN_CELSIUS || celsius > MAX_CELSIUS)
-        reasons.push(
-          `temperature ${temperature.value} °${options.temperatureUnit} is outside ${MIN_CELSIUS}…${MAX_CELSIUS} °C`,
-        );
-      else hasTemperature = true;
-    }
-    let eSHE = NaN;
-    if ("value" in reading && "value" in pH && reasons.length === 0) {
-      eSHE = reading.value * factor + electrodes.potential(electrode, celsius, pH.value);
-      if (eSHE < E_RANGE[0] || eSHE > E_RANGE[1]) {
-        reasons.push(
-          `potential ${reading.value} ${options.unit} is ${eSHE.toFixed(2)} V vs SHE, outside −3…+3 V (is the unit right?)`,
-        );
-      }
-    }
+    const { reasons, pH, celsius, hasTemperature, eSHE } = checkRow(row, options, electrodes, electrode);
     if (reasons.length > 0 || !("value" in pH)) {
       skipped.push({ row: rowNumber, reason: reasons.join("; ") });
       return;
