@@ -348,73 +348,20 @@ function targetColumns(
   const { pH, potential, temperature } = samples;
   const { carbonate, chloride, sulfur, phosphate } = water.ligandArgs;
   const ionicStrength = water.ionic?.argument;
+  // the water arguments in the order every stability function takes them, after element, pH, potential, temperature
+  const waterArgs = [carbonate, chloride, sulfur, phosphate, ionicStrength] as const;
   return plan.targets.map((t) => {
     const element: CellInput = t.symbol ?? textColumn(rows, plan.metalColumn as number);
+    const sample = [element, pH, potential, temperature] as const;
     return {
       target: t,
       element,
-      species: fns.species(
-        element,
-        pH,
-        potential,
-        temperature,
-        plan.activity,
-        carbonate,
-        chloride,
-        sulfur,
-        phosphate,
-        ionicStrength,
-      ),
-      regime: fns.regime(
-        element,
-        pH,
-        potential,
-        temperature,
-        plan.activity,
-        carbonate,
-        chloride,
-        sulfur,
-        phosphate,
-        ionicStrength,
-      ),
-      above: fns.boundary(
-        element,
-        pH,
-        potential,
-        temperature,
-        plan.activity,
-        carbonate,
-        chloride,
-        sulfur,
-        phosphate,
-        ionicStrength,
-        1,
-      ),
-      below: fns.boundary(
-        element,
-        pH,
-        potential,
-        temperature,
-        plan.activity,
-        carbonate,
-        chloride,
-        sulfur,
-        phosphate,
-        ionicStrength,
-        -1,
-      ),
-      dissolved: fns.dissolved(
-        element,
-        pH,
-        potential,
-        temperature,
-        carbonate,
-        chloride,
-        sulfur,
-        phosphate,
-        ionicStrength,
-        plan.dissolvedUnit,
-      ),
+      species: fns.species(...sample, plan.activity, ...waterArgs),
+      regime: fns.regime(...sample, plan.activity, ...waterArgs),
+      above: fns.boundary(...sample, plan.activity, ...waterArgs, 1),
+      below: fns.boundary(...sample, plan.activity, ...waterArgs, -1),
+      // DISSOLVED has no activity: it is the controlling solid's solubility
+      dissolved: fns.dissolved(...sample, ...waterArgs, plan.dissolvedUnit),
     };
   });
 }
