@@ -3,75 +3,30 @@
  * built from, so a CSV row and a worksheet row give the same answers. Each takes cells or columns (n × 1 ranges)
  * and returns a range of results, with CellError values where the spreadsheet would show an error.
  */
-import type { CellInput, CellOutput } from "../functions/cell-values";
 import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../functions/stability-functions";
 import { toSHEAt } from "../functions/electrode-functions";
 import { waterMarginAt } from "../functions/water-functions";
 import { dicAt } from "../functions/carbonate-functions";
 import { ionicStrengthAt } from "../functions/ionic-strength-functions";
 
+/** The functions by their own signatures (one argument order, written once in src/functions). */
 export interface WorksheetFunctions {
-  /** REDOX.TOSHE(reading, electrode, [temperature], [pH]) */
-  toShe(reading: CellInput, electrode: CellInput, temperature?: CellInput, pH?: CellInput): CellOutput[][];
+  /** REDOX.TOSHE(reading, electrode, [temperature], [pH], [unit]) */
+  toShe: typeof toSHEAt;
   /** REDOX.WATERMARGIN(pH, potential, [temperature], [overpotential]) */
-  waterMargin(pH: CellInput, potential: CellInput, temperature?: CellInput, overpotential?: CellInput): CellOutput[][];
+  waterMargin: typeof waterMarginAt;
   /** REDOX.SPECIES(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength]) */
-  species(
-    element: CellInput,
-    pH: CellInput,
-    potential: CellInput,
-    temperature?: CellInput,
-    activity?: CellInput,
-    carbonate?: CellInput,
-    chloride?: CellInput,
-    sulfur?: CellInput,
-    phosphate?: CellInput,
-    ionicStrength?: CellInput,
-  ): CellOutput[][];
+  species: typeof speciesAt;
   /** REDOX.REGIME(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength]) */
-  regime(
-    element: CellInput,
-    pH: CellInput,
-    potential: CellInput,
-    temperature?: CellInput,
-    activity?: CellInput,
-    carbonate?: CellInput,
-    chloride?: CellInput,
-    sulfur?: CellInput,
-    phosphate?: CellInput,
-    ionicStrength?: CellInput,
-  ): CellOutput[][];
+  regime: typeof regimeAt;
   /** REDOX.BOUNDARY(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [direction]) */
-  boundary(
-    element: CellInput,
-    pH: CellInput,
-    potential: CellInput,
-    temperature?: CellInput,
-    activity?: CellInput,
-    carbonate?: CellInput,
-    chloride?: CellInput,
-    sulfur?: CellInput,
-    phosphate?: CellInput,
-    ionicStrength?: CellInput,
-    direction?: CellInput,
-  ): CellOutput[][];
+  boundary: typeof boundaryFrom;
   /** REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [unit]) */
-  dissolved(
-    element: CellInput,
-    pH: CellInput,
-    potential: CellInput,
-    temperature?: CellInput,
-    carbonate?: CellInput,
-    chloride?: CellInput,
-    sulfur?: CellInput,
-    phosphate?: CellInput,
-    ionicStrength?: CellInput,
-    unit?: CellInput,
-  ): CellOutput[][];
+  dissolved: typeof dissolvedAt;
   /** REDOX.DIC(alkalinity, pH, [temperature]) */
-  dic(alkalinity: CellInput, pH: CellInput, temperature?: CellInput): CellOutput[][];
+  dic: typeof dicAt;
   /** REDOX.IONICSTRENGTH(value, basis) */
-  ionicStrength(value: CellInput, basis: CellInput): CellOutput[][];
+  ionicStrength: typeof ionicStrengthAt;
 }
 
 export const worksheetFunctions: WorksheetFunctions = {
