@@ -90,9 +90,11 @@ describe("point engine properties with ligands", () => {
         if (!crossing) return;
         expect(direction > 0 ? crossing.E > E : crossing.E < E).toBe(true);
         // 1 mV either side, or half the width of a narrower band next to it (a CdS sliver at 1e-6 sulfur is 1 mV wide)
-        const others = [pointBoundary(engine, pH, crossing.E, 1), pointBoundary(engine, pH, crossing.E, -1)]
-          .map((b) => (b ? Math.abs(b.E - crossing.E) : Infinity))
-          .filter((d) => d > 1e-6);
+        // the neighbours are searched from 1 µV beyond the crossing: a search started on it may find it again
+        const others = [
+          pointBoundary(engine, pH, crossing.E + 1e-6, 1),
+          pointBoundary(engine, pH, crossing.E - 1e-6, -1),
+        ].map((b) => (b ? Math.abs(b.E - crossing.E) : Infinity));
         const step = Math.min(1e-3, ...others.map((d) => d / 2));
         expect(engine.dominant(pH, crossing.E - step)).toBe(crossing.below);
         expect(engine.dominant(pH, crossing.E + step)).toBe(crossing.above);
