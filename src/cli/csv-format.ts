@@ -20,24 +20,43 @@ export const DEFAULT_FORMAT: CsvFormat = { delimiter: ",", decimalMark: ".", raw
 /** How a result number is rounded: potentials to 0.1 mV, amounts to 4 significant figures. */
 export type NumberKind = "volts" | "amount";
 
-/** Characters that make a spreadsheet read a cell as a formula (OWASP, CSV injection). */
-const FORMULA_START = /^[=+\-@\t\r]/;
+/** Whether a character code is one of = + - @ tab or carriage return: a cell beginning so is a formula (OWASP). */
+function isFormulaStart(code: number): boolean {
+  return code === 61 || code === 43 || code === 45 || code === 64 || code === 9 || code === 13;
+}
+
+/** Whether a character code is white space as a regular expression's \s means it (printable ASCII never is). */
+function isSpace(code: number): boolean {
+  if (code > 32 && code < 127) return false;
+  return /\s/.test(String.fromCharCode(code));
+}
 
 /** Cells that must be quoted: the delimiter, a quote, a line break, or space at either end. */
 function needsQuotes(text: string, delimiter: string): boolean {
-  return text.includes(delimiter) || /["\n\r]|^\s|\s$/.test(text);
+  if (isSpace(text.charCodeAt(0)) || isSpace(text.charCodeAt(text.length - 1))) return true;
+  if (delimiter.length !== 1) return text.includes(delimiter) || /["\n\r]/.test(text);
+  const d = delimiter.charCodeAt(0);
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === d || c === 34 || c === 10 || c === 13) return true;
+  }
+  return false;
 }
 
 /** A text cell as a CSV field in this format. */
 export function textField(text: string, format: CsvFormat): string {
   if (text === "") return "";
-  if (!format.rawText && FORMULA_START.test(text) && readNumber(text, format.decimalMark) === null) {
+  if (!format.rawText && isFormulaStart(text.charCodeAt(0)) && readNumber(text, format.decimalMark) === null) {
     return `"'${text.replace(/"/g, '""')}"`;
   }
   return needsQuotes(text, format.delimiter) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-/** A result number as a CSV field: rounded by kind (unless full precision), with the format's decimal mark. */
+/** The text of tenths of a millivolt 0–9999 after the volts' decimal point: "" for 0, ".0001", ".25" (no trailing 0). */
+const VOLT_FRACTIONS: readonly string[] = Array.from({ length: 10_000 }, (_, f) =>
+  f === 0 ? "" : `.${String(f).padStart(4, "0").replace(/0+$/, "")}`,
+);
+
 /**
  * Volts to 0.1 mV, written from the integer number of tenths of a millivolt: the text String(round(x·1e4)/1e4)
  * gives (no trailing zeros), without formatting a double.
@@ -47,19 +66,56 @@ function voltsText(x: number): string {
   if (!(Math.abs(n) < 1e15)) return String(n / 1e4);
   const a = n < 0 ? -n : n;
   const whole = Math.floor(a / 1e4);
-  let fraction = a - whole * 1e4;
-  const sign = n < 0 ? "-" : "";
-  if (fraction === 0) return sign + whole;
-  let digits = 4;
-  while (fraction % 10 === 0) {
-    fraction /= 10;
-    digits--;
-  }
-  return `${sign}${whole}.${String(fraction).padStart(digits, "0")}`;
+  const text = String(whole) + VOLT_FRACTIONS[a - whole * 1e4];
+  return n < 0 && a !== 0 ? "-" + text : text;
 }
 
+const POWERS_OF_TEN: readonly number[] = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
+
+/** a·10^k with one rounding (the powers of ten to 10²² are exact doubles). */
+function timesPowerOfTen(a: number, k: number): number {
+  return k >= 0 ? a * POWERS_OF_TEN[k] : a / POWERS_OF_TEN[-k];
+}
+
+/** The shortest text of a 4-digit decimal m·10^−k (1000 ≤ m ≤ 9999, −11 ≤ k ≤ 9): "1.235", "0.0012", "120". */
+function decimalText(m: number, k: number): string {
+  if (k <= 0) return String(m * POWERS_OF_TEN[-k]);
+  const digits = String(m);
+  const whole = 4 - k;
+  const text = whole > 0 ? `${digits.slice(0, whole)}.${digits.slice(whole)}` : `0.${"0".repeat(-whole)}${digits}`;
+  let end = text.length;
+  while (text.charCodeAt(end - 1) === 48) end--; // trailing zeros
+  if (text.charCodeAt(end - 1) === 46) end--; // and a bare point
+  return text.slice(0, end);
+}
+
+/**
+ * 4 significant figures: the text String(Number(x.toPrecision(4))) gives, from the integer of the four digits
+ * (toPrecision formats the double's exact decimal expansion, slowly). Outside 10⁻⁶…10¹⁵ (exponent notation) and
+ * within 10⁻⁷ of a tie between two roundings it leaves the answer to toPrecision.
+ */
+function fourFigures(x: number): string {
+  if (x === 0) return "0";
+  const a = x < 0 ? -x : x;
+  if (!(a >= 1e-6 && a < 1e15)) return String(Number(x.toPrecision(4)));
+  let k = 3 - Math.floor(Math.log10(a)); // a·10^k in [1000, 10000): −11 ≤ k ≤ 9
+  let scaled = timesPowerOfTen(a, k);
+  if (scaled < 1000) scaled = timesPowerOfTen(a, ++k);
+  else if (scaled >= 10000) scaled = timesPowerOfTen(a, --k);
+  const below = Math.floor(scaled);
+  if (Math.abs(scaled - below - 0.5) < 1e-7) return String(Number(x.toPrecision(4)));
+  let m = Math.round(scaled);
+  if (m === 10000) {
+    m = 1000;
+    k--;
+  }
+  const text = decimalText(m, k);
+  return x < 0 ? "-" + text : text;
+}
+
+/** A result number as a CSV field: rounded by kind (unless full precision), with the format's decimal mark. */
 export function numberField(x: number, kind: NumberKind, format: CsvFormat): string {
-  const text = format.fullPrecision ? String(x) : kind === "volts" ? voltsText(x) : String(Number(x.toPrecision(4)));
+  const text = format.fullPrecision ? String(x) : kind === "volts" ? voltsText(x) : fourFigures(x);
   return format.decimalMark === "." ? text : text.replace(".", ",");
 }
 

@@ -131,10 +131,11 @@ export function clip(text: string, limit = ECHO_LIMIT): string {
 }
 
 /**
- * A column of cells for the functions. Numeric text (with the file's decimal mark) becomes the number the functions
- * would read from it, × factor or converted by `convert` (they take plain numbers without reading them again, once
- * per function instead of six times); anything else goes as written, so that the function's own message says what
- * is wrong with it.
+ * A column of cells for the functions, one cell per row; the functions get it as a 1 × n range (one array for the
+ * batch, not one per row: a range broadcasts the same along either dimension). Numeric text (with the file's decimal
+ * mark) becomes the number the functions would read from it, × factor or converted by `convert` (they take plain
+ * numbers without reading them again, once per function instead of six times); anything else goes as written, so
+ * that the function's own message says what is wrong with it.
  */
 function numericColumn(
   rows: readonly InputRow[],
@@ -143,21 +144,31 @@ function numericColumn(
   factor = 1,
   blank: CellScalar = "",
   convert?: (x: number) => number,
-): CellScalar[][] {
-  const out: CellScalar[][] = new Array(rows.length);
+): CellScalar[] {
+  const out: CellScalar[] = new Array(rows.length);
   const mark = format.decimalMark;
   for (let r = 0; r < rows.length; r++) {
     const text = rows[r].fields[index] ?? "";
     const x = readNumber(text, mark);
-    out[r] = [x !== null ? (convert ? convert(x) : x * factor) : isBlank(text) ? blank : text];
+    out[r] = x !== null ? (convert ? convert(x) : x * factor) : isBlank(text) ? blank : text;
   }
   return out;
 }
 
-function textColumn(rows: readonly InputRow[], index: number): CellScalar[][] {
-  const out: CellScalar[][] = new Array(rows.length);
-  for (let r = 0; r < rows.length; r++) out[r] = [rows[r].fields[index] ?? ""];
+function textColumn(rows: readonly InputRow[], index: number): CellScalar[] {
+  const out: CellScalar[] = new Array(rows.length);
+  for (let r = 0; r < rows.length; r++) out[r] = rows[r].fields[index] ?? "";
   return out;
+}
+
+/** A batch's cells as the range the functions take: one row of n cells. */
+const asRange = (cells: CellScalar[]): CellScalar[][] => [cells];
+
+/** A function's answers for a batch of n rows, one per row (a one-cell answer, an argument's error, fills all n). */
+function answersOf(result: CellOutput[][], n: number): CellOutput[] {
+  const first = result[0];
+  if (result.length === 1 && first.length === n) return first;
+  return new Array<CellOutput>(n).fill(first[0]);
 }
 
 /** #VALUE! is always the input's fault; #N/A only when its message names an input (no DIC for that alkalinity). */
@@ -204,94 +215,108 @@ function splitMessage(error: CellError): [string | null, string] {
   const lead = error.argument !== undefined ? `${error.argument}: ` : null;
   if (lead !== null)
     return [error.argument!, error.message.startsWith(lead) ? error.message.slice(lead.length) : error.message];
+  if (error.message.indexOf(":") < 0) return [null, error.message]; // no lead (most #N/A: "no boundary above …")
   const m = /^([A-Za-z][\w ,]*?):\s(.*)$/s.exec(error.message);
   return m ? [m[1], m[2]] : [null, error.message];
 }
 
 /**
- * Evaluates a batch. The rows are handed to the functions grouped by metal and temperature — the functions reuse
- * the system of the previous row when its conditions are the same, so grouping saves most look-ups — and the
- * results are put back in file order.
+ * The order the functions see a batch's rows in: grouped by metal, and within a metal by temperature (each in order
+ * of first appearance; inside a group the file's order). The engine keeps one element's conditions from row to
+ * row, so a group costs one change of element and temperature instead of one per row.
+ */
+function groupedOrder(
+  rows: readonly InputRow[],
+  metalColumn: number | null,
+  temperatureColumn: number | null,
+): number[] {
+  const metals = new Map<string, Map<string, number[]>>();
+  for (let i = 0; i < rows.length; i++) {
+    const f = rows[i].fields;
+    const metal = metalColumn === null ? "" : (f[metalColumn] ?? "").trim();
+    const celsius = temperatureColumn === null ? "" : (f[temperatureColumn] ?? "").trim();
+    let temperatures = metals.get(metal);
+    if (!temperatures) metals.set(metal, (temperatures = new Map()));
+    const group = temperatures.get(celsius);
+    if (group) group.push(i);
+    else temperatures.set(celsius, [i]);
+  }
+  const order: number[] = [];
+  for (const temperatures of metals.values())
+    for (const group of temperatures.values()) for (const i of group) order.push(i);
+  return order;
+}
+
+/**
+ * Evaluates a batch. The rows are handed to the functions grouped by metal and temperature (groupedOrder), and the
+ * results — lines, messages and diagram points — are put back in file order.
  */
 export function evaluateBatch(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): BatchResult {
   const { metalColumn, temperatureColumn } = plan;
   if (metalColumn === null && temperatureColumn === null) return evaluateInOrder(plan, rows, fns);
-  // groups in order of first appearance; the order inside a group is the file's
-  const groups = new Map<string, number[]>();
-  for (let i = 0; i < rows.length; i++) {
-    const f = rows[i].fields;
-    const key = `${metalColumn === null ? "" : (f[metalColumn] ?? "").trim()}\u0000${temperatureColumn === null ? "" : (f[temperatureColumn] ?? "").trim()}`;
-    const group = groups.get(key);
-    if (group) group.push(i);
-    else groups.set(key, [i]);
-  }
-  const order: number[] = [];
-  for (const group of groups.values()) for (const i of group) order.push(i);
+  const order = groupedOrder(rows, metalColumn, temperatureColumn);
   const sorted: InputRow[] = new Array(rows.length);
   for (let k = 0; k < order.length; k++) sorted[k] = rows[order[k]];
   const result = evaluateInOrder(plan, sorted, fns);
   const out: string[] = new Array(rows.length);
   for (let k = 0; k < order.length; k++) out[order[k]] = result.lines[k];
+  // stable sorts: a row's messages and points keep their order
   const messages = result.messages.sort((a, b) => a.line - b.line);
-  return { ...result, lines: out, messages };
+  const points = result.points.sort((a, b) => a.line - b.line);
+  return { ...result, lines: out, messages, points };
 }
 
 /** The argument columns every function takes: pH, the reading as E vs SHE, the temperature, and the water margin. */
 interface SampleColumns {
-  readonly pH: CellScalar[][];
+  readonly pH: CellScalar[];
+  /** The [temperature] argument: a 1 × n range of the column, or one cell for every row. */
   readonly temperature: CellInput;
+  /** The temperature cell of each row (for the diagram points). */
+  readonly temperatureAt: (r: number) => CellScalar;
   /** REDOX.TOSHE's cells: E vs SHE, or the error of a reading that failed to convert. */
-  readonly eShe: CellOutput[][];
-  readonly potential: CellScalar[][];
-  readonly margin: CellOutput[][];
+  readonly eShe: CellOutput[];
+  readonly potential: CellScalar[];
+  readonly margin: CellOutput[];
+}
+
+/** The [temperature] argument of a batch: the column converted to °C (blank cells: the fixed one), or the fixed one. */
+function temperatureColumn(plan: EvaluationPlan, rows: readonly InputRow[]): CellScalar[] | CellScalar {
+  const fixedT = plan.fixedTemperature ?? "";
+  if (plan.temperatureColumn === null) return fixedT;
+  const scale = plan.temperatureScale;
+  const convert = scale === "C" ? undefined : (x: number): number => toCelsius(x, scale);
+  return numericColumn(rows, plan.temperatureColumn, plan.format, 1, fixedT, convert);
 }
 
 /** Reads pH, reading and temperature columns and converts the readings to E vs SHE (Nernst, per electrode). */
 function sampleColumns(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): SampleColumns {
   const n = rows.length;
-  const f = plan.format;
-  const pH = numericColumn(rows, plan.phColumn, f);
+  const pH = numericColumn(rows, plan.phColumn, plan.format);
   // Readings in mV are divided by 1000 when they are numbers; anything else goes to the function as written.
-  const reading: CellInput = numericColumn(
-    rows,
-    plan.potentialColumn,
-    f,
-    1,
-    "",
-    plan.unit === "mV" ? (x) => x / 1000 : undefined,
-  );
-  const fixedT = plan.fixedTemperature ?? "";
-  const scale = plan.temperatureScale;
-  const temperature: CellInput =
-    plan.temperatureColumn === null
-      ? fixedT
-      : numericColumn(
-          rows,
-          plan.temperatureColumn,
-          f,
-          1,
-          fixedT,
-          scale === "C" ? undefined : (x) => toCelsius(x, scale),
-        );
+  const mV = plan.unit === "mV" ? (x: number): number => x / 1000 : undefined;
+  const reading = numericColumn(rows, plan.potentialColumn, plan.format, 1, "", mV);
+  const t = temperatureColumn(plan, rows);
+  const temperature: CellInput = Array.isArray(t) ? asRange(t) : t;
+  const temperatureAt = Array.isArray(t) ? (r: number): CellScalar => t[r] : (): CellScalar => t;
   const isRhe = plan.electrode.trim().toUpperCase() === "RHE";
-  const eShe = fns.toShe(reading, plan.electrode, temperature, isRhe ? pH : undefined);
+  const eShe = answersOf(fns.toShe(asRange(reading), plan.electrode, temperature, isRhe ? asRange(pH) : undefined), n);
   // A reading that failed to convert is an error cell the spreadsheet would pass on as it is.
-  const potential: CellScalar[][] = new Array(n);
+  const potential: CellScalar[] = new Array(n);
   for (let r = 0; r < n; r++) {
-    const e = eShe[r][0];
-    potential[r] = [e instanceof CellError ? "" : (e as number | string)];
+    const e = eShe[r];
+    potential[r] = e instanceof CellError ? "" : (e as number | string);
   }
-  const margin = fns.waterMargin(pH, potential, temperature, plan.overpotential);
-  return { pH, temperature, eShe, potential, margin };
+  const margin = answersOf(fns.waterMargin(asRange(pH), asRange(potential), temperature, plan.overpotential), n);
+  return { pH, temperature, temperatureAt, eShe, potential, margin };
 }
 
 /** The water of a batch: ligand and ionic-strength arguments, their output cells, and the errors passed on. */
 interface WaterColumns {
-  readonly ligandArgs: Partial<Record<LigandName, CellScalar[][]>>;
-  readonly ligandCells: CellOutput[][][];
+  readonly ligandArgs: Partial<Record<LigandName, CellScalar[]>>;
+  readonly ligandCells: CellOutput[][];
   /** REDOX.DIC's errors (carbonate from alkalinity), passed on to every function taking the carbonate. */
   readonly carbonateErrors: (CellError | null)[] | null;
-  readonly ionic: ReturnType<typeof ionicColumn>;
+  readonly ionic: IonicColumn | null;
 }
 
 /** Each ligand's argument column and output cells (carbonate from alkalinity via REDOX.DIC), then the ionic strength. */
@@ -301,24 +326,27 @@ function waterColumns(
   fns: WorksheetFunctions,
   samples: SampleColumns,
 ): WaterColumns {
+  const n = rows.length;
   const f = plan.format;
   const { pH, temperature } = samples;
-  const ligandArgs: Partial<Record<LigandName, CellScalar[][]>> = {};
-  const ligandCells: CellOutput[][][] = [];
+  const ligandArgs: Partial<Record<LigandName, CellScalar[]>> = {};
+  const ligandCells: CellOutput[][] = [];
   let carbonateErrors: (CellError | null)[] | null = null;
   for (const l of plan.ligands) {
+    const column = numericColumn(rows, l.column, f, l.factor);
     if (l.kind === "alkalinity") {
-      const dic = fns.dic(numericColumn(rows, l.column, f, l.factor), pH, temperature);
-      carbonateErrors = dic.map(([d]) => (d instanceof CellError ? d : null));
-      ligandArgs.carbonate = dic.map(([d]) => [d instanceof CellError ? "" : (d as number | string)]);
+      const dic = answersOf(fns.dic(asRange(column), asRange(pH), temperature), n);
+      carbonateErrors = dic.map((d) => (d instanceof CellError ? d : null));
+      ligandArgs.carbonate = dic.map((d) => (d instanceof CellError ? "" : (d as number | string)));
       ligandCells.push(dic);
     } else {
-      const column = numericColumn(rows, l.column, f, l.factor);
       ligandArgs[l.ligand] = column;
       // the output cell: the total as the functions read it ("" where blank)
-      ligandCells.push(
-        mapCells([LIGAND_ARG[l.ligand]], [column], (x) => x).map((cell, r) => (isBlank(column[r][0]) ? [""] : cell)),
+      const read = answersOf(
+        mapCells([LIGAND_ARG[l.ligand]], [asRange(column)], (x) => x),
+        n,
       );
+      ligandCells.push(read.map((cell, r) => (isBlank(column[r]) ? "" : cell)));
     }
   }
   const ionic = ionicColumn(plan, rows, fns);
@@ -329,12 +357,13 @@ function waterColumns(
 /** One metal's result columns: species, regime, the boundaries above and below, and the dissolved amount. */
 interface TargetColumns {
   readonly target: MetalTarget;
-  readonly element: CellInput;
-  readonly species: CellOutput[][];
-  readonly regime: CellOutput[][];
-  readonly above: CellOutput[][];
-  readonly below: CellOutput[][];
-  readonly dissolved: CellOutput[][];
+  /** Each row's element cell (the per-row metal column), or null for a fixed metal. */
+  readonly elements: CellScalar[] | null;
+  readonly species: CellOutput[];
+  readonly regime: CellOutput[];
+  readonly above: CellOutput[];
+  readonly below: CellOutput[];
+  readonly dissolved: CellOutput[];
 }
 
 /** Calls the stability functions once per metal target over the whole batch (as a worksheet range would). */
@@ -345,23 +374,28 @@ function targetColumns(
   samples: SampleColumns,
   water: WaterColumns,
 ): TargetColumns[] {
-  const { pH, potential, temperature } = samples;
+  const n = rows.length;
+  const { temperature } = samples;
+  const pH = asRange(samples.pH);
+  const potential = asRange(samples.potential);
+  const arg = (cells: CellScalar[] | undefined): CellInput => (cells === undefined ? undefined : asRange(cells));
   const { carbonate, chloride, sulfur, phosphate } = water.ligandArgs;
   const ionicStrength = water.ionic?.argument;
   // the water arguments in the order every stability function takes them, after element, pH, potential, temperature
-  const waterArgs = [carbonate, chloride, sulfur, phosphate, ionicStrength] as const;
+  const waterArgs = [arg(carbonate), arg(chloride), arg(sulfur), arg(phosphate), ionicStrength] as const;
   return plan.targets.map((t) => {
-    const element: CellInput = t.symbol ?? textColumn(rows, plan.metalColumn as number);
+    const elements = t.symbol === null ? textColumn(rows, plan.metalColumn as number) : null;
+    const element: CellInput = elements === null ? t.symbol : asRange(elements);
     const sample = [element, pH, potential, temperature] as const;
     return {
       target: t,
-      element,
-      species: fns.species(...sample, plan.activity, ...waterArgs),
-      regime: fns.regime(...sample, plan.activity, ...waterArgs),
-      above: fns.boundary(...sample, plan.activity, ...waterArgs, 1),
-      below: fns.boundary(...sample, plan.activity, ...waterArgs, -1),
+      elements,
+      species: answersOf(fns.species(...sample, plan.activity, ...waterArgs), n),
+      regime: answersOf(fns.regime(...sample, plan.activity, ...waterArgs), n),
+      above: answersOf(fns.boundary(...sample, plan.activity, ...waterArgs, 1), n),
+      below: answersOf(fns.boundary(...sample, plan.activity, ...waterArgs, -1), n),
       // DISSOLVED has no activity: it is the controlling solid's solubility
-      dissolved: fns.dissolved(...sample, ...waterArgs, plan.dissolvedUnit),
+      dissolved: answersOf(fns.dissolved(...sample, ...waterArgs, plan.dissolvedUnit), n),
     };
   });
 }
@@ -400,23 +434,23 @@ function fillRowCells(
   r: number,
   e: CellOutput,
   margin: CellOutput,
-  ligandCells: readonly CellOutput[][][],
+  ligandCells: readonly CellOutput[][],
   perTarget: readonly TargetColumns[],
   passOn: CellError | null,
 ): void {
   let k = 0;
   cells[k++] = e;
   cells[k++] = margin;
-  for (const c of ligandCells) cells[k++] = c[r][0];
+  for (const c of ligandCells) cells[k++] = c[r];
   for (const p of perTarget) {
     if (passOn) {
       for (let j = 0; j < 5; j++) cells[k++] = passOn;
     } else {
-      cells[k++] = p.species[r][0];
-      cells[k++] = p.regime[r][0];
-      cells[k++] = p.above[r][0];
-      cells[k++] = p.below[r][0];
-      cells[k++] = p.dissolved[r][0];
+      cells[k++] = p.species[r];
+      cells[k++] = p.regime[r];
+      cells[k++] = p.above[r];
+      cells[k++] = p.below[r];
+      cells[k++] = p.dissolved[r];
     }
   }
 }
@@ -495,23 +529,22 @@ function tallyRow(
   perTarget: readonly TargetColumns[],
   tally: RowTally,
 ): void {
-  const { temperature } = samples;
-  const pHValue = Number(samples.pH[r][0]);
-  const tCell = Array.isArray(temperature) ? temperature[r][0] : temperature;
+  const pHValue = Number(samples.pH[r]);
+  const tCell = samples.temperatureAt(r);
   const celsius = isBlank(tCell) ? 25 : Number(tCell);
   let ligands: LigandTotals | undefined;
   for (const l of plan.ligands) {
-    const x = ligandArgs[l.ligand]![r][0];
+    const x = ligandArgs[l.ligand]![r];
     if (typeof x === "number" && x > 0) (ligands ??= {})[l.ligand] = x;
   }
   for (const p of perTarget) {
-    const regime = p.regime[r][0];
-    const species = p.species[r][0];
+    const regime = p.regime[r];
+    const species = p.species[r];
     if (typeof regime !== "string" || regime === "" || typeof species !== "string") continue;
     const counts = tally.regimes.get(p.target.prefix)!;
     counts.set(regime, (counts.get(regime) ?? 0) + 1);
     if (!plan.diagrams) continue;
-    const symbol = p.target.symbol ?? String((p.element as CellScalar[][])[r][0]).trim();
+    const symbol = p.target.symbol ?? String(p.elements![r]).trim();
     const point: SamplePoint = { symbol, pH: pHValue, E: e, regime, species, celsius, line };
     tally.points.push(ligands ? { ...point, ligands } : point);
   }
@@ -553,11 +586,11 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       blankRows++;
       continue;
     }
-    const e = eShe[r][0];
+    const e = eShe[r];
     const eError = e instanceof CellError ? e : null;
     // the spreadsheet passes an error in an argument cell straight through: the potential first, then the carbonate
     const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]) ?? ionic?.errors[r] ?? null;
-    fillRowCells(cells, r, e, eError ?? margin[r][0], ligandCells, perTarget, passOn);
+    fillRowCells(cells, r, e, eError ?? margin[r], ligandCells, perTarget, passOn);
     const problems = rowProblems(cells, row.line, argColumns, argNotes);
     if (problems !== null) {
       errorRows++;
@@ -577,31 +610,42 @@ function usesIonic(plan: EvaluationPlan): boolean {
   return plan.ionic !== undefined && plan.ionic.kind !== "ideal";
 }
 
+/** A batch's [ionicStrength]: the argument, the output cell and the error passed on of each row, and a unit note. */
+interface IonicColumn {
+  readonly argument: CellInput;
+  readonly cells: CellOutput[];
+  readonly errors: readonly (CellError | null)[];
+  readonly note: { readonly arg: string; readonly text: string } | null;
+}
+
 /**
  * The [ionicStrength] of a batch: a fixed value, or a column through ionicStrengthArgument (a stated ionic strength
  * × its unit's factor, or a conductivity or TDS reading through REDOX.IONICSTRENGTH). Blank cells: that row is ideal.
+ * ionicStrengthArgument, shared with the pane, takes and gives n × 1 ranges.
  */
-function ionicColumn(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions) {
+function ionicColumn(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): IonicColumn | null {
   const ionic = plan.ionic;
   if (ionic === undefined || ionic.kind === "ideal") return null;
+  const n = rows.length;
   if (ionic.kind === "fixed") {
-    const none = new Array<CellError | null>(rows.length).fill(null);
-    return {
-      argument: ionic.value as CellInput,
-      cells: rows.map((): CellOutput[] => [ionic.value]),
-      errors: none,
-      note: null,
-    };
+    const none = new Array<CellError | null>(n).fill(null);
+    return { argument: ionic.value, cells: new Array<CellOutput>(n).fill(ionic.value), errors: none, note: null };
   }
   const { index, unit } = ionic.column;
   const { factor } = IONIC_UNITS[unit];
   const basis = ionicBasis(unit);
-  const column = ionicStrengthArgument(numericColumn(rows, index, plan.format, factor), basis, fns.ionicStrength);
+  const values = numericColumn(rows, index, plan.format, factor).map((v) => [v]);
+  const column = ionicStrengthArgument(values, basis, fns.ionicStrength);
   const note =
     factor === 1
       ? null
       : { arg: basis === null ? "ionicStrength" : "value", text: ` (converted from ${ionicWords(ionic.column)})` };
-  return { ...column, note };
+  return {
+    argument: asRange(column.argument.map(([v]) => v)),
+    cells: column.cells.map(([c]) => c),
+    errors: column.errors,
+    note,
+  };
 }
 
 /** How each result cell's number is rounded, in output order (see outputHeader). */
