@@ -11,7 +11,7 @@ import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from "node:fs
 import { tmpdir } from "node:os";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { writeSyntheticLog } from "../tests/cli/synthetic-log";
+import { writeSyntheticLog } from "../test-support/synthetic-log";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 const bin = join(root, "bin/redox-cells.mjs");

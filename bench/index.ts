@@ -4,7 +4,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import zlib from "node:zlib";
-import { loadBundle } from "../tests/bundle/harness";
+import { loadBundle } from "../test-support/bundle-harness";
 import { spawnSync } from "node:child_process";
 import { benchDiagrams, benchStability, BenchRow } from "./engine";
 import { benchPaneRender } from "./pane-render";

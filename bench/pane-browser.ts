@@ -8,8 +8,8 @@
  *   REDOX_DIST=/tmp/pane-dist npx tsx bench/pane-browser.ts
  */
 import type { Page } from "playwright-core";
-import { openStandalonePane } from "../tests/support/serve-dist";
-import { syntheticLog } from "./pane-render";
+import { openStandalonePane } from "../test-support/serve-dist";
+import { syntheticLog } from "../test-support/synthetic-samples";
 
 async function main(): Promise<void> {
   const count = Number(process.env.REDOX_BENCH_SAMPLES ?? 10_000);

@@ -7,8 +7,8 @@
  *   npx webpack --mode production --output-path /tmp/pane-dist   (or npm run build)
  *   REDOX_DIST=/tmp/pane-dist npx tsx bench/pane-layout.ts [widths…]
  */
-import { openStandalonePane } from "../tests/support/serve-dist";
-import { measureLayout, tabStops } from "../tests/support/layout-probe";
+import { openStandalonePane } from "../test-support/serve-dist";
+import { measureLayout, tabStops } from "../test-support/layout-probe";
 
 async function main(): Promise<void> {
   const widths = process.argv

@@ -1,7 +1,9 @@
 // `npm run report:repeats [-- --lines N] [-- --shape] [-- dir …]`: places in src/ (or the given folders) where N or
 // more significant lines (default 6; blank lines, comments and imports skipped) repeat — the same code, or with
 // --shape the same code with other names, strings and numbers. Read with the TypeScript scanner. A tool for
-// reviews: it prints, it never fails.
+// reviews: it prints, it never fails. Files whose first line starts `// @generated` are written by a script from a
+// table (e.g. src/functions/functions.ts from src/functions/declarations.ts): they are listed and skipped, since
+// the table, not the output, is what people edit.
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import { dirname, join, relative, resolve } from "node:path";
 import ts from "typescript";
@@ -16,6 +18,11 @@ interface Line {
   readonly line: number;
   readonly text: string;
   readonly tokens: number;
+}
+
+/** A file written by a script (first line `// @generated …`). */
+function isGenerated(path: string): boolean {
+  return readFileSync(path, "utf8").startsWith("// @generated");
 }
 
 function sourceFiles(dir: string): string[] {
@@ -106,8 +113,10 @@ function main(argv: readonly string[]): void {
   const size = linesAt >= 0 ? Number(argv[linesAt + 1]) : 6;
   const shape = argv.includes("--shape");
   const dirs = argv.filter((a, i) => !a.startsWith("--") && (linesAt < 0 || i !== linesAt + 1));
-  const files = (dirs.length ? dirs : ["src"]).flatMap((d) => sourceFiles(resolve(ROOT, d)));
+  const all = (dirs.length ? dirs : ["src"]).flatMap((d) => sourceFiles(resolve(ROOT, d)));
+  const files = all.filter((f) => !isGenerated(f));
   const found = repeats(files, size, shape);
+  for (const f of all.filter(isGenerated)) console.log(`skipped, generated: ${relative(ROOT, f)}`);
   const what = shape ? "the same shape (names, strings and numbers aside)" : "the same code";
   console.log(`${found.length} places where ${size} or more significant lines repeat (${what}):`);
   for (const r of found) {

@@ -181,8 +181,8 @@ const LIGAND_ARG = {
 } as const;
 
 /**
- * Argument names of the worksheet functions → the input column that fed them. The functions name the argument
- * first in every message ("pH: expected a number, got …"), which is how a message is tied to a column.
+ * Argument names of the worksheet functions → the input column that fed them. An error of the functions records
+ * the argument at fault (CellError.argument), which is how a message is tied to a column.
  */
 function argumentColumns(plan: EvaluationPlan): Record<string, string | null> {
   const h = (i: number | null): string | null => (i === null ? null : plan.headers[i]);
@@ -208,16 +208,13 @@ function argumentColumns(plan: EvaluationPlan): Record<string, string | null> {
 }
 
 /**
- * The argument at fault and the message without its "argument: " lead. The argument readers record it on the error
- * (CellError.argument); errors raised deeper in a function name it only in the text's lead, read as a fallback.
+ * The argument at fault as the error records it (CellError.argument; the message text is never parsed) and the
+ * message without its "argument: " lead.
  */
 function splitMessage(error: CellError): [string | null, string] {
-  const lead = error.argument !== undefined ? `${error.argument}: ` : null;
-  if (lead !== null)
-    return [error.argument!, error.message.startsWith(lead) ? error.message.slice(lead.length) : error.message];
-  if (error.message.indexOf(":") < 0) return [null, error.message]; // no lead (most #N/A: "no boundary above …")
-  const m = /^([A-Za-z][\w ,]*?):\s(.*)$/s.exec(error.message);
-  return m ? [m[1], m[2]] : [null, error.message];
+  if (error.argument === undefined) return [null, error.message];
+  const lead = `${error.argument}: `;
+  return [error.argument, error.message.startsWith(lead) ? error.message.slice(lead.length) : error.message];
 }
 
 /**

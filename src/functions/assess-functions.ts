@@ -10,7 +10,16 @@ import { pointBoundary } from "../chemistry/point-boundary";
 import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
 import { waterMargin } from "../chemistry/water";
 import { mapCells } from "./broadcast";
-import { CellError, CellInput, CellOutput, isBlank, notAvailable, toHostError, valueError } from "./cell-values";
+import {
+  argumentError,
+  CellError,
+  CellInput,
+  CellOutput,
+  isBlank,
+  notAvailable,
+  toHostError,
+  valueError,
+} from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 import type { PointEngine } from "../chemistry/point-engine";
@@ -95,12 +104,14 @@ function readHeader(header: CellInput): boolean | CellError {
       ? header[0][0]
       : undefined
     : header;
-  if (Array.isArray(header) && value === undefined) return valueError("header: give one cell (TRUE for a header row)");
+  if (Array.isArray(header) && value === undefined)
+    return argumentError("header", "give one cell (TRUE for a header row)");
   if (isBlank(value) || value === false || value === 0) return false;
   if (value === true || value === 1) return true;
   if (typeof value === "string" && /^\s*(true|false)\s*$/i.test(value)) return /true/i.test(value);
-  return valueError(
-    `header: expected TRUE or FALSE, got ${typeof value === "string" ? `the text "${value.slice(0, 24)}"` : String(value)}`,
+  return argumentError(
+    "header",
+    `expected TRUE or FALSE, got ${typeof value === "string" ? `the text "${value.slice(0, 24)}"` : String(value)}`,
   );
 }
 

@@ -10,6 +10,8 @@
  * in because functions.json sets allowErrorForDataTypeAny) gives an error in that position only.
  */
 import {
+  argumentError,
+  argumentNotAvailable,
   basicValueOf,
   CellError,
   CellInput,
@@ -86,8 +88,8 @@ export function numberArg(
       if (typeof value === "number") x = value;
       else if (typeof value === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/.test(value))
         x = Number(value);
-      else return valueError(`${name}: expected a number, got ${describe(value)}`, name);
-      if (!isFiniteNumber(x)) return valueError(`${name}: expected a finite number, got ${x}`, name);
+      else return argumentError(name, `expected a number, got ${describe(value)}`);
+      if (!isFiniteNumber(x)) return argumentError(name, `expected a finite number, got ${x}`);
       const below = min !== undefined && (minExclusive ? x <= min : x < min);
       if (below || (max !== undefined && x > max))
         return valueError(outOfRange ? outOfRange(x) : `${name}: ${x} is out of range (${rangeText()})`, name);
@@ -109,7 +111,7 @@ export function textArg<T>(
     parse(value) {
       if (typeof value !== "string") {
         if (typeof value === "number" && Number.isInteger(value)) return resolve(String(value));
-        return valueError(`${name}: expected text, got ${describe(value)}`, name);
+        return argumentError(name, `expected text, got ${describe(value)}`);
       }
       return resolve(value.trim());
     },
@@ -147,7 +149,7 @@ function broadcastShape<A extends unknown[]>(
   const shapes: Shape[] = [];
   for (let i = 0; i < count; i++) {
     const shape = shapeOf(inputs[i]);
-    if (shape === null) return valueError(`${specs[i].name}: the range is empty or not rectangular`, specs[i].name);
+    if (shape === null) return argumentError(specs[i].name, "the range is empty or not rectangular");
     shapes.push(shape);
   }
   let rows = 1;
@@ -318,12 +320,12 @@ function parseCell<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<
 /** An error cell keeps its meaning (#N/A stays "no value"); a rich value is read by its plain value. */
 function parseObject<T>(spec: ArgSpec<T>, value: unknown, given: boolean): Parsed<T> {
   const code = inputErrorCode(value);
-  if (code === "#N/A") return notAvailable(`${spec.name}: the cell holds #N/A (no value)`);
+  if (code === "#N/A") return argumentNotAvailable(spec.name, "the cell holds #N/A (no value)");
   if (code !== null)
-    return valueError(`${spec.name}: the cell holds the error ${code.slice(0, 12)}; correct that cell`, spec.name);
+    return argumentError(spec.name, `the cell holds the error ${code.slice(0, 12)}; correct that cell`);
   const basic = basicValueOf(value);
   if (basic !== undefined) return parseCell(spec, basic, given);
-  return valueError(`${spec.name}: the cell holds an unreadable value`, spec.name);
+  return argumentError(spec.name, "the cell holds an unreadable value");
 }
 
 function safeCompute<A extends unknown[]>(compute: (...args: A) => CellOutput, args: A): CellOutput {

@@ -4,7 +4,7 @@
  */
 import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
 import { mapCells, numberArg } from "./broadcast";
-import { CellInput, CellOutput, notAvailable, valueError } from "./cell-values";
+import { argumentError, argumentNotAvailable, CellInput, CellOutput } from "./cell-values";
 import { pHArg, temperatureArg } from "./common-args";
 
 /** Total alkalinity, mg/L as CaCO3: ≥ 0; 100 000 mg/L (2 eq/L) is far beyond any natural or process water. */
@@ -16,14 +16,15 @@ const CARBONIC_MAX_CELSIUS = 100;
 export function dicAt(alkalinity: CellInput, pH: CellInput, temperature?: CellInput): CellOutput[][] {
   return mapCells([alkalinityArg, pHArg, temperatureArg], [alkalinity, pH, temperature], (alk, p, t) => {
     if (t > CARBONIC_MAX_CELSIUS)
-      return valueError(
-        `temperature: ${t} °C is outside 0 to ${CARBONIC_MAX_CELSIUS} °C, the range of the carbonic-acid constants (Plummer & Busenberg 1982)`,
+      return argumentError(
+        "temperature",
+        `${t} °C is outside 0 to ${CARBONIC_MAX_CELSIUS} °C, the range of the carbonic-acid constants (Plummer & Busenberg 1982)`,
       );
     try {
       return dicFromAlkalinity(alk, p, t);
     } catch (error) {
       // valid inputs with no DIC (below the end point, or more hydroxide than alkalinity): no answer exists
-      if (error instanceof AlkalinityError) return notAvailable(`alkalinity, pH: ${error.message}`);
+      if (error instanceof AlkalinityError) return argumentNotAvailable("alkalinity, pH", error.message);
       throw error;
     }
   });

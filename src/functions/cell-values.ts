@@ -16,8 +16,9 @@ export type CellInput = CellScalar | CellScalar[][];
 export type ErrorKind = "#VALUE!" | "#N/A";
 
 /**
- * The error value we hand back when no host registry exists: its code, its message and, when one argument is at
- * fault, that argument's name as the function help shows it (for callers such as the command line to read).
+ * The error value we hand back when no host registry exists: its code, its message and, when an argument is at
+ * fault, that argument's name as the function help shows it ("pH"; several joined by ", ", as "oxidized, reduced").
+ * Callers such as the command line read `argument`, never the message text.
  */
 export class CellError {
   readonly argument?: string;
@@ -52,11 +53,21 @@ export function toHostError(error: CellError): CellOutput {
   return error;
 }
 
-/** Wrong kind, unknown name or out-of-range input: #VALUE! with a message naming argument, value and expectation. */
+/**
+ * Wrong kind, unknown name or out-of-range input: #VALUE! with a message naming value and expectation, and the
+ * argument at fault when there is one (an error of one argument is written with `argumentError`).
+ */
 export const valueError = (message: string, argument?: string): CellError =>
   new CellError("#VALUE!", message, argument);
-/** No answer exists at valid input: #N/A with its reason. */
-export const notAvailable = (message: string): CellError => new CellError("#N/A", message);
+/** No answer exists at valid input: #N/A with its reason (and the argument whose value leaves no answer, if one). */
+export const notAvailable = (message: string, argument?: string): CellError => new CellError("#N/A", message, argument);
+
+/** #VALUE! for the named argument(s): the message leads with the name ("pH: expected a number, got …"). */
+export const argumentError = (argument: string, detail: string): CellError =>
+  valueError(`${argument}: ${detail}`, argument);
+/** #N/A because of the named argument(s)' values, the message leading with the name. */
+export const argumentNotAvailable = (argument: string, detail: string): CellError =>
+  notAvailable(`${argument}: ${detail}`, argument);
 
 /** Blank cell as the spreadsheet passes it: null, undefined or the empty string. */
 export function isBlank(value: unknown): value is null | undefined | "" {

@@ -12,7 +12,7 @@ import {
 } from "../chemistry/domain";
 import { getDatabase } from "../chemistry/database";
 import { numberArg, textArg } from "./broadcast";
-import { valueError } from "./cell-values";
+import { argumentError } from "./cell-values";
 
 /** Defaults of omitted arguments (src/chemistry/domain.ts), re-exported for the functions. */
 export { DEFAULT_ACTIVITY, DEFAULT_CELSIUS };
@@ -52,7 +52,5 @@ export const activityArg = numberArg("activity", {
 export const elementArg = textArg("element", (text) => {
   const db = getDatabase();
   const symbol = db.resolveMetal(text);
-  return (
-    symbol ?? valueError(`element: "${text}" is not a metal in the database (${db.metals().join(", ")})`, "element")
-  );
+  return symbol ?? argumentError("element", `"${text}" is not a metal in the database (${db.metals().join(", ")})`);
 });

@@ -7,13 +7,13 @@ import { PH_MAX, PH_MIN } from "../chemistry/domain";
 import { Electrode, getElectrodes, inRange } from "../chemistry/electrodes";
 import { ownEntry } from "../chemistry/own-entry";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellError, CellInput, CellOutput, valueError } from "./cell-values";
+import { argumentError, CellError, CellInput, CellOutput, valueError } from "./cell-values";
 import { MAX_POTENTIAL, potentialArg, potentialMessage, temperatureArg } from "./common-args";
 
 /** A reference electrode by name or alias, case-insensitive ("SCE", "AgCl-3M", "copper sulfate"). */
 export const electrodeArg = textArg<Electrode>("electrode", (text) => {
   const found = getElectrodes().lookup(text);
-  return "error" in found ? valueError(`electrode: ${found.error}`) : found.electrode;
+  return "error" in found ? argumentError("electrode", found.error) : found.electrode;
 });
 /** pH of the solution, needed only by RHE; no default, and a blank cell is a missing measurement. */
 const electrodePHArg = numberArg("pH", { min: PH_MIN, max: PH_MAX, optional: true, measured: true });
@@ -33,7 +33,8 @@ const READING_UNITS: Readonly<Record<string, { unit: ReadingUnit; volts: number 
 export const readingUnitArg = textArg(
   "unit",
   (text) =>
-    ownEntry(READING_UNITS, text.toLowerCase()) ?? valueError(`unit: expected "V" or "mV", got "${text.slice(0, 24)}"`),
+    ownEntry(READING_UNITS, text.toLowerCase()) ??
+    argumentError("unit", `expected "V" or "mV", got "${text.slice(0, 24)}"`),
   { optional: true, defaultValue: READING_UNITS.v },
 );
 
@@ -44,17 +45,17 @@ const readingArg = numberArg("reading");
 function readingVolts(reading: number, unit: { unit: ReadingUnit; volts: number }): number | CellError {
   const volts = reading * unit.volts;
   if (Math.abs(volts) <= MAX_POTENTIAL) return volts;
-  if (unit.unit === "V") return valueError(potentialMessage("reading", reading));
-  return valueError(`reading: ${reading} mV is outside −3000…+3000 mV`);
+  if (unit.unit === "V") return valueError(potentialMessage("reading", reading), "reading");
+  return argumentError("reading", `${reading} mV is outside −3000…+3000 mV`);
 }
 
 /** Potential of `electrode` vs SHE at the conditions, or the error naming what is missing or out of range. */
 function electrodePotential(electrode: Electrode, celsius: number, pH: number | undefined): number | CellError {
   if (!inRange(electrode, celsius)) {
     const [low, high] = electrode.validCelsius;
-    return valueError(`temperature: ${celsius} °C is outside the range of ${electrode.id} (${low} to ${high} °C)`);
+    return argumentError("temperature", `${celsius} °C is outside the range of ${electrode.id} (${low} to ${high} °C)`);
   }
-  if (electrode.needsPH && pH === undefined) return valueError(`pH: ${electrode.id} needs the pH of the solution`);
+  if (electrode.needsPH && pH === undefined) return argumentError("pH", `${electrode.id} needs the pH of the solution`);
   return getElectrodes().potential(electrode, celsius, pH);
 }
 

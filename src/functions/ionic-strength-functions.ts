@@ -5,7 +5,7 @@
 import { MAX_IONIC_STRENGTH } from "../chemistry/activity-coefficients";
 import { ionicStrengthFrom, IonicStrengthBasis } from "../chemistry/ionic-strength";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellError, CellInput, CellOutput, CellScalar, isBlank, valueError } from "./cell-values";
+import { argumentError, CellError, CellInput, CellOutput, CellScalar, isBlank } from "./cell-values";
 import { ionicStrengthArg } from "./ligand-args";
 
 const BASES: ReadonlyMap<string, IonicStrengthBasis> = new Map([
@@ -18,7 +18,8 @@ const BASES: ReadonlyMap<string, IonicStrengthBasis> = new Map([
 const basisArg = textArg<IonicStrengthBasis>("basis", (text) => {
   const found = BASES.get(text.toLowerCase().replace(/\s+/g, ""));
   return (
-    found ?? valueError(`basis: "${text}" is not "uS/cm" (specific conductance) or "mg/L" (total dissolved solids)`)
+    found ??
+    argumentError("basis", `"${text}" is not "uS/cm" (specific conductance) or "mg/L" (total dissolved solids)`)
   );
 });
 
@@ -28,8 +29,9 @@ export function ionicStrengthAt(value: CellInput, basis: CellInput): CellOutput[
   return mapCells([measuredArg, basisArg], [value, basis], (x, b) => {
     const I = ionicStrengthFrom(x, b);
     if (I > MAX_IONIC_STRENGTH)
-      return valueError(
-        `value: ${x} ${b} gives I = ${I.toPrecision(3)} mol/kg, above the ${MAX_IONIC_STRENGTH} mol/kg the Davies equation holds to`,
+      return argumentError(
+        "value",
+        `${x} ${b} gives I = ${I.toPrecision(3)} mol/kg, above the ${MAX_IONIC_STRENGTH} mol/kg the Davies equation holds to`,
       );
     return I;
   });

@@ -14,7 +14,7 @@ import { CONSTANT_GIBBS_MAX_CELSIUS, presentLigands, temperatureProblem } from "
 import type { SystemSpecies } from "../chemistry/system";
 import { ownEntry } from "../chemistry/own-entry";
 import { mapCells, textArg } from "./broadcast";
-import { CellError, CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
+import { argumentError, CellError, CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 
@@ -42,7 +42,7 @@ export function engineIn(
       celsius,
       presentLigands(carbonate, chloride, sulfur, phosphate),
     );
-    if (problem) return valueError(problem);
+    if (problem) return valueError(problem, "temperature");
   }
   if (element !== lastElement || !lastEngine) {
     lastEngine = pointEngine(getDatabase(), element);
@@ -55,7 +55,7 @@ export function engineIn(
 const directionArg = textArg<1 | -1>(
   "direction",
   (text) =>
-    text === "1" ? 1 : text === "-1" ? -1 : valueError(`direction: expected 1 (above) or -1 (below), got ${text}`),
+    text === "1" ? 1 : text === "-1" ? -1 : argumentError("direction", `expected 1 (above) or -1 (below), got ${text}`),
   { optional: true, defaultValue: 1 },
 );
 
@@ -148,7 +148,7 @@ export function boundaryFrom(
 const speciesArg = (name: string) =>
   textArg(
     name,
-    (text) => getDatabase().lookup(text) ?? valueError(`${name}: "${text}" is not a species in the database`),
+    (text) => getDatabase().lookup(text) ?? argumentError(name, `"${text}" is not a species in the database`),
   );
 
 export function coupleAt(
@@ -171,7 +171,7 @@ function couple(ox: Species, red: Species, pH: number, celsius: number, activity
   try {
     reaction = halfReaction(db, ox, red);
   } catch (error) {
-    if (error instanceof ReactionError) return valueError(`oxidized, reduced: ${error.message}`);
+    if (error instanceof ReactionError) return argumentError("oxidized, reduced", error.message);
     throw error;
   }
   if (Math.abs(reaction.electrons) < 1e-12)
@@ -181,6 +181,7 @@ function couple(ox: Species, red: Species, pH: number, celsius: number, activity
     if (missing.length)
       return valueError(
         `temperature ${celsius} °C: this couple is modelled 0–${CONSTANT_GIBBS_MAX_CELSIUS} °C only; above ${CONSTANT_GIBBS_MAX_CELSIUS} °C the records lack S° for ${missing.join(", ")}`,
+        "temperature",
       );
   }
   // the couple's potential does not depend on which member is named first
@@ -208,7 +209,7 @@ export const unitArg = textArg(
   (text) => {
     const key = text.toLowerCase().replace(/\s+/g, "");
     const unit = ownEntry(UNIT_ALIASES, key) ?? key;
-    return ownEntry(DISSOLVED_UNITS, unit) ? unit : valueError(`unit: "${text}" is not one of mol/kg, mg/L, ug/L`);
+    return ownEntry(DISSOLVED_UNITS, unit) ? unit : argumentError("unit", `"${text}" is not one of mol/kg, mg/L, ug/L`);
   },
   { optional: true, defaultValue: "mol/kg" },
 );
@@ -260,7 +261,7 @@ export function speciesTable(element: CellInput, temperature?: CellInput): CellO
   // one table per call: element and temperature must be single cells
   const single = mapCells([elementArg, temperatureArg], [element, temperature], (el, t) => `${el}|${t}`);
   if (single.length !== 1 || single[0].length !== 1)
-    return [[toHostError(valueError("element, temperature: give single cells; the table spills by itself"))]];
+    return [[toHostError(argumentError("element, temperature", "give single cells; the table spills by itself"))]];
   const only = single[0][0];
   if (typeof only !== "string" || only === "") return [[only]];
   const [el, t] = only.split("|");

@@ -8,7 +8,7 @@ import { ownEntry } from "../chemistry/own-entry";
 import { ehFromPe, peFromEh } from "../chemistry/pe";
 import { neutralPH, WaterGas, waterLine, waterMargin } from "../chemistry/water";
 import { mapCells, numberArg, textArg } from "./broadcast";
-import { CellInput, CellOutput, notAvailable, valueError } from "./cell-values";
+import { argumentError, argumentNotAvailable, CellInput, CellOutput } from "./cell-values";
 import { pHArg, potentialArg, temperatureArg } from "./common-args";
 
 const GAS_NAMES: Readonly<Record<string, WaterGas>> = { o2: "O2", oxygen: "O2", h2: "H2", hydrogen: "H2" };
@@ -18,7 +18,7 @@ export const gasArg = textArg<WaterGas>(
   "gas",
   (text) =>
     ownEntry(GAS_NAMES, text.toLowerCase().replace(/\(g\)$/, "")) ??
-    valueError(`gas: expected "O2" or "H2", got "${text.slice(0, 24)}"`),
+    argumentError("gas", `expected "O2" or "H2", got "${text.slice(0, 24)}"`),
   { optional: true, defaultValue: "O2" },
 );
 /** Partial pressure of the gas in bar, > 0, default 1. */
@@ -63,7 +63,7 @@ export function waterMarginAt(
 export function peAt(potential: CellInput, temperature?: CellInput): CellOutput[][] {
   return mapCells([potentialArg(), temperatureArg], [potential, temperature], (e, t) => {
     const x = peFromEh(e, t);
-    return Number.isFinite(x) ? x : notAvailable(`potential: ${e} V has no finite pe`);
+    return Number.isFinite(x) ? x : argumentNotAvailable("potential", `${e} V has no finite pe`);
   });
 }
 
@@ -71,7 +71,7 @@ export function peAt(potential: CellInput, temperature?: CellInput): CellOutput[
 export function ehAt(pe: CellInput, temperature?: CellInput): CellOutput[][] {
   return mapCells([peArg, temperatureArg], [pe, temperature], (x, t) => {
     const e = ehFromPe(x, t);
-    return Number.isFinite(e) ? e : valueError(`pe: ${x} is too large to express as a potential`);
+    return Number.isFinite(e) ? e : argumentError("pe", `${x} is too large to express as a potential`);
   });
 }
 

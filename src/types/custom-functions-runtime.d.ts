@@ -1,5 +1,5 @@
 // Minimal ambient declarations of the spreadsheet's custom-function registry, for type checking only: the runtime
-// object comes from the host (and from the stand-in in tests/bundle/harness.ts). @types/custom-functions-runtime
+// object comes from the host (and from the stand-in in test-support/bundle-harness.ts). @types/custom-functions-runtime
 // is not a dependency of this project; if it is added later, delete this file.
 
 declare namespace CustomFunctions {

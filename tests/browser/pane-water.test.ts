@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { readFileSync } from "fs";
 import { join } from "path";
 import type { Page } from "playwright-core";
-import { OpenPane, openStandalonePane, ROOT } from "../support/serve-dist";
+import { OpenPane, openStandalonePane, ROOT } from "../../test-support/serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildLigandSystem } from "../../src/chemistry/ligand-system";
 import { toSHE } from "../../src/chemistry/electrodes";
@@ -21,7 +21,7 @@ import { CANVAS_SAMPLES } from "../../src/taskpane/sample-canvas";
 import { regimeAt } from "../../src/functions/stability-functions";
 import { dicAt } from "../../src/functions/carbonate-functions";
 import { parseDelimited } from "../../src/tables";
-import { syntheticSamples } from "../../bench/pane-render";
+import { syntheticSamples } from "../../test-support/synthetic-samples";
 
 const DEMO_TEXT = readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8");
 const CHLORIDE = 5e-4;

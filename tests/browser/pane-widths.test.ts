@@ -8,8 +8,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { copyFileSync, mkdirSync } from "fs";
 import { join } from "path";
 import type { Page } from "playwright-core";
-import { OpenPane, openStandalonePane, ROOT } from "../support/serve-dist";
-import { measureLayout, tabStops } from "../support/layout-probe";
+import { OpenPane, openStandalonePane, ROOT } from "../../test-support/serve-dist";
+import { measureLayout, tabStops } from "../../test-support/layout-probe";
 import { getDatabase } from "../../src/chemistry/database";
 
 let pane: OpenPane;

@@ -9,7 +9,7 @@ import { join } from "path";
 import type { Page } from "playwright-core";
 import { XMLValidator, XMLParser } from "fast-xml-parser";
 import { PNG } from "pngjs";
-import { OpenPane, openStandalonePane, ROOT } from "../support/serve-dist";
+import { OpenPane, openStandalonePane, ROOT } from "../../test-support/serve-dist";
 import { getDatabase } from "../../src/chemistry/database";
 import { buildSystem } from "../../src/chemistry/system";
 import { toSHE, fromSHE } from "../../src/chemistry/electrodes";

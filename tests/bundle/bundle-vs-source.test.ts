@@ -8,7 +8,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import * as sources from "../../src/functions/functions";
 import { CellError } from "../../src/functions/cell-values";
-import { loadBundle, LoadedBundle, StandInError } from "./harness";
+import { loadBundle, LoadedBundle, StandInError } from "../../test-support/bundle-harness";
 
 type Args = unknown[];
 const column = (...values: unknown[]) => values.map((v) => [v]);

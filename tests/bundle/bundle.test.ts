@@ -13,7 +13,7 @@ import {
   runInStandInRegistry,
   safeString,
   type MetadataParameter,
-} from "./harness";
+} from "../../test-support/bundle-harness";
 
 const bundle = loadBundle();
 const declared = bundle.metadata.functions;

@@ -7,7 +7,7 @@ import { readFileSync, existsSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { XMLParser, XMLValidator } from "fast-xml-parser";
-import { REPO_ROOT, distDir, type Metadata } from "./harness";
+import { REPO_ROOT, distDir, type Metadata } from "../../test-support/bundle-harness";
 
 const DEV_ORIGIN = "https://localhost:3000";
 const manifestText = readFileSync(join(REPO_ROOT, "manifest.xml"), "utf8");

@@ -9,7 +9,13 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import fc from "fast-check";
 import { beforeAll, describe, expect, it } from "vitest";
-import { callAsSpreadsheet, loadBundle, REPO_ROOT, StandInError, type LoadedBundle } from "./harness";
+import {
+  callAsSpreadsheet,
+  loadBundle,
+  REPO_ROOT,
+  StandInError,
+  type LoadedBundle,
+} from "../../test-support/bundle-harness";
 
 let bundle: LoadedBundle;
 beforeAll(() => {

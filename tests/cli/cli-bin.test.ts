@@ -18,8 +18,8 @@ import {
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { REPO_ROOT } from "../bundle/harness";
-import { writeSyntheticLog } from "./synthetic-log";
+import { REPO_ROOT } from "../../test-support/bundle-harness";
+import { writeSyntheticLog } from "../../test-support/synthetic-log";
 
 const PREBUILT = join(REPO_ROOT, "dist/cli");
 const pkg = JSON.parse(readFileSync(join(REPO_ROOT, "package.json"), "utf8")) as {

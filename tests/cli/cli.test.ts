@@ -18,7 +18,7 @@ import { getDatabase } from "../../src/chemistry/database";
 import { DEFAULT_FORMAT, numberField, type NumberKind } from "../../src/cli/csv-format";
 import { HELP, OPTION_SPEC } from "../../src/cli/options";
 import { runCommand } from "../../src/cli/run";
-import { SYNTHETIC_HEADER, writeSyntheticLog } from "./synthetic-log";
+import { SYNTHETIC_HEADER, writeSyntheticLog } from "../../test-support/synthetic-log";
 
 /** Collects what the program writes. */
 class Capture extends Writable {

@@ -1,6 +1,6 @@
 // The demo workbook (data/demo/demo-workbook.xlsx, scripts/generate-demo-workbook.ts): every formula parses, calls
 // only functions the built add-in declares (dist/functions.json, namespace REDOX) with an argument count the
-// declaration allows, and — evaluated through the BUILT bundle (tests/bundle/harness.ts) with its cell references
+// declaration allows, and — evaluated through the BUILT bundle (test-support/bundle-harness.ts) with its cell references
 // resolved to the row's values — gives the values the command line writes for the same rows of the demo log, the
 // sample's water (carbonate from its alkalinity, REDOX.DIC) included — and every formula cell carries that value as
 // its cached result, so the file shows the answers where the add-in is not loaded.
@@ -22,7 +22,7 @@ import {
   StandInError,
   type LoadedBundle,
   type MetadataFunction,
-} from "../bundle/harness";
+} from "../../test-support/bundle-harness";
 import { calls, evaluate, isError, parseFormula, type Node, type Value } from "../../scripts/workbook-formula";
 
 const WORKBOOK = join(REPO_ROOT, "data/demo/demo-workbook.xlsx");

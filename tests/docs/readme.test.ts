@@ -7,7 +7,7 @@
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { loadBundle, LoadedBundle, REPO_ROOT, StandInError } from "../bundle/harness";
+import { loadBundle, LoadedBundle, REPO_ROOT, StandInError } from "../../test-support/bundle-harness";
 import { demoFigures, figureBlocks, FIGURE_DOCUMENTS } from "../../scripts/demo-figures";
 
 const readme = readFileSync(join(REPO_ROOT, "README.md"), "utf8");

@@ -3,7 +3,7 @@
 // and a metal per row. Seeded, so every run writes the same file. Test data only — not the demo scenario.
 import { createWriteStream } from "node:fs";
 import { once } from "node:events";
-import { mulberry32 } from "../../src/cli/seeded-random";
+import { mulberry32 } from "../src/cli/seeded-random";
 
 export const SYNTHETIC_HEADER = ["id", "pH", "ORP_mV_AgCl_sat", "temp_C", "metal"];
 const METALS = ["Fe", "Cu", "Zn", "Pb"];

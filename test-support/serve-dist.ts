@@ -9,7 +9,7 @@ import { tmpdir } from "os";
 import { extname, join, normalize, resolve } from "path";
 import { chromium, BrowserContext, Page } from "playwright-core";
 
-export const ROOT = resolve(__dirname, "../..");
+export const ROOT = resolve(__dirname, "..");
 /** Built pages: $REDOX_DIST, default dist/ (npm test builds it before vitest). */
 export const DIST = resolve(ROOT, process.env.REDOX_DIST ?? "dist");
 export const OFFICE_JS_DIR = resolve(ROOT, "node_modules/@microsoft/office-js/dist");
