@@ -34,6 +34,9 @@ export class LigandAtPoint {
   private readonly b: Float64Array;
   private readonly e: Float64Array;
   private readonly u: Float64Array;
+  /** The last point's weights exp(u_j − max u) and their sum. */
+  private readonly w: Float64Array;
+  private sum = 1;
   /** Whether the solid was saturated at the last point. */
   saturated = false;
   /** The last point's exponents u_j (one per species), their largest, and the pH and E they were taken at. */
@@ -59,6 +62,7 @@ export class LigandAtPoint {
     this.b = new Float64Array(n);
     this.e = new Float64Array(n);
     this.u = new Float64Array(n);
+    this.w = new Float64Array(n);
   }
 
   /**
@@ -94,7 +98,7 @@ export class LigandAtPoint {
       (E === this.lastE || !this.redox)
     )
       return this.lastLn;
-    const { g, b, e, u, f } = this;
+    const { g, b, e, u, w, f } = this;
     const z2 = this.table.chargeSquared;
     const solid = this.table.solidIndex;
     const n = g.length;
@@ -107,9 +111,11 @@ export class LigandAtPoint {
     let sum = 0;
     for (let j = 0; j < n; j++) {
       const gapToTop = u[j] - top; // the solid's u is −∞
-      if (gapToTop === 0) sum += 1;
-      else if (gapToTop > NEGLIGIBLE_GAP) sum += exp(gapToTop);
+      const wj = gapToTop === 0 ? 1 : gapToTop > NEGLIGIBLE_GAP ? exp(gapToTop) : 0;
+      w[j] = wj;
+      sum += wj;
     }
+    this.sum = sum;
     // ln a_P = ln total − LSE(u)
     let ln = lnTotal - top - log(sum);
     this.lnUnsaturated = ln;
@@ -143,15 +149,10 @@ export class LigandAtPoint {
 
   /** f·Σ w_j·e_j / Σ w_j at the last point (u_j = −f·g_j − …, dg_j/dE = e_j). */
   private unsaturatedSlope(): number {
-    const { e, u, f, top } = this;
-    let sum = 0;
+    const { e, w } = this;
     let slope = 0;
-    for (let j = 0; j < u.length; j++) {
-      const w = exp(u[j] - top);
-      sum += w;
-      slope += w * e[j];
-    }
-    return (f * slope) / sum;
+    for (let j = 0; j < w.length; j++) slope += w[j] * e[j];
+    return (this.f * slope) / this.sum;
   }
 
   /**
