@@ -67,6 +67,7 @@ export class SolubilityView {
     this.samples = samples;
     this.context = context;
     $("solubility-section").hidden = samples.length === 0;
+    $("solubility-heading").textContent = `Dissolved ${context.metalName} along pH, at the sample's potential`;
     const key = samples.map((s) => s.row).join(",");
     if (key !== this.listKey) this.fillList(samples);
     this.listKey = key;
