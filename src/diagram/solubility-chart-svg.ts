@@ -33,7 +33,7 @@ export interface RenderedSolubilityChart {
 }
 
 /** Bands around the plot: y tick labels on the left, x ticks and the axis title below. */
-const BANDS = { top: 8, left: 50, right: 10, bottom: 38 } as const;
+const BANDS = { top: 8, left: 50, right: 10, bottom: 40 } as const;
 /** At most this many decades on the y axis; the curve runs off the frame beyond them. */
 export const MAX_DECADES = 10;
 
@@ -78,7 +78,7 @@ function axesSvg(axes: Axes, low: number, high: number): string {
   for (const t of niceTicks(axes.window.pHMin, axes.window.pHMax, Math.max(3, Math.round(a.width / 55)))) {
     const x = axes.x(t).toFixed(2);
     out.push(
-      `<path d="M${x} ${a.top + a.height}v4" stroke="${AXIS_TEXT}"/><text class="rc-sol-tick" x="${x}" y="${a.top + a.height + 15}" text-anchor="middle">${formatTick(t)}</text>`,
+      `<path d="M${x} ${a.top + a.height}v4" stroke="${AXIS_TEXT}"/><text class="rc-sol-tick" x="${x}" y="${a.top + a.height + 18}" text-anchor="middle">${formatTick(t)}</text>`,
     );
   }
   const step = Math.max(1, Math.ceil((high - low) / Math.max(1, Math.floor(a.height / 26))));
@@ -86,11 +86,11 @@ function axesSvg(axes: Axes, low: number, high: number): string {
     const y = axes.y(k);
     out.push(
       `<path d="M${a.left} ${y.toFixed(2)}h-4" stroke="${AXIS_TEXT}"/><path d="M${a.left} ${y.toFixed(2)}h${a.width}" stroke="${AXIS_TEXT}" stroke-opacity="0.12"/>` +
-        `<text class="rc-sol-tick" x="${a.left - 6}" y="${(y + 4).toFixed(2)}" text-anchor="end">${decadeText(k)}</text>`,
+        `<text class="rc-sol-tick" x="${a.left - 6}" y="${(y + 3.5).toFixed(2)}" text-anchor="end">${decadeText(k)}</text>`,
     );
   }
   out.push(
-    `<text class="rc-sol-axis-title" x="${a.left + a.width / 2}" y="${a.top + a.height + 32}" text-anchor="middle" font-size="12">pH</text>`,
+    `<text class="rc-sol-axis-title" x="${a.left + a.width / 2}" y="${a.top + a.height + 35}" text-anchor="middle" font-size="12">pH</text>`,
     `<text class="rc-sol-axis-title" transform="translate(12 ${a.top + a.height / 2}) rotate(-90)" text-anchor="middle" font-size="12">µg/L</text>`,
     `</g>`,
   );
@@ -146,7 +146,7 @@ function sampleSvg(axes: Axes, o: SolubilityChartOptions): string {
   const x = axes.x(p.pH);
   const y = axes.y(log);
   const name = o.sample.id || `row ${o.sample.row}`;
-  return `<path class="rc-sol-sample" d="${markerPath(o.sample.regime, x, y, 5)}" fill="${MARKER_FILLS[o.sample.regime]}" stroke="${MARKER_OUTLINE}" data-ph="${p.pH}" data-value="${p.value}"><title>${escapeXml(`${name}: pH ${p.pH}, ${formatMicrograms(p.value)}`)}</title></path>`;
+  return `<path class="rc-sol-sample" d="${markerPath(o.sample.regime, x, y, 5)}" fill="${MARKER_FILLS[o.sample.regime]}" stroke="${MARKER_OUTLINE}" data-ph="${p.pH}" data-value="${p.value}"${o.sample.equilibrium !== undefined ? ` data-row-value="${o.sample.equilibrium}"` : ""}><title>${escapeXml(`${name}: pH ${p.pH}, ${formatMicrograms(p.value)}`)}</title></path>`;
 }
 
 /** The whole chart and its summary. */
