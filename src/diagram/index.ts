@@ -53,6 +53,6 @@ export type { Segment } from "./formula-markup";
 export { formatTotals, LIGAND_WORDS } from "./water-words";
 export { curveGaps, curvePHs, curvePieces, CURVE_STEPS, solubilityCurve, spansAbove } from "./solubility-curve";
 export type { CurvePoint, DissolvedEvaluator, SolubilityCurve } from "./solubility-curve";
-export { decadeRange, decadeText, renderSolubilityChart, solubilityLayout } from "./solubility-chart-svg";
+export { decadeRange, decadeText, MAX_DECADES, renderSolubilityChart, solubilityLayout } from "./solubility-chart-svg";
 export type { RenderedSolubilityChart, SolubilityChartOptions } from "./solubility-chart-svg";
 export { curveConditions, formatMicrograms, solubilitySummary } from "./solubility-words";

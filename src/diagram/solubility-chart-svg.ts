@@ -52,12 +52,15 @@ export function decadeRange(curve: SolubilityCurve, threshold: number | null): {
   const anchors = [threshold, curve.sample.value].flatMap((v) => (v !== null && v > 0 ? [Math.log10(v)] : []));
   const all = [...logs, ...anchors];
   if (all.length === 0) return { low: -1, high: 3 };
-  let low = Math.floor(Math.min(...all));
-  let high = Math.ceil(Math.max(...all));
+  // a threshold or sample on the frame would hide in it: at least a third of a decade between values and edges
+  let low = Math.floor(Math.min(...all) - 0.3);
+  let high = Math.ceil(Math.max(...all) + 0.3);
   if (high - low > MAX_DECADES) {
-    // keep the threshold and the sample in view, with room either side
+    // keep the threshold and the sample in view, the spare decades shared above and below them
     const keep = anchors.length > 0 ? anchors : [Math.max(...logs)];
-    high = Math.min(high, Math.ceil(Math.max(...keep)) + Math.ceil(MAX_DECADES / 2));
+    const top = Math.ceil(Math.max(...keep) + 0.3);
+    const spare = MAX_DECADES - (top - Math.floor(Math.min(...keep) - 0.3));
+    high = Math.min(high, top + Math.max(0, Math.ceil(spare / 2)));
     low = Math.max(low, high - MAX_DECADES);
   }
   if (high - low < 2) return { low: low - 1, high: high + 1 };

@@ -15,6 +15,7 @@ import { dissolvedAt } from "../../src/functions/stability-functions";
 import {
   decadeRange,
   displayScale,
+  MAX_DECADES,
   renderSolubilityChart,
   solubilityCurve,
   solubilityLayout,
@@ -133,6 +134,19 @@ describe("the rendered chart", () => {
       expect(Math.abs(yOf(threshold) - expected)).toBeLessThanOrEqual(0.01);
     }
     expect(yOf(5)).toBeGreaterThan(yOf(15)); // a lower threshold sits lower on the chart
+  });
+
+  it("keeps the axis to at most MAX_DECADES with the threshold and the sample inside, off the frame", () => {
+    // lead at 0.81 V from pH 2 to 16 spans about 22 decades (plattnerite holds lead at 10⁻¹⁴ µg/L at pH 16)
+    const wide = solubilityCurve(2, 16, sample.pH, dissolvedAlongPH("Pb", sample, 25));
+    for (const threshold of [0.001, 10, 2000]) {
+      const { low, high } = decadeRange(wide, threshold);
+      expect(high - low).toBeLessThanOrEqual(MAX_DECADES);
+      for (const v of [threshold, wide.sample.value!]) {
+        expect(Math.log10(v)).toBeGreaterThan(low + 0.29);
+        expect(Math.log10(v)).toBeLessThan(high - 0.29);
+      }
+    }
   });
 
   it("marks the sample with its value and its regime's marker, and is labelled for screen readers", () => {
