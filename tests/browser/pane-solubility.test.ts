@@ -6,35 +6,14 @@
  * typing a threshold moves the line to its height on the log axis. Saves a screenshot under test-results/.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { copyFileSync, mkdirSync, readFileSync } from "fs";
+import { copyFileSync, mkdirSync } from "fs";
 import { join } from "path";
 import type { Page } from "playwright-core";
 import { OpenPane, openStandalonePane, ROOT } from "../../test-support/serve-dist";
 import { tabStops } from "../../test-support/layout-probe";
-import { dicAt } from "../../src/functions/carbonate-functions";
-import { toSHEAt } from "../../src/functions/electrode-functions";
-import { dissolvedAt } from "../../src/functions/stability-functions";
-import { matchHeaders, matchWaterColumns } from "../../src/tables";
-import { tableFromText } from "../../src/taskpane/standalone-adapter";
+import { demoRowDissolved } from "../../test-support/demo-dissolved";
 
 const WIDTH = 350;
-const table = tableFromText(readFileSync(join(ROOT, "data/demo/sample-log.csv"), "utf8"), "demo");
-const match = matchHeaders(table.headers);
-const alkalinity = matchWaterColumns(table.headers, match.mapping).alkalinity!;
-
-/** REDOX.DISSOLVED (µg/L) of the demo row with this sample id, chained as in a sheet. */
-function sheetDissolved(metal: string, id: string): number {
-  const row = table.rows.find((r) => r[match.mapping.id] === id)!;
-  const cell = (i: number) => Number(row[i]);
-  const [pH, reading, celsius] = [
-    cell(match.mapping.pH),
-    cell(match.mapping.potential),
-    cell(match.mapping.temperature),
-  ];
-  const [[eSHE]] = toSHEAt(reading / 1000, match.hints.electrode!, celsius);
-  const [[dic]] = dicAt(cell(alkalinity.index), pH, celsius);
-  return dissolvedAt(metal, pH, eSHE, celsius, dic, "", "", "", "", "ug/L")[0][0] as number;
-}
 
 let pane: OpenPane;
 let page: Page;
@@ -125,7 +104,7 @@ const marker = () =>
 async function expectRowValue(metal: string): Promise<void> {
   const m = await marker();
   expect(m.value).toBe(m.row);
-  const expected = sheetDissolved(metal, await chosenId());
+  const expected = demoRowDissolved(metal, await chosenId());
   expect(Math.abs(m.value - expected)).toBeLessThanOrEqual(1e-12 * expected);
 }
 

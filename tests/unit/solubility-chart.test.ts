@@ -7,11 +7,6 @@
  * value's height on the log axis.
  */
 import { describe, expect, it } from "vitest";
-import { readFileSync } from "fs";
-import { join } from "path";
-import { dicAt } from "../../src/functions/carbonate-functions";
-import { toSHEAt } from "../../src/functions/electrode-functions";
-import { dissolvedAt } from "../../src/functions/stability-functions";
 import {
   decadeRange,
   displayScale,
@@ -21,16 +16,15 @@ import {
   solubilityLayout,
   type PlottedSample,
 } from "../../src/diagram";
-import { matchHeaders, matchWaterColumns } from "../../src/tables";
 import { dissolvedAlongPH } from "../../src/taskpane/dissolved-curve";
 import { PURE_WATER, type WaterSettings } from "../../src/taskpane/ligand-inputs";
 import { ownAnswers } from "../../src/taskpane/pane-samples";
 import { readSamples } from "../../src/taskpane/sample-table";
-import { tableFromText } from "../../src/taskpane/standalone-adapter";
+import { DEMO_ALKALINITY, DEMO_MATCH, DEMO_TABLE, demoRowDissolved } from "../../test-support/demo-dissolved";
 
-const table = tableFromText(readFileSync(join(__dirname, "../../data/demo/sample-log.csv"), "utf8"), "demo");
-const match = matchHeaders(table.headers);
-const alkalinity = matchWaterColumns(table.headers, match.mapping).alkalinity!;
+const table = DEMO_TABLE;
+const match = DEMO_MATCH;
+const alkalinity = DEMO_ALKALINITY;
 /** 1 mg/L orthophosphate as PO4 in mol/kg as P: 1e-3 / 94.97 (docs/lead-and-copper.md; 1 L ≈ 1 kg, common practice). */
 const PO4_1MG = 1.053e-5;
 
@@ -58,22 +52,6 @@ function paneSamples(metal: string, phosphate: number): PlottedSample[] {
   return ownAnswers(source, read, water, at, displayScale(electrode, unit, 25)).samples;
 }
 
-/** REDOX.DISSOLVED of one demo row as a worksheet chains it: TOSHE of the reading, DIC of the alkalinity. */
-function sheetDissolved(metal: string, id: string, phosphate: number): number {
-  const row = table.rows[table.rows.findIndex((r) => r[match.mapping.id] === id)];
-  const cell = (i: number) => Number(row[i]);
-  const [pH, reading, celsius] = [
-    cell(match.mapping.pH),
-    cell(match.mapping.potential),
-    cell(match.mapping.temperature),
-  ];
-  const [[eSHE]] = toSHEAt(reading / 1000, match.hints.electrode!, celsius);
-  const [[dic]] = dicAt(cell(alkalinity.index), pH, celsius);
-  const [[value]] = dissolvedAt(metal, pH, eSHE, celsius, dic, "", "", phosphate || "", "", "ug/L");
-  expect(typeof value).toBe("number");
-  return value as number;
-}
-
 describe("the chart's value at the sample's pH is the row's REDOX.DISSOLVED", () => {
   const cases = [
     // lead service line, carbonate from the alkalinity column plus 1 mg/L PO4 (the docs' what-if)
@@ -88,7 +66,7 @@ describe("the chart's value at the sample's pH is the row's REDOX.DISSOLVED", ()
       const sample = paneSamples(c.metal, c.phosphate).find((s) => s.id === c.id)!;
       expect(sample).toBeDefined();
       const curve = solubilityCurve(5.5, 8.5, sample.pH, dissolvedAlongPH(c.metal, sample, 25));
-      const expected = sheetDissolved(c.metal, c.id, c.phosphate);
+      const expected = demoRowDissolved(c.metal, c.id, c.phosphate);
       expect(curve.sample.value).toBe(expected);
       expect(curve.sample.value).toBe(sample.equilibrium); // the pane's own per-row answer (results table)
       expect(curve.points.find((p) => p.pH === sample.pH)?.value).toBe(expected);
