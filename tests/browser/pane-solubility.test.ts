@@ -12,6 +12,7 @@ import type { Page } from "playwright-core";
 import { OpenPane, openStandalonePane, ROOT } from "../../test-support/serve-dist";
 import { tabStops } from "../../test-support/layout-probe";
 import { demoRowDissolved } from "../../test-support/demo-dissolved";
+import { getDatabase } from "../../src/chemistry/database";
 
 const WIDTH = 350;
 
@@ -183,5 +184,22 @@ describe(`the solubility chart in the pane ${WIDTH} px wide with the demo data`,
     expect(m.overlaps).toEqual([]);
     expect(m.svg.right).toBeLessThanOrEqual(WIDTH);
     await expectRowValue("Cu");
+  });
+
+  it("fits and keeps its text apart for every metal of the pane", async () => {
+    const problems: string[] = [];
+    for (const metal of getDatabase().metals()) {
+      await page.selectOption("#metal", metal);
+      const name = getDatabase().element(metal)!.name;
+      await page.waitForFunction(
+        (n) => (document.querySelector("#solubility-heading")?.textContent ?? "").includes(n),
+        name,
+      );
+      if (await page.isHidden("#solubility-section")) continue; // no row of this metal drawn
+      const m = await measureChart();
+      if (m.overlaps.length > 0 || m.outside > 0 || m.svg.right > WIDTH || m.pageWidth > WIDTH)
+        problems.push(`${metal}: ${m.overlaps.join("; ")} ${m.outside} outside, right ${m.svg.right}`);
+    }
+    expect(problems).toEqual([]);
   });
 });
