@@ -27,21 +27,26 @@ export const ALKALINITY_END_POINT_PH = 4.5;
 
 export class AlkalinityError extends Error {}
 
+/** Why an alkalinity and pH give no DIC, as a value (no stack trace is captured). */
+export class AlkalinityProblem {
+  constructor(readonly message: string) {}
+}
+
 /** Total alkalinity (mg/L as CaCO3) → equivalents per kg (dilute water, 1 L ≈ 1 kg). */
 export function alkalinityEquivalents(mgPerLitreAsCaCO3: number): number {
   return mgPerLitreAsCaCO3 / (CACO3_GRAMS_PER_EQUIVALENT * 1000);
 }
 
 /**
- * Total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3), pH and temperature (°C).
- * Throws AlkalinityError when the carbonate alkalinity Alk − [OH−] + [H+] is not positive (hydroxide alone exceeds
- * the total alkalinity): no carbonate water matches that pair of numbers; and below the titration end point
- * (pH < 4.5), where DIC is not determined by alkalinity (α1 + 2α2 → 0 and the quotient grows without bound).
+ * Total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3), pH and temperature (°C), or an
+ * AlkalinityProblem (not thrown: a log can hold thousands of such rows) when the carbonate alkalinity
+ * Alk − [OH−] + [H+] is not positive (hydroxide alone exceeds the total alkalinity): no carbonate water matches that
+ * pair of numbers; and below the titration end point (pH < 4.5), where DIC is not determined by alkalinity
+ * (α1 + 2α2 → 0 and the quotient grows without bound).
  */
-export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, _db?: Database): number {
-  // _db kept for callers: Kw comes from IAPWS R11-07, not from the records
+export function dicOrProblem(alkalinityMgL: number, pH: number, celsius = 25): number | AlkalinityProblem {
   if (pH < ALKALINITY_END_POINT_PH) {
-    throw new AlkalinityError(
+    return new AlkalinityProblem(
       `pH ${pH} is below the alkalinity end point (${ALKALINITY_END_POINT_PH}): alkalinity does not determine DIC there`,
     );
   }
@@ -51,7 +56,7 @@ export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 2
   const oh = 10 ** -pKw(celsius) / h;
   const carbonateAlkalinity = alkalinityEquivalents(alkalinityMgL) - oh + h;
   if (!(carbonateAlkalinity > 0)) {
-    throw new AlkalinityError(
+    return new AlkalinityProblem(
       `the carbonate alkalinity is not positive at pH ${pH} (hydroxide exceeds the total alkalinity)`,
     );
   }
@@ -59,4 +64,12 @@ export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 2
   const alpha1 = (k1 * h) / d;
   const alpha2 = (k1 * k2) / d;
   return carbonateAlkalinity / (alpha1 + 2 * alpha2);
+}
+
+/** dicOrProblem that throws AlkalinityError with the problem's message. */
+export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, _db?: Database): number {
+  // _db kept for callers: Kw comes from IAPWS R11-07, not from the records
+  const dic = dicOrProblem(alkalinityMgL, pH, celsius);
+  if (dic instanceof AlkalinityProblem) throw new AlkalinityError(dic.message);
+  return dic;
 }

@@ -14,6 +14,7 @@ import { readNumber, toCelsius, type TemperatureScale } from "../tables";
 import { numberField, textField, type CsvFormat, type NumberKind } from "./csv-format";
 import type { DissolvedUnit, PotentialUnitOption } from "./options";
 import type { InputRow } from "./record-reader";
+import { regimeColumn } from "./regimes";
 import { LIGAND_OUTPUT, type LigandInput } from "./water";
 import type { WorksheetFunctions } from "./worksheet";
 
@@ -169,6 +170,16 @@ function answersOf(result: CellOutput[][], n: number): CellOutput[] {
   const first = result[0];
   if (result.length === 1 && first.length === n) return first;
   return new Array<CellOutput>(n).fill(first[0]);
+}
+
+/** BOUNDARY's direction argument as a 2 × 1 range: above (1) in the first row of the answer, below (−1) in the second. */
+const DIRECTIONS: CellScalar[][] = [[1], [-1]];
+
+/** The two rows of answers of a call over a 2 × n broadcast, each one per row (a one-cell answer fills both). */
+function twoAnswersOf(result: CellOutput[][], n: number): [CellOutput[], CellOutput[]] {
+  if (result.length === 2 && result[0].length === n) return [result[0], result[1]];
+  const fill = new Array<CellOutput>(n).fill(result[0][0]);
+  return [fill, fill];
 }
 
 /** #VALUE! is always the input's fault; #N/A only when its message names an input (no DIC for that alkalinity). */
@@ -384,13 +395,16 @@ function targetColumns(
     const elements = t.symbol === null ? textColumn(rows, plan.metalColumn as number) : null;
     const element: CellInput = elements === null ? t.symbol : asRange(elements);
     const sample = [element, pH, potential, temperature] as const;
+    const species = answersOf(fns.species(...sample, plan.activity, ...waterArgs), n);
+    // one BOUNDARY call for both directions: a 2 × 1 direction range broadcasts to the rows above and below
+    const [above, below] = twoAnswersOf(fns.boundary(...sample, plan.activity, ...waterArgs, DIRECTIONS), n);
     return {
       target: t,
       elements,
-      species: answersOf(fns.species(...sample, plan.activity, ...waterArgs), n),
-      regime: answersOf(fns.regime(...sample, plan.activity, ...waterArgs), n),
-      above: answersOf(fns.boundary(...sample, plan.activity, ...waterArgs, 1), n),
-      below: answersOf(fns.boundary(...sample, plan.activity, ...waterArgs, -1), n),
+      species,
+      regime: regimeColumn(species, elements ?? (t.symbol as string)),
+      above,
+      below,
       // DISSOLVED has no activity: it is the controlling solid's solubility
       dissolved: answersOf(fns.dissolved(...sample, ...waterArgs, plan.dissolvedUnit), n),
     };

@@ -1,9 +1,10 @@
 /**
  * The worksheet functions the command line evaluates, imported from the same sources the spreadsheet bundle is
  * built from, so a CSV row and a worksheet row give the same answers. Each takes cells or columns (n × 1 ranges)
- * and returns a range of results, with CellError values where the spreadsheet would show an error.
+ * and returns a range of results, with CellError values where the spreadsheet would show an error. REGIME is not
+ * among them: its column is read from SPECIES's (regimes.ts).
  */
-import { boundaryFrom, dissolvedAt, regimeAt, speciesAt } from "../functions/stability-functions";
+import { boundaryFrom, dissolvedAt, speciesAt } from "../functions/stability-functions";
 import { toSHEAt } from "../functions/electrode-functions";
 import { waterMarginAt } from "../functions/water-functions";
 import { dicAt } from "../functions/carbonate-functions";
@@ -17,8 +18,6 @@ export interface WorksheetFunctions {
   waterMargin: typeof waterMarginAt;
   /** REDOX.SPECIES(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength]) */
   species: typeof speciesAt;
-  /** REDOX.REGIME(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength]) */
-  regime: typeof regimeAt;
   /** REDOX.BOUNDARY(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [direction]) */
   boundary: typeof boundaryFrom;
   /** REDOX.DISSOLVED(element, pH, potential, [temperature], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [unit]) */
@@ -33,7 +32,6 @@ export const worksheetFunctions: WorksheetFunctions = {
   toShe: toSHEAt,
   waterMargin: waterMarginAt,
   species: speciesAt,
-  regime: regimeAt,
   boundary: boundaryFrom,
   dissolved: dissolvedAt,
   dic: dicAt,

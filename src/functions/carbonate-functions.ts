@@ -2,7 +2,7 @@
  * REDOX.DIC: total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3), pH and temperature —
  * the number to give the [carbonate] argument of the stability functions. Chemistry in src/chemistry/alkalinity.ts.
  */
-import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
+import { AlkalinityProblem, dicOrProblem } from "../chemistry/alkalinity";
 import { mapCells, numberArg } from "./broadcast";
 import { argumentError, argumentNotAvailable, CellInput, CellOutput } from "./cell-values";
 import { pHArg, temperatureArg } from "./common-args";
@@ -20,12 +20,8 @@ export function dicAt(alkalinity: CellInput, pH: CellInput, temperature?: CellIn
         "temperature",
         `${t} °C is outside 0 to ${CARBONIC_MAX_CELSIUS} °C, the range of the carbonic-acid constants (Plummer & Busenberg 1982)`,
       );
-    try {
-      return dicFromAlkalinity(alk, p, t);
-    } catch (error) {
-      // valid inputs with no DIC (below the end point, or more hydroxide than alkalinity): no answer exists
-      if (error instanceof AlkalinityError) return argumentNotAvailable("alkalinity, pH", error.message);
-      throw error;
-    }
+    const dic = dicOrProblem(alk, p, t);
+    // valid inputs with no DIC (below the end point, or more hydroxide than alkalinity): no answer exists
+    return dic instanceof AlkalinityProblem ? argumentNotAvailable("alkalinity, pH", dic.message) : dic;
   });
 }
