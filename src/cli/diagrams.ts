@@ -17,14 +17,38 @@ export const POINTS_PER_DIAGRAM = 10_000;
 
 export class DiagramSamples {
   private readonly bySymbol = new Map<string, Reservoir<SamplePoint>>();
+  /** The metal cell last offered, what it resolved to, and where a kept sample goes. */
+  private lastName: string | null = null;
+  private lastSymbol: string | null = null;
+  private pending: { reservoir: Reservoir<SamplePoint>; slot: number } | null = null;
 
-  add(point: SamplePoint): void {
-    const symbol = getDatabase().resolveMetal(point.symbol);
-    if (!symbol) return;
+  /**
+   * Counts one sample of the metal named `name` (a symbol or a name, as a metal cell holds it). Returns the metal's
+   * symbol when the diagram keeps the sample — then give its point to `keep` — and null otherwise, or when `name` is
+   * not a metal.
+   */
+  offer(name: string): string | null {
+    this.pending = null;
+    if (name !== this.lastName) {
+      this.lastName = name;
+      this.lastSymbol = getDatabase().resolveMetal(name) ?? null;
+    }
+    const symbol = this.lastSymbol;
+    if (!symbol) return null;
     let reservoir = this.bySymbol.get(symbol);
     if (!reservoir)
       this.bySymbol.set(symbol, (reservoir = new Reservoir<SamplePoint>(POINTS_PER_DIAGRAM, hashSeed(symbol))));
-    reservoir.add(symbol === point.symbol ? point : { ...point, symbol });
+    const slot = reservoir.nextSlot();
+    if (slot < 0) return null;
+    this.pending = { reservoir, slot };
+    return symbol;
+  }
+
+  /** Stores the point of the sample `offer` last kept (its symbol the one `offer` returned). */
+  keep(point: SamplePoint): void {
+    if (this.pending === null) throw new Error("keep() without a kept offer()");
+    this.pending.reservoir.items[this.pending.slot] = point;
+    this.pending = null;
   }
 
   symbols(): string[] {

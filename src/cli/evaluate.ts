@@ -17,6 +17,7 @@ import type { InputRow } from "./record-reader";
 import { regimeColumn } from "./regimes";
 import { LIGAND_OUTPUT, type LigandInput } from "./water";
 import type { WorksheetFunctions } from "./worksheet";
+import type { DiagramSamples } from "./diagrams";
 
 /** A metal whose results fill one group of columns: a fixed metal, or the per-row metal column. */
 export interface MetalTarget {
@@ -111,7 +112,6 @@ export interface BatchResult {
   readonly blankRows: number;
   /** Regime counts per target prefix. */
   readonly regimes: Map<string, Map<string, number>>;
-  readonly points: SamplePoint[];
 }
 
 /** A result cell as CSV text: numbers rounded by kind (never quoted), error values as their code. */
@@ -257,21 +257,27 @@ function groupedOrder(
 
 /**
  * Evaluates a batch. The rows are handed to the functions grouped by metal and temperature (groupedOrder), and the
- * results — lines, messages and diagram points — are put back in file order.
+ * results — lines and messages — are put back in file order; the rows' samples are offered to `diagrams` in file
+ * order too (its random choice depends on the order).
  */
-export function evaluateBatch(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): BatchResult {
+export function evaluateBatch(
+  plan: EvaluationPlan,
+  rows: readonly InputRow[],
+  fns: WorksheetFunctions,
+  diagrams: DiagramSamples | null = null,
+): BatchResult {
   const { metalColumn, temperatureColumn } = plan;
-  if (metalColumn === null && temperatureColumn === null) return evaluateInOrder(plan, rows, fns);
-  const order = groupedOrder(rows, metalColumn, temperatureColumn);
-  const sorted: InputRow[] = new Array(rows.length);
-  for (let k = 0; k < order.length; k++) sorted[k] = rows[order[k]];
-  const result = evaluateInOrder(plan, sorted, fns);
+  const grouped = metalColumn !== null || temperatureColumn !== null;
+  const order = grouped ? groupedOrder(rows, metalColumn, temperatureColumn) : null;
+  const sorted = order === null ? rows : order.map((i) => rows[i]);
+  const { result, columns } = evaluateInOrder(plan, sorted, fns);
+  if (diagrams !== null && plan.diagrams) offerSamples(plan, sorted, columns, order, diagrams);
+  if (order === null) return result;
   const out: string[] = new Array(rows.length);
   for (let k = 0; k < order.length; k++) out[order[k]] = result.lines[k];
-  // stable sorts: a row's messages and points keep their order
+  // a stable sort: a row's messages keep their order
   const messages = result.messages.sort((a, b) => a.line - b.line);
-  const points = result.points.sort((a, b) => a.line - b.line);
-  return { ...result, lines: out, messages, points };
+  return { ...result, lines: out, messages };
 }
 
 /** The argument columns every function takes: pH, the reading as E vs SHE, the temperature, and the water margin. */
@@ -523,42 +529,70 @@ function pushBlankMessages(plan: EvaluationPlan, row: InputRow, messages: RowMes
   return false;
 }
 
-/** Where a row's regimes are counted and its diagram points collected. */
-interface RowTally {
-  readonly regimes: Map<string, Map<string, number>>;
-  readonly points: SamplePoint[];
+/** Counts a converted row's regime per metal target (`counts` in the targets' order). */
+function countRegimes(r: number, perTarget: readonly TargetColumns[], counts: readonly Map<string, number>[]): void {
+  for (let t = 0; t < perTarget.length; t++) {
+    const p = perTarget[t];
+    const regime = p.regime[r];
+    if (typeof regime !== "string" || regime === "" || typeof p.species[r] !== "string") continue;
+    counts[t].set(regime, (counts[t].get(regime) ?? 0) + 1);
+  }
 }
 
-/** Counts a converted row's regimes per metal and, for diagrams, adds its sample points (25 °C where blank). */
-function tallyRow(
+/** The batch's columns a diagram sample is made of, in the order the functions saw the rows. */
+interface EvaluatedColumns {
+  readonly samples: SampleColumns;
+  readonly ligandArgs: WaterColumns["ligandArgs"];
+  readonly perTarget: readonly TargetColumns[];
+  /** 1 for a row whose results count (a converted reading, no error passed on): its regimes and samples. */
+  readonly counted: Uint8Array;
+}
+
+/**
+ * Offers each counted row's samples (one per metal with a regime) to the diagrams, in file order; a sample's point
+ * is made only when the diagram keeps it (25 °C where the temperature is blank).
+ */
+function offerSamples(
   plan: EvaluationPlan,
-  r: number,
-  line: number,
-  e: number,
-  samples: SampleColumns,
-  ligandArgs: WaterColumns["ligandArgs"],
-  perTarget: readonly TargetColumns[],
-  tally: RowTally,
+  rows: readonly InputRow[],
+  columns: EvaluatedColumns,
+  order: readonly number[] | null,
+  diagrams: DiagramSamples,
 ): void {
-  const pHValue = Number(samples.pH[r]);
-  const tCell = samples.temperatureAt(r);
-  const celsius = isBlank(tCell) ? 25 : Number(tCell);
+  const { samples, ligandArgs, perTarget, counted } = columns;
+  const n = rows.length;
+  let position: Int32Array | null = null; // file index → index in `rows`
+  if (order !== null) {
+    position = new Int32Array(n);
+    for (let k = 0; k < n; k++) position[order[k]] = k;
+  }
+  for (let i = 0; i < n; i++) {
+    const r = position === null ? i : position[i];
+    if (counted[r] === 0) continue;
+    for (const p of perTarget) {
+      const regime = p.regime[r];
+      const species = p.species[r];
+      if (typeof regime !== "string" || regime === "" || typeof species !== "string") continue;
+      const symbol = diagrams.offer(p.target.symbol ?? String(p.elements![r]).trim());
+      if (symbol === null) continue;
+      const tCell = samples.temperatureAt(r);
+      const celsius = isBlank(tCell) ? 25 : Number(tCell);
+      const E = samples.eShe[r] as number;
+      const point: SamplePoint = { symbol, pH: Number(samples.pH[r]), E, regime, species, celsius, line: rows[r].line };
+      const ligands = rowLigands(plan, r, ligandArgs);
+      diagrams.keep(ligands ? { ...point, ligands } : point);
+    }
+  }
+}
+
+/** A row's ligand totals (mol/kg) where it has any. */
+function rowLigands(plan: EvaluationPlan, r: number, ligandArgs: WaterColumns["ligandArgs"]): LigandTotals | undefined {
   let ligands: LigandTotals | undefined;
   for (const l of plan.ligands) {
     const x = ligandArgs[l.ligand]![r];
     if (typeof x === "number" && x > 0) (ligands ??= {})[l.ligand] = x;
   }
-  for (const p of perTarget) {
-    const regime = p.regime[r];
-    const species = p.species[r];
-    if (typeof regime !== "string" || regime === "" || typeof species !== "string") continue;
-    const counts = tally.regimes.get(p.target.prefix)!;
-    counts.set(regime, (counts.get(regime) ?? 0) + 1);
-    if (!plan.diagrams) continue;
-    const symbol = p.target.symbol ?? String(p.elements![r]).trim();
-    const point: SamplePoint = { symbol, pH: pHValue, E: e, regime, species, celsius, line };
-    tally.points.push(ligands ? { ...point, ligands } : point);
-  }
+  return ligands;
 }
 
 /** The errors cell: each problem prefixed by its column. */
@@ -567,7 +601,11 @@ function errorsText(problems: readonly RowMessage[]): string {
 }
 
 /** Evaluates rows in the order given: whole-batch columns through the functions, then one output line per row. */
-function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: WorksheetFunctions): BatchResult {
+function evaluateInOrder(
+  plan: EvaluationPlan,
+  rows: readonly InputRow[],
+  fns: WorksheetFunctions,
+): { result: BatchResult; columns: EvaluatedColumns } {
   const n = rows.length;
   const samples = sampleColumns(plan, rows, fns);
   const water = waterColumns(plan, rows, fns, samples);
@@ -581,8 +619,8 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
     plan.temperatureColumn !== null && plan.fixedTemperature === undefined ? plan.temperatureColumn : null;
   const out: string[] = new Array(n);
   const messages: RowMessage[] = [];
-  const tally: RowTally = { regimes: new Map(), points: [] };
-  for (const p of perTarget) tally.regimes.set(p.target.prefix, new Map());
+  const counts = perTarget.map(() => new Map<string, number>());
+  const counted = new Uint8Array(n);
   let errorRows = 0;
   let blankRows = 0;
   const cellCount = 2 + ligandCells.length + 5 * perTarget.length;
@@ -607,13 +645,16 @@ function evaluateInOrder(plan: EvaluationPlan, rows: readonly InputRow[], fns: W
       errorRows++;
       for (const m of problems) messages.push(m);
     } else if (pushBlankMessages(plan, row, messages)) blankRows++;
-    // regime counts and diagram points
-    if (typeof e === "number" && !passOn) tallyRow(plan, r, row.line, e, samples, water.ligandArgs, perTarget, tally);
+    if (typeof e === "number" && !passOn) {
+      counted[r] = 1;
+      countRegimes(r, perTarget, counts);
+    }
     out[r] = outputLine(plan, row, cells, kinds, problems === null ? "" : errorsText(problems));
   }
-  const { regimes, points } = tally;
-  for (const [prefix, counts] of regimes) if (counts.size === 0) regimes.delete(prefix);
-  return { lines: out, messages, errorRows, blankRows, regimes, points };
+  const regimes = new Map<string, Map<string, number>>();
+  for (let t = 0; t < perTarget.length; t++) if (counts[t].size > 0) regimes.set(perTarget[t].target.prefix, counts[t]);
+  const result = { lines: out, messages, errorRows, blankRows, regimes };
+  return { result, columns: { samples, ligandArgs: water.ligandArgs, perTarget, counted } };
 }
 
 /** Whether the results carry an ionic-strength column (a fixed value or a column feeds the functions). */

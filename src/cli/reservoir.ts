@@ -16,14 +16,15 @@ export class Reservoir<T> {
     this.random = mulberry32(seed);
   }
 
-  add(item: T): void {
+  /**
+   * Offers one item without making it: returns the index it takes in `items` (store it there), or −1 when it is not
+   * kept, so that an item is built only when it is kept.
+   */
+  nextSlot(): number {
     this.seen++;
-    if (this.items.length < this.capacity) {
-      this.items.push(item);
-      return;
-    }
+    if (this.items.length < this.capacity) return this.items.length;
     const j = Math.floor(this.random() * this.seen);
-    if (j < this.capacity) this.items[j] = item;
+    return j < this.capacity ? j : -1;
   }
 
   /** How many items were offered. */

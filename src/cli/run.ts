@@ -343,7 +343,7 @@ class StreamedRun {
   }
 
   private evaluate(plan: EvaluationPlan, batch: InputRow[]): string {
-    const result = evaluateBatch(plan, batch, this.fns);
+    const result = evaluateBatch(plan, batch, this.fns, this.diagrams);
     this.errorRows += result.errorRows;
     this.blankRows += result.blankRows;
     for (const m of result.messages) this.message(m);
@@ -351,7 +351,6 @@ class StreamedRun {
       const into = (this.regimes[prefix] ??= {});
       for (const [regime, n] of counts) into[regime] = (into[regime] ?? 0) + n;
     }
-    if (this.diagrams) for (const p of result.points) this.diagrams.add(p);
     return result.lines.join("");
   }
 
