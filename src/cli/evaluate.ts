@@ -708,6 +708,36 @@ function cellKinds(ligandColumns: number, targets: number): NumberKind[] {
   return kinds;
 }
 
+/**
+ * Whether every field of an unquoted record is written as it was read (textField leaves it as it is), so that the
+ * record's line can be copied: printable ASCII, no space at either end of a field, and no field that a spreadsheet
+ * would take for a formula (=, +, -, @ not starting a number). Anything else takes the field-by-field path.
+ */
+function writtenAsRead(row: InputRow, format: CsvFormat): row is InputRow & { readonly text: string } {
+  const text = row.text;
+  if (text === undefined || format.delimiter.length !== 1) return false;
+  const d = format.delimiter.charCodeAt(0);
+  const end = text.length;
+  let field = 0;
+  let start = true;
+  for (let i = 0; i < end; i++) {
+    const c = text.charCodeAt(i);
+    if (c === d) {
+      field++;
+      start = true;
+      continue;
+    }
+    if (c === 32) {
+      if (start || i + 1 === end || text.charCodeAt(i + 1) === d) return false;
+    } else if (c < 32 || c > 126) return false;
+    else if (start && !format.rawText && (c === 61 || c === 43 || c === 45 || c === 64)) {
+      if (readNumber(row.fields[field], format.decimalMark) === null) return false;
+    }
+    start = false;
+  }
+  return true;
+}
+
 /** One output line: the input fields (unless dropped), the result cells and the errors cell. */
 function outputLine(
   plan: EvaluationPlan,
@@ -719,7 +749,10 @@ function outputLine(
   const f = plan.format;
   const d = f.delimiter;
   let line = "";
-  if (plan.keepInput) for (const field of row.fields) line += textField(field, f) + d;
+  if (plan.keepInput) {
+    if (writtenAsRead(row, f)) line = row.text + d;
+    else for (const field of row.fields) line += textField(field, f) + d;
+  }
   for (let i = 0; i < cells.length; i++) line += (cells[i] === undefined ? "" : cellText(cells[i], kinds[i], f)) + d;
   return line + (errors === "" ? "" : textField(clip(errors, 4 * ECHO_LIMIT), f)) + "\n";
 }

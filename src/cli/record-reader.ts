@@ -10,6 +10,8 @@
 export interface InputRow {
   readonly fields: readonly string[];
   readonly line: number;
+  /** The record's line as read (without its line break) when it holds no quote: its fields joined by the delimiter. */
+  readonly text?: string;
 }
 
 export class MalformedCsvError extends Error {}
@@ -133,6 +135,7 @@ export class RecordSplitter {
       }
       this.headerSeen = true;
     }
-    out.push({ fields: fields ?? (lineText as string).split(this.delimiter), line: this.line });
+    if (lineText === null) out.push({ fields: fields as string[], line: this.line });
+    else out.push({ fields: lineText.split(this.delimiter), line: this.line, text: lineText });
   }
 }

@@ -50,10 +50,31 @@ export function traceMarker(sink: PathSink, regime: Regime, x: number, y: number
   sink.closePath();
 }
 
+/** ".01" … ".99" without a trailing zero, "" for 0: the decimals of a coordinate in hundredths of a pixel. */
+const HUNDREDTHS: readonly string[] = Array.from({ length: 100 }, (_, f) =>
+  f === 0 ? "" : `.${String(f).padStart(2, "0").replace(/0$/, "")}`,
+);
+
+/**
+ * A coordinate to 2 decimals as Number(v.toFixed(2)).toString() writes it, from the integer of hundredths (toFixed
+ * formats the double's exact decimal expansion, slowly: a diagram has tens of thousands of markers); within 10⁻⁶ of
+ * a tie, and for huge values, it leaves the answer to toFixed.
+ */
+function twoDecimals(v: number): string {
+  const scaled = v * 100;
+  if (!(Math.abs(scaled) < 1e15) || Math.abs(scaled - Math.floor(scaled) - 0.5) < 1e-6)
+    return Number(v.toFixed(2)).toString();
+  const n = Math.round(scaled);
+  const a = n < 0 ? -n : n;
+  const whole = Math.floor(a / 100);
+  const text = String(whole) + HUNDREDTHS[a - whole * 100];
+  return n < 0 ? "-" + text : text;
+}
+
 /** SVG path data of a marker. */
 export function markerPath(regime: Regime, x: number, y: number, r = MARKER_RADIUS): string {
   const parts: string[] = [];
-  const f = (v: number) => Number(v.toFixed(2)).toString();
+  const f = twoDecimals;
   traceMarker(
     {
       moveTo: (a, b) => parts.push(`M${f(a)} ${f(b)}`),
