@@ -59,8 +59,11 @@ const VOLT_FRACTIONS: readonly string[] = Array.from({ length: 10_000 }, (_, f) 
 
 /** Potentials written from a table, in tenths of a millivolt: ±4 V holds every potential the functions accept. */
 const VOLT_TABLE_LIMIT = 40_000;
-/** The text of n tenths of a millivolt, −VOLT_TABLE_LIMIT ≤ n ≤ VOLT_TABLE_LIMIT, made on first use. */
-const voltTexts: (string | undefined)[] = new Array(2 * VOLT_TABLE_LIMIT + 1);
+/**
+ * The text of n tenths of a millivolt at n + VOLT_TABLE_LIMIT, made on first use ("" until then; filled, so the
+ * array stays a plain one rather than a sparse dictionary).
+ */
+const voltTexts: string[] = new Array<string>(2 * VOLT_TABLE_LIMIT + 1).fill("");
 
 /** The text of n tenths of a millivolt (an integer below 10¹⁵ in magnitude): "-1.25", "0.0001", "0". */
 function tenthsText(n: number): string {
@@ -76,7 +79,7 @@ function tenthsText(n: number): string {
  */
 function voltsText(x: number): string {
   const n = Math.round(x * 1e4);
-  if (n >= -VOLT_TABLE_LIMIT && n <= VOLT_TABLE_LIMIT) return (voltTexts[n + VOLT_TABLE_LIMIT] ??= tenthsText(n));
+  if (n >= -VOLT_TABLE_LIMIT && n <= VOLT_TABLE_LIMIT) return (voltTexts[n + VOLT_TABLE_LIMIT] ||= tenthsText(n));
   if (!(Math.abs(n) < 1e15)) return String(n / 1e4);
   return tenthsText(n);
 }
@@ -124,13 +127,13 @@ function fourFigures(x: number): string {
   return x < 0 ? "-" + text : text;
 }
 
-/** Texts of m·10^−k made so far, by (k + 12)·10⁴ + m for −12 ≤ k ≤ 10 (amounts repeat their few thousand texts). */
-const decimalTexts: (string | undefined)[] = new Array(23 * 10_000);
+/** Texts of m·10^−k made so far at (k + 12)·10⁴ + m, −12 ≤ k ≤ 10 ("" until made; filled, as voltTexts). */
+const decimalTexts: string[] = new Array<string>(23 * 10_000).fill("");
 
 /** decimalText, each text made once. */
 function decimalTextOnce(m: number, k: number): string {
   if (k < -12 || k > 10) return decimalText(m, k);
-  return (decimalTexts[(k + 12) * 10_000 + m] ??= decimalText(m, k));
+  return (decimalTexts[(k + 12) * 10_000 + m] ||= decimalText(m, k));
 }
 
 /** A result number as a CSV field: rounded by kind (unless full precision), with the format's decimal mark. */

@@ -12,8 +12,40 @@ export const POINT_NUMBER = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/;
 /** The same pattern with a decimal comma. */
 export const COMMA_NUMBER = /^\s*[+-]?(\d+,?\d*|,\d+)([eE][+-]?\d+)?\s*$/;
 
+const POWERS_OF_TEN = [1, 10, 100, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15];
+
+/**
+ * The value of a plain decimal of at most 15 digits — an optional sign, digits, and optionally the mark (code 46 "."
+ * or 44 ",") followed by digits — read by its characters, or NaN for any other text (left to the patterns above).
+ * Exactly Number(text): the digits form an integer below 2⁵³ and 10^k (k ≤ 15) is exact, so the one division is the
+ * correctly rounded value of the decimal, as Number's is (ECMA-262, StringToNumber). Faster than a pattern and
+ * Number for the millions of cells of a log.
+ */
+function plainDecimal(text: string, mark: number): number {
+  const end = text.length;
+  const first = text.charCodeAt(0);
+  let i = first === 43 || first === 45 ? 1 : 0; // + or -
+  const digitsFrom = i;
+  let digits = 0;
+  let scale = -1; // digits after the mark, once it is seen
+  for (; i < end; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 48 && c <= 57) {
+      digits = digits * 10 + (c - 48);
+      if (scale >= 0) scale++;
+    } else if (c === mark && scale < 0 && i > digitsFrom) scale = 0;
+    else return NaN;
+  }
+  const count = end - digitsFrom - (scale >= 0 ? 1 : 0);
+  if (count === 0 || count > 15 || scale === 0) return NaN;
+  const value = scale > 0 ? digits / POWERS_OF_TEN[scale] : digits;
+  return first === 45 ? -value : value;
+}
+
 /** The number a cell's text holds with this decimal mark, or null when it holds none (blank, text, "1.234,5"). */
 export function readNumber(text: string, mark: DecimalMark = "."): number | null {
+  const plain = plainDecimal(text, mark === "." ? 46 : 44);
+  if (!Number.isNaN(plain)) return plain;
   if (mark === ".") return POINT_NUMBER.test(text) ? Number(text) : null;
   return COMMA_NUMBER.test(text) ? Number(text.replace(",", ".")) : null;
 }
