@@ -57,31 +57,17 @@ const VOLT_FRACTIONS: readonly string[] = Array.from({ length: 10_000 }, (_, f) 
   f === 0 ? "" : `.${String(f).padStart(4, "0").replace(/0+$/, "")}`,
 );
 
-/** Potentials written from a table, in tenths of a millivolt: ±4 V holds every potential the functions accept. */
-const VOLT_TABLE_LIMIT = 40_000;
 /**
- * The text of n tenths of a millivolt at n + VOLT_TABLE_LIMIT, made on first use ("" until then; filled, so the
- * array stays a plain one rather than a sparse dictionary).
+ * Volts to 0.1 mV, written from the integer number of tenths of a millivolt: the text String(round(x·1e4)/1e4)
+ * gives (no trailing zeros), without formatting a double.
  */
-const voltTexts: string[] = new Array<string>(2 * VOLT_TABLE_LIMIT + 1).fill("");
-
-/** The text of n tenths of a millivolt (an integer below 10¹⁵ in magnitude): "-1.25", "0.0001", "0". */
-function tenthsText(n: number): string {
+function voltsText(x: number): string {
+  const n = Math.round(x * 1e4);
+  if (!(Math.abs(n) < 1e15)) return String(n / 1e4);
   const a = n < 0 ? -n : n;
   const whole = Math.floor(a / 1e4);
   const text = String(whole) + VOLT_FRACTIONS[a - whole * 1e4];
   return n < 0 && a !== 0 ? "-" + text : text;
-}
-
-/**
- * Volts to 0.1 mV, written from the integer number of tenths of a millivolt: the text String(round(x·1e4)/1e4)
- * gives (no trailing zeros), without formatting a double; within ±4 V each text is made once and then looked up.
- */
-function voltsText(x: number): string {
-  const n = Math.round(x * 1e4);
-  if (n >= -VOLT_TABLE_LIMIT && n <= VOLT_TABLE_LIMIT) return (voltTexts[n + VOLT_TABLE_LIMIT] ||= tenthsText(n));
-  if (!(Math.abs(n) < 1e15)) return String(n / 1e4);
-  return tenthsText(n);
 }
 
 const POWERS_OF_TEN: readonly number[] = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
@@ -123,17 +109,8 @@ function fourFigures(x: number): string {
     m = 1000;
     k--;
   }
-  const text = decimalTextOnce(m, k);
+  const text = decimalText(m, k);
   return x < 0 ? "-" + text : text;
-}
-
-/** Texts of m·10^−k made so far at (k + 12)·10⁴ + m, −12 ≤ k ≤ 10 ("" until made; filled, as voltTexts). */
-const decimalTexts: string[] = new Array<string>(23 * 10_000).fill("");
-
-/** decimalText, each text made once. */
-function decimalTextOnce(m: number, k: number): string {
-  if (k < -12 || k > 10) return decimalText(m, k);
-  return (decimalTexts[(k + 12) * 10_000 + m] ||= decimalText(m, k));
 }
 
 /** A result number as a CSV field: rounded by kind (unless full precision), with the format's decimal mark. */

@@ -245,7 +245,7 @@ class StreamedRun {
   async stream(openOutput: (plan: EvaluationPlan) => Promise<Writable>): Promise<EvaluationPlan> {
     const { options, format } = this;
     const splitter = new RecordSplitter(format.delimiter);
-    const source = createReadStream(options.input, { encoding: "utf8", highWaterMark: 1 << 20 });
+    const source = createReadStream(options.input, { encoding: "utf8", highWaterMark: 64 << 10 });
     let plan: EvaluationPlan | null = null;
     let out: Writable | null = null;
     let pending: InputRow[] = [];
