@@ -19,7 +19,6 @@ import { join } from "node:path";
 import { Writable } from "node:stream";
 import { parse as parseSync } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { SYSTEM_CACHE_SIZE } from "../../src/chemistry/system-cache";
 import { DEFAULT_BATCH_SIZE } from "../../src/cli/options";
 import { DEFAULT_FORMAT, numberField } from "../../src/cli/csv-format";
 import { runCommand, type CliStreams } from "../../src/cli/run";
@@ -234,9 +233,50 @@ describe("bounded messages and precision", () => {
 });
 
 describe("batches", () => {
-  it("are no larger than the engine's system cache, so a batch's systems are built once and found by every function", () => {
-    expect(DEFAULT_BATCH_SIZE).toBeLessThanOrEqual(SYSTEM_CACHE_SIZE);
-  });
+  // rows are handed to the functions grouped by metal and temperature within each batch, so the batch size changes
+  // the order the engine sees them in and which rows share a call; the results must not change with it
+  it("give the same results, messages and diagrams at any batch size", async () => {
+    const metals = ["Fe", "Cu", "Pb", "zinc", " Pb ", "Xx", "", "Hg"];
+    let text = "id;pH;ORP (mV) vs SCE;Temp (°F);metal;Alkalinity (meq/L);chloride mg/L;Conductivity (uS/cm);note\n";
+    let seed = 99;
+    const random = (): number => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+    for (let i = 0; i < 1500; i++) {
+      const pH = random() < 0.03 ? "7,3x" : (2 + random() * 11).toFixed(2).replace(".", ",");
+      const orp = random() < 0.03 ? "" : String(Math.round(-600 + random() * 1400));
+      const fahrenheit = (35 + Math.floor(random() * 6) * 20).toFixed(1).replace(".", ",");
+      const alkalinity = random() < 0.1 ? "" : (random() * 4).toFixed(3).replace(".", ",");
+      const chloride = random() < 0.3 ? "" : (random() * 200).toFixed(1).replace(".", ",");
+      const note = random() < 0.05 ? "=1+2" : "";
+      const metal = metals[Math.floor(random() * metals.length)];
+      text +=
+        random() < 0.01
+          ? ";;;;\n"
+          : `S${i};${pH};${orp};${fahrenheit};${metal};${alkalinity};${chloride};${Math.round(random() * 2000)};${note}\n`;
+    }
+    const input = write("batches.csv", text);
+    const outcomes: { code: number; stderr: string; results: string; svgs: string[] }[] = [];
+    for (const size of [1, 7, 256, DEFAULT_BATCH_SIZE, 5000]) {
+      const out = join(dir, `batches-${size}`);
+      mkdirSync(out, { recursive: true });
+      const args = [input, "-o", join(out, "results.csv"), "--svg-dir", out, "-m", "Cu", "--full-precision"];
+      const result = await run([...args, "--batch-size", String(size), "--max-messages", "100000", "--quiet"]);
+      const svgs = readdirSync(out)
+        .filter((f) => f.endsWith(".svg"))
+        .sort()
+        .map((f) => readFileSync(join(out, f), "utf8"));
+      outcomes.push({
+        code: result.code,
+        stderr: result.stderr,
+        results: readFileSync(join(out, "results.csv"), "utf8"),
+        svgs,
+      });
+    }
+    const first = outcomes[0];
+    expect(first.code).toBe(1); // the file has bad cells
+    expect(first.results.split("\n")).toHaveLength(1500 + 2); // header, rows, final newline
+    expect(first.svgs.length).toBeGreaterThan(3);
+    for (const later of outcomes.slice(1)) expect(later).toEqual(first);
+  }, 120_000);
 });
 
 describe("number text", () => {
