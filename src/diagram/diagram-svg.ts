@@ -94,6 +94,7 @@ export function diagramLayout(width: number, height: number, captionLines = 0): 
 }
 
 export function escapeXml(text: string): string {
+  if (!/[&<>"']/.test(text)) return text; // most texts (every sample's title) have nothing to escape
   return text
     .replace(/&/g, "&amp;")
     .replace(/</g, "&lt;")
