@@ -1,8 +1,8 @@
 /**
  * Ligand records against published constants, and hand calculations of the ligand treatment from the data.
  *
- * Solubility products at 25 °C, zero ionic strength, within 0.5 log units; acid constants of the sulfur system
- * within 0.05. Every check value names its source; all were recalled from memory.
+ * Solubility products at 25 °C, zero ionic strength, within 0.5 log units (fixtures/ligands/solubility-products.json);
+ * acid constants of the sulfur system within 0.05. Every check value names its source; all were recalled from memory.
  */
 import { describe, expect, it } from "vitest";
 import { kelvin, nernstFactor } from "../../src/chemistry/constants";
@@ -13,44 +13,16 @@ import { dissolvedEquilibrium } from "../../src/chemistry/point-dissolved";
 import { dissolvedAtPoint } from "../../src/chemistry/predominance";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import { dominantSpecies, speciesIndex, speciesPotential } from "../../src/chemistry/system";
+import { loadConstants } from "./compilation-checks";
 
 const db = getDatabase();
-const SM = "Smith & Martell 1976, Critical Stability Constants vol. 4 (from memory)";
 
-const SOLUBILITY: { solid: string; reaction: Record<string, number>; logK: number; source: string }[] = [
-  { solid: "cerussite", reaction: { "PbCO3(s)": -1, "Pb2+": 1, "CO32-": 1 }, logK: -13.13, source: SM },
-  {
-    solid: "siderite",
-    reaction: { "FeCO3(s)": -1, "Fe2+": 1, "CO32-": 1 },
-    logK: -10.8,
-    source: "Bruno, Wersin & Stumm 1992, Geochim. Cosmochim. Acta 56:1149 (from memory; other studies −10.5 to −10.9)",
-  },
-  { solid: "smithsonite", reaction: { "ZnCO3(s)": -1, "Zn2+": 1, "CO32-": 1 }, logK: -10.0, source: SM },
-  { solid: "silver carbonate", reaction: { "Ag2CO3(s)": -1, "Ag+": 2, "CO32-": 1 }, logK: -11.09, source: SM },
-  { solid: "anglesite", reaction: { "PbSO4(s)": -1, "Pb2+": 1, "SO42-": 1 }, logK: -7.79, source: SM },
-  { solid: "nantokite", reaction: { "CuCl(s)": -1, "Cu+": 1, "Cl-": 1 }, logK: -6.73, source: SM },
-  { solid: "cerargyrite", reaction: { "AgCl(s)": -1, "Ag+": 1, "Cl-": 1 }, logK: -9.75, source: SM },
-  { solid: "cotunnite", reaction: { "PbCl2(s)": -1, "Pb2+": 1, "Cl-": 2 }, logK: -4.78, source: SM },
-  {
-    solid: "sphalerite",
-    reaction: { "ZnS(s)": -1, "H+": -1, "Zn2+": 1, "HS-": 1 },
-    logK: -11.5,
-    source:
-      "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., sulfide solubility table, ZnS + H+ = Zn2+ + HS- (from memory)",
-  },
-  {
-    solid: "acanthite",
-    reaction: { "Ag2S(s)": -1, "H+": -1, "Ag+": 2, "HS-": 1 },
-    logK: -36.2,
-    source:
-      "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., sulfide solubility table, Ag2S + H+ = 2Ag+ + HS- (from memory)",
-  },
-];
+const SOLUBILITY = loadConstants(new URL("./fixtures/ligands/solubility-products.json", import.meta.url));
 
 describe("solubility products at 25 °C within 0.5 log units", () => {
   for (const c of SOLUBILITY) {
-    it(`${c.solid}: log K = ${c.logK} (${c.source})`, () => {
-      expect(Math.abs(reactionLogK(db, c.reaction, 25) - c.logK)).toBeLessThanOrEqual(0.5);
+    it(`${c.id}: log K = ${c.value} (${c.source})`, () => {
+      expect(Math.abs(reactionLogK(db, c.inputs.reaction, 25) - c.value)).toBeLessThanOrEqual(c.tolerance);
     });
   }
 });
