@@ -3,9 +3,9 @@
  *
  * Check values (fixtures/ligands/carbonic-acid.json): Harned & Davis (1943) for pK1 and KH and Harned & Scholes
  * (1941) for pK2 at 5 and 25 °C — the measurements Plummer & Busenberg (1982) fitted — and the Plummer & Busenberg
- * fit itself at 60 °C (beyond the Harned series), all within 0.03. Both the fit in src/chemistry/carbonic-acid.ts and the constants the engine
- * derives from the carbonate species records (which set the ligand cells and every metal carbonate plane) are
- * checked.
+ * fit itself at 60 °C (beyond the Harned series), all within 0.03. Both the fit in src/chemistry/carbonic-acid.ts
+ * and the constants the engine derives from the carbonate species records (which set the ligand cells and every
+ * metal carbonate plane) are checked.
  */
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
