@@ -3,6 +3,7 @@
  * functions on them (exactly as a worksheet range would), and turns the results into output cells, per-row error
  * text and the messages the command line prints. No I/O here.
  */
+import { DEFAULT_CELSIUS } from "../chemistry/domain";
 import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { mapCells } from "../functions/broadcast";
 import { CellError, CellInput, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
@@ -528,7 +529,7 @@ function tallyRow(
 ): void {
   const pHValue = Number(samples.pH[r]);
   const tCell = samples.temperatureAt(r);
-  const celsius = isBlank(tCell) ? 25 : Number(tCell);
+  const celsius = isBlank(tCell) ? DEFAULT_CELSIUS : Number(tCell);
   let ligands: LigandTotals | undefined;
   for (const l of plan.ligands) {
     const x = ligandArgs[l.ligand]![r];
