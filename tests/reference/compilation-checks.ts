@@ -20,6 +20,8 @@ export const BM = "Baes & Mesmer 1976, The Hydrolysis of Cations, selected const
 
 /** A reaction written as formula → coefficient (reactants negative, "e-" for electrons). */
 const reaction = z.record(z.string(), z.number());
+/** The inputs of a constant: its reaction. */
+export const reactionInputs = z.strictObject({ reaction });
 
 /** An ox/red pair balanced by the engine with H2O/H+, or a reaction written out (alkaline couples). */
 const couple = z.union([z.strictObject({ pair: z.tuple([z.string(), z.string()]) }), z.strictObject({ reaction })]);
@@ -37,11 +39,11 @@ export const loadPotentialDisagreements = (file: URL): PotentialCase[] =>
 
 /** Constants (log K): 0.5 at most, 0.01 for round trips. */
 export const loadConstants = (file: URL): ConstantCase[] =>
-  loadReferenceFixture(file, z.strictObject({ reaction }), { ceiling: (c) => (c.roundTrip ? 0.01 : 0.5) });
+  loadReferenceFixture(file, reactionInputs, { ceiling: (c) => (c.roundTrip ? 0.01 : 0.5) });
 
 /** Documented disagreements of constants: the followed value within 0.02, the other more than 0.5 away. */
 export const loadConstantDisagreements = (file: URL): ConstantCase[] =>
-  loadReferenceFixture(file, z.strictObject({ reaction }), { ceiling: () => 0.02, differsBy: 0.5 });
+  loadReferenceFixture(file, reactionInputs, { ceiling: () => 0.02, differsBy: 0.5 });
 
 /** E° (V) of a reduction written as formula → coefficient (reactants negative, "e-" for electrons). */
 export function potentialOf(reaction: Record<string, number>): number {
