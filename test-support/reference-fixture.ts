@@ -104,3 +104,10 @@ export function loadReferenceFixture<I extends z.ZodType>(
     throw new Error(`reference fixture ${name}, record ${index}${typeof id === "string" ? ` (${id})` : ""}: ${wrong}`);
   });
 }
+
+/** The record of a fixture with this id, for tests that check one value each; throws naming the id when absent. */
+export function checkById<I>(checks: readonly ReferenceCheck<I>[], id: string): ReferenceCheck<I> {
+  const found = checks.find((c) => c.id === id);
+  if (!found) throw new Error(`no reference check "${id}" (have: ${checks.map((c) => c.id).join("; ")})`);
+  return found;
+}

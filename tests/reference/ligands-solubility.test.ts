@@ -13,7 +13,8 @@ import { dissolvedEquilibrium } from "../../src/chemistry/point-dissolved";
 import { dissolvedAtPoint } from "../../src/chemistry/predominance";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import { dominantSpecies, speciesIndex, speciesPotential } from "../../src/chemistry/system";
-import { loadConstants } from "./compilation-checks";
+import { loadReferenceFixture } from "../../test-support/reference-fixture";
+import { loadConstants, reactionInputs } from "./compilation-checks";
 
 const db = getDatabase();
 
@@ -27,13 +28,18 @@ describe("solubility products at 25 °C within 0.5 log units", () => {
   }
 });
 
+const SULFUR_ACIDS = loadReferenceFixture(
+  new URL("./fixtures/ligands/sulfur-acids.json", import.meta.url),
+  reactionInputs,
+  { ceiling: () => 0.05 },
+);
+
 describe("sulfur system acid constants", () => {
-  it("H2S pK1 = 6.98 within 0.05 (Millero 1986, Mar. Chem. 18:121, The thermodynamics and kinetics of the hydrogen sulfide system in natural waters; from memory)", () => {
-    expect(Math.abs(-reactionLogK(db, { "H2S(aq)": -1, "H+": 1, "HS-": 1 }, 25) - 6.98)).toBeLessThanOrEqual(0.05);
-  });
-  it("HSO4- pK = 1.99 within 0.05 (Dickson, Wesolowski, Palmer & Mesmer 1990, J. Phys. Chem. 94:7978; from memory)", () => {
-    expect(Math.abs(-reactionLogK(db, { "HSO4-": -1, "H+": 1, "SO42-": 1 }, 25) - 1.99)).toBeLessThanOrEqual(0.05);
-  });
+  for (const c of SULFUR_ACIDS) {
+    it(`${c.id} = ${c.value} within ${c.tolerance} (${c.source})`, () => {
+      expect(Math.abs(-reactionLogK(db, c.inputs.reaction, 25) - c.value)).toBeLessThanOrEqual(c.tolerance);
+    });
+  }
   it("S2-: the records imply pK2 = 12.9 (NBS 1982), the low end of the published 13–19 range (documented uncertainty)", () => {
     const pK2 = -reactionLogK(db, { "HS-": -1, "H+": 1, "S2-": 1 }, 25);
     expect(pK2).toBeGreaterThan(12.5);

@@ -18,9 +18,24 @@ import {
 } from "../../src/chemistry/water";
 import { CellError } from "../../src/functions/cell-values";
 import { neutralPHAt, slopeAt, waterLineAt, waterMarginAt } from "../../src/functions/water-functions";
-import { loadReferenceFixture } from "../../test-support/reference-fixture";
+import { boundText } from "../../src/chemistry/domain";
+import { checkById, loadReferenceFixture } from "../../test-support/reference-fixture";
 
 const mathjs = create({ gasConstantDependencies, faradayDependencies });
+/** The largest tolerance per unit: 0.5 µV for the Nernst factor, 1 mV for E°, 0.01 mV/K for dE°/dT, 0.03 pe. */
+const CEILING_BY_UNIT = new Map([
+  ["V per decade", 5e-7],
+  ["V", 0.001],
+  ["V/K", 1e-5],
+  ["pe", 0.03],
+]);
+/** Published values of the Nernst factor and the water couples: fixtures/water/water-lines.json. */
+const waterLines = loadReferenceFixture(
+  new URL("./fixtures/water/water-lines.json", import.meta.url),
+  z.strictObject({ celsius: z.number(), pH: z.number().optional() }),
+  { ceiling: (c) => CEILING_BY_UNIT.get(c.unit) ?? 0 },
+);
+const published = (id: string) => checkById(waterLines, id);
 
 describe("physical constants", () => {
   it("R matches mathjs's built-in gas constant (CODATA 2018, exact N_A·k)", () => {
@@ -41,12 +56,9 @@ describe("physical constants", () => {
     expect(FARADAY).toBeCloseTo(96485.33212, 5); // CODATA 2018, Tiesinga et al. (2021)
   });
 
-  it("Nernst factor RT ln10 / F is 0.059159 V at 25 °C", () => {
-    const reference = {
-      value: 0.059159,
-      source: "Bard & Faulkner, Electrochemical Methods, 2nd ed. 2001, 0.05916 V at 25 °C (from memory)",
-    };
-    expect(Math.abs(nernstFactor(T0) - reference.value)).toBeLessThan(5e-7);
+  const nernst = published("Nernst factor RT ln10 / F");
+  it(`Nernst factor RT ln10 / F is ${nernst.value} V at 25 °C`, () => {
+    expect(Math.abs(nernstFactor(T0) - nernst.value)).toBeLessThan(nernst.tolerance);
   });
 
   it("REDOX.SLOPE returns the Nernst factor, also at 60 °C", () => {
@@ -58,21 +70,15 @@ describe("physical constants", () => {
 });
 
 describe("water lines from the species data", () => {
-  it("E°(O2/H2O) is 1.229 V at 25 °C", () => {
-    const reference = {
-      value: 1.229,
-      source: "Bard, Parsons & Jordan, Standard Potentials in Aqueous Solution (1985), O2/H2O (from memory)",
-    };
-    expect(Math.abs(waterStandardPotential("O2", 25) - reference.value)).toBeLessThan(0.001);
+  const oxygen = published("E°(O2/H2O)");
+  it(`E°(O2/H2O) is ${oxygen.value} V at 25 °C`, () => {
+    expect(Math.abs(waterStandardPotential("O2", 25) - oxygen.value)).toBeLessThan(oxygen.tolerance);
   });
 
-  it("dE°/dT of O2/H2O is −0.846 mV/K at 25 °C", () => {
-    const reference = {
-      value: -0.846e-3,
-      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table of temperature coefficients (from memory)",
-    };
+  const oxygenSlope = published("dE°/dT of O2/H2O");
+  it(`dE°/dT of O2/H2O is ${boundText(oxygenSlope.value * 1000)} mV/K at 25 °C`, () => {
     const slope = (waterStandardPotential("O2", 26) - waterStandardPotential("O2", 24)) / 2;
-    expect(Math.abs(slope - reference.value)).toBeLessThan(0.01e-3);
+    expect(Math.abs(slope - oxygenSlope.value)).toBeLessThan(oxygenSlope.tolerance);
   });
 
   it("E°(H+/H2) is zero at every temperature (hydrogen-electrode convention)", () => {
@@ -94,14 +100,10 @@ describe("water lines from the species data", () => {
     }
   });
 
-  it("O2/H2O at pH 7 is pe 13.75 (0.813 V), and pe° of the couple is 20.75", () => {
-    const peW = {
-      value: 13.75,
-      source: "Stumm & Morgan, Aquatic Chemistry, 3rd ed. 1996, Table 8.1, pe°(W) of O2(g)/H2O (from memory)",
-    };
-    const pe0 = { value: 20.75, source: "Stumm & Morgan 1996, Table 8.1, pe° of O2(g)/H2O (from memory)" };
-    expect(Math.abs(peFromEh(waterLine(7)) - peW.value)).toBeLessThan(0.03);
-    expect(Math.abs(peFromEh(waterStandardPotential("O2")) - pe0.value)).toBeLessThan(0.03);
+  const [peW, pe0] = [published("pe of O2/H2O at pH 7"), published("pe° of O2/H2O")];
+  it(`O2/H2O at pH 7 is pe ${peW.value} (0.813 V), and pe° of the couple is ${pe0.value}`, () => {
+    expect(Math.abs(peFromEh(waterLine(peW.inputs.pH!)) - peW.value)).toBeLessThan(peW.tolerance);
+    expect(Math.abs(peFromEh(waterStandardPotential("O2")) - pe0.value)).toBeLessThan(pe0.tolerance);
   });
 
   it("gas pressure shifts the lines by the Nernst term: (k/4)·log p for O2, −(k/2)·log p for H2", () => {
