@@ -15,10 +15,13 @@
  * agree, and a round trip (record derived from the very value checked) is labelled as such.
  */
 import { describe, expect, it } from "vitest";
+import { z } from "zod";
 import { getDatabase } from "../../src/chemistry/database";
 import { ligandCells } from "../../src/chemistry/ligand-cells";
 import { dissolvedTotal } from "../../src/chemistry/predominance";
 import { buildSystem, dominantSpecies, speciesIndex } from "../../src/chemistry/system";
+import { boundText } from "../../src/chemistry/domain";
+import { loadReferenceFixture } from "../../test-support/reference-fixture";
 import {
   checkConstants,
   checkDisagreements,
@@ -75,16 +78,20 @@ checkConstants(
 );
 
 describe("contaminant elements: solubilities from the engine's controlling solid", () => {
-  it("arsenic in equilibrium with arsenolite (pH 4, 0.15 V, arsenite field): 0.207 mol As/kg, log −0.68 (CRC Handbook, aqueous solubility of As2O3, 2.05 g/100 g water at 25 °C, from memory), within 0.1", () => {
-    const system = buildSystem(db, "As", { celsius: 25, activity: 1e-6 });
-    const { total } = dissolvedTotal(system, speciesIndex(system, "As2O3(s)"), 4, 0.15);
-    expect(Math.abs(Math.log10(total) - -0.68)).toBeLessThanOrEqual(0.1);
-  });
-  it("mercury in equilibrium with red HgO (pH 7, 0.9 V): 0.053 g/L, log −3.61 mol/kg (CRC Handbook, aqueous solubility of HgO at 25 °C, from memory), within 0.15", () => {
-    const system = buildSystem(db, "Hg", { celsius: 25, activity: 1e-6 });
-    const { total } = dissolvedTotal(system, speciesIndex(system, "HgO(s)"), 7, 0.9);
-    expect(Math.abs(Math.log10(total) - -3.61)).toBeLessThanOrEqual(0.15);
-  });
+  const solubilities = loadReferenceFixture(
+    new URL("./fixtures/elements-contaminants/solubilities.json", import.meta.url),
+    z.strictObject({ element: z.string(), solid: z.string(), pH: z.number(), potential: z.number() }),
+    { ceiling: () => 0.15 },
+  );
+  for (const c of solubilities) {
+    const { element, solid, pH, potential } = c.inputs;
+    const note = c.note ? `: ${c.note}` : "";
+    it(`${c.id}${note}, log ${boundText(c.value)} mol/kg (${c.source}), within ${c.tolerance}`, () => {
+      const system = buildSystem(db, element, { celsius: 25, activity: 1e-6 });
+      const { total } = dissolvedTotal(system, speciesIndex(system, solid), pH, potential);
+      expect(Math.abs(Math.log10(total) - c.value)).toBeLessThanOrEqual(c.tolerance);
+    });
+  }
 });
 
 const lines = loadDiagramLines(new URL("./fixtures/elements-contaminants/diagram-lines.json", import.meta.url));

@@ -119,8 +119,14 @@ describe("Davies activity coefficients", () => {
       }
     }
   });
-  it("a divalent ion at I = 0.01 has γ ≈ 0.66 (Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., ch. 3; from memory)", () => {
-    expect(daviesGamma(2, 0.01, 25)).toBeCloseTo(0.66, 2);
+  const [divalent] = loadReferenceFixture(
+    new URL("./fixtures/activity/davies-gamma.json", import.meta.url),
+    z.strictObject({ charge: z.number(), ionicStrength: z.number() }),
+    { ceiling: () => 0.005 },
+  );
+  it(`${divalent.id} has γ ≈ ${divalent.value} (${divalent.source})`, () => {
+    const { charge, ionicStrength } = divalent.inputs;
+    expect(Math.abs(daviesGamma(charge, ionicStrength, 25) - divalent.value)).toBeLessThan(divalent.tolerance);
     expect(daviesGamma(0, 0.3, 25)).toBe(1);
   });
   it("ionic strength from conductance and TDS (Russell 1976; Langelier 1936)", () => {
