@@ -13,6 +13,8 @@
  * No copy of these publications was at hand: every check value is recalled from memory and says so. The records
  * also come from memory (see each file's references); a check passes only where two independent recollections
  * agree, and a round trip (record derived from the very value checked) is labelled as such.
+ *
+ * The check values, tolerances and sources live in fixtures/elements-contaminants/*.json (loaded and validated by the runners).
  */
 import { describe, expect, it } from "vitest";
 import { z } from "zod";

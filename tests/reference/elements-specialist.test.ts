@@ -9,6 +9,8 @@
  * No copy of these publications was at hand: every check value is recalled from memory and says so. Gold's ions
  * and platinum's ions, oxides and chloro-complexes were themselves derived from CRC/Atlas potentials (their
  * records say so): those checks are labelled as arithmetic round trips, and platinum has no independent check.
+ *
+ * The check values, tolerances and sources live in fixtures/elements-specialist/*.json (loaded and validated by the runners).
  */
 import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";

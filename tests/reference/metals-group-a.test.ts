@@ -11,8 +11,11 @@
  *
  * No copy of these publications was at hand: every check value is recalled from memory and says so.
  * Alkaline couples are written with OH−, so they also depend on the water records (Kw).
+ *
+ * The check values, tolerances and sources live in fixtures/metals-group-a/*.json (loaded and validated by the runners).
  */
 import { describe, expect, it } from "vitest";
+import { z } from "zod";
 import { getDatabase } from "../../src/chemistry/database";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import {
@@ -30,9 +33,11 @@ import {
 import { checkDiagramLines, loadDiagramLines } from "./element-checks";
 import { buildSystem, dominantSpecies, pairBoundary } from "../../src/chemistry/system";
 import { FARADAY, GAS_CONSTANT, LN10, T0, nernstFactor } from "../../src/chemistry/constants";
+import { loadReferenceFixture } from "../../test-support/reference-fixture";
 
 const db = getDatabase();
 const METALS = ["Fe", "Cu", "Zn", "Pb", "Ni", "Cr", "Al", "Mn"] as const;
+type Metal = (typeof METALS)[number];
 
 const ATLAS = "Pourbaix 1974, Atlas of Electrochemical Equilibria in Aqueous Solutions (from memory)";
 
@@ -72,27 +77,6 @@ const constantDisagreements = loadConstantDisagreements(
 
 checkConstantDisagreements("group A metals: documented disagreements with Baes & Mesmer", constantDisagreements);
 
-/**
- * A boundary line of the Atlas written as  E = e0 − (h/n)·k·pH + logCoef·log10(a)  for dissolved species at the
- * common activity a, or as a vertical line  pH = pH0 + logCoefPH·log10(a) (here for the lines the Atlas drew from
- * other data; the lines the data reproduce are in fixtures/metals-group-a/diagram-lines.json).
- */
-interface AtlasLine {
-  metal: (typeof METALS)[number];
-  pair: [string, string];
-  equation: string;
-  source: string;
-  kind: "line" | "vertical";
-  e0?: number;
-  /** Protons per electron, h/n, of the reaction ox + h H+ + n e- → red. */
-  hPerN?: number;
-  logCoef?: number;
-  pH0?: number;
-  logCoefPH?: number;
-  /** Protons exchanged in an acid–base (vertical) boundary, for its tolerance 0.5/h. */
-  h?: number;
-}
-
 const ACTIVITY = 1e-6;
 const LOG_A = Math.log10(ACTIVITY);
 
@@ -125,112 +109,70 @@ describe(ATLAS_TITLE, () => {
 const FE2_SHIFT = (-78.9 - -84.94) * 1000; // J/mol, NBS minus Atlas
 const FE3_SHIFT = (-4.7 - -10.59) * 1000;
 
-interface AtlasDisagreement extends AtlasLine {
-  /** Predicted (data − Atlas) difference of the intercept (V) or of the vertical pH. */
-  predicted: number;
-  why: string;
-}
+/** The predicted (data − Atlas) offset of each line's intercept (V) or vertical pH, from the data difference. */
+const PREDICTED = new Map<string, number>([
+  ["Fe: Fe2+ / Fe(s)", FE2_SHIFT / (2 * FARADAY)], // one Fe2+ oxidised, 2 e−
+  ["Fe: Fe2O3(s) / Fe2+", (-2 * FE2_SHIFT) / (2 * FARADAY)], // two Fe2+ formed, 2 e−
+  ["Fe: Fe3O4(s) / Fe2+", (-3 * FE2_SHIFT) / (2 * FARADAY)], // three Fe2+ formed, 2 e−
+  // Fe2O3 + 6H+ = 2Fe3+ + 3H2O: ΔG°r rises by 2·shift → log K falls by 2·shift/(RT ln10) → pH of the line falls by that/6
+  ["Fe: Fe2O3(s) / Fe3+", -(2 * FE3_SHIFT) / (GAS_CONSTANT * T0 * LN10) / 6],
+  ["Cu: Cu2+ / CuO(s)", (7.35 - 7.89) / 2], // tenorite log*Ks10 7.35 (NBS 1982) against 7.89 (Atlas), two H+
+  // 2CrO4 2- + 10H+ + 6e- = Cr2O3 + 5H2O: NBS Cr2O3 −1058.1 against the Atlas's −1046.8 kJ/mol, NBS CrO4 2- −727.75
+  // against Latimer's −736.8 kJ/mol (−176.1 kcal, from memory): E° 1.362 V here, 1.311 V in the Atlas
+  ["Cr: CrO42- / Cr2O3(s)", ((-(-1058.1 - -1046.8) + 2 * (-727.75 - -736.8)) * 1000) / (6 * FARADAY)],
+]);
 
-const atlasDisagreements: AtlasDisagreement[] = [
-  {
-    metal: "Fe",
-    pair: ["Fe2+", "Fe(s)"],
-    equation: "E = −0.440 + 0.0295 log(Fe2+)",
-    kind: "line",
-    e0: -0.44,
-    hPerN: 0,
-    logCoef: 0.0295,
-    source: ATLAS,
-    predicted: FE2_SHIFT / (2 * FARADAY),
-    why: "one Fe2+ oxidised, 2 e−",
-  },
-  {
-    metal: "Fe",
-    pair: ["Fe2O3(s)", "Fe2+"],
-    equation: "E = 0.728 − 0.1773 pH − 0.0591 log(Fe2+)",
-    kind: "line",
-    e0: 0.728,
-    hPerN: 3,
-    logCoef: -0.0591,
-    source: ATLAS,
-    predicted: (-2 * FE2_SHIFT) / (2 * FARADAY),
-    why: "two Fe2+ formed, 2 e−",
-  },
-  {
-    metal: "Fe",
-    pair: ["Fe3O4(s)", "Fe2+"],
-    equation: "E = 0.980 − 0.2364 pH − 0.0886 log(Fe2+)",
-    kind: "line",
-    e0: 0.98,
-    hPerN: 4,
-    logCoef: -0.0886,
-    source: ATLAS,
-    predicted: (-3 * FE2_SHIFT) / (2 * FARADAY),
-    why: "three Fe2+ formed, 2 e−",
-  },
-  {
-    metal: "Fe",
-    pair: ["Fe2O3(s)", "Fe3+"],
-    equation: "log(Fe3+) = −0.72 − 3 pH",
-    kind: "vertical",
-    pH0: -0.72 / 3,
-    logCoefPH: -1 / 3,
-    h: 3,
-    source: ATLAS,
-    // Fe2O3 + 6H+ = 2Fe3+ + 3H2O: ΔG°r rises by 2·shift → log K falls by 2·shift/(RT ln10) → pH of the line falls by that/6
-    predicted: -(2 * FE3_SHIFT) / (GAS_CONSTANT * T0 * LN10) / 6,
-    why: "two Fe3+ formed, six H+",
-  },
-  {
-    metal: "Cu",
-    pair: ["Cu2+", "CuO(s)"],
-    equation: "log(Cu2+) = 7.89 − 2 pH",
-    kind: "vertical",
-    pH0: 7.89 / 2,
-    logCoefPH: -1 / 2,
-    h: 2,
-    source: ATLAS,
-    predicted: (7.35 - 7.89) / 2,
-    why: "tenorite log*Ks10 7.35 (NBS 1982) against 7.89 (Atlas)",
-  },
-  {
-    // 2CrO4 2- + 10H+ + 6e- = Cr2O3 + 5H2O: NBS Cr2O3 −1058.1 against the Atlas's −1046.8 kJ/mol, NBS CrO4 2- −727.75
-    // against Latimer's −736.8 kJ/mol (−176.1 kcal, from memory): E° 1.362 V here, 1.311 V in the Atlas
-    metal: "Cr",
-    pair: ["CrO42-", "Cr2O3(s)"],
-    equation: "E = 1.311 − 0.0985 pH + 0.0197 log(CrO4 2-)",
-    kind: "line",
-    e0: 1.311,
-    hPerN: 10 / 6,
-    logCoef: 0.0197,
-    source: ATLAS,
-    predicted: ((-(-1058.1 - -1046.8) + 2 * (-727.75 - -736.8)) * 1000) / (6 * FARADAY),
-    why: "Cr2O3 (NBS −1058.1, Atlas −1046.8 kJ/mol) and CrO4 2- (NBS −727.75, Latimer −736.8 kJ/mol), 6 e−",
-  },
-];
+/** An Atlas line: E = value − hPerN·k·pH + logCoef·log10(a), or a vertical line pH = value − log10(a)/h. */
+const atlasLine = z.discriminatedUnion("kind", [
+  z.strictObject({
+    element: z.string(),
+    pair: z.tuple([z.string(), z.string()]),
+    equation: z.string(),
+    kind: z.literal("line"),
+    hPerN: z.number(),
+    logCoef: z.number(),
+  }),
+  z.strictObject({
+    element: z.string(),
+    pair: z.tuple([z.string(), z.string()]),
+    equation: z.string(),
+    kind: z.literal("vertical"),
+    h: z.number().positive(),
+  }),
+]);
+
+/** The offset must match the prediction within 10 mV (or 0.05 pH); the note names the data difference. */
+const atlasDisagreements = loadReferenceFixture(
+  new URL("./fixtures/metals-group-a/atlas-disagreements.json", import.meta.url),
+  atlasLine,
+  { ceiling: (c) => (c.inputs.kind === "line" ? 0.01 : 0.05) },
+);
 
 describe("group A metals: Atlas lines where the Atlas used other data", () => {
   for (const line of atlasDisagreements) {
-    it(`${line.metal}: ${line.pair[0]} / ${line.pair[1]}: ${line.equation} (${line.source}); offset explained by ${line.why}`, () => {
-      const boundary = pairBoundary(systems.get(line.metal)!, line.pair[0], line.pair[1]);
-      expect(boundary?.kind).toBe(line.kind);
-      if (boundary?.kind === "line") {
-        const atlas = line.e0! + line.logCoef! * LOG_A;
+    const { inputs } = line;
+    const predicted = PREDICTED.get(line.id)!;
+    it(`${line.id}: ${inputs.equation} (${line.source}); offset explained by ${line.note}`, () => {
+      const boundary = pairBoundary(systems.get(inputs.element as Metal)!, inputs.pair[0], inputs.pair[1]);
+      expect(predicted, line.id).toBeDefined();
+      expect(boundary?.kind).toBe(inputs.kind);
+      if (boundary?.kind === "line" && inputs.kind === "line") {
+        const atlas = line.value + inputs.logCoef * LOG_A;
         const offset = boundary.intercept - atlas;
         expect(Math.abs(offset)).toBeGreaterThan(0.03);
         expect(
-          Math.abs(offset - line.predicted),
-          `offset ${offset.toFixed(4)} V, predicted ${line.predicted.toFixed(4)} V`,
-        ).toBeLessThanOrEqual(0.01);
-        expect(Math.abs(boundary.slope - -line.hPerN! * K25)).toBeLessThan(1e-12);
-      } else if (boundary?.kind === "vertical") {
-        const atlas = line.pH0! + line.logCoefPH! * LOG_A;
+          Math.abs(offset - predicted),
+          `offset ${offset.toFixed(4)} V, predicted ${predicted.toFixed(4)} V`,
+        ).toBeLessThanOrEqual(line.tolerance);
+        expect(Math.abs(boundary.slope - -inputs.hPerN * K25)).toBeLessThan(1e-12);
+      } else if (boundary?.kind === "vertical" && inputs.kind === "vertical") {
+        const atlas = line.value + (-1 / inputs.h) * LOG_A;
         const offset = boundary.pH - atlas;
-        expect(Math.abs(offset)).toBeGreaterThan(0.5 / line.h!);
+        expect(Math.abs(offset)).toBeGreaterThan(0.5 / inputs.h);
         expect(
-          Math.abs(offset - line.predicted),
-          `offset ${offset.toFixed(3)} pH, predicted ${line.predicted.toFixed(3)}`,
-        ).toBeLessThanOrEqual(0.05);
+          Math.abs(offset - predicted),
+          `offset ${offset.toFixed(3)} pH, predicted ${predicted.toFixed(3)}`,
+        ).toBeLessThanOrEqual(line.tolerance);
       }
     });
   }

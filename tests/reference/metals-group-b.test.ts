@@ -7,6 +7,8 @@
  *
  * All check values below are recalled from the named publications (no copy at hand): each source string says so.
  * Alkaline couples are written with OH−, so they also depend on the water records (Kw).
+ *
+ * The check values, tolerances and sources live in fixtures/metals-group-b/*.json (loaded and validated by the runners).
  */
 import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
