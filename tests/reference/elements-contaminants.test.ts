@@ -14,7 +14,7 @@
  * also come from memory (see each file's references); a check passes only where two independent recollections
  * agree, and a round trip (record derived from the very value checked) is labelled as such.
  *
- * The check values, tolerances and sources live in fixtures/elements-contaminants/*.json (loaded and validated by the runners).
+ * Check values, tolerances and sources: fixtures/elements-contaminants/*.json, validated on load.
  */
 import { describe, expect, it } from "vitest";
 import { z } from "zod";

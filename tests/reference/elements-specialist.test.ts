@@ -10,7 +10,7 @@
  * and platinum's ions, oxides and chloro-complexes were themselves derived from CRC/Atlas potentials (their
  * records say so): those checks are labelled as arithmetic round trips, and platinum has no independent check.
  *
- * The check values, tolerances and sources live in fixtures/elements-specialist/*.json (loaded and validated by the runners).
+ * Check values, tolerances and sources: fixtures/elements-specialist/*.json, validated on load.
  */
 import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";

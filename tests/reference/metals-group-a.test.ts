@@ -12,7 +12,7 @@
  * No copy of these publications was at hand: every check value is recalled from memory and says so.
  * Alkaline couples are written with OH−, so they also depend on the water records (Kw).
  *
- * The check values, tolerances and sources live in fixtures/metals-group-a/*.json (loaded and validated by the runners).
+ * Check values, tolerances and sources: fixtures/metals-group-a/*.json, validated on load.
  */
 import { describe, expect, it } from "vitest";
 import { z } from "zod";

@@ -8,7 +8,7 @@
  * All check values below are recalled from the named publications (no copy at hand): each source string says so.
  * Alkaline couples are written with OH−, so they also depend on the water records (Kw).
  *
- * The check values, tolerances and sources live in fixtures/metals-group-b/*.json (loaded and validated by the runners).
+ * Check values, tolerances and sources: fixtures/metals-group-b/*.json, validated on load.
  */
 import { describe, expect, it } from "vitest";
 import { getDatabase } from "../../src/chemistry/database";
