@@ -114,7 +114,8 @@ const PREDICTED = new Map<string, number>([
   ["Fe: Fe2+ / Fe(s)", FE2_SHIFT / (2 * FARADAY)], // one Fe2+ oxidised, 2 e−
   ["Fe: Fe2O3(s) / Fe2+", (-2 * FE2_SHIFT) / (2 * FARADAY)], // two Fe2+ formed, 2 e−
   ["Fe: Fe3O4(s) / Fe2+", (-3 * FE2_SHIFT) / (2 * FARADAY)], // three Fe2+ formed, 2 e−
-  // Fe2O3 + 6H+ = 2Fe3+ + 3H2O: ΔG°r rises by 2·shift → log K falls by 2·shift/(RT ln10) → pH of the line falls by that/6
+  // Fe2O3 + 6H+ = 2Fe3+ + 3H2O: ΔG°r rises by 2·shift → log K falls by 2·shift/(RT ln10) → the line's pH falls by
+  // that/6
   ["Fe: Fe2O3(s) / Fe3+", -(2 * FE3_SHIFT) / (GAS_CONSTANT * T0 * LN10) / 6],
   ["Cu: Cu2+ / CuO(s)", (7.35 - 7.89) / 2], // tenorite log*Ks10 7.35 (NBS 1982) against 7.89 (Atlas), two H+
   // 2CrO4 2- + 10H+ + 6e- = Cr2O3 + 5H2O: NBS Cr2O3 −1058.1 against the Atlas's −1046.8 kJ/mol, NBS CrO4 2- −727.75
