@@ -4,10 +4,9 @@
  * chosen electrode at the row's own temperature when it has one (the reference electrode sits in that water),
  * otherwise at the diagram's temperature. Pure: no host, no DOM.
  */
-import { boundText, MAX_POTENTIAL, PH_MAX, PH_MIN } from "../chemistry/domain";
+import { boundText, MAX_CELSIUS, MAX_POTENTIAL, MIN_CELSIUS, PH_MAX, PH_MIN } from "../chemistry/domain";
 import { getElectrodes, type Electrode, type ElectrodeTable } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
-import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import type { LigandName } from "../chemistry/ligand-cells";
 import { ColumnMapping, findHeaderRow, POINT_NUMBER, toCelsius, WaterColumn } from "../tables";
 import type { PotentialUnit, SampleInput } from "../diagram/diagram-model";
