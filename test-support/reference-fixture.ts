@@ -31,7 +31,7 @@ export function referenceCheck<I extends z.ZodType>(inputs: I) {
     tolerance: z.number().nonnegative(),
     unit: z.string().min(1),
     source: sourceText,
-    /** Set where the record was derived from this very value: the check then proves the arithmetic only. */
+    /** Set where the record was derived from this very value (or the same published formula): arithmetic only. */
     roundTrip: z.literal(true).optional(),
     differsFrom: differsFrom.optional(),
     note: z.string().min(1).optional(),
