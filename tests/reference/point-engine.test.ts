@@ -190,21 +190,22 @@ describe("DISSOLVED against an independent controlling-solid computation", () =>
 describe("equilibrium lead solubility in carbonate water against Schock 1980", () => {
   // Schock, M.R., "Response of lead solubility to dissolved carbonate in drinking water", J. AWWA 72:695 (1980),
   // figure of total soluble Pb against pH at 25 °C for several DIC: values read from the figure, from memory
-  // (uncertain by about a factor of 2). Tolerance 0.5 log units: the hydrocerussite constant alone is uncertain by
+  // (uncertain by about a factor of 2; fixtures/lead/schock-1980-curve.json). Tolerance 0.5 log units: the hydrocerussite constant alone is uncertain by
   // about 1.3 log units in the literature (data/species/carbonate.json, TL84) and divides by 3 in log Pb.
   // With Schock's own pair in the records (data/species/carbonate.json, S80) the curve at pH 7–8 is matched; at
   // pH 9.5 the records' hydrocerussite holds 0.6 log units more lead than the figure reading: pinned below as a
   // documented disagreement (the hydroxo- and carbonato-complexes there are from other compilations than Schock's).
-  const points = [
-    { dicMgC: 4.8, pH: 7.0, mgPerL: 0.4 },
-    { dicMgC: 4.8, pH: 8.0, mgPerL: 0.15 },
-    { dicMgC: 48, pH: 8.0, mgPerL: 0.3 },
-  ];
+  const points = loadReferenceFixture(
+    new URL("./fixtures/lead/schock-1980-curve.json", import.meta.url),
+    z.strictObject({ dicMgC: z.number(), pH: z.number(), potential: z.number() }),
+    { ceiling: () => 0.5 },
+  );
   for (const p of points) {
-    it(`DIC ${p.dicMgC} mg C/L, pH ${p.pH}: about ${p.mgPerL} mg/L`, () => {
-      const answer = dissolvedEquilibrium(db, "Pb", p.pH, 0.3, water({ carbonate: p.dicMgC / 12011 }));
+    const { dicMgC, pH, potential } = p.inputs;
+    it(`DIC ${dicMgC} mg C/L, pH ${pH}: about ${p.value} mg/L`, () => {
+      const answer = dissolvedEquilibrium(db, "Pb", pH, potential, water({ carbonate: dicMgC / 12011 }));
       const mgPerL = answer.total! * 207.2e3;
-      expect(Math.abs(Math.log10(mgPerL / p.mgPerL))).toBeLessThan(0.5);
+      expect(Math.abs(Math.log10(mgPerL / p.value))).toBeLessThan(p.tolerance);
     });
   }
   it("DIC 4.8 mg C/L, pH 9.5: the figure reads about 0.03 mg/L; the records give 0.5–0.8 log units more (hydrocerussite; documented)", () => {
