@@ -14,7 +14,7 @@
  * far below ligand totals in waters).
  */
 import { FARADAY, T0 } from "./constants";
-import { correspondenceBasis } from "./criss-cobble";
+import { correspondenceBasis, NO_CORRESPONDENCE } from "./criss-cobble";
 import { LigandTable, rowGibbs } from "./species-tables";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
@@ -52,17 +52,27 @@ export class LigandAtPoint {
   private lastCelsius = NOT_A_NUMBER;
   private lastLn = 0;
   private readonly redox: boolean;
+  /** ΔG°r(25 °C), ΔS°r and ΔCp°r per faraday (V, V/K), and −ν_H+, per species. */
+  private readonly g0PerF: Float64Array;
+  private readonly sPerF: Float64Array;
+  private readonly cpPerF: Float64Array;
+  private readonly minusProton: Float64Array;
   /** ln a_P before the saturation cap. */
   private lnUnsaturated = 0;
 
   constructor(private readonly table: LigandTable) {
     const n = table.species.length;
     this.redox = table.electron.some((x) => x !== 0);
+    this.g0PerF = table.g0.map((x) => x / FARADAY);
+    this.sPerF = table.s.map((x) => x / FARADAY);
+    this.cpPerF = table.cp.map((x) => x / FARADAY);
+    this.minusProton = table.proton.map((x) => -x);
     this.g = new Float64Array(n);
     this.b = new Float64Array(n);
     this.e = new Float64Array(n);
     this.u = new Float64Array(n);
     this.w = new Float64Array(n);
+    table.electron.forEach((x, j) => (this.e[j] = -x)); // dg_j/dE does not depend on temperature
   }
 
   /**
@@ -76,12 +86,12 @@ export class LigandAtPoint {
 
   private setTemperature(celsius: number, dT: number, shape: number, k: number, f: number): void {
     const t = this.table;
-    const inverseF = 1 / FARADAY;
     const basis = correspondenceBasis(dT + T0);
-    for (let j = 0; j < t.g0.length; j++) {
-      this.g[j] = rowGibbs(t, j, dT, shape, basis) * inverseF;
-      this.b[j] = -t.proton[j] * k;
-      this.e[j] = -t.electron[j];
+    const plain = basis === NO_CORRESPONDENCE; // at and below 100 °C: constant ΔCp°r, from the per-faraday columns
+    const { g, b, g0PerF, sPerF, cpPerF, minusProton } = this;
+    for (let j = 0; j < g.length; j++) {
+      g[j] = plain ? g0PerF[j] - sPerF[j] * dT + cpPerF[j] * shape : rowGibbs(t, j, dT, shape, basis) / FARADAY;
+      b[j] = minusProton[j] * k;
     }
     this.f = f;
     this.celsius = celsius;
