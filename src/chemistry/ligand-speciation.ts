@@ -20,8 +20,11 @@ import { LigandTable, rowGibbs } from "./species-tables";
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { abs, exp, log, max, min } = Math;
 const INF = 1 / 0;
-/** Log-gap below which a minor form is taken as absent for the straightness of ln a_P (e^−30 ≈ 1e-13). */
-const MIXING_GAP = 30;
+/**
+ * Log-gap below which a minor form is taken as absent for the straightness of ln a_P: ln a_P then departs from its
+ * line by at most ln(1 + 5·e^−20) ≈ 1e-8, a few 1e-10 V in g — far inside the boundary tolerance (1e-7 V).
+ */
+const MIXING_GAP = 20;
 const NOT_A_NUMBER = 0 / 0;
 /** Log-gap past which a form adds nothing to a sum of at least 1 in double precision (six forms of e^−40 < 2^−53). */
 const NEGLIGIBLE_GAP = -40;
@@ -166,7 +169,7 @@ export class LigandAtPoint {
   }
 
   /**
-   * Distance in E (V, either way) over which ln a_P stays linear in E to e^−30 from the last point: one form carries
+   * Distance in E (V, either way) over which ln a_P stays linear in E to 5·e^−20 from the last point: one form carries
    * the total (or the solid saturates) and no saturation edge is crossed. Where it is 0 the forms mix (a bend).
    */
   get straightFor(): number {
@@ -174,7 +177,7 @@ export class LigandAtPoint {
     const solid = this.table.solidIndex;
     let leader = -1;
     for (let j = 0; j < u.length; j++) if (u[j] === top) leader = j;
-    // how far the leading form keeps the others below e^−30 (their log-gap closes at f·|e_j − e_leader| per volt)
+    // how far the leading form keeps the others below e^−20 (their log-gap closes at f·|e_j − e_leader| per volt)
     let straight = INF;
     for (let j = 0; j < u.length; j++) {
       if (j === solid || j === leader) continue;
