@@ -140,11 +140,11 @@ export class PointEngine {
     const newTemperature = celsius !== this.celsius;
     if (newTemperature) this.setTemperature(celsius);
     if (newTemperature || activity !== this.activity || ionicStrength !== this.ionicStrength) {
+      if (activity !== this.activity) this.lnActivity = log(activity);
       this.activity = activity;
       this.ionicStrength = ionicStrength;
       if (ionicStrength > 0 && this.debyeHuckel !== this.debyeHuckel) this.debyeHuckel = debyeHuckelA(celsius);
       this.lnGamma1 = lnGammaWithA(ionicStrength, this.debyeHuckel);
-      this.lnActivity = log(activity);
       this.due |= newTemperature ? TEMPERATURE_DUE | THRESHOLD_DUE : THRESHOLD_DUE;
       this.repeats = 0;
     } else this.repeats++;
