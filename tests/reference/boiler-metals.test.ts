@@ -96,6 +96,12 @@ describe("iron at 250–300 °C (Cowan & Staehle 1971; Beverskog & Puigdomenech 
 });
 
 describe("refusals that remain above 100 °C", () => {
+  it("copper is refused at 200 °C, naming only Cu2(OH)2 2+ (no published S° and no analogue of its charge types)", () => {
+    const out = speciesAt("Cu", 7, 0, 200)[0][0] as CellError;
+    expect(out).toBeInstanceOf(CellError);
+    expect(out.message).toMatch(/Cu is modelled 0–100 °C only; above 100 °C the records lack S° for Cu2\(OH\)22\+$/);
+  });
+
   it("iron with chloride is refused at 250 °C, naming FeCl+ (its chloro-complexes lack S°)", () => {
     const out = speciesAt("Fe", 7, -0.5, 250, 1e-6, 0, 0.01)[0][0] as CellError;
     expect(out).toBeInstanceOf(CellError);

@@ -25,6 +25,9 @@ const EXCHANGES: Record<string, Record<string, number>> = {
   "HFeO2-": { "Fe2+": -1, "Al(OH)4-": -1, "Fe3+": -1, "HFeO2-": 1, "H2O(l)": 1, "Al3+": 1, "FeOH2+": 1 },
   "Fe(OH)2+": { "FeOH2+": -1, "NiOH+": -1, "Fe(OH)2+": 1, "Ni2+": 1 },
   "Fe(OH)4-": { "Fe3+": -1, "Al(OH)4-": -1, "Fe(OH)4-": 1, "Al3+": 1 },
+  "CuOH+": { "Cu2+": -1, "NiOH+": -1, "CuOH+": 1, "Ni2+": 1 },
+  "HCuO2-": { "Cu2+": -1, "Al(OH)4-": -1, "Fe3+": -1, "HCuO2-": 1, "H2O(l)": 1, "Al3+": 1, "FeOH2+": 1 },
+  "CuO22-": { "Cu2+": -1, "BeO22-": -1, "CuO22-": 1, "Be2+": 1 },
 };
 
 const entropy = (formula: string): number => OUTSIDE.get(formula)?.S ?? db.require(formula).S!;
