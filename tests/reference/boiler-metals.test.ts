@@ -5,7 +5,10 @@
  *
  * Published diagrams, read from memory (no copy at hand): Cowan, R.L., Staehle, R.W., "The thermodynamics and
  * electrode kinetics of the iron–water system at elevated temperatures", J. Electrochem. Soc. 118, 557 (1971);
- * Beverskog, B., Puigdomenech, I., "Revised Pourbaix diagrams for iron at 25–300 °C", Corros. Sci. 38, 2121 (1996).
+ * Beverskog, B., Puigdomenech, I., "Revised Pourbaix diagrams for iron at 25–300 °C", Corros. Sci. 38, 2121 (1996);
+ * "Revised Pourbaix diagrams for zinc at 25–300 °C", Corros. Sci. 39, 107 (1997); "Revised Pourbaix diagrams for
+ * chromium at 25–300 °C", Corros. Sci. 39, 43 (1997). Only features recalled with confidence are checked: which
+ * field covers a point, not the position of a line to a few mV.
  */
 import { describe, expect, it } from "vitest";
 import snapshot from "../fixtures/species-25c-snapshot.json";
@@ -17,7 +20,7 @@ import { boundaryFrom, speciesAt } from "../../src/functions/stability-functions
 
 const db = getDatabase();
 /** Metals whose every pure-water species now has S° (the rest are still refused above 100 °C). */
-const OPENED = ["Fe"] as const;
+const OPENED = ["Fe", "Zn", "Cr"] as const;
 
 const boundary = (metal: string, pH: number, E: number, celsius: number, direction: 1 | -1) =>
   boundaryFrom(metal, pH, E, celsius, 1e-6, 0, 0, 0, 0, 0, direction)[0][0];
@@ -95,7 +98,30 @@ describe("iron at 250–300 °C (Cowan & Staehle 1971; Beverskog & Puigdomenech 
   });
 });
 
+describe("zinc and chromium at 250–300 °C (Beverskog & Puigdomenech 1997, diagrams at 10^-6 read from memory)", () => {
+  for (const celsius of [250, 300]) {
+    const neutral = neutralPH(celsius);
+    const hydrogen = (pH: number) => waterLine(pH, celsius, "H2");
+    it(`${celsius} °C: zinc is immune only well below the hydrogen line (0.8 V below it at pH(T) ${neutral.toFixed(2)}) and dissolves as Zn2+ just above it at pH(T) 3`, () => {
+      expect(speciesAt("Zn", neutral, hydrogen(neutral) - 0.8, celsius, 1e-6)[0][0]).toBe("Zn(s)");
+      expect(speciesAt("Zn", neutral, hydrogen(neutral) + 0.01, celsius, 1e-6)[0][0]).not.toBe("Zn(s)");
+      expect(speciesAt("Zn", 3, hydrogen(3) + 0.01, celsius, 1e-6)[0][0]).toBe("Zn2+");
+    });
+    it(`${celsius} °C: chromium passive, Cr2O3(s) just above the hydrogen line at pH(T) ${neutral.toFixed(2)}; chromate CrO4 2- just below the oxygen line at pH(T) 10`, () => {
+      expect(speciesAt("Cr", neutral, hydrogen(neutral) + 0.01, celsius, 1e-6)[0][0]).toBe("Cr2O3(s)");
+      expect(speciesAt("Cr", 10, waterLine(10, celsius, "O2") - 0.01, celsius, 1e-6)[0][0]).toBe("CrO42-");
+      expect(speciesAt("Cr", neutral, hydrogen(neutral) - 0.8, celsius, 1e-6)[0][0]).toBe("Cr(s)");
+    });
+  }
+});
+
 describe("refusals that remain above 100 °C", () => {
+  it("nickel is refused at 200 °C, naming only Ni4(OH)4 4+ (no published S° and no analogue of its charge types)", () => {
+    const out = speciesAt("Ni", 7, 0, 200)[0][0] as CellError;
+    expect(out).toBeInstanceOf(CellError);
+    expect(out.message).toMatch(/Ni is modelled 0–100 °C only; above 100 °C the records lack S° for Ni4\(OH\)44\+$/);
+  });
+
   it("copper is refused at 200 °C, naming only Cu2(OH)2 2+ (no published S° and no analogue of its charge types)", () => {
     const out = speciesAt("Cu", 7, 0, 200)[0][0] as CellError;
     expect(out).toBeInstanceOf(CellError);

@@ -28,8 +28,16 @@ const EXCHANGES: Record<string, Record<string, number>> = {
   "CuOH+": { "Cu2+": -1, "NiOH+": -1, "CuOH+": 1, "Ni2+": 1 },
   "HCuO2-": { "Cu2+": -1, "Al(OH)4-": -1, "Fe3+": -1, "HCuO2-": 1, "H2O(l)": 1, "Al3+": 1, "FeOH2+": 1 },
   "CuO22-": { "Cu2+": -1, "BeO22-": -1, "CuO22-": 1, "Be2+": 1 },
+  "HNiO2-": { "Ni2+": -1, "Al(OH)4-": -1, "Fe3+": -1, "HNiO2-": 1, "H2O(l)": 1, "Al3+": 1, "FeOH2+": 1 },
+  "ZnOH+": { "Zn2+": -1, "NiOH+": -1, "ZnOH+": 1, "Ni2+": 1 },
+  "Zn(OH)3-": { "Zn2+": -1, "Al(OH)4-": -1, "Fe3+": -1, "Zn(OH)3-": 1, "Al3+": 1, "FeOH2+": 1 },
+  "Zn(OH)42-": { "Zn2+": -1, "BeO22-": -1, "H2O(l)": -2, "Zn(OH)42-": 1, "Be2+": 1 },
+  "Cr2+": { "Cr2+": -1, "Fe(s)": -1, "Fe2+": 1, "Cr(s)": 1 },
+  "Cr3+": { "Cr3+": -1, "Fe(s)": -1, "Fe3+": 1, "Cr(s)": 1 },
+  "CrOH2+": { "Cr3+": -1, "FeOH2+": -1, "CrOH2+": 1, "Fe3+": 1 },
+  "Cr(OH)2+": { "CrOH2+": -1, "NiOH+": -1, "Cr(OH)2+": 1, "Ni2+": 1 },
+  "Cr(OH)4-": { "Cr3+": -1, "Al(OH)4-": -1, "Cr(OH)4-": 1, "Al3+": 1 },
 };
-
 const entropy = (formula: string): number => OUTSIDE.get(formula)?.S ?? db.require(formula).S!;
 const chargeOf = (formula: string): number => OUTSIDE.get(formula)?.charge ?? db.require(formula).charge;
 
