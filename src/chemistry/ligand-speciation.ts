@@ -23,6 +23,8 @@ const INF = 1 / 0;
 /** Log-gap below which a minor form is taken as absent for the straightness of ln a_P (e^−30 ≈ 1e-13). */
 const MIXING_GAP = 30;
 const NOT_A_NUMBER = 0 / 0;
+/** Log-gap past which a form adds nothing to a sum of at least 1 in double precision (six forms of e^−40 < 2^−53). */
+const NEGLIGIBLE_GAP = -40;
 
 export class LigandAtPoint {
   private celsius = NOT_A_NUMBER;
@@ -32,18 +34,27 @@ export class LigandAtPoint {
   private readonly b: Float64Array;
   private readonly e: Float64Array;
   private readonly u: Float64Array;
-  /** d ln a_P / dE at the last point (for boundary tracing). */
-  slopeE = 0;
   /** Whether the solid was saturated at the last point. */
   saturated = false;
-  /**
-   * Distance in E (V, either way) over which ln a_P stays linear in E to e^−30 from the last point: one form carries
-   * the total (or the solid saturates) and no saturation edge is crossed. Where it is 0 the forms mix (a bend).
-   */
-  straightFor = 0;
+  /** The last point's exponents u_j (one per species), their largest, and the pH and E they were taken at. */
+  private top = 0;
+  private lastPH = 0;
+  private lastE = 0;
+  /** d ln a_P/dE at the last point, once asked for (slopeKnown). A flag, not NaN: minifiers turn 0/0 into the global. */
+  private slope = 0;
+  private slopeKnown = false;
+  /** The last call's other inputs and answer (lastLn), and whether any form differs in electrons (E matters). */
+  private lastLnTotal = 0;
+  private lastLnGamma1 = 0;
+  private lastCelsius = NOT_A_NUMBER;
+  private lastLn = 0;
+  private readonly redox: boolean;
+  /** ln a_P before the saturation cap. */
+  private lnUnsaturated = 0;
 
   constructor(private readonly table: LigandTable) {
     const n = table.species.length;
+    this.redox = table.electron.some((x) => x !== 0);
     this.g = new Float64Array(n);
     this.b = new Float64Array(n);
     this.e = new Float64Array(n);
@@ -72,49 +83,98 @@ export class LigandAtPoint {
     this.celsius = celsius;
   }
 
-  /** ln a(pivot) at (pH, E) for a total (ln, mol/kg) and ln γ of a unit charge; sets slopeE and saturated. */
+  /** ln a(pivot) at (pH, E) for a total (ln, mol/kg) and ln γ of a unit charge; sets saturated. */
   lnPivot(lnTotal: number, lnGamma1: number, pH: number, E: number): number {
+    // a ligand without redox forms (carbonate, phosphate) is asked again at one pH along a boundary search
+    if (
+      pH === this.lastPH &&
+      lnTotal === this.lastLnTotal &&
+      lnGamma1 === this.lastLnGamma1 &&
+      this.celsius === this.lastCelsius &&
+      (E === this.lastE || !this.redox)
+    )
+      return this.lastLn;
     const { g, b, e, u, f } = this;
     const z2 = this.table.chargeSquared;
     const solid = this.table.solidIndex;
+    const n = g.length;
     let top = -INF;
-    for (let j = 0; j < g.length; j++) {
-      if (j === solid) continue;
-      u[j] = -f * (g[j] + b[j] * pH + e[j] * E) - z2[j] * lnGamma1;
-      if (u[j] > top) top = u[j];
+    for (let j = 0; j < n; j++) {
+      const uj = j === solid ? -INF : -f * (g[j] + b[j] * pH + e[j] * E) - z2[j] * lnGamma1;
+      u[j] = uj;
+      if (uj > top) top = uj;
     }
     let sum = 0;
+    for (let j = 0; j < n; j++) {
+      const gapToTop = u[j] - top; // the solid's u is −∞
+      if (gapToTop === 0) sum += 1;
+      else if (gapToTop > NEGLIGIBLE_GAP) sum += exp(gapToTop);
+    }
+    // ln a_P = ln total − LSE(u)
+    let ln = lnTotal - top - log(sum);
+    this.lnUnsaturated = ln;
+    this.saturated = false;
+    if (solid >= 0) {
+      const cap = f * (g[solid] + b[solid] * pH + e[solid] * E); // a_S(s) = 1
+      if (ln > cap) {
+        ln = cap;
+        this.saturated = true;
+      }
+    }
+    this.top = top;
+    this.lastPH = pH;
+    this.lastE = E;
+    this.lastLnTotal = lnTotal;
+    this.lastLnGamma1 = lnGamma1;
+    this.lastCelsius = this.celsius;
+    this.lastLn = ln;
+    this.slopeKnown = false;
+    return ln;
+  }
+
+  /** d ln a_P / dE at the last point (for boundary tracing): f·Σ w_j·e_j / Σ w_j, or the solid's slope if saturated. */
+  get slopeE(): number {
+    if (!this.slopeKnown) {
+      this.slope = this.saturated ? this.f * this.e[this.table.solidIndex] : this.unsaturatedSlope();
+      this.slopeKnown = true;
+    }
+    return this.slope;
+  }
+
+  /** f·Σ w_j·e_j / Σ w_j at the last point (u_j = −f·g_j − …, dg_j/dE = e_j). */
+  private unsaturatedSlope(): number {
+    const { e, u, f, top } = this;
+    let sum = 0;
     let slope = 0;
-    let leader = -1;
-    for (let j = 0; j < g.length; j++) {
-      if (j === solid) continue;
+    for (let j = 0; j < u.length; j++) {
       const w = exp(u[j] - top);
-      if (u[j] === top) leader = j;
       sum += w;
       slope += w * e[j];
     }
-    // ln a_P = ln total − LSE(u);  d/dE = f·Σ w_j·e_j / Σ w_j   (u_j = −f·g_j − …, dg_j/dE = e_j)
-    let ln = lnTotal - top - log(sum);
-    this.slopeE = (f * slope) / sum;
+    return (f * slope) / sum;
+  }
+
+  /**
+   * Distance in E (V, either way) over which ln a_P stays linear in E to e^−30 from the last point: one form carries
+   * the total (or the solid saturates) and no saturation edge is crossed. Where it is 0 the forms mix (a bend).
+   */
+  get straightFor(): number {
+    const { g, b, e, u, f, top } = this;
+    const solid = this.table.solidIndex;
+    let leader = -1;
+    for (let j = 0; j < u.length; j++) if (u[j] === top) leader = j;
     // how far the leading form keeps the others below e^−30 (their log-gap closes at f·|e_j − e_leader| per volt)
     let straight = INF;
-    for (let j = 0; j < g.length; j++) {
+    for (let j = 0; j < u.length; j++) {
       if (j === solid || j === leader) continue;
       const rate = f * abs(e[j] - e[leader]);
       if (rate > 0) straight = min(straight, max(0, (top - u[j] - MIXING_GAP) / rate));
     }
-    this.saturated = false;
     if (solid >= 0) {
-      const cap = f * (g[solid] + b[solid] * pH + e[solid] * E); // a_S(s) = 1
-      const closing = abs(f * e[solid] - this.slopeE);
-      if (closing > 0) straight = min(straight, abs(cap - ln) / closing); // the saturation edge is a kink
-      if (ln > cap) {
-        ln = cap;
-        this.slopeE = f * e[solid];
-        this.saturated = true;
-      }
+      const cap = f * (g[solid] + b[solid] * this.lastPH + e[solid] * this.lastE);
+      const closing = abs(f * e[solid] - this.unsaturatedSlope());
+      if (closing > 0) straight = min(straight, abs(cap - this.lnUnsaturated) / closing); // the saturation edge: a kink
     }
-    this.straightFor = straight;
-    return ln;
+    return straight;
   }
 }

@@ -31,16 +31,23 @@ export interface PointCrossing {
 
 const TIE = 1e-12;
 
-/** The species dominant just past E in direction d (ties at E go to the one that stays lowest), with the ligands at E. */
+/** The species dominant just past E in direction d (ties at E go to the one that stays lowest); leaves linesAt(E). */
 function speciesPast(engine: PointEngine, pH: number, E: number, d: 1 | -1): number {
-  const first = engine.dominant(pH, E);
-  const gFirst = engine.g(first, pH, E);
+  engine.linesAt(pH, E);
+  const { lineG, lineSlope } = engine;
+  let first = -1;
+  let gFirst = INF;
+  for (let i = 0; i < lineG.length; i++) {
+    if (lineG[i] < gFirst) {
+      gFirst = lineG[i];
+      first = i;
+    }
+  }
   let best = first;
-  let bestSlope = d * engine.slopeE(first);
-  for (let i = 0; i < engine.size; i++) {
-    if (i === best || !engine.available(i)) continue;
-    if (engine.g(i, pH, E) - gFirst > TIE) continue;
-    const s = d * engine.slopeE(i);
+  let bestSlope = d * lineSlope[first];
+  for (let i = 0; i < lineG.length; i++) {
+    if (i === best || lineG[i] - gFirst > TIE) continue;
+    const s = d * lineSlope[i];
     if (s < bestSlope - TIE || (abs(s - bestSlope) <= TIE && i < best)) {
       best = i;
       bestSlope = s;
@@ -49,24 +56,22 @@ function speciesPast(engine: PointEngine, pH: number, E: number, d: 1 | -1): num
   return best;
 }
 
-/** Distance (in direction d) to the nearest crossing of the tangent lines of `here` by another species; the taker. */
-function tangentCrossing(
-  engine: PointEngine,
-  here: number,
-  pH: number,
-  E: number,
-  d: 1 | -1,
-): { distance: number; next: number } {
-  const gHere = engine.g(here, pH, E);
-  const sHere = d * engine.slopeE(here);
+/**
+ * Distance (in direction d) to the nearest crossing of the tangent lines of `here` by another species; the taker.
+ * Reads the lines of the engine's last linesAt (speciesPast at the same point).
+ */
+function tangentCrossing(engine: PointEngine, here: number, d: 1 | -1): { distance: number; next: number } {
+  const { lineG, lineSlope } = engine;
+  const gHere = lineG[here];
+  const sHere = d * lineSlope[here];
   let distance = INF;
   let next = -1;
   let nextSlope = INF;
-  for (let j = 0; j < engine.size; j++) {
-    if (j === here || !engine.available(j)) continue;
-    const sj = d * engine.slopeE(j);
+  for (let j = 0; j < lineG.length; j++) {
+    if (j === here || lineG[j] === INF) continue;
+    const sj = d * lineSlope[j];
     if (sj >= sHere) continue; // never overtakes in this direction
-    const t = max(0, (engine.g(j, pH, E) - gHere) / (sHere - sj));
+    const t = max(0, (lineG[j] - gHere) / (sHere - sj));
     if (t < distance - TIE || (abs(t - distance) <= TIE && sj < nextSlope)) {
       distance = t;
       next = j;
@@ -83,15 +88,16 @@ export function pointBoundary(engine: PointEngine, pH: number, E: number, d: 1 |
   if (d * (limit - current) <= 0) return null;
   let here = speciesPast(engine, pH, current, d);
   if (!engine.hasSulfur) {
-    const { distance, next } = tangentCrossing(engine, here, pH, current, d);
+    const { distance, next } = tangentCrossing(engine, here, d);
     const at = current + d * distance;
     if (next < 0 || d * (limit - at) <= 0) return null;
     return crossing(at, here, next, d);
   }
   for (let step = 0; step < 10000; step++) {
-    const { distance } = tangentCrossing(engine, here, pH, current, d);
+    const { distance, next } = tangentCrossing(engine, here, d);
     // tangents are exact as far as the sulfur term stays linear; inside a bend, steps of at most MAX_STEP
-    const reach = min(distance, max(engine.sulfurStraightFor, MAX_STEP), d * (limit - current));
+    const straight = engine.sulfurStraightFor;
+    const reach = min(distance, max(straight, MAX_STEP), d * (limit - current));
     const probe = current + d * (reach + BOUNDARY_TOLERANCE / 4);
     const there = engine.dominant(pH, probe);
     if (there === here) {
@@ -100,13 +106,16 @@ export function pointBoundary(engine: PointEngine, pH: number, E: number, d: 1 |
       here = speciesPast(engine, pH, current, d);
       continue;
     }
-    return bisect(engine, pH, current, probe, here, d);
+    // lines straight all the way and the predicted taker found past it: the tangent crossing is the boundary
+    if (distance <= straight && reach === distance && there === next)
+      return crossing(current + d * distance, here, next, d);
+    return bisect(engine, pH, current, probe, here, there, d);
   }
   return null;
 }
 
 /**
- * Narrows [inside, outside] (species `here` at inside, another at outside) to BOUNDARY_TOLERANCE: the root of
+ * Narrows [inside, outside] (species `here` at inside, `atOutside` at outside) to BOUNDARY_TOLERANCE: the root of
  * g_other − g_here by linear interpolation between the ends (regula falsi) is tested with a pair of points
  * BOUNDARY_TOLERANCE apart around it, which closes the bracket at once when the estimate is good; every third step
  * is a bisection, so the bracket always shrinks.
@@ -117,9 +126,10 @@ function bisect(
   inside: number,
   outside: number,
   here: number,
+  atOutside: number,
   d: 1 | -1,
 ): PointCrossing {
-  let other = engine.dominant(pH, outside);
+  let other = atOutside;
   const half = BOUNDARY_TOLERANCE / 2;
   for (let step = 1; abs(outside - inside) > BOUNDARY_TOLERANCE && step < 200; step++) {
     const width = outside - inside;

@@ -26,12 +26,15 @@ import {
   SpeciesTable,
   speciesTable,
 } from "./species-tables";
-import { correspondenceBasis } from "./criss-cobble";
+import { correspondenceBasis, NO_CORRESPONDENCE } from "./criss-cobble";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { log } = Math;
 const INF = 1 / 0;
 const NOT_A_NUMBER = 0 / 0;
+/** Bits of PointEngine.due: aUnit, b and r (a new temperature); aThreshold (a new temperature, threshold or I). */
+const TEMPERATURE_DUE = 1;
+const THRESHOLD_DUE = 2;
 
 /** The water of a point: temperature (°C), threshold molality of dissolved metal, ligand totals (mol/kg), I. */
 export interface PointWater {
@@ -56,10 +59,23 @@ export class PointEngine {
   private readonly b: Float64Array;
   private readonly c: Float64Array;
   private readonly r: Float64Array;
+  // per species, fixed: ΔG°r(25 °C), ΔS°r and ΔCp°r per metal atom and per faraday (V, V/K), H+ per atom, 1/x
+  private readonly g0PerAtom: Float64Array;
+  private readonly sPerAtom: Float64Array;
+  private readonly cpPerAtom: Float64Array;
+  private readonly protonPerAtom: Float64Array;
+  private readonly perAtom: Float64Array;
+  /** linesAt's answers: g and dg/dE per species. */
+  readonly lineG: Float64Array;
+  readonly lineSlope: Float64Array;
+  /** Which per-species columns are out of date (TEMPERATURE_DUE, THRESHOLD_DUE bits); filled when first needed. */
+  private due = 0;
+  /** Rows in a row set with this temperature, threshold and ionic strength (0: this row brought new ones). */
+  private repeats = 0;
+  /** Whether the current temperature needs the correspondence terms (above 100 °C). */
+  private correspondence = false;
   /** aUnit plus the threshold-activity term of dissolved species, for the current (T, activity, I). */
   private readonly aThreshold: Float64Array;
-  /** aThreshold must be redone (a new temperature). */
-  private stale = true;
   private activity = NOT_A_NUMBER;
   /** Debye–Hückel A at the current temperature, found when an ionic strength first needs it. */
   private debyeHuckel = NOT_A_NUMBER;
@@ -93,6 +109,16 @@ export class PointEngine {
     this.c = new Float64Array(n);
     this.r = new Float64Array(n);
     this.aThreshold = new Float64Array(n);
+    this.lineG = new Float64Array(n);
+    this.lineSlope = new Float64Array(n);
+    const t = this.table;
+    const per = (column: ArrayLike<number>, scale = 1) => Float64Array.from(t.x, (x, i) => (column[i] * scale) / x);
+    this.g0PerAtom = per(t.g0, 1 / FARADAY);
+    this.sPerAtom = per(t.s, 1 / FARADAY);
+    this.cpPerAtom = per(t.cp, 1 / FARADAY);
+    this.protonPerAtom = per(t.proton, -1);
+    this.perAtom = Float64Array.from(t.x, (x) => 1 / x);
+    t.electron.forEach((e, i) => (this.c[i] = -e / t.x[i])); // dg/dE does not depend on temperature
   }
 
   get size(): number {
@@ -112,20 +138,17 @@ export class PointEngine {
     ionicStrength: number,
     phosphate = 0,
   ): void {
-    if (celsius !== this.celsius) this.setTemperature(celsius);
-    if (this.stale || activity !== this.activity || ionicStrength !== this.ionicStrength) {
+    const newTemperature = celsius !== this.celsius;
+    if (newTemperature) this.setTemperature(celsius);
+    if (newTemperature || activity !== this.activity || ionicStrength !== this.ionicStrength) {
       this.activity = activity;
       this.ionicStrength = ionicStrength;
       if (ionicStrength > 0 && this.debyeHuckel !== this.debyeHuckel) this.debyeHuckel = debyeHuckelA(celsius);
       this.lnGamma1 = lnGammaWithA(ionicStrength, this.debyeHuckel);
       this.lnActivity = log(activity);
-      const { dissolved, chargeSquared } = this.table;
-      const { aThreshold, aUnit, r, lnActivity, lnGamma1 } = this;
-      for (let i = 0, n = aUnit.length; i < n; i++) {
-        aThreshold[i] = aUnit[i] + (dissolved[i] ? r[i] * (lnActivity + chargeSquared[i] * lnGamma1) : 0);
-      }
-      this.stale = false;
-    }
+      this.due |= newTemperature ? TEMPERATURE_DUE | THRESHOLD_DUE : THRESHOLD_DUE;
+      this.repeats = 0;
+    } else this.repeats++;
     this.present =
       (carbonate > 0 ? NEEDS_CARBONATE : 0) |
       (sulfur > 0 ? NEEDS_SULFUR : 0) |
@@ -141,31 +164,52 @@ export class PointEngine {
     this.setWater(w.celsius, w.activity, w.carbonate, w.chloride, w.sulfur, w.ionicStrength, w.phosphate ?? 0);
   }
 
+  /** The scalars of a new temperature: dT, the ΔCp shape term, k = RT ln10/F and F/RT. */
   private setTemperature(celsius: number): void {
-    const t = this.table;
     const T = kelvin(celsius);
-    const dT = T - T0;
-    const shape = dT - T * log(T / T0);
-    const k = nernstFactor(T);
-    const rtOverF = (GAS_CONSTANT * T) / FARADAY;
-    const { aUnit, b, c, r } = this;
-    const { x, proton, electron } = t;
-    const inverseF = 1 / FARADAY;
-    const basis = correspondenceBasis(T);
-    for (let i = 0, n = x.length; i < n; i++) {
-      const perAtom = 1 / x[i];
-      aUnit[i] = rowGibbs(t, i, dT, shape, basis) * perAtom * inverseF;
-      b[i] = -proton[i] * k * perAtom;
-      c[i] = -electron[i] * perAtom;
-      r[i] = rtOverF * perAtom;
-    }
-    this.f = 1 / rtOverF;
+    this.dT = T - T0;
+    this.shape = this.dT - T * log(T / T0);
+    this.k = nernstFactor(T);
+    this.f = 1 / ((GAS_CONSTANT * T) / FARADAY);
+    this.correspondence = correspondenceBasis(T) !== NO_CORRESPONDENCE;
     this.celsius = celsius;
-    this.stale = true;
     this.debyeHuckel = NOT_A_NUMBER;
-    this.dT = dT;
-    this.shape = shape;
-    this.k = k;
+  }
+
+  /**
+   * Per species: a = ΔG°r(T)/(x·F) (aUnit; with RT/F·(ln threshold + z²·ln γ1)/x for dissolved species in
+   * aThreshold), b = −ν_H+·k/x and r = (RT/F)/x, in one pass, for what `due` says is out of date.
+   */
+  private ensureColumns(): void {
+    if (this.due === 0) return;
+    const newTemperature = (this.due & TEMPERATURE_DUE) !== 0;
+    this.due = 0;
+    const { aUnit, aThreshold, b, r, dT, shape, k, lnActivity, lnGamma1 } = this;
+    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom } = this;
+    const { dissolved, chargeSquared } = this.table;
+    if (newTemperature && this.correspondence) this.fillAboveCorrespondence();
+    const rtOverF = 1 / this.f;
+    const plain = newTemperature && !this.correspondence;
+    for (let i = 0, n = aUnit.length; i < n; i++) {
+      if (plain) {
+        aUnit[i] = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape; // ΔG°r(T), constant ΔCp°r (thermo.ts)
+        b[i] = protonPerAtom[i] * k;
+        r[i] = rtOverF * perAtom[i];
+      }
+      aThreshold[i] = dissolved[i] ? aUnit[i] + r[i] * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit[i];
+    }
+  }
+
+  /** aUnit, b and r above 100 °C, where ΔG°r(T) has the Criss–Cobble terms (criss-cobble.ts). */
+  private fillAboveCorrespondence(): void {
+    const t = this.table;
+    const basis = correspondenceBasis(this.dT + T0);
+    const rtOverF = 1 / this.f;
+    for (let i = 0, n = this.aUnit.length; i < n; i++) {
+      this.aUnit[i] = (rowGibbs(t, i, this.dT, this.shape, basis) * this.perAtom[i]) / FARADAY;
+      this.b[i] = this.protonPerAtom[i] * this.k;
+      this.r[i] = rtOverF * this.perAtom[i];
+    }
   }
 
   /** Exact ligand activities at (pH, E) into lnC, lnS, lnCl, lnP (HPO4²− from the α-fractions of orthophosphate). */
@@ -207,6 +251,7 @@ export class PointEngine {
 
   /** g of species i at the last point's ligand activities; `unit` = dissolved species at unit activity. */
   g(i: number, pH: number, E: number, unit = false): number {
+    this.ensureColumns();
     const t = this.table;
     let g = (unit ? this.aUnit[i] : this.aThreshold[i]) + this.b[i] * pH + this.c[i] * E;
     if (t.needs[i])
@@ -216,14 +261,54 @@ export class PointEngine {
     return g;
   }
 
+  /**
+   * g and dg/dE of every species at (pH, E) into lineG and lineSlope (+∞ and 0 where the water lacks a ligand the
+   * species needs): the tangent lines a boundary search follows, in one pass.
+   */
+  linesAt(pH: number, E: number): void {
+    this.ligandsAt(pH, E);
+    this.ensureColumns();
+    const t = this.table;
+    const { aThreshold, b, c, r, lineG, lineSlope } = this;
+    const { needs, sulfur } = t;
+    const absent = ~this.present;
+    const { lnC, lnS, lnCl, lnP } = this;
+    const sulfurSlope = this.sulfurSlope;
+    for (let i = 0, n = aThreshold.length; i < n; i++) {
+      const need = needs[i];
+      if (need & absent) {
+        lineG[i] = INF;
+        lineSlope[i] = 0;
+        continue;
+      }
+      let g = aThreshold[i] + b[i] * pH + c[i] * E;
+      if (need) g += r[i] * (t.carbonate[i] * lnC + sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP);
+      lineG[i] = g;
+      lineSlope[i] = c[i] + r[i] * sulfur[i] * sulfurSlope;
+    }
+  }
+
   /** dg_i/dE at the last point (the sulfur term bends it). */
   slopeE(i: number): number {
+    this.ensureColumns();
     return this.c[i] + this.r[i] * this.table.sulfur[i] * this.sulfurSlope;
   }
 
   /** Index of the dominant species at (pH, E): the exact argmin of g. */
   dominant(pH: number, E: number): number {
     this.ligandsAt(pH, E);
+    return this.due === 0 ? this.argmin(pH, E) : this.dominantWhileDue(pH, E);
+  }
+
+  /** A row that brought its own temperature, threshold or I: g straight from the fixed columns, nothing stored. */
+  private dominantWhileDue(pH: number, E: number): number {
+    if (this.repeats === 0 && !this.correspondence) return this.dominantDirect(pH, E);
+    this.ensureColumns();
+    return this.argmin(pH, E);
+  }
+
+  /** The argmin of g over the filled columns (ligand activities from ligandsAt). */
+  private argmin(pH: number, E: number): number {
     const t = this.table;
     const { aThreshold, b, c, r } = this;
     const needs = t.needs;
@@ -241,6 +326,43 @@ export class PointEngine {
         if (need & absent) continue;
         g += r[i] * (t.carbonate[i] * lnC + t.sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP);
       }
+      if (g < bestG) {
+        bestG = g;
+        best = i;
+      }
+    }
+    return best;
+  }
+
+  /**
+   * The same argmin with g_i = ΔG°r,i(T)/(x·F) − ν_H+·k·pH/x − ν_e·E/x + (RT/F)/x·(ln threshold + z²·ln γ1 + ligand
+   * terms) from the fixed per-atom columns (constant ΔCp°r, at and below 100 °C): for a row whose temperature or water
+   * differs from the last one's, cheaper than filling every column first.
+   */
+  private dominantDirect(pH: number, E: number): number {
+    const t = this.table;
+    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape } = this;
+    const { needs, dissolved, chargeSquared } = t;
+    const kpH = this.k * pH;
+    const rtOverF = 1 / this.f;
+    const { lnActivity, lnGamma1, lnC, lnS, lnCl, lnP } = this;
+    const absent = ~this.present;
+    let best = -1;
+    let bestG = INF;
+    for (let i = 0, n = g0PerAtom.length; i < n; i++) {
+      const need = needs[i];
+      let log = dissolved[i] * lnActivity + chargeSquared[i] * lnGamma1;
+      if (need) {
+        if (need & absent) continue;
+        log += t.carbonate[i] * lnC + t.sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP;
+      }
+      const g =
+        g0PerAtom[i] -
+        sPerAtom[i] * dT +
+        cpPerAtom[i] * shape +
+        protonPerAtom[i] * kpH +
+        c[i] * E +
+        rtOverF * perAtom[i] * log;
       if (g < bestG) {
         bestG = g;
         best = i;
