@@ -22,8 +22,8 @@ const db = getDatabase();
 /** Metals whose every pure-water species now has S° (the rest are still refused above 100 °C). */
 const OPENED = ["Fe", "Zn", "Cr"] as const;
 
-const boundary = (metal: string, pH: number, E: number, celsius: number, direction: 1 | -1) =>
-  boundaryFrom(metal, pH, E, celsius, 1e-6, 0, 0, 0, 0, 0, direction)[0][0];
+const boundary = (metal: string, pH: number, E: number, celsius: number, direction: 1 | -1, carbonate = 0) =>
+  boundaryFrom(metal, pH, E, celsius, 1e-6, carbonate, 0, 0, 0, 0, direction)[0][0];
 
 describe("25 °C answers unchanged (regression snapshot written before the S° were added, not an outside check)", () => {
   const { grid, answers, gibbs } = snapshot;
@@ -71,6 +71,20 @@ describe("metals opened to 300 °C: answers at 300 °C, continuous across 100 °
             compared++;
           }
       expect(compared).toBeGreaterThan(100);
+    });
+
+    it(`${metal} with carbonate (2 mmol/kg): REDOX.BOUNDARY continuous across 100 °C in the same way`, () => {
+      let compared = 0;
+      for (let pH = 4; pH <= 10; pH += 0.5)
+        for (const E of [-0.8, -0.4, 0, 0.4])
+          for (const direction of [1, -1] as const) {
+            const [before, below, above] = [99.7, 99.9, 100.1].map((t) => boundary(metal, pH, E, t, direction, 0.002));
+            if (typeof below !== "number" || typeof above !== "number" || typeof before !== "number") continue;
+            expect(Math.abs(above - below), `pH ${pH}, E ${E}, direction ${direction}`).toBeLessThan(0.003);
+            expect(Math.abs(above - below)).toBeLessThan(Math.abs(below - before) + 3e-4);
+            compared++;
+          }
+      expect(compared).toBeGreaterThan(40);
     });
   }
 });
