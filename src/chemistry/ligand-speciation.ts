@@ -14,7 +14,7 @@
  * far below ligand totals in waters).
  */
 import { FARADAY, T0 } from "./constants";
-import { correspondenceBasis } from "./criss-cobble";
+import { correspondenceBasis, NO_CORRESPONDENCE } from "./criss-cobble";
 import { LigandTable, rowGibbs } from "./species-tables";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
@@ -34,6 +34,9 @@ export class LigandAtPoint {
   private readonly b: Float64Array;
   private readonly e: Float64Array;
   private readonly u: Float64Array;
+  /** The last point's weights exp(u_j − max u) and their sum. */
+  private readonly w: Float64Array;
+  private sum = 1;
   /** Whether the solid was saturated at the last point. */
   saturated = false;
   /** The last point's exponents u_j (one per species), their largest, and the pH and E they were taken at. */
@@ -49,16 +52,27 @@ export class LigandAtPoint {
   private lastCelsius = NOT_A_NUMBER;
   private lastLn = 0;
   private readonly redox: boolean;
+  /** ΔG°r(25 °C), ΔS°r and ΔCp°r per faraday (V, V/K), and −ν_H+, per species. */
+  private readonly g0PerF: Float64Array;
+  private readonly sPerF: Float64Array;
+  private readonly cpPerF: Float64Array;
+  private readonly minusProton: Float64Array;
   /** ln a_P before the saturation cap. */
   private lnUnsaturated = 0;
 
   constructor(private readonly table: LigandTable) {
     const n = table.species.length;
     this.redox = table.electron.some((x) => x !== 0);
+    this.g0PerF = table.g0.map((x) => x / FARADAY);
+    this.sPerF = table.s.map((x) => x / FARADAY);
+    this.cpPerF = table.cp.map((x) => x / FARADAY);
+    this.minusProton = table.proton.map((x) => -x);
     this.g = new Float64Array(n);
     this.b = new Float64Array(n);
     this.e = new Float64Array(n);
     this.u = new Float64Array(n);
+    this.w = new Float64Array(n);
+    table.electron.forEach((x, j) => (this.e[j] = -x)); // dg_j/dE does not depend on temperature
   }
 
   /**
@@ -72,12 +86,12 @@ export class LigandAtPoint {
 
   private setTemperature(celsius: number, dT: number, shape: number, k: number, f: number): void {
     const t = this.table;
-    const inverseF = 1 / FARADAY;
     const basis = correspondenceBasis(dT + T0);
-    for (let j = 0; j < t.g0.length; j++) {
-      this.g[j] = rowGibbs(t, j, dT, shape, basis) * inverseF;
-      this.b[j] = -t.proton[j] * k;
-      this.e[j] = -t.electron[j];
+    const plain = basis === NO_CORRESPONDENCE; // at and below 100 °C: constant ΔCp°r, from the per-faraday columns
+    const { g, b, g0PerF, sPerF, cpPerF, minusProton } = this;
+    for (let j = 0; j < g.length; j++) {
+      g[j] = plain ? g0PerF[j] - sPerF[j] * dT + cpPerF[j] * shape : rowGibbs(t, j, dT, shape, basis) / FARADAY;
+      b[j] = minusProton[j] * k;
     }
     this.f = f;
     this.celsius = celsius;
@@ -94,7 +108,7 @@ export class LigandAtPoint {
       (E === this.lastE || !this.redox)
     )
       return this.lastLn;
-    const { g, b, e, u, f } = this;
+    const { g, b, e, u, w, f } = this;
     const z2 = this.table.chargeSquared;
     const solid = this.table.solidIndex;
     const n = g.length;
@@ -107,9 +121,11 @@ export class LigandAtPoint {
     let sum = 0;
     for (let j = 0; j < n; j++) {
       const gapToTop = u[j] - top; // the solid's u is −∞
-      if (gapToTop === 0) sum += 1;
-      else if (gapToTop > NEGLIGIBLE_GAP) sum += exp(gapToTop);
+      const wj = gapToTop === 0 ? 1 : gapToTop > NEGLIGIBLE_GAP ? exp(gapToTop) : 0;
+      w[j] = wj;
+      sum += wj;
     }
+    this.sum = sum;
     // ln a_P = ln total − LSE(u)
     let ln = lnTotal - top - log(sum);
     this.lnUnsaturated = ln;
@@ -143,15 +159,10 @@ export class LigandAtPoint {
 
   /** f·Σ w_j·e_j / Σ w_j at the last point (u_j = −f·g_j − …, dg_j/dE = e_j). */
   private unsaturatedSlope(): number {
-    const { e, u, f, top } = this;
-    let sum = 0;
+    const { e, w } = this;
     let slope = 0;
-    for (let j = 0; j < u.length; j++) {
-      const w = exp(u[j] - top);
-      sum += w;
-      slope += w * e[j];
-    }
-    return (f * slope) / sum;
+    for (let j = 0; j < w.length; j++) slope += w[j] * e[j];
+    return (this.f * slope) / this.sum;
   }
 
   /**

@@ -14,8 +14,7 @@ import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "./constants";
 import { Database } from "./database";
 import { debyeHuckelA, lnGammaWithA } from "./activity-coefficients";
 import { LigandAtPoint } from "./ligand-speciation";
-import { LIGAND_BASIS, LigandTotals } from "./ligand-cells";
-import type { SystemSpecies } from "./system";
+import { LIGAND_BASIS } from "./ligand-cells";
 import {
   ligandTable,
   NEEDS_CARBONATE,
@@ -158,10 +157,6 @@ export class PointEngine {
     this.lnSulfur = sulfur > 0 ? log(sulfur) : 0;
     this.lnPhosphate = phosphate > 0 ? log(phosphate) : 0;
     this.lnChloride = chloride > 0 ? log(chloride) + this.lnGamma1 : 0; // Cl− is free: a = γ·total
-  }
-
-  setPointWater(w: PointWater): void {
-    this.setWater(w.celsius, w.activity, w.carbonate, w.chloride, w.sulfur, w.ionicStrength, w.phosphate ?? 0);
   }
 
   /** The scalars of a new temperature: dT, the ΔCp shape term, k = RT ln10/F and F/RT. */
@@ -391,34 +386,4 @@ export function pointEngine(db: Database, element: string): PointEngine {
   let engine = byElement.get(element);
   if (!engine) byElement.set(element, (engine = new PointEngine(db, element)));
   return engine;
-}
-
-/**
- * The dominant species at one point of a drawn system's water (its temperature, threshold and ligand totals, or
- * `ligands` of the sample's own), from the point engine: what SPECIES answers there. Returns the species record.
- */
-export function dominantInWater(
-  db: Database,
-  system: {
-    readonly element: string;
-    readonly celsius: number;
-    readonly activity: number;
-    readonly ligandTotals?: LigandTotals;
-  },
-  pH: number,
-  E: number,
-  ligands?: LigandTotals,
-): SystemSpecies {
-  const water = ligands ?? system.ligandTotals ?? {};
-  const engine = pointEngine(db, system.element);
-  engine.setWater(
-    system.celsius,
-    system.activity,
-    water.carbonate ?? 0,
-    water.chloride ?? 0,
-    water.sulfur ?? 0,
-    0,
-    water.phosphate ?? 0,
-  );
-  return engine.table.species[engine.dominant(pH, E)];
 }

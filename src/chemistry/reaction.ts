@@ -9,7 +9,7 @@
 import { FARADAY, GAS_CONSTANT, LN10, kelvin, nernstFactor } from "./constants";
 import { Database, Species } from "./database";
 import { Rational, rational, solveExact } from "./exact";
-import { ELECTRON, gibbsAt, reactionProperties, Stoichiometry } from "./thermo";
+import { ELECTRON, gibbsAt, ReactionProperties, reactionProperties, Stoichiometry } from "./thermo";
 
 export class ReactionError extends Error {}
 
@@ -143,6 +143,17 @@ export function couplePotential(
  * `celsius`. Checks the balance of every element and of charge first.
  */
 export function reactionLogK(db: Database, coefficients: Readonly<Record<string, number>>, celsius = 25): number {
+  return logKAt(balancedProperties(db, coefficients), celsius);
+}
+
+/** log10 K at `celsius` of a reaction with these properties: log K = −ΔG°r(T)/(RT ln 10). */
+export function logKAt(props: ReactionProperties, celsius: number): number {
+  const T = kelvin(celsius);
+  return -gibbsAt(props, T) / (GAS_CONSTANT * T * LN10);
+}
+
+/** The summed properties of a reaction given by formulas and coefficients, checked for balance (ReactionError). */
+export function balancedProperties(db: Database, coefficients: Readonly<Record<string, number>>): ReactionProperties {
   const stoichiometry = new Map<Member, number>();
   const totals: Record<string, number> = {};
   for (const [formula, nu] of Object.entries(coefficients)) {
@@ -153,6 +164,5 @@ export function reactionLogK(db: Database, coefficients: Readonly<Record<string,
   for (const [k, v] of Object.entries(totals)) {
     if (Math.abs(v) > 1e-9) throw new ReactionError(`reaction is not balanced in ${k} (${v})`);
   }
-  const T = kelvin(celsius);
-  return -gibbsAt(reactionProperties(db, stoichiometry), T) / (GAS_CONSTANT * T * LN10);
+  return reactionProperties(db, stoichiometry);
 }

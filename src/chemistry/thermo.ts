@@ -18,6 +18,9 @@ import { T0 } from "./constants";
 import { addCorrespondence, correspondenceGibbs, CORRESPONDENCE_TERMS, setReplacedHeatCapacity } from "./criss-cobble";
 import { Database, Species } from "./database";
 
+// Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
+const { log } = Math;
+
 /** Marker for the electron in a reaction. */
 export const ELECTRON = "e-";
 
@@ -77,7 +80,7 @@ export function gibbsAt(props: ReactionProperties, kelvinT: number): number {
   return (
     props.dG0 -
     props.dS * dT +
-    props.dCp * (dT - kelvinT * Math.log(kelvinT / T0)) +
+    props.dCp * (dT - kelvinT * log(kelvinT / T0)) +
     correspondenceGibbs(props.correspondence, kelvinT)
   );
 }

@@ -20,7 +20,8 @@
  */
 import { kelvin, nernstFactor } from "./constants";
 import { Database, getDatabase } from "./database";
-import { reactionLogK } from "./reaction";
+import { balancedProperties, logKAt, reactionLogK } from "./reaction";
+import type { ReactionProperties } from "./thermo";
 import { waterPKw } from "./water-properties";
 
 export type WaterGas = "O2" | "H2";
@@ -35,30 +36,35 @@ const { log10, min } = Math;
 /** H2O(l) → H+ + OH− */
 const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
 
-/**
- * Standard potentials by database, gas and temperature: columns of samples repeat a few temperatures, and each
- * value costs a reaction balance, so they are remembered (bounded).
- */
-const standardPotentials = new WeakMap<Database, Record<WaterGas, Map<number, number>>>();
-const REMEMBERED_POTENTIALS = 512;
+/** The two couples' reaction properties by database, summed once (a column of new temperatures costs arithmetic only). */
+const lineReactions = new WeakMap<Database, Record<WaterGas, ReactionProperties>>();
 
 /** Standard potential (V vs SHE) of the O2/H2O (gas "O2") or H+/H2 (gas "H2") couple at `celsius`. */
 export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database = getDatabase()): number {
-  let byGas = standardPotentials.get(db);
-  if (!byGas) standardPotentials.set(db, (byGas = { O2: new Map(), H2: new Map() }));
-  // keyed by the number itself: a text key per call cost more than the look-up saves on a column of samples
-  const memo = gas === "O2" ? byGas.O2 : byGas.H2;
-  const known = memo.get(celsius);
-  if (known !== undefined) return known;
+  let reactions = lineReactions.get(db);
+  if (!reactions) {
+    reactions = { O2: balancedProperties(db, OXYGEN_REDUCTION), H2: balancedProperties(db, HYDROGEN_EVOLUTION) };
+    lineReactions.set(db, reactions);
+  }
+  const last = gas === "O2" ? lastOxygen : lastHydrogen;
+  if (last.db === db && last.celsius === celsius) return last.e0; // a column of one temperature
   const k = nernstFactor(kelvin(celsius));
-  const e0 =
-    gas === "O2"
-      ? (k * reactionLogK(db, OXYGEN_REDUCTION, celsius)) / 4
-      : (k * reactionLogK(db, HYDROGEN_EVOLUTION, celsius)) / 2;
-  if (memo.size >= REMEMBERED_POTENTIALS) memo.clear();
-  memo.set(celsius, e0 + 0); // + 0 turns a negative zero into 0
-  return e0 + 0;
+  // E° = k·log10 K / n for the reduction of n electrons; + 0 turns a negative zero into 0
+  const e0 = gas === "O2" ? (k * logKAt(reactions.O2, celsius)) / 4 + 0 : (k * logKAt(reactions.H2, celsius)) / 2 + 0;
+  last.db = db;
+  last.celsius = celsius;
+  last.e0 = e0;
+  return e0;
 }
+
+/** The last standard potential of each couple, for the next call at the same temperature. */
+interface LastPotential {
+  db: Database | null;
+  celsius: number;
+  e0: number;
+}
+const lastOxygen: LastPotential = { db: null, celsius: 0 / 0, e0: 0 };
+const lastHydrogen: LastPotential = { db: null, celsius: 0 / 0, e0: 0 };
 
 /**
  * Potential (V vs SHE) of a water line at pH, temperature (°C) and partial pressure of the gas (bar).

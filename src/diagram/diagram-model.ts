@@ -14,7 +14,7 @@ import { hasLigands, type LigandTotals } from "../chemistry/ligand-cells";
 import { diagramRegions, Region } from "../chemistry/predominance";
 import { tracedRegions } from "../chemistry/region-tracing";
 import { getDatabase } from "../chemistry/database";
-import { dominantInWater } from "../chemistry/point-engine";
+import { dominantInWater } from "../chemistry/point-service";
 import { MetalSystem, Regime } from "../chemistry/system";
 import { waterLine } from "../chemistry/water";
 import type { AxisWindow } from "./axes";

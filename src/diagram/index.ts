@@ -10,6 +10,8 @@
  * - palette: colours by regime, contrast checks
  * - formula-markup: chemical formulas as sub- and superscript segments
  * - water-words: ligand totals in words
+ * - solubility-curve, solubility-chart-svg, solubility-words: dissolved metal along pH at a sample's potential
+ *   (model from an evaluator the host answers with REDOX.DISSOLVED, SVG, words)
  */
 export { AxisError, formatTick, makeAxes, niceTicks } from "./axes";
 export type { Axes, AxisWindow, PlotArea } from "./axes";
@@ -42,7 +44,15 @@ export {
   relativeLuminance,
   WATER_BAND,
   WATER_LINE,
+  CURVE_INK,
+  THRESHOLD_INK,
+  GAP_FILL,
 } from "./palette";
 export { formulaSegments, segmentsText } from "./formula-markup";
 export type { Segment } from "./formula-markup";
 export { formatTotals, LIGAND_WORDS } from "./water-words";
+export { curveGaps, curvePHs, curvePieces, CURVE_STEPS, solubilityCurve, spansAbove } from "./solubility-curve";
+export type { CurvePoint, DissolvedEvaluator, SolubilityCurve } from "./solubility-curve";
+export { decadeRange, decadeText, MAX_DECADES, renderSolubilityChart, solubilityLayout } from "./solubility-chart-svg";
+export type { RenderedSolubilityChart, SolubilityChartOptions } from "./solubility-chart-svg";
+export { curveConditions, formatMicrograms, solubilitySummary } from "./solubility-words";

@@ -14,6 +14,10 @@ export const LABEL_TEXT = "#1b2329";
 export const AXIS_TEXT = "#28343b";
 export const WATER_LINE = "#2f5f8a";
 export const WATER_BAND = "#5b8fc0";
+/** The solubility chart: the dissolved-metal curve, the threshold line and the bands where no solid can form. */
+export const CURVE_INK = "#1d4e89";
+export const THRESHOLD_INK = "#9a3412";
+export const GAP_FILL = "#e6e9ec";
 
 export const REGION_FILLS: Record<Regime, readonly string[]> = {
   immunity: ["#dde2e8", "#cfd6de", "#e8ebef"],

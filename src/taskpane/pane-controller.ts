@@ -45,6 +45,7 @@ import { buildWaterSources, readWater, showWater, waterToRemember } from "./pane
 import { copyText, Drawn, exportFileName, exportPng, exportSvg, insertPicture } from "./pane-export";
 import { showResults, showSkipped, showTemperatureSpread } from "./pane-notes";
 import { AnswerConditions, ownAnswers } from "./pane-samples";
+import { SolubilityView } from "./solubility-view";
 
 export { SPREAD_WARNING } from "./pane-notes";
 /** The caption's promise about markers (sample-answers.ts keeps it). */
@@ -93,6 +94,8 @@ export class DiagramPane {
   /** The conductivity, TDS or ionic-strength column used automatically for each sample's [ionicStrength]. */
   private ionicFound: IonicColumn | null = null;
   private view!: DiagramView;
+  /** The dissolved-metal-along-pH chart of one sample under the diagram. */
+  private solubility!: SolubilityView;
   /** "fit": the samples' window; "full": pH −2…16, ±2 V; null: fit when the samples are clustered. */
   private viewMode: "fit" | "full" | null = null;
   private lastWindow: AxisWindow | null = null;
@@ -109,8 +112,9 @@ export class DiagramPane {
     this.wireExports();
     this.view = new DiagramView($("diagram"), {
       show: (sample) => ($("point-info").textContent = sampleText(sample, this.plotted.unit)),
-      choose: (sample) => this.selectRow(sample.row),
+      choose: (sample) => this.chooseSample(sample),
     });
+    this.solubility = new SolubilityView($("solubility-chart"));
     this.wireSamples();
     this.wireView();
     this.draw();
@@ -382,6 +386,8 @@ export class DiagramPane {
       compare,
       legend: { kinetic: showKineticBand, ligandEdges: ligandEdges(system), sites },
     });
+    const metalName = this.db.element(at.metal)?.name ?? at.metal;
+    this.solubility.show(samples, { metal: at.metal, metalName, window, celsius });
     this.drawn = {
       caption,
       render: (width, height, titles = true) => renderDiagramSvg({ ...drawing, width, height, sampleTitles: titles }),
@@ -441,8 +447,14 @@ export class DiagramPane {
     });
     container.addEventListener("click", (event) => {
       const sample = sampleOf(event);
-      if (sample) this.selectRow(sample.row);
+      if (sample) this.chooseSample(sample);
     });
+  }
+
+  /** A sample chosen on the diagram: its row in the sheet, and the solubility chart's sample. */
+  private chooseSample(sample: PlottedSample): void {
+    this.solubility.follow(sample);
+    this.selectRow(sample.row);
   }
 
   private selectRow(row: number): void {
