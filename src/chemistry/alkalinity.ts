@@ -12,6 +12,7 @@
  * Alkalinity in mg/L as CaCO3 (the utility unit): 1 meq/L = 50.04 mg/L as CaCO3 (half the molar mass of CaCO3,
  * 100.087 g/mol). K1, K2 from Plummer & Busenberg (1982) (carbonic-acid.ts); Kw from IAPWS R11-07 (water.ts).
  */
+import { DEFAULT_CELSIUS } from "./domain";
 import { carbonicPK1, carbonicPK2 } from "./carbonic-acid";
 import type { Database } from "./database";
 import { pKw } from "./water";
@@ -38,7 +39,12 @@ export function alkalinityEquivalents(mgPerLitreAsCaCO3: number): number {
  * the total alkalinity): no carbonate water matches that pair of numbers; and below the titration end point
  * (pH < 4.5), where DIC is not determined by alkalinity (α1 + 2α2 → 0 and the quotient grows without bound).
  */
-export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, _db?: Database): number {
+export function dicFromAlkalinity(
+  alkalinityMgL: number,
+  pH: number,
+  celsius = DEFAULT_CELSIUS,
+  _db?: Database,
+): number {
   // _db kept for callers: Kw comes from IAPWS R11-07, not from the records
   if (pH < ALKALINITY_END_POINT_PH) {
     throw new AlkalinityError(

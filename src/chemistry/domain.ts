@@ -13,6 +13,9 @@ export const PH_MAX = 16;
 export const MAX_POTENTIAL = 3;
 /** Potential span of the full diagram, V vs SHE (common practice: water's stability field lies well inside). */
 export const FULL_E_LIMIT = 2;
+/** Potentials searched for boundaries, V vs SHE (docs/method.md, Domain: #N/A when none in −3…+3 V). */
+export const BOUNDARY_SEARCH_LOW = -MAX_POTENTIAL;
+export const BOUNDARY_SEARCH_HIGH = MAX_POTENTIAL;
 /** Activity of dissolved metal species when none is given (10⁻⁶, the usual corrosion threshold: common practice). */
 export const DEFAULT_ACTIVITY = 1e-6;
 /** Highest activity accepted for dissolved metal species. */

@@ -7,7 +7,8 @@
  */
 import { getDatabase } from "../chemistry/database";
 import { boundText } from "../chemistry/domain";
-import { BOUNDARY_SEARCH_HIGH, BOUNDARY_SEARCH_LOW, pointBoundary } from "../chemistry/point-boundary";
+import { BOUNDARY_SEARCH_HIGH, BOUNDARY_SEARCH_LOW } from "../chemistry/domain";
+import { pointBoundary } from "../chemistry/point-boundary";
 import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
 import { waterMargin } from "../chemistry/water";
 import { mapCells } from "./broadcast";
