@@ -54,9 +54,12 @@ async function main(): Promise<void> {
     const verdict = r.met === null ? "" : r.met ? "met" : "NOT MET";
     console.log(`${r.name.padEnd(width)}  ${r.figure.padEnd(figureWidth)}  target ${r.target.padEnd(18)} ${verdict}`);
   }
-  // Figures measured in other processes: the command line over a generated 1 M-row log (rows/s, peak memory), and
+  // Figures measured in other processes: the functions' cold start, the command line over a generated 1 M-row log (rows/s, peak memory), and
   // the task pane drawing 10 k samples in headless Chromium (when /usr/bin/chromium exists).
-  const children: [string, string[]][] = [["bench/cli.ts", [process.env.REDOX_BENCH_CLI_ROWS ?? "1000000"]]];
+  const children: [string, string[]][] = [
+    ["bench/cold-start.ts", []],
+    ["bench/cli.ts", [process.env.REDOX_BENCH_CLI_ROWS ?? "1000000"]],
+  ];
   if (fs.existsSync("/usr/bin/chromium")) children.push(["bench/pane-browser.ts", []]);
   for (const [script, args] of children) {
     const run = spawnSync(process.execPath, ["--import", "tsx", script, ...args], {

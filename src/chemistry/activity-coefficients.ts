@@ -9,6 +9,7 @@
  * water at its pressure (water-properties.ts: 1 atm below 100 °C, the saturation curve from 100 °C to 300 °C).
  * Neutral species keep γ = 1.
  */
+import { DEFAULT_CELSIUS } from "./domain";
 import { kelvin } from "./constants";
 import { liquidDensity, liquidDielectric } from "./water-properties";
 
@@ -37,6 +38,6 @@ export function lnGammaWithA(ionicStrength: number, A: number): number {
 }
 
 /** γ of an ion of charge z at ionic strength I (mol/kg) and t °C, Davies equation. */
-export function daviesGamma(charge: number, ionicStrength: number, celsius = 25): number {
+export function daviesGamma(charge: number, ionicStrength: number, celsius = DEFAULT_CELSIUS): number {
   return exp(charge * charge * lnGammaUnitCharge(ionicStrength, celsius));
 }

@@ -12,6 +12,7 @@
  * Alkalinity in mg/L as CaCO3 (the utility unit): 1 meq/L = 50.04 mg/L as CaCO3 (half the molar mass of CaCO3,
  * 100.087 g/mol). K1, K2 from Plummer & Busenberg (1982) (carbonic-acid.ts); Kw from IAPWS R11-07 (water.ts).
  */
+import { DEFAULT_CELSIUS } from "./domain";
 import { carbonicPK1, carbonicPK2 } from "./carbonic-acid";
 import type { Database } from "./database";
 import { pKw } from "./water";
@@ -44,7 +45,7 @@ export function alkalinityEquivalents(mgPerLitreAsCaCO3: number): number {
  * pair of numbers; and below the titration end point (pH < 4.5), where DIC is not determined by alkalinity
  * (α1 + 2α2 → 0 and the quotient grows without bound).
  */
-export function dicOrProblem(alkalinityMgL: number, pH: number, celsius = 25): number | AlkalinityProblem {
+export function dicOrProblem(alkalinityMgL: number, pH: number, celsius = DEFAULT_CELSIUS): number | AlkalinityProblem {
   if (pH < ALKALINITY_END_POINT_PH) {
     return new AlkalinityProblem(
       `pH ${pH} is below the alkalinity end point (${ALKALINITY_END_POINT_PH}): alkalinity does not determine DIC there`,
@@ -67,7 +68,12 @@ export function dicOrProblem(alkalinityMgL: number, pH: number, celsius = 25): n
 }
 
 /** dicOrProblem that throws AlkalinityError with the problem's message. */
-export function dicFromAlkalinity(alkalinityMgL: number, pH: number, celsius = 25, _db?: Database): number {
+export function dicFromAlkalinity(
+  alkalinityMgL: number,
+  pH: number,
+  celsius = DEFAULT_CELSIUS,
+  _db?: Database,
+): number {
   // _db kept for callers: Kw comes from IAPWS R11-07, not from the records
   const dic = dicOrProblem(alkalinityMgL, pH, celsius);
   if (dic instanceof AlkalinityProblem) throw new AlkalinityError(dic.message);

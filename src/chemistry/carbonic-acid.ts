@@ -13,6 +13,7 @@
  * The engine's carbonate species records (data/species/carbonate.json) reproduce these fits within 0.015 from 5 to
  * 60 °C; the fits are used directly where a function is documented to follow them (REDOX.DIC).
  */
+import { DEFAULT_CELSIUS } from "./domain";
 import { kelvin } from "./constants";
 
 interface Fit {
@@ -33,16 +34,16 @@ function evaluate(fit: Fit, celsius: number): number {
 }
 
 /** log10 KH of CO2(g) = CO2(aq), mol/(kg·bar), at `celsius`. */
-export function logHenryCO2(celsius = 25): number {
+export function logHenryCO2(celsius = DEFAULT_CELSIUS): number {
   return evaluate(HENRY, celsius);
 }
 
 /** pK1 of CO2(aq) + H2O = H+ + HCO3− at `celsius`. */
-export function carbonicPK1(celsius = 25): number {
+export function carbonicPK1(celsius = DEFAULT_CELSIUS): number {
   return -evaluate(FIRST, celsius);
 }
 
 /** pK2 of HCO3− = H+ + CO3²− at `celsius`. */
-export function carbonicPK2(celsius = 25): number {
+export function carbonicPK2(celsius = DEFAULT_CELSIUS): number {
   return -evaluate(SECOND, celsius);
 }

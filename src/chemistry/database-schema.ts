@@ -29,6 +29,8 @@ export const speciesRecordSchema = z
     source: z.string().min(1),
     /** Key into references for Cp° when it comes from elsewhere. */
     cpSource: z.string().optional(),
+    /** Key into references for S° when it comes from elsewhere (a derivation or a named estimation method). */
+    entropySource: z.string().optional(),
     /** Anything a reviewer should know: estimates, polymorph chosen, disagreement between compilations. */
     note: z.string().optional(),
   })

@@ -99,8 +99,9 @@ export class Database {
     }
     const source = ownEntry(references, record.source);
     if (!source) throw new DatabaseError(`${where}: source key "${record.source}" is not in the file's references`);
-    if (record.cpSource && !ownEntry(references, record.cpSource)) {
-      throw new DatabaseError(`${where}: cpSource key "${record.cpSource}" is not in the file's references`);
+    for (const key of [record.cpSource, record.entropySource]) {
+      if (key !== undefined && !ownEntry(references, key))
+        throw new DatabaseError(`${where}: source key "${key}" is not in the file's references`);
     }
     if (this.byFormula.has(record.formula))
       throw new DatabaseError(`${where}: formula ${record.formula} appears twice in the database`);
@@ -113,7 +114,7 @@ export class Database {
       dHf: record.dHf === null ? null : record.dHf * 1000,
       S: record.S,
       Cp: record.Cp,
-      source: record.cpSource ? `${source}; Cp°: ${ownEntry(references, record.cpSource)}` : source,
+      source: citation(source, references, record),
       note: record.note,
       system,
       elements,
@@ -182,6 +183,13 @@ export class Database {
   allSpecies(): Species[] {
     return [...this.byFormula.values()];
   }
+}
+
+/** The full citation of a record: its source, then where its S° and Cp° come from when they come from elsewhere. */
+function citation(source: string, references: Readonly<Record<string, string>>, record: SpeciesRecord): string {
+  const entropy = record.entropySource ? `; S°: ${ownEntry(references, record.entropySource)}` : "";
+  const heatCapacity = record.cpSource ? `; Cp°: ${ownEntry(references, record.cpSource)}` : "";
+  return source + entropy + heatCapacity;
 }
 
 function formatIssues(issues: readonly { path: readonly PropertyKey[]; message: string }[], content?: unknown): string {

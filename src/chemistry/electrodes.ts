@@ -11,6 +11,7 @@
  *                        plus the chloride term −k(T)·log10 a(Cl−), filling activity held at its 25 °C value
  *   reversible-hydrogen  E = −k(T)·pH, k = RT ln10 / F (hydrogen electrode in the test solution, 1 bar H2)
  */
+import { DEFAULT_CELSIUS } from "./domain";
 import { z } from "zod";
 import electrodesData from "../../data/electrodes.json";
 import { kelvin, nernstFactor, T0 } from "./constants";
@@ -218,7 +219,7 @@ function resolve(electrode: Electrode | string, table: ElectrodeTable): Electrod
 export function toSHE(
   reading: number,
   electrode: Electrode | string,
-  celsius = 25,
+  celsius = DEFAULT_CELSIUS,
   pH?: number,
   table: ElectrodeTable = getElectrodes(),
 ): number {
@@ -229,7 +230,7 @@ export function toSHE(
 export function fromSHE(
   potential: number,
   electrode: Electrode | string,
-  celsius = 25,
+  celsius = DEFAULT_CELSIUS,
   pH?: number,
   table: ElectrodeTable = getElectrodes(),
 ): number {

@@ -14,14 +14,17 @@
  * far below ligand totals in waters).
  */
 import { FARADAY, T0 } from "./constants";
-import { correspondenceBasis } from "./criss-cobble";
+import { correspondenceBasis, NO_CORRESPONDENCE } from "./criss-cobble";
 import { LigandTable, rowGibbs } from "./species-tables";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { abs, exp, log, max, min } = Math;
 const INF = 1 / 0;
-/** Log-gap below which a minor form is taken as absent for the straightness of ln a_P (e^−30 ≈ 1e-13). */
-const MIXING_GAP = 30;
+/**
+ * Log-gap below which a minor form is taken as absent for the straightness of ln a_P: ln a_P then departs from its
+ * line by at most ln(1 + 5·e^−20) ≈ 1e-8, a few 1e-10 V in g — far inside the boundary tolerance (1e-7 V).
+ */
+const MIXING_GAP = 20;
 const NOT_A_NUMBER = 0 / 0;
 /** Log-gap past which a form adds nothing to a sum of at least 1 in double precision (six forms of e^−40 < 2^−53). */
 const NEGLIGIBLE_GAP = -40;
@@ -52,17 +55,27 @@ export class LigandAtPoint {
   private lastCelsius = NOT_A_NUMBER;
   private lastLn = 0;
   private readonly redox: boolean;
+  /** ΔG°r(25 °C), ΔS°r and ΔCp°r per faraday (V, V/K), and −ν_H+, per species. */
+  private readonly g0PerF: Float64Array;
+  private readonly sPerF: Float64Array;
+  private readonly cpPerF: Float64Array;
+  private readonly minusProton: Float64Array;
   /** ln a_P before the saturation cap. */
   private lnUnsaturated = 0;
 
   constructor(private readonly table: LigandTable) {
     const n = table.species.length;
     this.redox = table.electron.some((x) => x !== 0);
+    this.g0PerF = table.g0.map((x) => x / FARADAY);
+    this.sPerF = table.s.map((x) => x / FARADAY);
+    this.cpPerF = table.cp.map((x) => x / FARADAY);
+    this.minusProton = table.proton.map((x) => -x);
     this.g = new Float64Array(n);
     this.b = new Float64Array(n);
     this.e = new Float64Array(n);
     this.u = new Float64Array(n);
     this.w = new Float64Array(n);
+    table.electron.forEach((x, j) => (this.e[j] = -x)); // dg_j/dE does not depend on temperature
   }
 
   /**
@@ -76,12 +89,12 @@ export class LigandAtPoint {
 
   private setTemperature(celsius: number, dT: number, shape: number, k: number, f: number): void {
     const t = this.table;
-    const inverseF = 1 / FARADAY;
     const basis = correspondenceBasis(dT + T0);
-    for (let j = 0; j < t.g0.length; j++) {
-      this.g[j] = rowGibbs(t, j, dT, shape, basis) * inverseF;
-      this.b[j] = -t.proton[j] * k;
-      this.e[j] = -t.electron[j];
+    const plain = basis === NO_CORRESPONDENCE; // at and below 100 °C: constant ΔCp°r, from the per-faraday columns
+    const { g, b, g0PerF, sPerF, cpPerF, minusProton } = this;
+    for (let j = 0; j < g.length; j++) {
+      g[j] = plain ? g0PerF[j] - sPerF[j] * dT + cpPerF[j] * shape : rowGibbs(t, j, dT, shape, basis) / FARADAY;
+      b[j] = minusProton[j] * k;
     }
     this.f = f;
     this.celsius = celsius;
@@ -156,7 +169,7 @@ export class LigandAtPoint {
   }
 
   /**
-   * Distance in E (V, either way) over which ln a_P stays linear in E to e^−30 from the last point: one form carries
+   * Distance in E (V, either way) over which ln a_P stays linear in E to 5·e^−20 from the last point: one form carries
    * the total (or the solid saturates) and no saturation edge is crossed. Where it is 0 the forms mix (a bend).
    */
   get straightFor(): number {
@@ -164,7 +177,7 @@ export class LigandAtPoint {
     const solid = this.table.solidIndex;
     let leader = -1;
     for (let j = 0; j < u.length; j++) if (u[j] === top) leader = j;
-    // how far the leading form keeps the others below e^−30 (their log-gap closes at f·|e_j − e_leader| per volt)
+    // how far the leading form keeps the others below e^−20 (their log-gap closes at f·|e_j − e_leader| per volt)
     let straight = INF;
     for (let j = 0; j < u.length; j++) {
       if (j === solid || j === leader) continue;

@@ -7,15 +7,13 @@
  * most MAX_STEP at a time inside a bend — checks the species there and brackets a change by bisection to
  * BOUNDARY_TOLERANCE.
  */
+import { BOUNDARY_SEARCH_HIGH, BOUNDARY_SEARCH_LOW } from "./domain";
 import { PointEngine } from "./point-engine";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { abs, max, min } = Math;
 const INF = 1 / 0;
 
-/** Potentials searched for boundaries, V vs SHE (#N/A when none in −3…+3 V). */
-export const BOUNDARY_SEARCH_LOW = -3;
-export const BOUNDARY_SEARCH_HIGH = 3;
 /** Largest step of the walk where sulfur bends the lines, V. */
 export const MAX_STEP = 0.05;
 /** Width of the final bracket around a bent boundary, V (0.0001 mV). */

@@ -8,7 +8,8 @@
  * decides SPECIES. Where the total would exceed MAX_DISSOLVED the solid cannot form (it would all dissolve).
  */
 import { Database } from "./database";
-import { PointEngine, pointEngine, PointWater } from "./point-engine";
+import type { PointEngine, PointWater } from "./point-engine";
+import { engineInWater } from "./point-service";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { exp } = Math;
@@ -89,8 +90,7 @@ export function dissolvedEquilibrium(
   E: number,
   water: PointWater,
 ): { total: number | null; controllingSolid: string } {
-  const engine = pointEngine(db, element);
-  engine.setPointWater(water);
+  const engine = engineInWater(db, element, water);
   const answer = dissolvedAtPoint(engine, pH, E);
   const formula = engine.table.species[answer.solid].formula;
   return { total: answer.total <= MAX_DISSOLVED ? answer.total : null, controllingSolid: formula };

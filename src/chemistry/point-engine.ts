@@ -14,8 +14,7 @@ import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "./constants";
 import { Database } from "./database";
 import { debyeHuckelA, lnGammaWithA } from "./activity-coefficients";
 import { LigandAtPoint } from "./ligand-speciation";
-import { LIGAND_BASIS, LigandTotals } from "./ligand-cells";
-import type { SystemSpecies } from "./system";
+import { LIGAND_BASIS } from "./ligand-cells";
 import {
   ligandTable,
   NEEDS_CARBONATE,
@@ -141,11 +140,11 @@ export class PointEngine {
     const newTemperature = celsius !== this.celsius;
     if (newTemperature) this.setTemperature(celsius);
     if (newTemperature || activity !== this.activity || ionicStrength !== this.ionicStrength) {
+      if (activity !== this.activity) this.lnActivity = log(activity);
       this.activity = activity;
       this.ionicStrength = ionicStrength;
       if (ionicStrength > 0 && this.debyeHuckel !== this.debyeHuckel) this.debyeHuckel = debyeHuckelA(celsius);
       this.lnGamma1 = lnGammaWithA(ionicStrength, this.debyeHuckel);
-      this.lnActivity = log(activity);
       this.due |= newTemperature ? TEMPERATURE_DUE | THRESHOLD_DUE : THRESHOLD_DUE;
       this.repeats = 0;
     } else this.repeats++;
@@ -158,10 +157,6 @@ export class PointEngine {
     this.lnSulfur = sulfur > 0 ? log(sulfur) : 0;
     this.lnPhosphate = phosphate > 0 ? log(phosphate) : 0;
     this.lnChloride = chloride > 0 ? log(chloride) + this.lnGamma1 : 0; // Cl− is free: a = γ·total
-  }
-
-  setPointWater(w: PointWater): void {
-    this.setWater(w.celsius, w.activity, w.carbonate, w.chloride, w.sulfur, w.ionicStrength, w.phosphate ?? 0);
   }
 
   /** The scalars of a new temperature: dT, the ΔCp shape term, k = RT ln10/F and F/RT. */
@@ -336,14 +331,13 @@ export class PointEngine {
 
   /**
    * The same argmin with g_i = ΔG°r,i(T)/(x·F) − ν_H+·k·pH/x − ν_e·E/x + (RT/F)/x·(ln threshold + z²·ln γ1 + ligand
-   * terms) from the fixed per-atom columns (constant ΔCp°r, at and below 100 °C): for a row whose temperature or water
-   * differs from the last one's, cheaper than filling every column first.
+   * terms) from the fixed per-atom columns (constant ΔCp°r, at and below 100 °C), nothing stored: for a row whose
+   * temperature or water differs from the last one's, cheaper than filling every column first.
    */
   private dominantDirect(pH: number, E: number): number {
     const t = this.table;
-    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape } = this;
+    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape, k } = this;
     const { needs, dissolved, chargeSquared } = t;
-    const kpH = this.k * pH;
     const rtOverF = 1 / this.f;
     const { lnActivity, lnGamma1, lnC, lnS, lnCl, lnP } = this;
     const absent = ~this.present;
@@ -351,18 +345,13 @@ export class PointEngine {
     let bestG = INF;
     for (let i = 0, n = g0PerAtom.length; i < n; i++) {
       const need = needs[i];
-      let log = dissolved[i] * lnActivity + chargeSquared[i] * lnGamma1;
-      if (need) {
-        if (need & absent) continue;
-        log += t.carbonate[i] * lnC + t.sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP;
-      }
-      const g =
-        g0PerAtom[i] -
-        sPerAtom[i] * dT +
-        cpPerAtom[i] * shape +
-        protonPerAtom[i] * kpH +
-        c[i] * E +
-        rtOverF * perAtom[i] * log;
+      if (need & absent) continue;
+      // the same operations, in the same order, as ensureColumns and argmin: one answer whichever path a row takes
+      const aUnit = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape;
+      const r = rtOverF * perAtom[i];
+      const aThreshold = dissolved[i] ? aUnit + r * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit;
+      let g = aThreshold + protonPerAtom[i] * k * pH + c[i] * E;
+      if (need) g += r * (t.carbonate[i] * lnC + t.sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP);
       if (g < bestG) {
         bestG = g;
         best = i;
@@ -391,34 +380,4 @@ export function pointEngine(db: Database, element: string): PointEngine {
   let engine = byElement.get(element);
   if (!engine) byElement.set(element, (engine = new PointEngine(db, element)));
   return engine;
-}
-
-/**
- * The dominant species at one point of a drawn system's water (its temperature, threshold and ligand totals, or
- * `ligands` of the sample's own), from the point engine: what SPECIES answers there. Returns the species record.
- */
-export function dominantInWater(
-  db: Database,
-  system: {
-    readonly element: string;
-    readonly celsius: number;
-    readonly activity: number;
-    readonly ligandTotals?: LigandTotals;
-  },
-  pH: number,
-  E: number,
-  ligands?: LigandTotals,
-): SystemSpecies {
-  const water = ligands ?? system.ligandTotals ?? {};
-  const engine = pointEngine(db, system.element);
-  engine.setWater(
-    system.celsius,
-    system.activity,
-    water.carbonate ?? 0,
-    water.chloride ?? 0,
-    water.sulfur ?? 0,
-    0,
-    water.phosphate ?? 0,
-  );
-  return engine.table.species[engine.dominant(pH, E)];
 }

@@ -2,14 +2,11 @@
  * Answers drawn from a system's planes: boundaries along the pH line of a point, the diagram's regions as convex
  * polygons (the cells of the lower envelope of the planes), and the dissolved metal in equilibrium with a solid.
  */
+import { BOUNDARY_SEARCH_HIGH, BOUNDARY_SEARCH_LOW } from "./domain";
 import { FARADAY, GAS_CONSTANT } from "./constants";
 import { envelopeRegions } from "./envelope";
 import { clipPolygon, intervalOnVertical, Point, polygonArea, rectangle } from "./halfplane";
 import { cellAt, dominantSpecies, MetalSystem, PlaneCell, PRUNE_PH_MAX, PRUNE_PH_MIN } from "./system";
-
-/** Potentials searched for boundaries, V vs SHE (docs/method.md, Domain: #N/A when none in −3…+3 V). */
-export const BOUNDARY_SEARCH_LOW = -3;
-export const BOUNDARY_SEARCH_HIGH = 3;
 
 export interface BoundaryCrossing {
   /** Potential of the boundary, V vs SHE. */

@@ -6,6 +6,7 @@
  * of a half-reaction  ox + h H+ + n e− → red + w H2O  is E° = −ΔG°r / (nF); at other activities the Nernst
  * equation E = E° − (RT ln10 / nF)·log10 Q applies (Q products over reactants, H+ through pH).
  */
+import { DEFAULT_CELSIUS } from "./domain";
 import { FARADAY, GAS_CONSTANT, LN10, kelvin, nernstFactor } from "./constants";
 import { Database, Species } from "./database";
 import { Rational, rational, solveExact } from "./exact";
@@ -102,7 +103,7 @@ export function standardPotential(
   db: Database,
   oxidized: string | Species,
   reduced: string | Species,
-  celsius = 25,
+  celsius = DEFAULT_CELSIUS,
 ): number {
   const ox = typeof oxidized === "string" ? db.require(oxidized) : oxidized;
   const red = typeof reduced === "string" ? db.require(reduced) : reduced;
@@ -142,7 +143,11 @@ export function couplePotential(
  * log10 K of a reaction given as formula → coefficient (negative for reactants; "e-" for the electron) at
  * `celsius`. Checks the balance of every element and of charge first.
  */
-export function reactionLogK(db: Database, coefficients: Readonly<Record<string, number>>, celsius = 25): number {
+export function reactionLogK(
+  db: Database,
+  coefficients: Readonly<Record<string, number>>,
+  celsius = DEFAULT_CELSIUS,
+): number {
   return logKAt(balancedProperties(db, coefficients), celsius);
 }
 

@@ -11,7 +11,8 @@ import { Database } from "./database";
 import type { Point } from "./halfplane";
 import type { LigandTotals } from "./ligand-cells";
 import { pointBoundary } from "./point-boundary";
-import { pointEngine, PointEngine } from "./point-engine";
+import type { PointEngine } from "./point-engine";
+import { engineInWater, waterOf } from "./point-service";
 import type { DiagramWindow, Region } from "./predominance";
 import type { MetalSystem } from "./system";
 
@@ -51,17 +52,7 @@ export function tracedRegions(
   system: MetalSystem & { readonly ligandTotals?: LigandTotals },
   w: DiagramWindow,
 ): Region[] {
-  const engine = pointEngine(db, system.element);
-  const water = system.ligandTotals ?? {};
-  engine.setWater(
-    system.celsius,
-    system.activity,
-    water.carbonate ?? 0,
-    water.chloride ?? 0,
-    water.sulfur ?? 0,
-    0,
-    water.phosphate ?? 0,
-  );
+  const engine = engineInWater(db, system.element, waterOf(system.celsius, system.activity, system.ligandTotals ?? {}));
   const toSystem = engine.table.species.map((s) => system.species.findIndex((t) => t.formula === s.formula));
   const regions: Region[] = [];
   const emit = (left: Column, right: Column, leftPH: number, rightPH: number) => {

@@ -18,6 +18,7 @@
  * Kw from the species records drifts above R11-07 towards 100 °C (constant ΔCp°r of ionisation), so the published
  * formulation is used instead: pKw at 1 atm below 100 °C, on the saturation curve from 100 °C to 300 °C.
  */
+import { DEFAULT_CELSIUS } from "./domain";
 import { kelvin, nernstFactor } from "./constants";
 import { Database, getDatabase } from "./database";
 import { balancedProperties, logKAt, reactionLogK } from "./reaction";
@@ -40,7 +41,7 @@ const IONISATION = { "H2O(l)": -1, "H+": 1, "OH-": 1 } as const;
 const lineReactions = new WeakMap<Database, Record<WaterGas, ReactionProperties>>();
 
 /** Standard potential (V vs SHE) of the O2/H2O (gas "O2") or H+/H2 (gas "H2") couple at `celsius`. */
-export function waterStandardPotential(gas: WaterGas, celsius = 25, db: Database = getDatabase()): number {
+export function waterStandardPotential(gas: WaterGas, celsius = DEFAULT_CELSIUS, db: Database = getDatabase()): number {
   let reactions = lineReactions.get(db);
   if (!reactions) {
     reactions = { O2: balancedProperties(db, OXYGEN_REDUCTION), H2: balancedProperties(db, HYDROGEN_EVOLUTION) };
@@ -72,7 +73,7 @@ const lastHydrogen: LastPotential = { db: null, celsius: 0 / 0, e0: 0 };
  */
 export function waterLine(
   pH: number,
-  celsius = 25,
+  celsius = DEFAULT_CELSIUS,
   gas: WaterGas = "O2",
   pressure = 1,
   db: Database = getDatabase(),
@@ -84,22 +85,22 @@ export function waterLine(
 }
 
 /** pKw = −log10 Kw of H2O(l) = H+ + OH− at `celsius` (molal activities; IAPWS R11-07 at the model's pressure). */
-export function pKw(celsius = 25): number {
+export function pKw(celsius = DEFAULT_CELSIUS): number {
   return waterPKw(celsius);
 }
 
 /** pKw of H2O(l) = H+ + OH− from the species records of a database (constant ΔCp°r; for checks of the data). */
-export function recordsPKw(celsius = 25, db: Database = getDatabase()): number {
+export function recordsPKw(celsius = DEFAULT_CELSIUS, db: Database = getDatabase()): number {
   return -reactionLogK(db, IONISATION, celsius);
 }
 
 /** Ion product of water Kw(T). */
-export function kw(celsius = 25): number {
+export function kw(celsius = DEFAULT_CELSIUS): number {
   return 10 ** -pKw(celsius);
 }
 
 /** pH of pure water, where a(H+) = a(OH−): ½ pKw(T). */
-export function neutralPH(celsius = 25): number {
+export function neutralPH(celsius = DEFAULT_CELSIUS): number {
   return pKw(celsius) / 2;
 }
 
@@ -112,7 +113,7 @@ export function neutralPH(celsius = 25): number {
 export function waterMargin(
   pH: number,
   potential: number,
-  celsius = 25,
+  celsius = DEFAULT_CELSIUS,
   overpotential = 0,
   db: Database = getDatabase(),
 ): number {

@@ -3,6 +3,7 @@
  * functions on them (exactly as a worksheet range would), and turns the results into output cells, per-row error
  * text and the messages the command line prints. No I/O here.
  */
+import { DEFAULT_CELSIUS } from "../chemistry/domain";
 import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
 import { mapCells } from "../functions/broadcast";
 import { CellError, CellInput, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
@@ -550,7 +551,7 @@ interface EvaluatedColumns {
 
 /**
  * Offers each counted row's samples (one per metal with a regime) to the diagrams, in file order; a sample's point
- * is made only when the diagram keeps it (25 °C where the temperature is blank).
+ * is made only when the diagram keeps it (DEFAULT_CELSIUS where the temperature is blank).
  */
 function offerSamples(
   plan: EvaluationPlan,
@@ -576,7 +577,7 @@ function offerSamples(
       const symbol = diagrams.offer(p.target.symbol ?? String(p.elements![r]).trim());
       if (symbol === null) continue;
       const tCell = samples.temperatureAt(r);
-      const celsius = isBlank(tCell) ? 25 : Number(tCell);
+      const celsius = isBlank(tCell) ? DEFAULT_CELSIUS : Number(tCell);
       const E = samples.eShe[r] as number;
       const point: SamplePoint = { symbol, pH: Number(samples.pH[r]), E, regime, species, celsius, line: rows[r].line };
       const ligands = rowLigands(plan, r, ligandArgs);

@@ -4,6 +4,7 @@
  */
 import { parseArgs } from "node:util";
 import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
+import { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_ACTIVITY } from "../chemistry/domain";
 import type { DecimalMark } from "../tables/numbers";
 import type { TemperatureScale } from "../tables/units";
 
@@ -161,10 +162,10 @@ Chemistry
   -e, --electrode NAME       reference electrode of the readings: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M,
                              AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M, RHE (default: from the header)
   -u, --unit V|mV            unit of the readings (default: from the header)
-  -t, --temperature C        temperature in °C when there is no temperature column (default 25), and for the
+  -t, --temperature C        temperature in °C when there is no temperature column (default ${DEFAULT_CELSIUS}), and for the
                              blank cells of one (default: none — a blank temperature is a missing measurement,
                              that row's results are left blank and the row is reported)
-  -a, --activity A           activity of dissolved metal species, 0 < A ≤ 10 (default 1e-6)
+  -a, --activity A           activity of dissolved metal species, 0 < A ≤ ${MAX_ACTIVITY} (default ${DEFAULT_ACTIVITY.toExponential()})
       --dissolved-unit U     ug/L (default), mg/L or mol/kg
       --overpotential V      widens the water window on both sides for the margin column (default 0)
       --ionic-strength I     ionic strength in mol/kg (0 to 0.5) for every row; columns giving one are ignored
@@ -385,7 +386,13 @@ function numericOptions(v: OptionValues) {
       (x) => x >= MIN_CELSIUS && x <= MAX_CELSIUS,
       `a temperature from ${MIN_CELSIUS} to ${MAX_CELSIUS} °C`,
     ),
-    activity: numberOption("activity", v.activity, (x) => x > 0 && x <= 10, "a number above 0 and at most 10") ?? 1e-6,
+    activity:
+      numberOption(
+        "activity",
+        v.activity,
+        (x) => x > 0 && x <= MAX_ACTIVITY,
+        `a number above 0 and at most ${MAX_ACTIVITY}`,
+      ) ?? DEFAULT_ACTIVITY,
     overpotential:
       numberOption("overpotential", v.overpotential, (x) => x >= 0 && x <= 3, "a number of volts from 0 to 3") ?? 0,
     maxMessages:

@@ -8,6 +8,7 @@ import { DiagramSamples, diagramCelsius, diagramTotals, renderDiagram, totalsTex
 import type { EvaluationPlan } from "./evaluate";
 import type { CliOptions } from "./options";
 import { DEFAULT_CELSIUS } from "../chemistry/domain";
+import { SystemError } from "../chemistry/system";
 
 function baseName(path: string): string {
   const i = Math.max(path.lastIndexOf("/"), path.lastIndexOf("\\"));
@@ -55,21 +56,45 @@ function writeWhole(file: string, text: string): void {
   }
 }
 
-/** Draws and writes every metal's diagram; returns the files written. Throws on a failed write. */
-export function writeDiagrams(options: CliOptions, plan: EvaluationPlan, diagrams: DiagramSamples | null): string[] {
-  if (options.svgDir === null || diagrams === null) return [];
+/** The diagrams of a run: the files written, and why a metal's diagram was not drawn. */
+export interface DiagramOutcome {
+  readonly files: string[];
+  /** One line per metal whose diagram conditions (median temperature and water) the model refuses. */
+  readonly notDrawn: string[];
+}
+
+/**
+ * Draws and writes every metal's diagram. A metal whose median temperature and water the model refuses (e.g. above
+ * 100 °C with a ligand whose complexes lack S°) gets no diagram and a line in notDrawn; the others are still drawn.
+ * Throws on a failed write.
+ */
+export function writeDiagrams(
+  options: CliOptions,
+  plan: EvaluationPlan,
+  diagrams: DiagramSamples | null,
+): DiagramOutcome {
+  const outcome: DiagramOutcome = { files: [], notDrawn: [] };
+  if (options.svgDir === null || diagrams === null) return outcome;
   mkdirSync(options.svgDir, { recursive: true });
-  const files: string[] = [];
   const fixed = plan.fixedTemperature ?? DEFAULT_CELSIUS;
   for (const symbol of diagrams.symbols()) {
     const points = diagrams.points(symbol);
     const celsius = plan.temperatureColumn === null ? fixed : diagramCelsius(points, fixed);
     const ligands = diagramTotals(points);
     const caption = captionOf(options, plan, points.length, diagrams.count(symbol), celsius, totalsText(ligands));
-    const svg = renderDiagram({ element: symbol, celsius, activity: plan.activity, samples: points, caption, ligands });
+    let svg: string;
+    try {
+      svg = renderDiagram({ element: symbol, celsius, activity: plan.activity, samples: points, caption, ligands });
+    } catch (error) {
+      if (!(error instanceof SystemError)) throw error;
+      outcome.notDrawn.push(
+        `no ${symbol} diagram (drawn at the samples' median temperature and water): ${error.message}`,
+      );
+      continue;
+    }
     const file = join(options.svgDir, `diagram-${symbol}.svg`);
     writeWhole(file, svg);
-    files.push(file);
+    outcome.files.push(file);
   }
-  return files;
+  return outcome;
 }

@@ -185,7 +185,9 @@ async function finish(
   let diagramFailure: string | null = null;
   if (options.svgDir !== null) {
     try {
-      svgFiles = writeDiagrams(options, plan, run.diagrams);
+      const outcome = writeDiagrams(options, plan, run.diagrams);
+      svgFiles = outcome.files;
+      if (outcome.notDrawn.length > 0) diagramFailure = `the results are complete, but ${outcome.notDrawn.join("; ")}`;
     } catch (error) {
       diagramFailure = `the results are complete, but the diagrams cannot be written to "${clip(options.svgDir, 200)}": ${reason(error)}`;
     }

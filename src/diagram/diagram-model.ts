@@ -9,12 +9,12 @@
  */
 import { FULL_E_LIMIT, PH_MAX, PH_MIN } from "../chemistry/domain";
 import { clipPolygon, HalfPlane, Point, polygonArea } from "../chemistry/halfplane";
-import { getElectrodes } from "../chemistry/electrodes";
+import { getElectrodes, inRange } from "../chemistry/electrodes";
 import { hasLigands, type LigandTotals } from "../chemistry/ligand-cells";
 import { diagramRegions, Region } from "../chemistry/predominance";
 import { tracedRegions } from "../chemistry/region-tracing";
 import { getDatabase } from "../chemistry/database";
-import { dominantInWater } from "../chemistry/point-engine";
+import { dominantInWater } from "../chemistry/point-service";
 import { MetalSystem, Regime } from "../chemistry/system";
 import { waterLine } from "../chemistry/water";
 import type { AxisWindow } from "./axes";
@@ -33,6 +33,18 @@ export interface DisplayScale {
   toSHE(pH: number, shown: number): number;
   /** Axis title: "E / V vs SHE". */
   readonly axisTitle: string;
+}
+
+/**
+ * Why an axis vs `electrode` cannot be drawn at `celsius`, or null: outside the range where the electrode's
+ * temperature dependence is published (data/electrodes.json, validCelsius) its potential is not extrapolated.
+ */
+export function scaleProblem(electrode: string, celsius: number): string | null {
+  const found = getElectrodes().lookup(electrode);
+  if ("error" in found) return found.error;
+  if (inRange(found.electrode, celsius)) return null;
+  const [low, high] = found.electrode.validCelsius;
+  return `${found.electrode.id} is known from ${low} to ${high} °C only; at ${celsius} °C draw vs SHE`;
 }
 
 /** The scale of `electrode` (id or alias) and `unit` at `celsius`. Throws ElectrodeError for unknown names. */

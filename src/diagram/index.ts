@@ -15,7 +15,7 @@
  */
 export { AxisError, formatTick, makeAxes, niceTicks } from "./axes";
 export type { Axes, AxisWindow, PlotArea } from "./axes";
-export { defaultWindow, displayScale, plotSamples, shownRegions, shownWaterLines } from "./diagram-model";
+export { defaultWindow, displayScale, plotSamples, scaleProblem, shownRegions, shownWaterLines } from "./diagram-model";
 export type { DisplayScale, PlottedSample, PotentialUnit, SampleInput, ShownLine, ShownRegion } from "./diagram-model";
 export {
   diagramLayout,

@@ -2,6 +2,7 @@
  * Views of the diagram: the window fitted to the samples (the default when they are clustered), zooming about the
  * centre, and whether a set of samples is clustered in the full window.
  */
+import { PH_MAX, PH_MIN } from "../chemistry/domain";
 import type { AxisWindow } from "./axes";
 
 /** Samples are clustered when their padded box covers less than this share of the full window. */
@@ -37,8 +38,8 @@ export function fitWindow(
   const [pHMin, pHMax] = roundOut(...widen(p0, p1, MIN_PH_SPAN), 0.5);
   const [eMin, eMax] = roundOut(...widen(e0, e1, MIN_E_SPAN_V * factor), 0.05 * factor);
   return {
-    pHMin: Math.max(-2, pHMin),
-    pHMax: Math.min(16, pHMax),
+    pHMin: Math.max(PH_MIN, pHMin),
+    pHMax: Math.min(PH_MAX, pHMax),
     eMin: Number(eMin.toPrecision(6)),
     eMax: Number(eMax.toPrecision(6)),
   };
@@ -50,7 +51,7 @@ export function isClustered(fitted: AxisWindow, full: AxisWindow): boolean {
   return area(fitted) < CLUSTERED_SHARE * area(full);
 }
 
-/** The window scaled by `factor` about its centre (factor < 1 zooms in), kept inside pH −2…16. */
+/** The window scaled by `factor` about its centre (factor < 1 zooms in), kept inside the pH domain (PH_MIN…PH_MAX). */
 export function zoomWindow(w: AxisWindow, factor: number): AxisWindow {
   const cp = (w.pHMin + w.pHMax) / 2;
   const ce = (w.eMin + w.eMax) / 2;
@@ -58,8 +59,8 @@ export function zoomWindow(w: AxisWindow, factor: number): AxisWindow {
   const he = ((w.eMax - w.eMin) / 2) * factor;
   const round = (v: number) => Number(v.toPrecision(6));
   return {
-    pHMin: round(Math.max(-2, cp - hp)),
-    pHMax: round(Math.min(16, cp + hp)),
+    pHMin: round(Math.max(PH_MIN, cp - hp)),
+    pHMax: round(Math.min(PH_MAX, cp + hp)),
     eMin: round(ce - he),
     eMax: round(ce + he),
   };

@@ -6,6 +6,8 @@
  * columns (one output row per input row).
  */
 import { getDatabase } from "../chemistry/database";
+import { boundText } from "../chemistry/domain";
+import { BOUNDARY_SEARCH_HIGH, BOUNDARY_SEARCH_LOW } from "../chemistry/domain";
 import { pointBoundary } from "../chemistry/point-boundary";
 import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
 import { waterMargin } from "../chemistry/water";
@@ -81,7 +83,9 @@ function assessRow(element: string, pH: number, E: number, water: Water, unit: s
   const dominant = engine.table.species[engine.dominant(pH, E)];
   const boundary = (direction: 1 | -1): CellOutput =>
     pointBoundary(engine, pH, E, direction)?.E ??
-    notAvailable(`no boundary ${direction > 0 ? "above" : "below"} this point between −3 and +3 V`);
+    notAvailable(
+      `no boundary ${direction > 0 ? "above" : "below"} this point between ${boundText(BOUNDARY_SEARCH_LOW)} and +${BOUNDARY_SEARCH_HIGH} V`,
+    );
   const above = boundary(1);
   const below = boundary(-1);
   const dissolved = dissolvedWithSolid(engine, pH, E); // the engine already holds this row's water

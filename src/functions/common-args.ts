@@ -5,7 +5,9 @@ import {
   DEFAULT_ACTIVITY,
   DEFAULT_CELSIUS,
   MAX_ACTIVITY,
+  boundText,
   MAX_CELSIUS,
+  MAX_POTENTIAL,
   MIN_CELSIUS,
   PH_MAX,
   PH_MIN,
@@ -14,17 +16,14 @@ import { getDatabase } from "../chemistry/database";
 import { numberArg, textArg } from "./broadcast";
 import { argumentError } from "./cell-values";
 
-/** Defaults of omitted arguments (src/chemistry/domain.ts), re-exported for the functions. */
-export { DEFAULT_ACTIVITY, DEFAULT_CELSIUS };
+/** Defaults of omitted arguments and the potential range (src/chemistry/domain.ts), re-exported for the functions. */
+export { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_POTENTIAL };
 
 export const pHArg = numberArg("pH", { min: PH_MIN, max: PH_MAX });
 
-/** Largest potential magnitude accepted, V: beyond ±3 V no aqueous redox couple exists, so it is a reading in mV. */
-export const MAX_POTENTIAL = 3;
-
-/** What a potential beyond ±3 V most likely is, and what to do (a reading in mV typed where volts are expected). */
+/** What a potential beyond ±3 V (MAX_POTENTIAL: no aqueous redox couple exists there) most likely is, and what to do (a reading in mV typed where volts are expected). */
 export function potentialMessage(name: string, x: number): string {
-  return `${name}: ${x} is outside −3…+3 V: a reading in mV? Divide by 1000 or use REDOX.TOSHE(…, "mV")`;
+  return `${name}: ${x} is outside ${boundText(-MAX_POTENTIAL)}…+${MAX_POTENTIAL} V: a reading in mV? Divide by 1000 or use REDOX.TOSHE(…, "mV")`;
 }
 
 /** A potential in V vs SHE, −3 to +3 V. */

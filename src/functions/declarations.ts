@@ -24,6 +24,17 @@ export interface WorksheetFunctionDeclaration {
   readonly implementation: readonly [module: string, name: string];
 }
 
+import {
+  boundText,
+  DEFAULT_ACTIVITY,
+  DEFAULT_CELSIUS,
+  MAX_ACTIVITY,
+  MAX_CELSIUS,
+  MIN_CELSIUS,
+  PH_MAX,
+  PH_MIN,
+} from "../chemistry/domain";
+
 const required = (name: string, description: string): ArgumentDeclaration => ({ name, description });
 const optional = (name: string, description: string): ArgumentDeclaration => ({ name, description, optional: true });
 
@@ -32,15 +43,20 @@ const ELECTRODE_NAMES =
 const ELEMENT_NAMES = "Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo, V, W, Bi, Au, Pt, Hg, As, Sb, Se, U";
 const PRESSURE_NOTE = "1 atm below 100 °C, saturation pressure above";
 /** The temperature argument as the water and scale functions word it, and as the species functions do. */
-const WATER_TEMPERATURE = `Temperature in °C, 0 to 300 (default 25): ${PRESSURE_NOTE}.`;
-const TEMPERATURE = `Temperature in °C, 0 to 300 (${PRESSURE_NOTE}). Default 25.`;
-const ELECTRODE_TEMPERATURE = "Temperature of the reference electrode in °C (default 25).";
+const CELSIUS_RANGE = `${MIN_CELSIUS} to ${MAX_CELSIUS}`;
+const WATER_TEMPERATURE = `Temperature in °C, ${CELSIUS_RANGE} (default ${DEFAULT_CELSIUS}): ${PRESSURE_NOTE}.`;
+const TEMPERATURE = `Temperature in °C, ${CELSIUS_RANGE} (${PRESSURE_NOTE}). Default ${DEFAULT_CELSIUS}.`;
+const ELECTRODE_TEMPERATURE = `Temperature of the reference electrode in °C (default ${DEFAULT_CELSIUS}).`;
+/** The pH domain as the help text writes it: −2 to 16. */
+const PH_RANGE = `${boundText(PH_MIN)} to ${PH_MAX}`;
+/** The default activity as the help text writes it: 1e-6. */
+const ACTIVITY_DEFAULT = `Default ${DEFAULT_ACTIVITY.toExponential()}.`;
 
-const SOLUTION_PH = required("pH", "pH of the solution, −2 to 16.");
-const PH = required("pH", "pH, from -2 to 16.");
+const SOLUTION_PH = required("pH", `pH of the solution, ${PH_RANGE}.`);
+const PH = required("pH", `pH, from ${PH_MIN} to ${PH_MAX}.`);
 const METAL = required("element", "Metal symbol or name.");
 const POTENTIAL = required("potential", "Potential in volts vs SHE.");
-const ACTIVITY = optional("activity", "Activity of dissolved metal species. Default 1e-6.");
+const ACTIVITY = optional("activity", `Activity of dissolved metal species. ${ACTIVITY_DEFAULT}`);
 
 /** The water of a point: ligand totals and ionic strength, in this order (between temperature or activity and the rest). */
 const WATER: readonly ArgumentDeclaration[] = [
@@ -125,7 +141,7 @@ const WATER_FUNCTIONS: readonly WorksheetFunctionDeclaration[] = [
       required("reading", 'Measured potential against the reference electrode, in V (or mV with unit "mV").'),
       required("electrode", `Reference electrode: ${ELECTRODE_NAMES}.`),
       optional("temperature", ELECTRODE_TEMPERATURE),
-      optional("pH", "pH of the solution, −2 to 16; needed only for RHE."),
+      optional("pH", `pH of the solution, ${PH_RANGE}; needed only for RHE.`),
       optional("unit", 'Unit of the reading: "V" (default) or "mV". The result is always in V vs SHE.'),
     ],
     returns: "Potential in V vs SHE.",
@@ -138,7 +154,7 @@ const WATER_FUNCTIONS: readonly WorksheetFunctionDeclaration[] = [
       required("potential", "Potential in V vs SHE, −3 to +3."),
       required("electrode", `Reference electrode: ${ELECTRODE_NAMES}.`),
       optional("temperature", ELECTRODE_TEMPERATURE),
-      optional("pH", "pH of the solution, −2 to 16; needed only for RHE."),
+      optional("pH", `pH of the solution, ${PH_RANGE}; needed only for RHE.`),
       optional("unit", 'Unit of the result: "V" (default) or "mV".'),
     ],
     returns: "The reading against the electrode, in V or mV.",
@@ -187,7 +203,10 @@ const POINT_FUNCTIONS: readonly WorksheetFunctionDeclaration[] = [
         "Potential in volts vs SHE, −3 to +3 (convert meter readings, also in mV, with REDOX.TOSHE).",
       ),
       optional("temperature", TEMPERATURE),
-      optional("activity", "Activity of dissolved metal species, above 0 and at most 10. Default 1e-6."),
+      optional(
+        "activity",
+        `Activity of dissolved metal species, above 0 and at most ${MAX_ACTIVITY}. ${ACTIVITY_DEFAULT}`,
+      ),
       ...WATER,
     ],
     returns: "Formula of the dominant species.",
@@ -218,7 +237,7 @@ const POINT_FUNCTIONS: readonly WorksheetFunctionDeclaration[] = [
       required("reduced", "Formula of the reduced species, e.g. Fe2+ or Fe(s)."),
       PH,
       optional("temperature", TEMPERATURE),
-      optional("activity", "Activity of the dissolved species. Default 1e-6."),
+      optional("activity", `Activity of the dissolved species. ${ACTIVITY_DEFAULT}`),
     ],
     returns: "Equilibrium potential in volts vs SHE.",
     implementation: ["stability-functions", "coupleAt"],
@@ -279,9 +298,9 @@ const POINT_FUNCTIONS: readonly WorksheetFunctionDeclaration[] = [
       required("potential", "Potential in volts vs SHE, −3 to +3 (convert meter readings with REDOX.TOSHE)."),
       optional(
         "temperature",
-        `Temperature in °C, 0 to 300 (${PRESSURE_NOTE}). Default 25; a blank cell is a missing measurement.`,
+        `Temperature in °C, ${CELSIUS_RANGE} (${PRESSURE_NOTE}). Default ${DEFAULT_CELSIUS}; a blank cell is a missing measurement.`,
       ),
-      optional("activity", "Activity of dissolved metal species deciding the dominant species. Default 1e-6."),
+      optional("activity", `Activity of dissolved metal species deciding the dominant species. ${ACTIVITY_DEFAULT}`),
       ...WATER_BRIEF,
       optional("unit", "Unit of the dissolved metal: mol/kg (default), mg/L or ug/L."),
       optional("header", "TRUE for a header row above the answers."),

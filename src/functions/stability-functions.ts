@@ -7,10 +7,11 @@ import { getDatabase, Species } from "../chemistry/database";
 import { formationGibbsAt } from "../chemistry/formation";
 import { pointBoundary } from "../chemistry/point-boundary";
 import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
-import { PointEngine, pointEngine } from "../chemistry/point-engine";
+import type { PointEngine } from "../chemistry/point-engine";
+import { engineAtPoint } from "../chemistry/point-service";
 import { speciesTable as metalSpeciesTable } from "../chemistry/species-tables";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
-import { CONSTANT_GIBBS_MAX_CELSIUS, presentLigands, temperatureProblem } from "../chemistry/temperature-range";
+import { CONSTANT_GIBBS_MAX_CELSIUS } from "../chemistry/temperature-range";
 import type { SystemSpecies } from "../chemistry/system";
 import { ownEntry } from "../chemistry/own-entry";
 import { mapCells, textArg } from "./broadcast";
@@ -18,12 +19,9 @@ import { argumentError, CellError, CellInput, CellOutput, notAvailable, toHostEr
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 
-let lastElement = "";
-let lastEngine: PointEngine | null = null;
-
 /**
- * The point engine of an element with the row's water set (the engine keeps what depends only on T), or #VALUE!
- * naming the species without S° when the element cannot be answered above 100 °C (temperature-range.ts).
+ * The point engine of an element with the row's water set (point-service.ts), or #VALUE! naming the species without
+ * S° when the element cannot be answered above 100 °C (temperature-range.ts).
  */
 export function engineIn(
   element: string,
@@ -35,21 +33,9 @@ export function engineIn(
   phosphate: number,
   ionicStrength: number,
 ): PointEngine | CellError {
-  if (celsius > CONSTANT_GIBBS_MAX_CELSIUS) {
-    const problem = temperatureProblem(
-      getDatabase(),
-      element,
-      celsius,
-      presentLigands(carbonate, chloride, sulfur, phosphate),
-    );
-    if (problem) return valueError(problem, "temperature");
-  }
-  if (element !== lastElement || !lastEngine) {
-    lastEngine = pointEngine(getDatabase(), element);
-    lastElement = element;
-  }
-  lastEngine.setWater(celsius, activity, carbonate, chloride, sulfur, ionicStrength, phosphate);
-  return lastEngine;
+  const db = getDatabase();
+  const engine = engineAtPoint(db, element, celsius, activity, carbonate, chloride, sulfur, phosphate, ionicStrength);
+  return typeof engine === "string" ? valueError(engine, "temperature") : engine;
 }
 
 const directionArg = textArg<1 | -1>(

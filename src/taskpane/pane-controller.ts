@@ -11,7 +11,14 @@ import { hasLigands, ligandKey, LIGAND_ORDER, LigandTotals } from "../chemistry/
 import { buildLigandSystem } from "../chemistry/ligand-system";
 import type { MetalSystem } from "../chemistry/system";
 import type { AxisWindow } from "../diagram/axes";
-import { defaultWindow, displayScale, PotentialUnit, shownRegions, shownWaterLines } from "../diagram/diagram-model";
+import {
+  defaultWindow,
+  displayScale,
+  PotentialUnit,
+  scaleProblem,
+  shownRegions,
+  shownWaterLines,
+} from "../diagram/diagram-model";
 import { formatActivity, renderDiagramSvg, sampleText } from "../diagram/diagram-svg";
 import { ligandEdges } from "../diagram/ligand-edges";
 import { fitWindow, isClustered, zoomWindow } from "../diagram/view-window";
@@ -321,6 +328,8 @@ export class DiagramPane {
     if ("error" in rows) return this.status(rows.error);
     const { read, celsius } = rows;
     showTemperatureSpread(rows.temperatures, celsius, this.table !== null, this.manualTemperature);
+    const axisProblem = scaleProblem(electrode, celsius);
+    if (axisProblem) return this.status(`The diagram could not be drawn: ${axisProblem}.`);
     // the water: typed ligand totals, or each row's from a column with the median for the diagram
     const resolved = resolveWater(waterInput.settings, read?.rowTotals ?? []);
     let system: MetalSystem;

@@ -2,7 +2,16 @@
  * The pane's settings controls and menus: metal, electrode, unit and activity (remembered per workbook), the
  * column menus, the axis limits, and the site menus (filter and colours).
  */
-import { DEFAULT_CELSIUS } from "../chemistry/domain";
+import {
+  boundText,
+  DEFAULT_ACTIVITY,
+  DEFAULT_CELSIUS,
+  FULL_E_LIMIT,
+  MAX_CELSIUS,
+  MIN_CELSIUS,
+  PH_MAX,
+  PH_MIN,
+} from "../chemistry/domain";
 import type { Database } from "../chemistry/database";
 import { getElectrodes } from "../chemistry/electrodes";
 import type { AxisWindow } from "../diagram/axes";
@@ -22,7 +31,10 @@ const ROLE_WORDS: Record<ColumnRole, string> = {
   metal: "Metal",
 };
 
-/** The metal, comparison and electrode menus, and the remembered settings (else Fe, SHE, V, 25 °C). */
+/**
+ * The metal, comparison and electrode menus, the remembered settings (else Fe, SHE, V, the default activity and
+ * temperature) and the limits of the domain (src/chemistry/domain.ts) on the inputs.
+ */
 export function fillSettingControls(db: Database, settings: PaneSettings): void {
   const metals = select("metal");
   const metalText = (symbol: string) => `${db.system(symbol)?.title ?? symbol} (${symbol})`;
@@ -33,8 +45,11 @@ export function fillSettingControls(db: Database, settings: PaneSettings): void 
   for (const e of getElectrodes().all()) electrodes.add(new Option(`${e.id} — ${e.name}`, e.id));
   electrodes.value = settings.electrode ?? "SHE";
   select("unit").value = settings.unit ?? "V";
-  if (settings.activity) input("activity").value = String(settings.activity);
-  input("temperature").value = String(DEFAULT_CELSIUS);
+  input("activity").value = settings.activity ? String(settings.activity) : DEFAULT_ACTIVITY.toExponential();
+  const temperature = input("temperature");
+  [temperature.min, temperature.max] = [String(MIN_CELSIUS), String(MAX_CELSIUS)];
+  temperature.value = String(DEFAULT_CELSIUS);
+  $("full-range").title = `pH ${boundText(PH_MIN)}…${PH_MAX}, ±${FULL_E_LIMIT} V`;
 }
 
 /** The settings as shown in the controls (metal, electrode, unit, activity), to remember. */

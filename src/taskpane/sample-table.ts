@@ -4,10 +4,9 @@
  * chosen electrode at the row's own temperature when it has one (the reference electrode sits in that water),
  * otherwise at the diagram's temperature. Pure: no host, no DOM.
  */
-import { PH_MAX, PH_MIN } from "../chemistry/domain";
+import { boundText, MAX_CELSIUS, MAX_POTENTIAL, MIN_CELSIUS, PH_MAX, PH_MIN } from "../chemistry/domain";
 import { getElectrodes, type Electrode, type ElectrodeTable } from "../chemistry/electrodes";
 import { getDatabase } from "../chemistry/database";
-import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
 import type { LigandName } from "../chemistry/ligand-cells";
 import { ColumnMapping, findHeaderRow, POINT_NUMBER, toCelsius, WaterColumn } from "../tables";
 import type { PotentialUnit, SampleInput } from "../diagram/diagram-model";
@@ -80,7 +79,7 @@ export function median(values: readonly number[]): number {
 
 const NO_TOTALS: RowTotals = Object.freeze({});
 const PH_RANGE = [PH_MIN, PH_MAX] as const; // docs/method.md, Domain
-const E_RANGE = [-3, 3] as const; // V vs SHE, the span searched for boundaries (docs/method.md, Domain)
+const E_RANGE = [-MAX_POTENTIAL, MAX_POTENTIAL] as const; // V vs SHE, the span searched for boundaries (docs/method.md, Domain)
 
 /** Why a row cannot be drawn (empty when it can), with its pH, temperature (°C) and E vs SHE as read. */
 function checkRow(
@@ -98,7 +97,8 @@ function checkRow(
   const temperature = mapping.temperature >= 0 ? readNumber(cell(mapping.temperature)) : ({ blank: true } as Parsed);
   if ("blank" in pH) reasons.push("pH is blank");
   else if ("error" in pH) reasons.push(`pH ${pH.error}`);
-  else if (pH.value < PH_RANGE[0] || pH.value > PH_RANGE[1]) reasons.push(`pH ${pH.value} is outside −2…16`);
+  else if (pH.value < PH_RANGE[0] || pH.value > PH_RANGE[1])
+    reasons.push(`pH ${pH.value} is outside ${boundText(PH_MIN)}…${PH_MAX}`);
   if ("blank" in reading) reasons.push("potential is blank");
   else if ("error" in reading) reasons.push(`potential ${reading.error}`);
   let celsius = options.celsius;
@@ -117,7 +117,7 @@ function checkRow(
     eSHE = reading.value * factor + electrodes.potential(electrode, celsius, pH.value);
     if (eSHE < E_RANGE[0] || eSHE > E_RANGE[1]) {
       reasons.push(
-        `potential ${reading.value} ${options.unit} is ${eSHE.toFixed(2)} V vs SHE, outside −3…+3 V (is the unit right?)`,
+        `potential ${reading.value} ${options.unit} is ${eSHE.toFixed(2)} V vs SHE, outside ${boundText(-MAX_POTENTIAL)}…+${MAX_POTENTIAL} V (is the unit right?)`,
       );
     }
   }

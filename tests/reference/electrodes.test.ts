@@ -1,12 +1,15 @@
 // Reference electrode potentials vs SHE at 25 °C and at one other temperature, each against a named source, plus
 // the name look-up, the conversions and the load-time validation. No internet was available: every published
-// value here is recalled ("from memory"). `independent: false` marks checks whose reference value comes from the
-// same published formula as the record (they prove the record and the code reproduce that formula, not the formula).
+// value here is recalled ("from memory"). The published values live in fixtures/electrodes/potentials.json, where
+// `roundTrip` marks checks whose reference value comes from the same published formula as the record (they prove
+// the record and the code reproduce that formula, not the formula).
 import { describe, expect, it } from "vitest";
+import { z } from "zod";
 import electrodesJson from "../../data/electrodes.json";
 import { ElectrodeError, ElectrodeTable, fromSHE, getElectrodes, toSHE } from "../../src/chemistry/electrodes";
 import { CellError } from "../../src/functions/cell-values";
 import { fromSHEAt, toSHEAt } from "../../src/functions/electrode-functions";
+import { loadReferenceFixture, ReferenceCheck } from "../../test-support/reference-fixture";
 
 const table = getElectrodes();
 const byId = (id: string) => {
@@ -24,218 +27,64 @@ const calomelStandard = (t: number) => 0.26808 - 0.3e-3 * (t - 25);
 const sceSawyer = (t: number) => 0.2412 - 6.61e-4 * (t - 25) - 1.75e-6 * (t - 25) ** 2 - 9.0e-10 * (t - 25) ** 3;
 const nernst = (celsius: number) => (8.314462618 * (celsius + 273.15) * Math.LN10) / 96485.33212;
 
-interface Case {
-  id: string;
-  celsius: number;
-  pH?: number;
-  value: number;
-  tolerance: number;
-  source: string;
-  independent: boolean;
-}
+const electrodePoint = z.strictObject({ electrode: z.string(), celsius: z.number(), pH: z.number().optional() });
+type Case = ReferenceCheck<z.infer<typeof electrodePoint>>;
 
-const at25: Case[] = [
-  {
-    id: "SHE",
-    celsius: 25,
-    value: 0,
-    tolerance: 0.003,
-    source: "IUPAC convention (common practice)",
-    independent: true,
-  },
-  {
-    id: "SCE",
-    celsius: 25,
-    value: 0.2412,
-    tolerance: 0.003,
-    source: "Bard & Faulkner 2001, Electrochemical Methods, reference electrode table (from memory)",
-    independent: false,
-  },
-  {
-    id: "SCE",
-    celsius: 25,
-    value: 0.2415,
-    tolerance: 0.003,
-    source: "Ives & Janz 1961, Reference Electrodes, saturated calomel at 25 °C (from memory)",
-    independent: true,
-  },
-  {
-    id: "AgCl-sat",
-    celsius: 25,
-    value: 0.197,
-    tolerance: 0.003,
-    source: "Bard & Faulkner 2001, Ag/AgCl saturated KCl (from memory)",
-    independent: false,
-  },
-  {
-    id: "AgCl-sat",
-    celsius: 25,
-    value: agclStandard(25) + sceSawyer(25) - calomelStandard(25),
-    tolerance: 0.003,
-    source:
-      "derived: the saturated-KCl chloride term is the same for SCE and Ag/AgCl, so E = E°(AgCl/Ag) [Bates & Bower 1954] + E(SCE) [Sawyer et al. 1995] − E°(Hg2Cl2/Hg) [Bard, Parsons & Jordan 1985] (all from memory)",
-    independent: true,
-  },
-  {
-    id: "AgCl-3.5M",
-    celsius: 25,
-    value: 0.205,
-    tolerance: 0.003,
-    source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 3.5 M KCl (from memory)",
-    independent: false,
-  },
-  {
-    id: "AgCl-3M",
-    celsius: 25,
-    value: 0.209,
-    tolerance: 0.003,
-    source: "manufacturers' tables for Ag/AgCl 3 mol/L KCl, 0.207–0.210 V (from memory)",
-    independent: true,
-  },
-  {
-    id: "AgCl-1M",
-    celsius: 25,
-    value: 0.235,
-    tolerance: 0.003,
-    source: "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 1 M KCl (from memory)",
-    independent: false,
-  },
-  {
-    id: "AgCl-1M",
-    celsius: 25,
-    value: agclStandard(25) - nernst(25) * Math.log10(1.033 * 0.604),
-    tolerance: 0.003,
-    source:
-      "derived: E°(AgCl/Ag) of Bates & Bower 1954 with a(Cl−) = m·γ±, 1 mol/L KCl = 1.033 mol/kg, γ± = 0.604 (Robinson & Stokes, Electrolyte Solutions 1959) (from memory)",
-    independent: true,
-  },
-  {
-    id: "AgCl-sea",
-    celsius: 25,
-    value: 0.25,
-    tolerance: 0.003,
-    source: "DNV-RP-B401 / NACE SP0176, Ag/AgCl/seawater +0.25 V vs SHE (from memory)",
-    independent: false,
-  },
-  {
-    id: "CSE",
-    celsius: 25,
-    value: 0.316,
-    tolerance: 0.003,
-    source: "Peabody, Control of Pipeline Corrosion 2001; NACE practice, Cu/CuSO4 +0.316 V vs SHE (from memory)",
-    independent: false,
-  },
-  {
-    id: "MSE",
-    celsius: 25,
-    value: 0.64,
-    tolerance: 0.003,
-    source: "Bard & Faulkner 2001, Hg/Hg2SO4 saturated K2SO4 (from memory)",
-    independent: false,
-  },
-  {
-    id: "HgO-1M",
-    celsius: 25,
-    value: 0.098,
-    tolerance: 0.003,
-    source: "Hg/HgO in 1 M KOH, value used throughout the alkaline-electrolysis literature (from memory)",
-    independent: false,
-  },
-  {
-    id: "RHE",
-    celsius: 25,
-    pH: 7,
-    value: -0.414,
-    tolerance: 0.003,
-    source: "common practice: RHE at pH 7 lies 0.414 V below SHE",
-    independent: true,
-  },
+/** Published potentials: within 3 mV at 25 °C, 5 mV at another temperature (DEVELOPERS.md, reference electrodes). */
+const published: Case[] = loadReferenceFixture(
+  new URL("./fixtures/electrodes/potentials.json", import.meta.url),
+  electrodePoint,
+  { ceiling: (c) => (c.inputs.celsius === 25 ? 0.003 : 0.005) },
+);
+
+/** Potentials derived here from several published formulas (written out above), so the arithmetic shows. */
+const derived = (electrode: string, celsius: number, value: number, tolerance: number, source: string): Case => ({
+  id: `${electrode} at ${celsius} °C`,
+  inputs: { electrode, celsius },
+  value,
+  tolerance,
+  unit: "V vs SHE",
+  source,
+});
+
+const derivedCases: Case[] = [
+  derived(
+    "AgCl-sat",
+    25,
+    agclStandard(25) + sceSawyer(25) - calomelStandard(25),
+    0.003,
+    "derived: the saturated-KCl chloride term is the same for SCE and Ag/AgCl, so E = E°(AgCl/Ag) [Bates & Bower 1954] + E(SCE) [Sawyer et al. 1995] − E°(Hg2Cl2/Hg) [Bard, Parsons & Jordan 1985] (all from memory)",
+  ),
+  derived(
+    "AgCl-1M",
+    25,
+    agclStandard(25) - nernst(25) * Math.log10(1.033 * 0.604),
+    0.003,
+    "derived: E°(AgCl/Ag) of Bates & Bower 1954 with a(Cl−) = m·γ±, 1 mol/L KCl = 1.033 mol/kg, γ± = 0.604 (Robinson & Stokes, Electrolyte Solutions 1959) (from memory)",
+  ),
+  derived(
+    "AgCl-sat",
+    40,
+    agclStandard(40) + sceSawyer(40) - calomelStandard(40),
+    0.005,
+    "derived as at 25 °C from Bates & Bower 1954, Sawyer et al. 1995 and Bard, Parsons & Jordan 1985 (from memory)",
+  ),
+  derived(
+    "AgCl-1M",
+    50,
+    agclStandard(50) - nernst(50) * Math.log10(1.033 * 0.6),
+    0.005,
+    "derived: Bates & Bower 1954 E° at 50 °C with γ±(KCl, 1 mol/kg, 50 °C) = 0.600 (Harned & Owen, The Physical Chemistry of Electrolytic Solutions 1958) (from memory)",
+  ),
 ];
 
-const otherTemperature: Case[] = [
-  {
-    id: "SHE",
-    celsius: 80,
-    value: 0,
-    tolerance: 0.005,
-    source: "IUPAC convention: zero at every temperature (common practice)",
-    independent: true,
-  },
-  {
-    id: "RHE",
-    celsius: 60,
-    pH: 7,
-    value: -7 * 0.066104,
-    tolerance: 0.005,
-    source: "Nernst equation, k(60 °C) = 0.066104 V (common practice)",
-    independent: true,
-  },
-  {
-    id: "SCE",
-    celsius: 40,
-    value: 0.2309,
-    tolerance: 0.005,
-    source: "Sawyer et al. 1995 polynomial evaluated by hand at 40 °C (from memory)",
-    independent: false,
-  },
-  {
-    id: "AgCl-sat",
-    celsius: 40,
-    value: agclStandard(40) + sceSawyer(40) - calomelStandard(40),
-    tolerance: 0.005,
-    source:
-      "derived as at 25 °C from Bates & Bower 1954, Sawyer et al. 1995 and Bard, Parsons & Jordan 1985 (from memory)",
-    independent: true,
-  },
-  {
-    id: "AgCl-1M",
-    celsius: 50,
-    value: agclStandard(50) - nernst(50) * Math.log10(1.033 * 0.6),
-    tolerance: 0.005,
-    source:
-      "derived: Bates & Bower 1954 E° at 50 °C with γ±(KCl, 1 mol/kg, 50 °C) = 0.600 (Harned & Owen, The Physical Chemistry of Electrolytic Solutions 1958) (from memory)",
-    independent: true,
-  },
-  {
-    id: "CSE",
-    celsius: 5,
-    value: 0.298,
-    tolerance: 0.005,
-    source: "pipeline practice: E = 0.316 + 0.0009 (t − 25) V vs SHE, NACE / Peabody 2001 (from memory)",
-    independent: false,
-  },
-  {
-    id: "HgO-1M",
-    celsius: 50,
-    value: 0.098 - 25 * 1.12e-3,
-    tolerance: 0.005,
-    source: "Bratsch 1989, dE°/dT of HgO/Hg −1.12 mV/K, applied to the 1 M KOH value (from memory)",
-    independent: false,
-  },
-  {
-    id: "AgCl-3.5M",
-    celsius: 50,
-    value: 0.205 - 25 * 0.73e-3,
-    tolerance: 0.005,
-    source:
-      "Sawyer, Sobkowiak & Roberts 1995, Ag/AgCl 3.5 M KCl: 0.205 V, dE/dT −0.73 mV/K, applied linearly (from memory)",
-    independent: true,
-  },
-  {
-    id: "MSE",
-    celsius: 40,
-    value: 0.64 - 15 * 0.83e-3,
-    tolerance: 0.005,
-    source: "Bratsch 1989, dE°/dT of Hg2SO4/Hg −0.83 mV/K, applied to the saturated K2SO4 value (from memory)",
-    independent: false,
-  },
-];
+const cases = [...published, ...derivedCases];
 
 describe("reference electrodes vs SHE", () => {
-  for (const c of [...at25, ...otherTemperature]) {
-    it(`${c.id} at ${c.celsius} °C${c.pH === undefined ? "" : `, pH ${c.pH}`} is ${c.value.toFixed(4)} V within ${c.tolerance * 1000} mV (${c.source})`, () => {
-      const e = byId(c.id);
-      const got = table.potential(e, c.celsius, c.pH);
+  for (const c of cases) {
+    const { electrode, celsius, pH } = c.inputs;
+    it(`${c.id}${pH === undefined ? "" : `, pH ${pH}`} is ${c.value.toFixed(4)} V within ${c.tolerance * 1000} mV (${c.source})`, () => {
+      const got = table.potential(byId(electrode), celsius, pH);
       expect(Math.abs(got - c.value)).toBeLessThanOrEqual(c.tolerance);
     });
   }
@@ -246,12 +95,12 @@ describe("reference electrodes vs SHE", () => {
   it.todo("AgCl-sea at a second temperature against cathodic-protection practice");
 
   it("prints the residuals", () => {
-    const lines = [...at25, ...otherTemperature].map((c) => {
-      const r = table.potential(byId(c.id), c.celsius, c.pH) - c.value;
-      return `${c.id}@${c.celsius}°C: ${(r * 1000).toFixed(1)} mV${c.independent ? "" : " (same formula)"}`;
+    const lines = cases.map(({ inputs, value, roundTrip }) => {
+      const r = table.potential(byId(inputs.electrode), inputs.celsius, inputs.pH) - value;
+      return `${inputs.electrode}@${inputs.celsius}°C: ${(r * 1000).toFixed(1)} mV${roundTrip ? " (same formula)" : ""}`;
     });
     console.log(lines.join("\n"));
-    expect(lines.length).toBe(at25.length + otherTemperature.length);
+    expect(lines.length).toBe(published.length + derivedCases.length);
   });
 
   it("every electrode of README's electrode table is in the data, each citing its sources", () => {

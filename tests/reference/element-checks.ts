@@ -1,14 +1,17 @@
 /**
  * Shared runners for the reference checks of the elements added for environmental and specialist laboratories
- * (tests/reference/elements-contaminants.test.ts, elements-specialist.test.ts): acid constants with a tolerance
- * of their own, boundary equations of published diagrams at 25 °C, and documented disagreements of constants.
- * Each case carries its own source; the runners only apply the tolerances stated here.
+ * (tests/reference/elements-contaminants.test.ts, elements-specialist.test.ts) and of the group A metals' Atlas
+ * lines: acid constants with a tolerance of their own, boundary equations of published diagrams at 25 °C, and
+ * documented disagreements of constants. The check values, tolerances and sources live in JSON fixtures
+ * (tests/reference/fixtures/); the loaders state the largest tolerance each kind of check may carry.
  */
 import { describe, expect, it } from "vitest";
+import { z } from "zod";
 import { nernstFactor, T0 } from "../../src/chemistry/constants";
 import { getDatabase } from "../../src/chemistry/database";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import { buildSystem, pairBoundary } from "../../src/chemistry/system";
+import { loadReferenceFixture, ReferenceCheck } from "../../test-support/reference-fixture";
 
 const db = getDatabase();
 
@@ -22,17 +25,17 @@ const K25 = nernstFactor(T0);
 const ACTIVITY = 1e-6;
 const LOG_A = Math.log10(ACTIVITY);
 
-/** pKa of an acid HA = A + H+ from the records, compared with the published value within `tolerance` (default 0.15). */
-export interface AcidCase {
-  label: string;
-  acid: string;
-  base: string;
-  pKa: number;
-  source: string;
-  tolerance?: number;
-  /** False where the base's ΔfG° was derived from this very constant or one equal to it within 0.05. */
-  independent: boolean;
-}
+/** An acid HA = A + H+; the value is its pKa. */
+const acidBase = z.strictObject({ acid: z.string(), base: z.string() });
+export type AcidCase = ReferenceCheck<z.infer<typeof acidBase>>;
+
+/** Acid constants: 0.15 at most, 0.2 where a note says why (round trips: the base derived from an equal constant). */
+export const loadAcids = (file: URL): AcidCase[] =>
+  loadReferenceFixture(file, acidBase, { ceiling: (c) => (c.note ? 0.2 : 0.15) });
+
+/** Documented disagreements of acid constants: the followed value within 0.02, the other beyond 0.15. */
+export const loadAcidDisagreements = (file: URL): AcidCase[] =>
+  loadReferenceFixture(file, acidBase, { ceiling: () => 0.02, differsBy: 0.15 });
 
 export function pKaOf(acid: string, base: string): number {
   return -reactionLogK(db, { [acid]: -1, [base]: 1, "H+": 1 }, 25);
@@ -41,97 +44,110 @@ export function pKaOf(acid: string, base: string): number {
 export function checkAcids(title: string, cases: readonly AcidCase[]): void {
   describe(title, () => {
     for (const c of cases) {
-      const kind = c.independent ? "independent" : "near round trip: record derived from an equal constant";
-      it(`${c.label}: pKa ${c.pKa} (${c.source}) [${kind}]`, () => {
-        expect(Math.abs(pKaOf(c.acid, c.base) - c.pKa)).toBeLessThanOrEqual(c.tolerance ?? 0.15);
+      const kind = c.roundTrip ? "near round trip: record derived from an equal constant" : "independent";
+      it(`${c.id}: pKa ${c.value} (${c.source}) [${kind}]`, () => {
+        expect(Math.abs(pKaOf(c.inputs.acid, c.inputs.base) - c.value)).toBeLessThanOrEqual(c.tolerance);
       });
     }
   });
 }
 
 /** Constants where the records follow one compilation and the published value differs by more than the tolerance. */
-export interface AcidDisagreement extends AcidCase {
-  follows: number;
-  followsSource: string;
-}
-
-export function checkAcidDisagreements(title: string, cases: readonly AcidDisagreement[]): void {
+export function checkAcidDisagreements(title: string, cases: readonly AcidCase[]): void {
   describe(title, () => {
     for (const c of cases) {
-      it(`${c.label}: data give pKa ${c.follows} (${c.followsSource}); ${c.source} gives ${c.pKa}`, () => {
-        const pKa = pKaOf(c.acid, c.base);
-        expect(Math.abs(pKa - c.follows)).toBeLessThanOrEqual(0.02);
-        expect(Math.abs(pKa - c.pKa)).toBeGreaterThan(c.tolerance ?? 0.15);
+      const other = c.differsFrom!;
+      it(`${c.id}: data give pKa ${c.value} (${c.source}); ${other.source} gives ${other.value}`, () => {
+        const pKa = pKaOf(c.inputs.acid, c.inputs.base);
+        expect(Math.abs(pKa - c.value)).toBeLessThanOrEqual(c.tolerance);
+        expect(Math.abs(pKa - other.value)).toBeGreaterThan(other.moreThan);
       });
     }
   });
 }
 
 /**
- * A boundary line of a published diagram at 25 °C written as E = e0 − (h/n)·k·pH + logCoef·log10(a) for dissolved
- * species at the common activity a = 1e-6, or as a vertical line at pH0 (acid–base, h protons).
+ * A boundary line of a published diagram at 25 °C: a line E = value − hPerN·k·pH + logCoef·log10(a) for dissolved
+ * species at the common activity a = 1e-6 (value: V at unit activity), or a vertical line at pH = value (at 1e-6,
+ * acid–base, tolerance 0.5/h for h protons).
  */
-export interface DiagramLine {
-  element: string;
-  pair: [string, string];
-  equation: string;
-  source: string;
-  kind: "line" | "vertical";
-  e0?: number;
-  hPerN?: number;
-  logCoef?: number;
-  pH0?: number;
-  h?: number;
-  /** True where the record was derived from the same published number (the check proves the arithmetic only). */
-  derived?: boolean;
+const diagramLine = z.discriminatedUnion("kind", [
+  z.strictObject({
+    element: z.string(),
+    pair: z.tuple([z.string(), z.string()]),
+    equation: z.string(),
+    kind: z.literal("line"),
+    hPerN: z.number(),
+    logCoef: z.number(),
+  }),
+  z.strictObject({
+    element: z.string(),
+    pair: z.tuple([z.string(), z.string()]),
+    equation: z.string(),
+    kind: z.literal("vertical"),
+  }),
+]);
+export type DiagramLine = ReferenceCheck<z.infer<typeof diagramLine>>;
+
+/** Lines: intercept 30 mV at most (2 mV for round trips); vertical lines: pH 0.5 at most (0.5/h). */
+export const loadDiagramLines = (file: URL): DiagramLine[] =>
+  loadReferenceFixture(file, diagramLine, {
+    ceiling: (c) => (c.inputs.kind === "vertical" ? 0.5 : c.roundTrip ? 0.002 : 0.03),
+  });
+
+/**
+ * Published lines the data do not reproduce: value = the records' intercept at 1e-6 (3 mV), differsFrom.value =
+ * the published E at unit activity, more than 30 mV from the records' once its logCoef·log10(1e-6) is added.
+ */
+export const loadDiagramDisagreements = (file: URL): DiagramLine[] =>
+  loadReferenceFixture(file, diagramLine, { ceiling: () => 0.003, differsBy: 0.03 });
+
+function boundaryOf({ inputs }: DiagramLine) {
+  const system = buildSystem(db, inputs.element, { celsius: 25, activity: ACTIVITY });
+  return pairBoundary(system, inputs.pair[0], inputs.pair[1]);
 }
 
-function boundaryOf(line: DiagramLine) {
-  return pairBoundary(buildSystem(db, line.element, { celsius: 25, activity: ACTIVITY }), line.pair[0], line.pair[1]);
-}
-
-/** Intercept within 30 mV (vertical: pH within 0.5/h), slope exactly −(h/n)·k. */
+/** Intercept (vertical: pH) within the record's tolerance, slope exactly −(h/n)·k. */
 export function checkDiagramLines(title: string, lines: readonly DiagramLine[]): void {
   describe(title, () => {
     for (const line of lines) {
-      const tag = line.derived ? " [record derived from the same value: arithmetic check]" : "";
-      it(`${line.element}: ${line.pair[0]} / ${line.pair[1]}: ${line.equation} (${line.source})${tag}`, () => {
+      const tag = line.roundTrip ? " [record derived from the same value: arithmetic check]" : "";
+      it(`${line.id}: ${line.inputs.equation} (${line.source})${tag}`, () => {
         const boundary = boundaryOf(line);
-        expect(boundary?.kind).toBe(line.kind);
+        const { inputs } = line;
+        expect(boundary?.kind).toBe(inputs.kind);
         if (boundary?.kind === "vertical") {
-          expect(Math.abs(boundary.pH - line.pH0!), `pH ${boundary.pH.toFixed(3)} vs ${line.pH0}`).toBeLessThanOrEqual(
-            0.5 / (line.h ?? 1),
-          );
+          expect(
+            Math.abs(boundary.pH - line.value),
+            `pH ${boundary.pH.toFixed(3)} vs ${line.value}`,
+          ).toBeLessThanOrEqual(line.tolerance);
           return;
         }
-        if (boundary?.kind !== "line") return;
-        const expected = line.e0! + line.logCoef! * LOG_A;
+        if (boundary?.kind !== "line" || inputs.kind !== "line") return;
+        const expected = line.value + inputs.logCoef * LOG_A;
         expect(
           Math.abs(boundary.intercept - expected),
           `intercept ${boundary.intercept.toFixed(4)} V vs ${expected.toFixed(4)} V`,
-        ).toBeLessThanOrEqual(line.derived ? 0.002 : 0.03);
-        expect(Math.abs(boundary.slope - -line.hPerN! * K25)).toBeLessThan(1e-12);
+        ).toBeLessThanOrEqual(line.tolerance);
+        expect(Math.abs(boundary.slope - -inputs.hPerN * K25)).toBeLessThan(1e-12);
       });
     }
   });
 }
 
-/** Published lines the data do not reproduce within 30 mV: the data's intercept (3 mV) and the gap (> 30 mV) are pinned. */
-export interface DiagramDisagreement extends DiagramLine {
-  follows: number;
-  reason: string;
-}
-
-export function checkDiagramDisagreements(title: string, lines: readonly DiagramDisagreement[]): void {
+/** Published lines the data do not reproduce within 30 mV: the data's intercept and the gap are pinned. */
+export function checkDiagramDisagreements(title: string, lines: readonly DiagramLine[]): void {
   describe(title, () => {
     for (const line of lines) {
-      it(`${line.element}: ${line.pair[0]} / ${line.pair[1]}: ${line.source} ${line.equation}; data intercept ${line.follows} V at 1e-6 (${line.reason})`, () => {
+      const other = line.differsFrom!;
+      const { inputs } = line;
+      it(`${line.id}: ${other.source} ${inputs.equation}; data intercept ${line.value} V at 1e-6 (${line.source})`, () => {
         const boundary = boundaryOf(line);
         expect(boundary?.kind).toBe("line");
-        if (boundary?.kind !== "line") return;
-        const published = line.e0! + line.logCoef! * LOG_A;
-        expect(Math.abs(boundary.intercept - line.follows)).toBeLessThanOrEqual(0.003);
-        expect(Math.abs(boundary.intercept - published)).toBeGreaterThan(0.03);
+        if (boundary?.kind !== "line" || inputs.kind !== "line") return;
+        const published = other.value + inputs.logCoef * LOG_A;
+        expect(Math.abs(boundary.intercept - line.value)).toBeLessThanOrEqual(line.tolerance);
+        expect(Math.abs(boundary.intercept - published)).toBeGreaterThan(other.moreThan);
       });
     }
   });

@@ -4,10 +4,12 @@
  * ΔG°f, S° and Cp° with the constant-ΔCp integration.
  */
 import { describe, expect, it } from "vitest";
+import { z } from "zod";
 import { getDatabase } from "../../src/chemistry/database";
 import { standardPotential } from "../../src/chemistry/reaction";
 import { buildSystem, pairBoundary } from "../../src/chemistry/system";
 import { nearestBoundary } from "../../src/chemistry/predominance";
+import { loadReferenceFixture } from "../../test-support/reference-fixture";
 
 const db = getDatabase();
 
@@ -17,29 +19,14 @@ function slopeMilliVoltPerKelvin(ox: string, red: string): number {
 }
 
 describe("isothermal temperature coefficients dE°/dT (V vs SHE)", () => {
-  const cases = [
-    {
-      ox: "Ag+",
-      red: "Ag(s)",
-      value: -0.989,
-      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)",
-    },
-    {
-      ox: "Zn2+",
-      red: "Zn(s)",
-      value: 0.119,
-      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)",
-    },
-    {
-      ox: "Cu2+",
-      red: "Cu(s)",
-      value: 0.008,
-      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table 2 (from memory)",
-    },
-  ];
+  const cases = loadReferenceFixture(
+    new URL("./fixtures/engine-temperature/temperature-coefficients.json", import.meta.url),
+    z.strictObject({ pair: z.tuple([z.string(), z.string()]) }),
+    { ceiling: () => 0.02 },
+  );
   for (const c of cases) {
-    it(`${c.ox}/${c.red}: ${c.value} mV/K — ${c.source}`, () => {
-      expect(Math.abs(slopeMilliVoltPerKelvin(c.ox, c.red) - c.value)).toBeLessThan(0.02);
+    it(`${c.id}: ${c.value} mV/K — ${c.source}`, () => {
+      expect(Math.abs(slopeMilliVoltPerKelvin(...c.inputs.pair) - c.value)).toBeLessThan(c.tolerance);
     });
   }
 });

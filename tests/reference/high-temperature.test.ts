@@ -4,6 +4,7 @@
  * magnetite near the hydrogen line at boiler temperatures, and the refusals where the records lack S°.
  */
 import { describe, expect, it } from "vitest";
+import { z } from "zod";
 import fixture from "../fixtures/iapws-water.json";
 import { GAS_CONSTANT, kelvin, nernstFactor, T0 } from "../../src/chemistry/constants";
 import { getDatabase } from "../../src/chemistry/database";
@@ -16,6 +17,7 @@ import { neutralPH, recordsPKw, waterLine } from "../../src/chemistry/water";
 import { CellError } from "../../src/functions/cell-values";
 import { coupleAt, speciesAt } from "../../src/functions/stability-functions";
 import { neutralPHAt, waterLineAt } from "../../src/functions/water-functions";
+import { loadReferenceFixture } from "../../test-support/reference-fixture";
 
 const db = getDatabase();
 const withEntropy = db.allSpecies().filter((s) => s.S !== null);
@@ -118,21 +120,18 @@ describe("Criss & Cobble (1964) correspondence against published high-temperatur
     }
   });
 
-  // E°(AgCl/Ag): Bates & Bower 1954 to 95 °C (data/electrodes.json) and Greeley, Smith, Stoughton & Lietzke,
-  // J. Phys. Chem. 64, 652 (1960), measured to 275 °C (values from memory: 0.1032 V at 150 °C, 0.0348 V at 200 °C,
-  // −0.0475 V at 250 °C)
+  // E°(AgCl/Ag): Bates & Bower 1954 to 95 °C (data/electrodes.json) and Greeley, Smith, Stoughton & Lietzke 1960,
+  // measured to 275 °C: fixtures/high-temperature/silver-chloride.json
   const silverChloride = (celsius: number) =>
     nernstFactor(kelvin(celsius)) * reactionLogK(db, { "AgCl(s)": -1, "e-": -1, "Ag(s)": 1, "Cl-": 1 }, celsius);
-  it("E°(AgCl/Ag) at 90 °C within 3 mV of Bates & Bower 1954 (0.16945 V from their polynomial)", () => {
-    expect(Math.abs(silverChloride(90) - 0.16945)).toBeLessThan(0.003);
-  });
-  for (const [celsius, published, tolerance] of [
-    [150, 0.1032, 0.01],
-    [200, 0.0348, 0.01],
-    [250, -0.0475, 0.025],
-  ]) {
-    it(`E°(AgCl/Ag) at ${celsius} °C within ${tolerance * 1000} mV of Greeley et al. 1960 (${published} V, from memory)`, () => {
-      expect(Math.abs(silverChloride(celsius) - published)).toBeLessThan(tolerance);
+  const silverChlorideChecks = loadReferenceFixture(
+    new URL("./fixtures/high-temperature/silver-chloride.json", import.meta.url),
+    z.strictObject({ celsius: z.number() }),
+    { ceiling: (c) => (c.inputs.celsius <= 100 ? 0.003 : c.inputs.celsius <= 200 ? 0.01 : 0.025) },
+  );
+  for (const c of silverChlorideChecks) {
+    it(`${c.id} within ${c.tolerance * 1000} mV: ${c.value} V (${c.source})`, () => {
+      expect(Math.abs(silverChloride(c.inputs.celsius) - c.value)).toBeLessThan(c.tolerance);
     });
   }
 });
@@ -168,12 +167,14 @@ describe("functions at 100–300 °C", () => {
     expect(typeof waterLineAt(7, 300, "H2")[0][0]).toBe("number");
   });
 
-  it("REDOX.SPECIES above 100 °C is #VALUE! naming the species without S° and the range 0–100 °C", () => {
-    const out = speciesAt("Fe", 6, -0.5, 250)[0][0] as CellError;
+  it("REDOX.SPECIES above 100 °C is #VALUE! for a metal whose species lack S°, naming them and the range 0–100 °C (copper: Cu2(OH)2 2+)", () => {
+    const out = speciesAt("Cu", 6, 0, 250)[0][0] as CellError;
     expect(out).toBeInstanceOf(CellError);
     expect(out.code).toBe("#VALUE!");
-    expect(out.message).toMatch(/^temperature 250 °C: Fe is modelled 0–100 °C only;.*FeOH\+/);
-    expect(typeof speciesAt("Fe", 6, -0.5, 100)[0][0]).toBe("string");
+    expect(out.message).toMatch(/^temperature 250 °C: Cu is modelled 0–100 °C only;.*Cu2\(OH\)22\+/);
+    expect(typeof speciesAt("Cu", 6, 0, 100)[0][0]).toBe("string");
+    // iron opened when its hydroxo-complexes got S° (tests/reference/boiler-metals.test.ts)
+    expect(typeof speciesAt("Fe", 6, -0.5, 250)[0][0]).toBe("string");
   });
 
   it("REDOX.COUPLE answers above 100 °C for couples whose records carry S°, and refuses the others by name", () => {
@@ -181,9 +182,10 @@ describe("functions at 100–300 °C", () => {
       standardPotential(db, "Fe2+", "Fe(s)", 250),
       12,
     );
-    const refused = coupleAt("FeOH+", "Fe", 0, 250, 1)[0][0] as CellError;
+    expect(typeof coupleAt("FeOH+", "Fe", 0, 250, 1)[0][0]).toBe("number");
+    const refused = coupleAt("Cu2(OH)22+", "Cu", 0, 250, 1)[0][0] as CellError;
     expect(refused.code).toBe("#VALUE!");
-    expect(refused.message).toMatch(/lack S° for FeOH\+/);
+    expect(refused.message).toMatch(/lack S° for Cu2\(OH\)22\+/);
   });
 
   it("temperatures beyond 300 °C are refused", () => {

@@ -1,13 +1,14 @@
 /**
  * Carbonic acid constants and dissolved inorganic carbon.
  *
- * Check values: Harned & Davis (1943) for pK1 and KH and Harned & Scholes (1941) for pK2 at 5 and 25 °C — the
- * measurements Plummer & Busenberg (1982) fitted — and the Plummer & Busenberg fit itself at 60 °C (beyond the
- * Harned series), all within 0.03. Both the fit in src/chemistry/carbonic-acid.ts and the constants the engine
- * derives from the carbonate species records (which set the ligand cells and every metal carbonate plane) are
- * checked.
+ * Check values (fixtures/ligands/carbonic-acid.json): Harned & Davis (1943) for pK1 and KH and Harned & Scholes
+ * (1941) for pK2 at 5 and 25 °C — the measurements Plummer & Busenberg (1982) fitted — and the Plummer & Busenberg
+ * fit itself at 60 °C (beyond the Harned series), all within 0.03. Both the fit in src/chemistry/carbonic-acid.ts
+ * and the constants the engine derives from the carbonate species records (which set the ligand cells and every
+ * metal carbonate plane) are checked.
  */
 import { describe, expect, it } from "vitest";
+import { z } from "zod";
 import { alkalinityEquivalents, dicFromAlkalinity } from "../../src/chemistry/alkalinity";
 import { carbonicPK1, carbonicPK2, logHenryCO2 } from "../../src/chemistry/carbonic-acid";
 import { getDatabase } from "../../src/chemistry/database";
@@ -16,25 +17,14 @@ import { reactionLogK } from "../../src/chemistry/reaction";
 import { pKw } from "../../src/chemistry/water";
 import { dic } from "../../src/functions/functions";
 import { CellError } from "../../src/functions/cell-values";
+import { loadReferenceFixture } from "../../test-support/reference-fixture";
 
 const db = getDatabase();
-const HD =
-  "Harned, H.S., Davis, R., J. Am. Chem. Soc. 65, 2030 (1943), as tabulated by Plummer & Busenberg 1982, GCA 46:1011 (from memory)";
-const HS =
-  "Harned, H.S., Scholes, S.R., J. Am. Chem. Soc. 63, 1706 (1941), as tabulated by Plummer & Busenberg 1982, GCA 46:1011 (from memory)";
-const PB60 = "Plummer & Busenberg 1982, GCA 46:1011, log K(T) fit evaluated at 60 °C (from memory)";
-
-const CASES: { what: "pK1" | "pK2" | "logKH"; celsius: number; value: number; source: string }[] = [
-  { what: "pK1", celsius: 5, value: 6.517, source: HD },
-  { what: "pK1", celsius: 25, value: 6.352, source: HD },
-  { what: "pK1", celsius: 60, value: 6.29, source: PB60 },
-  { what: "pK2", celsius: 5, value: 10.557, source: HS },
-  { what: "pK2", celsius: 25, value: 10.329, source: HS },
-  { what: "pK2", celsius: 60, value: 10.144, source: PB60 },
-  { what: "logKH", celsius: 5, value: -1.192, source: HD },
-  { what: "logKH", celsius: 25, value: -1.468, source: HD },
-  { what: "logKH", celsius: 60, value: -1.784, source: PB60 },
-];
+const constant = z.strictObject({ constant: z.enum(["pK1", "pK2", "logKH"]), celsius: z.number() });
+/** Harned & Davis 1943, Harned & Scholes 1941 and the Plummer & Busenberg 1982 fit: within 0.03 at most. */
+const CASES = loadReferenceFixture(new URL("./fixtures/ligands/carbonic-acid.json", import.meta.url), constant, {
+  ceiling: () => 0.03,
+});
 
 function fromFit(what: string, celsius: number): number {
   return what === "pK1" ? carbonicPK1(celsius) : what === "pK2" ? carbonicPK2(celsius) : logHenryCO2(celsius);
@@ -48,11 +38,12 @@ function fromSpecies(what: string, celsius: number): number {
 
 describe("carbonic acid constants within 0.03 (5, 25, 60 °C)", () => {
   for (const c of CASES) {
-    it(`${c.what} at ${c.celsius} °C = ${c.value}: fit (${c.source})`, () => {
-      expect(Math.abs(fromFit(c.what, c.celsius) - c.value)).toBeLessThanOrEqual(0.03);
+    const { constant, celsius } = c.inputs;
+    it(`${c.id} = ${c.value}: fit (${c.source})`, () => {
+      expect(Math.abs(fromFit(constant, celsius) - c.value)).toBeLessThanOrEqual(c.tolerance);
     });
-    it(`${c.what} at ${c.celsius} °C = ${c.value}: from the species records (${c.source})`, () => {
-      expect(Math.abs(fromSpecies(c.what, c.celsius) - c.value)).toBeLessThanOrEqual(0.03);
+    it(`${c.id} = ${c.value}: from the species records (${c.source})`, () => {
+      expect(Math.abs(fromSpecies(constant, celsius) - c.value)).toBeLessThanOrEqual(c.tolerance);
     });
   }
 });

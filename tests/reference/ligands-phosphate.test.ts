@@ -10,6 +10,8 @@ import { dissolvedEquilibrium } from "../../src/chemistry/point-dissolved";
 import { pointEngine } from "../../src/chemistry/point-engine";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import { dissolved, species } from "../../src/functions/functions";
+import { loadReferenceFixture } from "../../test-support/reference-fixture";
+import { reactionInputs } from "./compilation-checks";
 
 const db = getDatabase();
 const logK = (r: Record<string, number>, celsius = 25) => reactionLogK(db, r, celsius);
@@ -30,34 +32,36 @@ const water = (
   ...w,
 });
 
-const ACIDS: { step: string; reaction: Record<string, number>; pK: number; dH: number }[] = [
-  { step: "H3PO4 = H+ + H2PO4-", reaction: { "H3PO4(aq)": -1, "H+": 1, "H2PO4-": 1 }, pK: 2.15, dH: -8.0 },
-  { step: "H2PO4- = H+ + HPO4 2-", reaction: { "H2PO4-": -1, "H+": 1, "HPO42-": 1 }, pK: 7.2, dH: 4.2 },
-  { step: "HPO4 2- = H+ + PO4 3-", reaction: { "HPO42-": -1, "H+": 1, "PO43-": 1 }, pK: 12.35, dH: 14.7 },
-];
+/** A constant of a reaction, loaded with the largest tolerance its check allows. */
+const constants = (file: URL, ceiling: number) =>
+  loadReferenceFixture(file, reactionInputs, { ceiling: () => ceiling });
+
+const ACIDS = constants(new URL("./fixtures/ligands/phosphoric-acid.json", import.meta.url), 0.02);
+const ENTHALPIES = constants(new URL("./fixtures/ligands/phosphoric-acid-enthalpy.json", import.meta.url), 1.5);
 
 describe("phosphoric acid constants at 25 °C within 0.02 (" + NIST + ")", () => {
   for (const a of ACIDS) {
-    it(`${a.step}: pKa ${a.pK}`, () => {
-      expect(Math.abs(-logK(a.reaction) - a.pK)).toBeLessThanOrEqual(0.02);
+    it(`${a.id}: pKa ${a.value}`, () => {
+      expect(Math.abs(-logK(a.inputs.reaction) - a.value)).toBeLessThanOrEqual(a.tolerance);
     });
   }
 });
 
 describe("temperature dependence of the phosphoric acid constants from the records' ΔH", () => {
   // van 't Hoff with the records' ΔH (ΔCp = 0 in the records): d pKa/dT = −ΔH/(R ln10 T²); check values: ΔH of
-  // dissociation −8.0, +4.2, +14.7 kJ/mol (Smith & Martell 1976 enthalpies, from memory), within 1.5 kJ/mol
-  for (const a of ACIDS) {
-    it(`${a.step}: ΔH ≈ ${a.dH} kJ/mol from pKa at 15 and 35 °C`, () => {
+  // dissociation (fixtures/ligands/phosphoric-acid-enthalpy.json)
+  for (const a of ENTHALPIES) {
+    const reaction = a.inputs.reaction;
+    it(`${a.id}: ΔH ≈ ${a.value} kJ/mol from pKa at 15 and 35 °C`, () => {
       const R = 8.314462618e-3;
       const t1 = 288.15;
       const t2 = 308.15;
-      const dH = (-R * Math.LN10 * (logK(a.reaction, 35) - logK(a.reaction, 15))) / (1 / t2 - 1 / t1);
-      expect(Math.abs(dH - a.dH)).toBeLessThanOrEqual(1.5);
+      const dH = (-R * Math.LN10 * (logK(reaction, 35) - logK(reaction, 15))) / (1 / t2 - 1 / t1);
+      expect(Math.abs(dH - a.value)).toBeLessThanOrEqual(a.tolerance);
     });
   }
   it("pKa2 at 5 °C is above its 25 °C value by 0.05–0.2 (endothermic step; Bates & Acree 1943 buffer data give about +0.1, from memory)", () => {
-    const shift = -logK(ACIDS[1].reaction, 5) + logK(ACIDS[1].reaction, 25);
+    const shift = -logK(ACIDS[1].inputs.reaction, 5) + logK(ACIDS[1].inputs.reaction, 25);
     expect(shift).toBeGreaterThan(0.05);
     expect(shift).toBeLessThan(0.2);
   });
@@ -65,10 +69,10 @@ describe("temperature dependence of the phosphoric acid constants from the recor
 
 describe("exact phosphate speciation at the point against the α-fractions by hand", () => {
   // hand computation from the records' own constants: α(HPO4 2-) = 1/(1 + h/K2 + h²/(K1K2) + K3/h)
-  const [K1, K2, K3] = ACIDS.map((a) => 10 ** logK(a.reaction));
+  const [K1, K2, K3] = ACIDS.map((a) => 10 ** logK(a.inputs.reaction));
   const total = 3e-5;
   const engine = pointEngine(db, "Pb");
-  const pKs = ACIDS.map((a) => -logK(a.reaction));
+  const pKs = ACIDS.map((a) => -logK(a.inputs.reaction));
   for (const pH of [pKs[0], pKs[1], pKs[1] + 0.5, 7.5, pKs[2], 2, 11]) {
     it(`pH ${pH.toFixed(3)}: a(HPO4 2-) = total·α to 1e-12 relative`, () => {
       const h = 10 ** -pH;
@@ -86,67 +90,12 @@ describe("exact phosphate speciation at the point against the α-fractions by ha
 });
 
 /** Solubility products at 25 °C, zero ionic strength: the records must give them back within 0.02 log units. */
-const SOLUBILITY: { solid: string; reaction: Record<string, number>; logK: number; source: string }[] = [
-  {
-    solid: "hydroxypyromorphite",
-    reaction: { "Pb5(PO4)3OH(s)": -1, "Pb2+": 5, "PO43-": 3, "OH-": 1 },
-    logK: -76.8,
-    source: "Nriagu 1974, Geochim. Cosmochim. Acta 38:887 (from memory)",
-  },
-  {
-    solid: "chloropyromorphite",
-    reaction: { "Pb5(PO4)3Cl(s)": -1, "Pb2+": 5, "PO43-": 3, "Cl-": 1 },
-    logK: -84.4,
-    source: "Nriagu 1973, Geochim. Cosmochim. Acta 37:367 (from memory)",
-  },
-  {
-    solid: "lead hydrogen phosphate",
-    reaction: { "PbHPO4(s)": -1, "Pb2+": 1, "HPO42-": 1 },
-    logK: -11.43,
-    source: "Nriagu 1972, Inorg. Chem. 11:2499 (from memory)",
-  },
-  {
-    solid: "lead orthophosphate",
-    reaction: { "Pb3(PO4)2(s)": -1, "Pb2+": 3, "PO43-": 2 },
-    logK: -43.53,
-    source: "value commonly quoted in lead phosphate work; published −43.5 to −44.5 (from memory)",
-  },
-  {
-    solid: "copper(II) phosphate",
-    reaction: { "Cu3(PO4)2(s)": -1, "Cu2+": 3, "PO43-": 2 },
-    logK: -36.85,
-    source: "Smith & Martell 1976 vol. 4 (from memory)",
-  },
-  {
-    solid: "hopeite",
-    reaction: { "Zn3(PO4)2·4H2O(s)": -1, "Zn2+": 3, "PO43-": 2, "H2O(l)": 4 },
-    logK: -35.42,
-    source: "Nriagu 1973, Geochim. Cosmochim. Acta 37:2357 (from memory)",
-  },
-  {
-    solid: "strengite",
-    reaction: { "FePO4·2H2O(s)": -1, "Fe3+": 1, "PO43-": 1, "H2O(l)": 2 },
-    logK: -26.4,
-    source: "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed. (from memory)",
-  },
-  {
-    solid: "vivianite",
-    reaction: { "Fe3(PO4)2·8H2O(s)": -1, "Fe2+": 3, "PO43-": 2, "H2O(l)": 8 },
-    logK: -36.0,
-    source: "Nriagu 1972, Geochim. Cosmochim. Acta 36:459 (from memory)",
-  },
-  {
-    solid: "variscite",
-    reaction: { "AlPO4·2H2O(s)": -1, "Al3+": 1, "PO43-": 1, "H2O(l)": 2 },
-    logK: -22.1,
-    source: "Lindsay 1979, Chemical Equilibria in Soils (from memory)",
-  },
-];
+const SOLUBILITY = constants(new URL("./fixtures/ligands/phosphate-solubility.json", import.meta.url), 0.02);
 
 describe("metal phosphate records give back their published solubility products within 0.02", () => {
   for (const c of SOLUBILITY) {
-    it(`${c.solid}: log Ksp = ${c.logK} (${c.source})`, () => {
-      expect(Math.abs(logK(c.reaction) - c.logK)).toBeLessThanOrEqual(0.02);
+    it(`${c.id}: log Ksp = ${c.value} (${c.source})`, () => {
+      expect(Math.abs(logK(c.inputs.reaction) - c.value)).toBeLessThanOrEqual(c.tolerance);
     });
   }
   it("hydroxypyromorphite in the acid form: log K = −62.8 for Pb5(PO4)3OH + H+ = 5Pb2+ + 3PO4 3- + H2O (Schock, Wagner & Oliphant 1996, from memory), within 0.05", () => {
@@ -160,13 +109,13 @@ describe("equilibrium lead with orthophosphate", () => {
   const ug = (total: number | null) => (total as number) * 207.2e6;
   it("hand computation: Pb2+ over hydroxypyromorphite at pH 7.5, DIC 1e-3, 1 mg/L PO4 from the records' constants", () => {
     // with no carbonate complexes in the way: a(PO4 3-) = total·α3, a(OH-) = Kw/h; 5 log Pb = log Ksp − 3 log PO4 − log OH
-    const [K1, K2, K3] = ACIDS.map((a) => 10 ** logK(a.reaction));
+    const [K1, K2, K3] = ACIDS.map((a) => 10 ** logK(a.inputs.reaction));
     const pH = 7.5;
     const h = 10 ** -pH;
     const total = PER_MG_PO4;
     const alpha3 = 1 / (1 + h / K3 + (h * h) / (K2 * K3) + (h * h * h) / (K1 * K2 * K3));
     const logOH = logK({ "H2O(l)": -1, "H+": 1, "OH-": 1 }) + pH;
-    const logPb = (logK(SOLUBILITY[0].reaction) - 3 * Math.log10(total * alpha3) - logOH) / 5;
+    const logPb = (logK(SOLUBILITY[0].inputs.reaction) - 3 * Math.log10(total * alpha3) - logOH) / 5;
     const engine = pointEngine(db, "Pb");
     engine.setWater(25, 1e-6, 1e-3, 0, 0, 0, total);
     engine.ligandsAt(pH, 0.3);

@@ -1,8 +1,8 @@
 /**
  * Ligand records against published constants, and hand calculations of the ligand treatment from the data.
  *
- * Solubility products at 25 °C, zero ionic strength, within 0.5 log units; acid constants of the sulfur system
- * within 0.05. Every check value names its source; all were recalled from memory.
+ * Solubility products at 25 °C, zero ionic strength, within 0.5 log units (fixtures/ligands/solubility-products.json);
+ * acid constants of the sulfur system within 0.05. Every check value names its source; all were recalled from memory.
  */
 import { describe, expect, it } from "vitest";
 import { kelvin, nernstFactor } from "../../src/chemistry/constants";
@@ -13,55 +13,34 @@ import { dissolvedEquilibrium } from "../../src/chemistry/point-dissolved";
 import { dissolvedAtPoint } from "../../src/chemistry/predominance";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import { dominantSpecies, speciesIndex, speciesPotential } from "../../src/chemistry/system";
+import { boundText } from "../../src/chemistry/domain";
+import { loadReferenceFixture } from "../../test-support/reference-fixture";
+import { loadConstants, reactionInputs } from "./compilation-checks";
 
 const db = getDatabase();
-const SM = "Smith & Martell 1976, Critical Stability Constants vol. 4 (from memory)";
 
-const SOLUBILITY: { solid: string; reaction: Record<string, number>; logK: number; source: string }[] = [
-  { solid: "cerussite", reaction: { "PbCO3(s)": -1, "Pb2+": 1, "CO32-": 1 }, logK: -13.13, source: SM },
-  {
-    solid: "siderite",
-    reaction: { "FeCO3(s)": -1, "Fe2+": 1, "CO32-": 1 },
-    logK: -10.8,
-    source: "Bruno, Wersin & Stumm 1992, Geochim. Cosmochim. Acta 56:1149 (from memory; other studies −10.5 to −10.9)",
-  },
-  { solid: "smithsonite", reaction: { "ZnCO3(s)": -1, "Zn2+": 1, "CO32-": 1 }, logK: -10.0, source: SM },
-  { solid: "silver carbonate", reaction: { "Ag2CO3(s)": -1, "Ag+": 2, "CO32-": 1 }, logK: -11.09, source: SM },
-  { solid: "anglesite", reaction: { "PbSO4(s)": -1, "Pb2+": 1, "SO42-": 1 }, logK: -7.79, source: SM },
-  { solid: "nantokite", reaction: { "CuCl(s)": -1, "Cu+": 1, "Cl-": 1 }, logK: -6.73, source: SM },
-  { solid: "cerargyrite", reaction: { "AgCl(s)": -1, "Ag+": 1, "Cl-": 1 }, logK: -9.75, source: SM },
-  { solid: "cotunnite", reaction: { "PbCl2(s)": -1, "Pb2+": 1, "Cl-": 2 }, logK: -4.78, source: SM },
-  {
-    solid: "sphalerite",
-    reaction: { "ZnS(s)": -1, "H+": -1, "Zn2+": 1, "HS-": 1 },
-    logK: -11.5,
-    source:
-      "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., sulfide solubility table, ZnS + H+ = Zn2+ + HS- (from memory)",
-  },
-  {
-    solid: "acanthite",
-    reaction: { "Ag2S(s)": -1, "H+": -1, "Ag+": 2, "HS-": 1 },
-    logK: -36.2,
-    source:
-      "Stumm & Morgan 1996, Aquatic Chemistry 3rd ed., sulfide solubility table, Ag2S + H+ = 2Ag+ + HS- (from memory)",
-  },
-];
+const SOLUBILITY = loadConstants(new URL("./fixtures/ligands/solubility-products.json", import.meta.url));
 
 describe("solubility products at 25 °C within 0.5 log units", () => {
   for (const c of SOLUBILITY) {
-    it(`${c.solid}: log K = ${c.logK} (${c.source})`, () => {
-      expect(Math.abs(reactionLogK(db, c.reaction, 25) - c.logK)).toBeLessThanOrEqual(0.5);
+    it(`${c.id}: log K = ${c.value} (${c.source})`, () => {
+      expect(Math.abs(reactionLogK(db, c.inputs.reaction, 25) - c.value)).toBeLessThanOrEqual(c.tolerance);
     });
   }
 });
 
+const SULFUR_ACIDS = loadReferenceFixture(
+  new URL("./fixtures/ligands/sulfur-acids.json", import.meta.url),
+  reactionInputs,
+  { ceiling: () => 0.05 },
+);
+
 describe("sulfur system acid constants", () => {
-  it("H2S pK1 = 6.98 within 0.05 (Millero 1986, Mar. Chem. 18:121, The thermodynamics and kinetics of the hydrogen sulfide system in natural waters; from memory)", () => {
-    expect(Math.abs(-reactionLogK(db, { "H2S(aq)": -1, "H+": 1, "HS-": 1 }, 25) - 6.98)).toBeLessThanOrEqual(0.05);
-  });
-  it("HSO4- pK = 1.99 within 0.05 (Dickson, Wesolowski, Palmer & Mesmer 1990, J. Phys. Chem. 94:7978; from memory)", () => {
-    expect(Math.abs(-reactionLogK(db, { "HSO4-": -1, "H+": 1, "SO42-": 1 }, 25) - 1.99)).toBeLessThanOrEqual(0.05);
-  });
+  for (const c of SULFUR_ACIDS) {
+    it(`${c.id} = ${c.value} within ${c.tolerance} (${c.source})`, () => {
+      expect(Math.abs(-reactionLogK(db, c.inputs.reaction, 25) - c.value)).toBeLessThanOrEqual(c.tolerance);
+    });
+  }
   it("S2-: the records imply pK2 = 12.9 (NBS 1982), the low end of the published 13–19 range (documented uncertainty)", () => {
     const pK2 = -reactionLogK(db, { "HS-": -1, "H+": 1, "S2-": 1 }, 25);
     expect(pK2).toBeGreaterThan(12.5);
@@ -199,14 +178,18 @@ describe("lead carbonates: the cerussite/hydrocerussite equilibrium pCO2", () =>
   const lk = (r: Record<string, number>) => reactionLogK(db, r, 25);
   const logKCO2 = lk({ "CO32-": -1, "H+": -2, "CO2(g)": 1, "H2O(l)": 1 });
   const recordsLogP = () => lk({ "PbCO3(s)": -3, "H2O(l)": -1, "Pb3(CO3)2(OH)2(s)": 1, "CO2(g)": 1 });
-  it("the records reproduce Schock's constants within 0.01: cerussite −13.13, hydrocerussite −17.46", () => {
-    expect(Math.abs(lk({ "PbCO3(s)": -1, "Pb2+": 1, "CO32-": 1 }) - -13.13)).toBeLessThanOrEqual(0.01);
-    expect(
-      Math.abs(lk({ "Pb3(CO3)2(OH)2(s)": -1, "H+": -2, "Pb2+": 3, "CO32-": 2, "H2O(l)": 2 }) - -17.46),
-    ).toBeLessThanOrEqual(0.01);
+  const [cerussite, hydrocerussite] = loadReferenceFixture(
+    new URL("./fixtures/ligands/lead-carbonates.json", import.meta.url),
+    reactionInputs,
+    { ceiling: () => 0.01 },
+  );
+  const pair = `cerussite ${boundText(cerussite.value)}, hydrocerussite ${boundText(hydrocerussite.value)}`;
+  it(`the records reproduce Schock's constants within ${cerussite.tolerance}: ${pair}`, () => {
+    for (const c of [cerussite, hydrocerussite])
+      expect(Math.abs(lk(c.inputs.reaction) - c.value), c.id).toBeLessThanOrEqual(c.tolerance);
   });
   it("with the records: log pCO2 = −3.8 ± 0.1 (by hand from Schock's pair and the records' carbonic acid)", () => {
-    const byHand = 3 * -13.13 - -17.46 + logKCO2;
+    const byHand = 3 * cerussite.value - hydrocerussite.value + logKCO2;
     expect(Math.abs(byHand - -3.8)).toBeLessThanOrEqual(0.1);
     expect(Math.abs(recordsLogP() - byHand)).toBeLessThanOrEqual(0.03);
   });

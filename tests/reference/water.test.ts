@@ -3,6 +3,7 @@
 // here are recalled and say "from memory".
 import { create, faradayDependencies, gasConstantDependencies } from "mathjs";
 import { describe, expect, it } from "vitest";
+import { z } from "zod";
 import { getDatabase } from "../../src/chemistry/database";
 import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "../../src/chemistry/constants";
 import { ehFromPe, peFromEh } from "../../src/chemistry/pe";
@@ -17,8 +18,24 @@ import {
 } from "../../src/chemistry/water";
 import { CellError } from "../../src/functions/cell-values";
 import { neutralPHAt, slopeAt, waterLineAt, waterMarginAt } from "../../src/functions/water-functions";
+import { boundText } from "../../src/chemistry/domain";
+import { checkById, loadReferenceFixture } from "../../test-support/reference-fixture";
 
 const mathjs = create({ gasConstantDependencies, faradayDependencies });
+/** The largest tolerance per unit: 0.5 µV for the Nernst factor, 1 mV for E°, 0.01 mV/K for dE°/dT, 0.03 pe. */
+const CEILING_BY_UNIT = new Map([
+  ["V per decade", 5e-7],
+  ["V", 0.001],
+  ["V/K", 1e-5],
+  ["pe", 0.03],
+]);
+/** Published values of the Nernst factor and the water couples: fixtures/water/water-lines.json. */
+const waterLines = loadReferenceFixture(
+  new URL("./fixtures/water/water-lines.json", import.meta.url),
+  z.strictObject({ celsius: z.number(), pH: z.number().optional() }),
+  { ceiling: (c) => CEILING_BY_UNIT.get(c.unit) ?? 0 },
+);
+const published = (id: string) => checkById(waterLines, id);
 
 describe("physical constants", () => {
   it("R matches mathjs's built-in gas constant (CODATA 2018, exact N_A·k)", () => {
@@ -39,12 +56,9 @@ describe("physical constants", () => {
     expect(FARADAY).toBeCloseTo(96485.33212, 5); // CODATA 2018, Tiesinga et al. (2021)
   });
 
-  it("Nernst factor RT ln10 / F is 0.059159 V at 25 °C", () => {
-    const reference = {
-      value: 0.059159,
-      source: "Bard & Faulkner, Electrochemical Methods, 2nd ed. 2001, 0.05916 V at 25 °C (from memory)",
-    };
-    expect(Math.abs(nernstFactor(T0) - reference.value)).toBeLessThan(5e-7);
+  const nernst = published("Nernst factor RT ln10 / F");
+  it(`Nernst factor RT ln10 / F is ${nernst.value} V at 25 °C`, () => {
+    expect(Math.abs(nernstFactor(T0) - nernst.value)).toBeLessThan(nernst.tolerance);
   });
 
   it("REDOX.SLOPE returns the Nernst factor, also at 60 °C", () => {
@@ -56,21 +70,15 @@ describe("physical constants", () => {
 });
 
 describe("water lines from the species data", () => {
-  it("E°(O2/H2O) is 1.229 V at 25 °C", () => {
-    const reference = {
-      value: 1.229,
-      source: "Bard, Parsons & Jordan, Standard Potentials in Aqueous Solution (1985), O2/H2O (from memory)",
-    };
-    expect(Math.abs(waterStandardPotential("O2", 25) - reference.value)).toBeLessThan(0.001);
+  const oxygen = published("E°(O2/H2O)");
+  it(`E°(O2/H2O) is ${oxygen.value} V at 25 °C`, () => {
+    expect(Math.abs(waterStandardPotential("O2", 25) - oxygen.value)).toBeLessThan(oxygen.tolerance);
   });
 
-  it("dE°/dT of O2/H2O is −0.846 mV/K at 25 °C", () => {
-    const reference = {
-      value: -0.846e-3,
-      source: "Bratsch 1989, J. Phys. Chem. Ref. Data 18:1, Table of temperature coefficients (from memory)",
-    };
+  const oxygenSlope = published("dE°/dT of O2/H2O");
+  it(`dE°/dT of O2/H2O is ${boundText(oxygenSlope.value * 1000)} mV/K at 25 °C`, () => {
     const slope = (waterStandardPotential("O2", 26) - waterStandardPotential("O2", 24)) / 2;
-    expect(Math.abs(slope - reference.value)).toBeLessThan(0.01e-3);
+    expect(Math.abs(slope - oxygenSlope.value)).toBeLessThan(oxygenSlope.tolerance);
   });
 
   it("E°(H+/H2) is zero at every temperature (hydrogen-electrode convention)", () => {
@@ -92,14 +100,10 @@ describe("water lines from the species data", () => {
     }
   });
 
-  it("O2/H2O at pH 7 is pe 13.75 (0.813 V), and pe° of the couple is 20.75", () => {
-    const peW = {
-      value: 13.75,
-      source: "Stumm & Morgan, Aquatic Chemistry, 3rd ed. 1996, Table 8.1, pe°(W) of O2(g)/H2O (from memory)",
-    };
-    const pe0 = { value: 20.75, source: "Stumm & Morgan 1996, Table 8.1, pe° of O2(g)/H2O (from memory)" };
-    expect(Math.abs(peFromEh(waterLine(7)) - peW.value)).toBeLessThan(0.03);
-    expect(Math.abs(peFromEh(waterStandardPotential("O2")) - pe0.value)).toBeLessThan(0.03);
+  const [peW, pe0] = [published("pe of O2/H2O at pH 7"), published("pe° of O2/H2O")];
+  it(`O2/H2O at pH 7 is pe ${peW.value} (0.813 V), and pe° of the couple is ${pe0.value}`, () => {
+    expect(Math.abs(peFromEh(waterLine(peW.inputs.pH!)) - peW.value)).toBeLessThan(peW.tolerance);
+    expect(Math.abs(peFromEh(waterStandardPotential("O2")) - pe0.value)).toBeLessThan(pe0.tolerance);
   });
 
   it("gas pressure shifts the lines by the Nernst term: (k/4)·log p for O2, −(k/2)·log p for H2", () => {
@@ -119,29 +123,20 @@ describe("water lines from the species data", () => {
 });
 
 describe("ion product of water", () => {
-  // pKw at 0.1 MPa (saturation pressure at 100 °C): Bandura & Lvov 2006, J. Phys. Chem. Ref. Data 35:15 (the IAPWS
-  // R11-07 formulation), evaluated with the release's parameters and liquid densities, both from memory; the values
-  // at 0, 25, 50 and 100 °C agree with the paper's table as recalled (14.946, 13.995, 13.264, 12.252).
-  const bandura: { celsius: number; value: number; source: string }[] = [
-    [0, 14.946],
-    [10, 14.534],
-    [20, 14.165],
-    [30, 13.833],
-    [40, 13.535],
-    [50, 13.264],
-    [60, 13.02],
-    [70, 12.799],
-    [80, 12.598],
-    [90, 12.416],
-    [100, 12.252],
-  ].map(([celsius, value]) => ({
-    celsius,
-    value,
-    source: "Bandura & Lvov 2006, J. Phys. Chem. Ref. Data 35:15 (from memory)",
-  }));
+  // pKw of Bandura & Lvov 2006 (IAPWS R11-07), 0–100 °C: fixtures/water/pkw.json
+  const bandura = loadReferenceFixture(
+    new URL("./fixtures/water/pkw.json", import.meta.url),
+    z.strictObject({ celsius: z.number() }),
+    { ceiling: () => 0.002 },
+  );
+  /** The species records (constant ΔCp°r) are a fit to the published values, not the formulation: 0.05. */
+  const RECORDS_TOLERANCE = 0.05;
 
   // the species records (constant ΔCp°r) against the published values: a check of data/species/water.json
-  const residuals = bandura.map((r) => ({ celsius: r.celsius, residual: recordsPKw(r.celsius) - r.value }));
+  const residuals = bandura.map(({ inputs, value }) => ({
+    celsius: inputs.celsius,
+    residual: recordsPKw(inputs.celsius) - value,
+  }));
 
   it("prints the residuals against Bandura & Lvov", () => {
     // informational: the figures behind the two checks below
@@ -152,11 +147,12 @@ describe("ion product of water", () => {
   });
 
   for (const r of residuals) {
-    it(`pKw from the records at ${r.celsius} °C is within 0.05 of Bandura & Lvov 2006`, () => {
-      expect(Math.abs(r.residual)).toBeLessThanOrEqual(0.05);
+    const published = bandura.find((b) => b.inputs.celsius === r.celsius)!;
+    it(`pKw from the records at ${r.celsius} °C is within ${RECORDS_TOLERANCE} of Bandura & Lvov 2006`, () => {
+      expect(Math.abs(r.residual)).toBeLessThanOrEqual(RECORDS_TOLERANCE);
     });
-    it(`pKw (IAPWS R11-07 as implemented) at ${r.celsius} °C is within 0.002 of the paper's values`, () => {
-      expect(Math.abs(pKw(r.celsius) - bandura.find((b) => b.celsius === r.celsius)!.value)).toBeLessThanOrEqual(0.002);
+    it(`pKw (IAPWS R11-07 as implemented) at ${r.celsius} °C is within ${published.tolerance} of the paper's values`, () => {
+      expect(Math.abs(pKw(r.celsius) - published.value)).toBeLessThanOrEqual(published.tolerance);
     });
   }
 
