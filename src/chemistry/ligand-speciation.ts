@@ -36,13 +36,14 @@ export class LigandAtPoint {
   private readonly g: Float64Array;
   private readonly b: Float64Array;
   private readonly e: Float64Array;
+  /** The last point's exponents u_j (one per species). */
   private readonly u: Float64Array;
   /** The last point's weights exp(u_j − max u) and their sum. */
   private readonly w: Float64Array;
   private sum = 1;
   /** Whether the solid was saturated at the last point. */
   saturated = false;
-  /** The last point's exponents u_j (one per species), their largest, and the pH and E they were taken at. */
+  /** The largest u_j at the last point, and the pH and E it was taken at. */
   private top = 0;
   private lastPH = 0;
   private lastE = 0;

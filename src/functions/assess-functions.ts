@@ -25,7 +25,8 @@ import {
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 import type { PointEngine } from "../chemistry/point-engine";
-import { DISSOLVED_UNITS, engineIn, unitArg } from "./stability-functions";
+import { DISSOLVED_UNITS, temperatureError, unitArg } from "./stability-functions";
+import { engineAtPoint } from "../chemistry/point-service";
 
 export const ASSESS_COLUMNS = [
   "species",
@@ -69,7 +70,8 @@ function dissolvedWithSolid(
 
 /** The seven answers for one sample, in ASSESS_COLUMNS order (the same engine calls as the single functions). */
 function assessRow(element: string, pH: number, E: number, water: Water, unit: string): CellOutput[] {
-  const engine = engineIn(
+  const engine = engineAtPoint(
+    getDatabase(),
     element,
     water.celsius,
     water.activity,
@@ -79,7 +81,10 @@ function assessRow(element: string, pH: number, E: number, water: Water, unit: s
     water.phosphate,
     water.ionicStrength,
   );
-  if (engine instanceof CellError) return ASSESS_COLUMNS.map(() => engine); // e.g. above 100 °C without S° (temperature-range.ts)
+  if (typeof engine === "string") {
+    const error = temperatureError(engine); // e.g. above 100 °C without S° (temperature-range.ts)
+    return ASSESS_COLUMNS.map(() => error);
+  }
   const dominant = engine.table.species[engine.dominant(pH, E)];
   const boundary = (direction: 1 | -1): CellOutput =>
     pointBoundary(engine, pH, E, direction)?.E ??

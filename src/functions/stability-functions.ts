@@ -7,7 +7,6 @@ import { getDatabase, Species } from "../chemistry/database";
 import { formationGibbsAt } from "../chemistry/formation";
 import { pointBoundary } from "../chemistry/point-boundary";
 import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
-import type { PointEngine } from "../chemistry/point-engine";
 import { engineAtPoint } from "../chemistry/point-service";
 import { speciesTable as metalSpeciesTable } from "../chemistry/species-tables";
 import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
@@ -19,24 +18,8 @@ import { argumentError, CellError, CellInput, CellOutput, notAvailable, toHostEr
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
 import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 
-/**
- * The point engine of an element with the row's water set (point-service.ts), or #VALUE! naming the species without
- * S° when the element cannot be answered above 100 °C (temperature-range.ts).
- */
-export function engineIn(
-  element: string,
-  celsius: number,
-  activity: number,
-  carbonate: number,
-  chloride: number,
-  sulfur: number,
-  phosphate: number,
-  ionicStrength: number,
-): PointEngine | CellError {
-  const db = getDatabase();
-  const engine = engineAtPoint(db, element, celsius, activity, carbonate, chloride, sulfur, phosphate, ionicStrength);
-  return typeof engine === "string" ? valueError(engine, "temperature") : engine;
-}
+/** #VALUE! for a point the engine cannot answer (above 100 °C without S°: temperature-range.ts), naming the temperature. */
+export const temperatureError = (problem: string): CellError => valueError(problem, "temperature");
 
 const directionArg = textArg<1 | -1>(
   "direction",
@@ -62,8 +45,8 @@ const POINT_ARGS = [
 /** Reads the point arguments shared by SPECIES and REGIME and answers with `describe` of the dominant species. */
 function dominantAt(describe: (species: SystemSpecies) => string, inputs: readonly CellInput[]): CellOutput[][] {
   return mapCells([...POINT_ARGS], inputs, (el, p, e, t, a, co3, cl, s, po4, i) => {
-    const engine = engineIn(el, t, a, co3, cl, s, po4, i);
-    if (engine instanceof CellError) return engine;
+    const engine = engineAtPoint(getDatabase(), el, t, a, co3, cl, s, po4, i);
+    if (typeof engine === "string") return temperatureError(engine);
     return describe(engine.table.species[engine.dominant(p, e)]);
   });
 }
@@ -121,8 +104,8 @@ export function boundaryFrom(
     [...POINT_ARGS, directionArg],
     [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, direction],
     (el, p, e, t, a, co3, cl, s, po4, i, d) => {
-      const engine = engineIn(el, t, a, co3, cl, s, po4, i);
-      if (engine instanceof CellError) return engine;
+      const engine = engineAtPoint(getDatabase(), el, t, a, co3, cl, s, po4, i);
+      if (typeof engine === "string") return temperatureError(engine);
       const crossing = pointBoundary(engine, p, e, d);
       return crossing
         ? crossing.E
@@ -227,8 +210,8 @@ export function dissolvedAt(
     ],
     [element, pH, potential, temperature, carbonate, chloride, sulfur, phosphate, ionicStrength, unit],
     (el, p, e, t, co3, cl, s, po4, i, u) => {
-      const engine = engineIn(el, t, 1, co3, cl, s, po4, i);
-      if (engine instanceof CellError) return engine;
+      const engine = engineAtPoint(getDatabase(), el, t, 1, co3, cl, s, po4, i);
+      if (typeof engine === "string") return temperatureError(engine);
       const { total, solid } = dissolvedAtPoint(engine, p, e);
       if (!(total <= MAX_DISSOLVED)) {
         return notAvailable(

@@ -71,7 +71,7 @@ export function checkAcidDisagreements(title: string, cases: readonly AcidCase[]
  * species at the common activity a = 1e-6 (value: V at unit activity), or a vertical line at pH = value (at 1e-6,
  * acid–base, tolerance 0.5/h for h protons).
  */
-const diagramLine = z.discriminatedUnion("kind", [
+export const diagramLine = z.discriminatedUnion("kind", [
   z.strictObject({
     element: z.string(),
     pair: z.tuple([z.string(), z.string()]),
@@ -85,6 +85,8 @@ const diagramLine = z.discriminatedUnion("kind", [
     pair: z.tuple([z.string(), z.string()]),
     equation: z.string(),
     kind: z.literal("vertical"),
+    /** Protons in the acid–base reaction (a vertical line moves by −log10(a)/h with the activity). */
+    h: z.number().positive().optional(),
   }),
 ]);
 export type DiagramLine = ReferenceCheck<z.infer<typeof diagramLine>>;

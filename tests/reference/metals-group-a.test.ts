@@ -15,7 +15,6 @@
  * Check values, tolerances and sources: fixtures/metals-group-a/*.json, validated on load.
  */
 import { describe, expect, it } from "vitest";
-import { z } from "zod";
 import { getDatabase } from "../../src/chemistry/database";
 import { reactionLogK } from "../../src/chemistry/reaction";
 import {
@@ -30,7 +29,7 @@ import {
   loadPotentialDisagreements,
   loadPotentials,
 } from "./compilation-checks";
-import { checkDiagramLines, loadDiagramLines } from "./element-checks";
+import { checkDiagramLines, diagramLine, loadDiagramLines } from "./element-checks";
 import { buildSystem, dominantSpecies, pairBoundary } from "../../src/chemistry/system";
 import { FARADAY, GAS_CONSTANT, LN10, T0, nernstFactor } from "../../src/chemistry/constants";
 import { loadReferenceFixture } from "../../test-support/reference-fixture";
@@ -123,29 +122,10 @@ const PREDICTED = new Map<string, number>([
   ["Cr: CrO42- / Cr2O3(s)", ((-(-1058.1 - -1046.8) + 2 * (-727.75 - -736.8)) * 1000) / (6 * FARADAY)],
 ]);
 
-/** An Atlas line: E = value − hPerN·k·pH + logCoef·log10(a), or a vertical line pH = value − log10(a)/h. */
-const atlasLine = z.discriminatedUnion("kind", [
-  z.strictObject({
-    element: z.string(),
-    pair: z.tuple([z.string(), z.string()]),
-    equation: z.string(),
-    kind: z.literal("line"),
-    hPerN: z.number(),
-    logCoef: z.number(),
-  }),
-  z.strictObject({
-    element: z.string(),
-    pair: z.tuple([z.string(), z.string()]),
-    equation: z.string(),
-    kind: z.literal("vertical"),
-    h: z.number().positive(),
-  }),
-]);
-
 /** The offset must match the prediction within 10 mV (or 0.05 pH); the note names the data difference. */
 const atlasDisagreements = loadReferenceFixture(
   new URL("./fixtures/metals-group-a/atlas-disagreements.json", import.meta.url),
-  atlasLine,
+  diagramLine,
   { ceiling: (c) => (c.inputs.kind === "line" ? 0.01 : 0.05) },
 );
 
@@ -167,6 +147,7 @@ describe("group A metals: Atlas lines where the Atlas used other data", () => {
         ).toBeLessThanOrEqual(line.tolerance);
         expect(Math.abs(boundary.slope - -inputs.hPerN * K25)).toBeLessThan(1e-12);
       } else if (boundary?.kind === "vertical" && inputs.kind === "vertical") {
+        if (inputs.h === undefined) throw new Error(`${line.id}: a vertical disagreement names its protons (h)`);
         const atlas = line.value + (-1 / inputs.h) * LOG_A;
         const offset = boundary.pH - atlas;
         expect(Math.abs(offset)).toBeGreaterThan(0.5 / inputs.h);
