@@ -51,7 +51,8 @@ function dominantAt(describe: (species: SystemSpecies) => string, inputs: readon
   });
 }
 
-export function speciesAt(
+/** A point function as the host calls it: element, pH, potential, then the optional water (declarations.ts). */
+type PointFunction = (
   element: CellInput,
   pH: CellInput,
   potential: CellInput,
@@ -62,30 +63,19 @@ export function speciesAt(
   sulfur?: CellInput,
   phosphate?: CellInput,
   ionicStrength?: CellInput,
-): CellOutput[][] {
-  return dominantAt(
-    (s) => s.formula,
-    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength],
-  );
-}
+) => CellOutput[][];
 
-export function regimeAt(
-  element: CellInput,
-  pH: CellInput,
-  potential: CellInput,
-  temperature?: CellInput,
-  activity?: CellInput,
-  carbonate?: CellInput,
-  chloride?: CellInput,
-  sulfur?: CellInput,
-  phosphate?: CellInput,
-  ionicStrength?: CellInput,
-): CellOutput[][] {
-  return dominantAt(
-    (s) => s.regime,
-    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength],
-  );
-}
+/** The worksheet function answering `describe` of the dominant species at each point. */
+const dominantFunction =
+  (describe: (species: SystemSpecies) => string): PointFunction =>
+  (...inputs) =>
+    dominantAt(describe, inputs);
+
+/** REDOX.SPECIES: the dominant species' formula. */
+export const speciesAt = dominantFunction((s) => s.formula);
+
+/** REDOX.REGIME: immunity, passivation or corrosion, from the dominant species. */
+export const regimeAt = dominantFunction((s) => s.regime);
 
 export function boundaryFrom(
   element: CellInput,

@@ -25,7 +25,7 @@ import { fitWindow, isClustered, zoomWindow } from "../diagram/view-window";
 import { DiagramView, type DrawingOptions } from "./pane-view";
 import { resultsCsv, resultsTsv } from "./results-table";
 import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
-import { COLUMN_ROLES, ColumnMapping, matchHeaders, WaterColumns, type IonicColumn } from "../tables";
+import { COLUMN_ROLES, ColumnMapping, EMPTY_MAPPING, matchHeaders, WaterColumns, type IonicColumn } from "../tables";
 import { findIonicColumn } from "./ionic-input";
 import { ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";
 import type { HostAdapter, PaneSettings } from "./host";
@@ -75,15 +75,7 @@ export class DiagramPane {
   private readonly db = getDatabase();
   private readonly cache = new SystemCache(this.db);
   private table: SampleTable | null = null;
-  private mapping: ColumnMapping = {
-    pH: -1,
-    potential: -1,
-    temperature: -1,
-    id: -1,
-    site: -1,
-    dissolved: -1,
-    metal: -1,
-  };
+  private mapping: ColumnMapping = { ...EMPTY_MAPPING };
   private temperatureUnit: "C" | "F" = "C";
   private manualTemperature = false;
   private window: AxisWindow | null = null;
