@@ -22,10 +22,8 @@ import {
   toHostError,
   valueError,
 } from "./cell-values";
-import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";
-import { carbonateArg, chlorideArg, ionicStrengthArg, phosphateArg, sulfurArg } from "./ligand-args";
 import type { PointEngine } from "../chemistry/point-engine";
-import { DISSOLVED_UNITS, temperatureError, unitArg } from "./stability-functions";
+import { DISSOLVED_UNITS, POINT_ARGS, PointArguments, temperatureError, unitArg } from "./stability-functions";
 import { engineAtPoint } from "../chemistry/point-service";
 
 export const ASSESS_COLUMNS = [
@@ -145,51 +143,16 @@ function headerRow(unit: CellInput): CellOutput[] {
 }
 
 /** REDOX.ASSESS(element, pH, potential, [temperature], [activity], [carbonate], [chloride], [sulfur], [phosphate], [ionicStrength], [unit], [header]). */
-export function assessAt(
-  element: CellInput,
-  pH: CellInput,
-  potential: CellInput,
-  temperature?: CellInput,
-  activity?: CellInput,
-  carbonate?: CellInput,
-  chloride?: CellInput,
-  sulfur?: CellInput,
-  phosphate?: CellInput,
-  ionicStrength?: CellInput,
-  unit?: CellInput,
-  header?: CellInput,
-): CellOutput[][] {
-  const inputs = [
-    element,
-    pH,
-    potential,
-    temperature,
-    activity,
-    carbonate,
-    chloride,
-    sulfur,
-    phosphate,
-    ionicStrength,
-    unit,
-  ];
+export function assessAt(...args: [...PointArguments, unit?: CellInput, header?: CellInput]): CellOutput[][] {
+  const inputs = args.slice(0, 11); // the point arguments and the unit
+  const unit = args[10];
+  const header = args[11];
   const wantHeader = readHeader(header);
   const problem = wantHeader instanceof CellError ? wantHeader : widthProblem(inputs);
   if (problem) return [[toHostError(problem)]];
   const rows: CellOutput[][] = [];
   const cells = mapCells(
-    [
-      elementArg,
-      pHArg,
-      potentialArg(),
-      temperatureArg,
-      activityArg,
-      carbonateArg,
-      chlorideArg,
-      sulfurArg,
-      phosphateArg,
-      ionicStrengthArg,
-      unitArg,
-    ],
+    [...POINT_ARGS, unitArg],
     inputs,
     (el, p, e, t, a, co3, cl, s, po4, i, u) =>
       rows.push(

@@ -29,7 +29,7 @@ const directionArg = textArg<1 | -1>(
 );
 
 /** The point arguments every stability function shares, in the agreed order. */
-const POINT_ARGS = [
+export const POINT_ARGS = [
   elementArg,
   pHArg,
   potentialArg(),
@@ -65,6 +65,9 @@ type PointFunction = (
   ionicStrength?: CellInput,
 ) => CellOutput[][];
 
+/** The point arguments as a tuple, for functions that take more after them. */
+export type PointArguments = Parameters<PointFunction>;
+
 /** The worksheet function answering `describe` of the dominant species at each point. */
 const dominantFunction =
   (describe: (species: SystemSpecies) => string): PointFunction =>
@@ -77,31 +80,16 @@ export const speciesAt = dominantFunction((s) => s.formula);
 /** REDOX.REGIME: immunity, passivation or corrosion, from the dominant species. */
 export const regimeAt = dominantFunction((s) => s.regime);
 
-export function boundaryFrom(
-  element: CellInput,
-  pH: CellInput,
-  potential: CellInput,
-  temperature?: CellInput,
-  activity?: CellInput,
-  carbonate?: CellInput,
-  chloride?: CellInput,
-  sulfur?: CellInput,
-  phosphate?: CellInput,
-  ionicStrength?: CellInput,
-  direction?: CellInput,
-): CellOutput[][] {
-  return mapCells(
-    [...POINT_ARGS, directionArg],
-    [element, pH, potential, temperature, activity, carbonate, chloride, sulfur, phosphate, ionicStrength, direction],
-    (el, p, e, t, a, co3, cl, s, po4, i, d) => {
-      const engine = engineAtPoint(getDatabase(), el, t, a, co3, cl, s, po4, i);
-      if (typeof engine === "string") return temperatureError(engine);
-      const crossing = pointBoundary(engine, p, e, d);
-      return crossing
-        ? crossing.E
-        : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
-    },
-  );
+/** REDOX.BOUNDARY: the point arguments, then the direction (1 above, −1 below). */
+export function boundaryFrom(...inputs: [...PointArguments, direction?: CellInput]): CellOutput[][] {
+  return mapCells([...POINT_ARGS, directionArg], inputs, (el, p, e, t, a, co3, cl, s, po4, i, d) => {
+    const engine = engineAtPoint(getDatabase(), el, t, a, co3, cl, s, po4, i);
+    if (typeof engine === "string") return temperatureError(engine);
+    const crossing = pointBoundary(engine, p, e, d);
+    return crossing
+      ? crossing.E
+      : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
+  });
 }
 
 const speciesArg = (name: string) =>
