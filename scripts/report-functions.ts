@@ -74,10 +74,11 @@ function functionLengths(path: string): FunctionLength[] {
   return found;
 }
 
-/** The layer of a file: its first folder under src/ ("chemistry", "functions", …). */
+/** The layer of a file, or of a layer's folder (its index.ts): the first folder under src/ ("chemistry", …). */
 function layerOf(path: string): string | undefined {
   const parts = relative(join(ROOT, "src"), path).split("/");
-  return parts.length > 1 && parts[0] !== ".." ? parts[0] : undefined;
+  if (parts[0] === ".." || parts[0] === "") return undefined;
+  return parts.length > 1 || !parts[0].includes(".") ? parts[0] : undefined;
 }
 
 /** Import counts between layers of src/: "from → to" → number of import statements. */

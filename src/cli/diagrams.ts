@@ -3,14 +3,18 @@
  * streams, then draws one potential–pH diagram per metal with the samples on it through the task pane's
  * DOM-free renderer (src/diagram), run in Node.
  */
-import { getDatabase } from "../chemistry/database";
-import { hasLigands, LIGAND_ORDER, type LigandTotals } from "../chemistry/ligand-cells";
-import { buildLigandSystem } from "../chemistry/ligand-system";
-import { SystemCache } from "../chemistry/system-cache";
+import {
+  buildLigandSystem,
+  DEFAULT_CELSIUS,
+  getDatabase,
+  hasLigands,
+  LIGAND_ORDER,
+  SystemCache,
+  type LigandTotals,
+} from "../chemistry";
 import { displayScale, plotSamples, renderDiagramSvg, shownRegions, shownWaterLines } from "../diagram";
 import type { SamplePoint } from "./evaluate";
 import { Reservoir } from "./reservoir";
-import { DEFAULT_CELSIUS } from "../chemistry/domain";
 
 /** Points drawn per diagram at most (the pane's budget is 10 k samples, DEVELOPERS.md Speed budgets). */
 export const POINTS_PER_DIAGRAM = 10_000;

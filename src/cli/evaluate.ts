@@ -3,15 +3,22 @@
  * functions on them (exactly as a worksheet range would), and turns the results into output cells, per-row error
  * text and the messages the command line prints. No I/O here.
  */
-import { DEFAULT_CELSIUS } from "../chemistry/domain";
-import type { LigandName, LigandTotals } from "../chemistry/ligand-cells";
-import { mapCells } from "../functions/broadcast";
-import { CellError, CellInput, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
-import { carbonateArg, chlorideArg, phosphateArg, sulfurArg } from "../functions/ligand-args";
-import { ionicStrengthArgument } from "../functions/ionic-strength-functions";
-import { IONIC_UNITS } from "../tables";
+import { DEFAULT_CELSIUS, type LigandName, type LigandTotals } from "../chemistry";
+import {
+  carbonateArg,
+  CellError,
+  CellInput,
+  CellOutput,
+  CellScalar,
+  chlorideArg,
+  ionicStrengthArgument,
+  isBlank,
+  mapCells,
+  phosphateArg,
+  sulfurArg,
+} from "../functions";
+import { IONIC_UNITS, readNumber, toCelsius, type TemperatureScale } from "../tables";
 import { ionicBasis, IONIC_OUTPUT, ionicWords, type IonicPlan } from "./ionic";
-import { readNumber, toCelsius, type TemperatureScale } from "../tables";
 import { numberField, textField, type CsvFormat, type NumberKind } from "./csv-format";
 import type { DissolvedUnit, PotentialUnitOption } from "./options";
 import type { InputRow } from "./record-reader";

@@ -3,10 +3,8 @@
  * reads is declared and documented here.
  */
 import { parseArgs } from "node:util";
-import { MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/constants";
-import { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_ACTIVITY } from "../chemistry/domain";
-import type { DecimalMark } from "../tables/numbers";
-import type { TemperatureScale } from "../tables/units";
+import { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_ACTIVITY, MAX_CELSIUS, MIN_CELSIUS } from "../chemistry";
+import { type DecimalMark, type TemperatureScale } from "../tables";
 
 export const EXIT = {
   /** Every row was read; results written (blank input cells give blank results and do not count as errors). */

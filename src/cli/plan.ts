@@ -3,12 +3,11 @@
  * the unit and electrode of the readings, the temperature scale, the metals. UsageError when it cannot; notes for
  * what the user should know (duplicate headers).
  */
-import { getDatabase } from "../chemistry/database";
-import { getElectrodes } from "../chemistry/electrodes";
+import { getDatabase, getElectrodes } from "../chemistry";
 import {
   BARE_SILVER_CHLORIDE,
-  EMPTY_MAPPING,
   electrodeNamed,
+  EMPTY_MAPPING,
   headerTokens,
   matchHeaders,
   temperatureScale,

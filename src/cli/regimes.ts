@@ -4,9 +4,8 @@
  * calls SPECIES once and reads each formula's regime from the metal's species table instead of finding the dominant
  * species a second time. Errors and blanks are the same in both columns.
  */
-import { getDatabase } from "../chemistry/database";
-import { speciesTable } from "../chemistry/species-tables";
-import type { CellOutput, CellScalar } from "../functions/cell-values";
+import { getDatabase, speciesTable } from "../chemistry";
+import { type CellOutput, type CellScalar } from "../functions";
 
 const bySymbol = new Map<string, ReadonlyMap<string, string>>();
 

@@ -7,8 +7,7 @@ import { join } from "node:path";
 import { DiagramSamples, diagramCelsius, diagramTotals, renderDiagram, totalsText } from "./diagrams";
 import type { EvaluationPlan } from "./evaluate";
 import type { CliOptions } from "./options";
-import { DEFAULT_CELSIUS } from "../chemistry/domain";
-import { SystemError } from "../chemistry/system";
+import { DEFAULT_CELSIUS, SystemError } from "../chemistry";
 
 function baseName(path: string): string {
   const i = Math.max(path.lastIndexOf("/"), path.lastIndexOf("\\"));

@@ -1,6 +1,6 @@
 /** The summary a run prints: rows, speed, where the results went, rows with bad or blank cells, regime counts. */
 
-import { REGIMES } from "../chemistry/domain";
+import { REGIMES } from "../chemistry";
 
 const PROGRAM = "redox-cells";
 

@@ -13,14 +13,13 @@
  * Headers and units are read by src/tables (the pane's rules; one unit table for both).
  * Nothing is rounded: each distinct total is its own system, as in the worksheet.
  */
-import { getDatabase } from "../chemistry/database";
-import type { LigandName } from "../chemistry/ligand-cells";
+import { getDatabase, type LigandName } from "../chemistry";
 import {
   alkalinityFactor,
   matchWaterColumns,
   molalFactor,
-  waterColumnAt,
   WATER_UNITS,
+  waterColumnAt,
   type ColumnMapping,
   type FormulaParts,
   type WaterColumnRole,

@@ -4,11 +4,7 @@
  * and returns a range of results, with CellError values where the spreadsheet would show an error. REGIME is not
  * among them: its column is read from SPECIES's (regimes.ts).
  */
-import { boundaryFrom, dissolvedAt, speciesAt } from "../functions/stability-functions";
-import { toSHEAt } from "../functions/electrode-functions";
-import { waterMarginAt } from "../functions/water-functions";
-import { dicAt } from "../functions/carbonate-functions";
-import { ionicStrengthAt } from "../functions/ionic-strength-functions";
+import { boundaryFrom, dicAt, dissolvedAt, ionicStrengthAt, speciesAt, toSHEAt, waterMarginAt } from "../functions";
 
 /** The functions by their own signatures (one argument order, written once in src/functions). */
 export interface WorksheetFunctions {

@@ -4,8 +4,7 @@
  * (Pourbaix 1974, Atlas of Electrochemical Equilibria in Aqueous Solutions). Vertical boundaries (no electron
  * exchanged) are pH = constant.
  */
-import { pairBoundary, type MetalSystem } from "../chemistry/system";
-import { diagramRegions, type DiagramWindow } from "../chemistry/predominance";
+import { diagramRegions, pairBoundary, type DiagramWindow, type MetalSystem } from "../chemistry";
 import { polygonsTouch } from "./label-placement";
 
 export interface BoundaryEquation {

@@ -7,16 +7,27 @@
  * the reversible hydrogen electrode (E_ref = −k(T)·pH). Regions stay convex polygons under such a map, so they are
  * computed vs SHE over a window covering the shown one, mapped vertex by vertex and clipped to the shown window.
  */
-import { FULL_E_LIMIT, PH_MAX, PH_MIN } from "../chemistry/domain";
-import { clipPolygon, HalfPlane, Point, polygonArea } from "../chemistry/halfplane";
-import { getElectrodes, inRange } from "../chemistry/electrodes";
-import { hasLigands, type LigandTotals } from "../chemistry/ligand-cells";
-import { diagramRegions, Region } from "../chemistry/predominance";
-import { tracedRegions } from "../chemistry/region-tracing";
-import { getDatabase } from "../chemistry/database";
-import { dominantInWater } from "../chemistry/point-service";
-import { MetalSystem, Regime } from "../chemistry/system";
-import { waterLine } from "../chemistry/water";
+import {
+  clipPolygon,
+  diagramRegions,
+  dominantInWater,
+  FULL_E_LIMIT,
+  getDatabase,
+  getElectrodes,
+  HalfPlane,
+  hasLigands,
+  inRange,
+  MetalSystem,
+  PH_MAX,
+  PH_MIN,
+  Point,
+  polygonArea,
+  Regime,
+  Region,
+  tracedRegions,
+  waterLine,
+  type LigandTotals,
+} from "../chemistry";
 import type { AxisWindow } from "./axes";
 
 export type PotentialUnit = "V" | "mV";

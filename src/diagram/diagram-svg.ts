@@ -5,8 +5,7 @@
  *
  * Pure string building — no document, no window — so the command line and the tests can use it as the pane does.
  */
-import { REGIMES } from "../chemistry/domain";
-import type { MetalSystem, Regime } from "../chemistry/system";
+import { REGIMES, type MetalSystem, type Regime } from "../chemistry";
 import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./axes";
 import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
 import { formulaSegments, Segment } from "./formula-markup";

@@ -26,7 +26,11 @@ export {
   sampleText,
   wrapCaption,
 } from "./diagram-svg";
-export type { DiagramSvgOptions } from "./diagram-svg";
+export { renderDiagram } from "./diagram-svg";
+export type { DiagramSvgOptions, KeyEntry } from "./diagram-svg";
+export { boundaryEquations, equationText } from "./boundary-equations";
+export { ligandEdges } from "./ligand-edges";
+export { fitWindow, isClustered, zoomWindow } from "./view-window";
 export { placeLabel, polygonsTouch, roomAt, touchingGroups } from "./label-placement";
 export type { LabelPlacement, Pixel } from "./label-placement";
 export { MARKER_RADIUS, MARKER_SHAPES, markerPath, markerSvg, traceMarker } from "./markers";

@@ -2,7 +2,7 @@
  * Names of the ligand boundaries of a diagram: where the water's dominant form of one ligand changes (the plane
  * cells of a ligand system differ in one ligand's basis species), as "HCO3− | CO3²−". Pure water has none.
  */
-import type { MetalSystem } from "../chemistry/system";
+import { type MetalSystem } from "../chemistry";
 import { formulaSegments } from "./formula-markup";
 
 const SUB = "₀₁₂₃₄₅₆₇₈₉";

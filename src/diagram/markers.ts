@@ -3,7 +3,7 @@
  * shape and fill both say the regime, so the markers read without colour — a square for immunity, a circle for
  * passivation, a triangle pointing up for corrosion — each outlined in MARKER_OUTLINE.
  */
-import type { Regime } from "../chemistry/system";
+import { type Regime } from "../chemistry";
 import { MARKER_FILLS, MARKER_OUTLINE } from "./palette";
 
 export { MARKER_FILLS, MARKER_OUTLINE };

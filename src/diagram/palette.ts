@@ -8,7 +8,7 @@
  * contrast ratio (W3C, Web Content Accessibility Guidelines 2.1, 2018, §1.4.3 and the relative-luminance
  * definition) is at least 4.5:1 on every fill.
  */
-import type { Regime } from "../chemistry/system";
+import { type Regime } from "../chemistry";
 
 export const LABEL_TEXT = "#1b2329";
 export const AXIS_TEXT = "#28343b";

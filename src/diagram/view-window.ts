@@ -2,7 +2,7 @@
  * Views of the diagram: the window fitted to the samples (the default when they are clustered), zooming about the
  * centre, and whether a set of samples is clustered in the full window.
  */
-import { PH_MAX, PH_MIN } from "../chemistry/domain";
+import { PH_MAX, PH_MIN } from "../chemistry";
 import type { AxisWindow } from "./axes";
 
 /** Samples are clustered when their padded box covers less than this share of the full window. */

@@ -1,7 +1,7 @@
 /**
  * The words a diagram uses for a water's ligand totals (captions, hover text, tables): "DIC 1.35, Cl 2 mmol/kg".
  */
-import { LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
+import { LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry";
 
 export const LIGAND_WORDS: Readonly<Record<LigandName, string>> = {
   carbonate: "DIC",

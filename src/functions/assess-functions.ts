@@ -5,12 +5,18 @@
  * Optionally a header row first. Arguments are read and broadcast by broadcast.ts; samples come as single cells or
  * columns (one output row per input row).
  */
-import { getDatabase } from "../chemistry/database";
-import { boundText } from "../chemistry/domain";
-import { BOUNDARY_SEARCH_HIGH, BOUNDARY_SEARCH_LOW } from "../chemistry/domain";
-import { pointBoundary } from "../chemistry/point-boundary";
-import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
-import { waterMargin } from "../chemistry/water";
+import {
+  BOUNDARY_SEARCH_HIGH,
+  BOUNDARY_SEARCH_LOW,
+  boundText,
+  dissolvedAtPoint,
+  engineAtPoint,
+  getDatabase,
+  MAX_DISSOLVED,
+  pointBoundary,
+  waterMargin,
+  type PointEngine,
+} from "../chemistry";
 import { mapCells } from "./broadcast";
 import {
   argumentError,
@@ -22,9 +28,7 @@ import {
   toHostError,
   valueError,
 } from "./cell-values";
-import type { PointEngine } from "../chemistry/point-engine";
 import { DISSOLVED_UNITS, POINT_ARGS, PointArguments, temperatureError, unitArg } from "./stability-functions";
-import { engineAtPoint } from "../chemistry/point-service";
 
 export const ASSESS_COLUMNS = [
   "species",

@@ -2,7 +2,7 @@
  * REDOX.DIC: total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3), pH and temperature —
  * the number to give the [carbonate] argument of the stability functions. Chemistry in src/chemistry/alkalinity.ts.
  */
-import { AlkalinityProblem, dicOrProblem } from "../chemistry/alkalinity";
+import { AlkalinityProblem, dicOrProblem } from "../chemistry";
 import { mapCells, numberArg } from "./broadcast";
 import { argumentError, argumentNotAvailable, CellInput, CellOutput } from "./cell-values";
 import { pHArg, temperatureArg } from "./common-args";

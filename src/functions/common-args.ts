@@ -2,17 +2,17 @@
  * Argument readers shared by the worksheet functions (ranges and defaults: docs/method.md, Domain).
  */
 import {
+  boundText,
   DEFAULT_ACTIVITY,
   DEFAULT_CELSIUS,
+  getDatabase,
   MAX_ACTIVITY,
-  boundText,
   MAX_CELSIUS,
   MAX_POTENTIAL,
   MIN_CELSIUS,
   PH_MAX,
   PH_MIN,
-} from "../chemistry/domain";
-import { getDatabase } from "../chemistry/database";
+} from "../chemistry";
 import { numberArg, textArg } from "./broadcast";
 import { argumentError } from "./cell-values";
 

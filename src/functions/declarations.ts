@@ -33,7 +33,7 @@ import {
   MIN_CELSIUS,
   PH_MAX,
   PH_MIN,
-} from "../chemistry/domain";
+} from "../chemistry";
 
 const required = (name: string, description: string): ArgumentDeclaration => ({ name, description });
 const optional = (name: string, description: string): ArgumentDeclaration => ({ name, description, optional: true });

@@ -3,9 +3,7 @@
  * broadcast.ts; the electrode potentials come from src/chemistry/electrodes.ts. Readings may be in V (default) or
  * mV (`unit`); potentials vs SHE are always in V.
  */
-import { PH_MAX, PH_MIN } from "../chemistry/domain";
-import { Electrode, getElectrodes, inRange } from "../chemistry/electrodes";
-import { ownEntry } from "../chemistry/own-entry";
+import { Electrode, getElectrodes, inRange, ownEntry, PH_MAX, PH_MIN } from "../chemistry";
 import { mapCells, numberArg, textArg } from "./broadcast";
 import { argumentError, CellError, CellInput, CellOutput, valueError } from "./cell-values";
 import { MAX_POTENTIAL, potentialArg, potentialMessage, temperatureArg } from "./common-args";

@@ -2,8 +2,7 @@
  * REDOX.IONICSTRENGTH: ionic strength (mol/kg) estimated from specific conductance or total dissolved solids, for
  * the [ionicStrength] argument of the stability functions (src/chemistry/ionic-strength.ts).
  */
-import { MAX_IONIC_STRENGTH } from "../chemistry/activity-coefficients";
-import { ionicStrengthFrom, IonicStrengthBasis } from "../chemistry/ionic-strength";
+import { IonicStrengthBasis, ionicStrengthFrom, MAX_IONIC_STRENGTH } from "../chemistry";
 import { mapCells, numberArg, textArg } from "./broadcast";
 import { argumentError, CellError, CellInput, CellOutput, CellScalar, isBlank } from "./cell-values";
 import { ionicStrengthArg } from "./ligand-args";

@@ -2,8 +2,7 @@
  * Optional water arguments shared by SPECIES, REGIME, BOUNDARY and DISSOLVED: [carbonate], [chloride], [sulfur],
  * [phosphate] (as P) in mol/kg (blank or 0 = absent) and [ionicStrength] in mol/kg (blank or 0 = ideal dilute solution, γ = 1).
  */
-import { MAX_IONIC_STRENGTH } from "../chemistry/activity-coefficients";
-import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
+import { MAX_IONIC_STRENGTH, MAX_LIGAND_TOTAL } from "../chemistry";
 import { ArgSpec, numberArg } from "./broadcast";
 import { CellError, valueError } from "./cell-values";
 

@@ -3,9 +3,7 @@
  * one column; REDOX.VERSION() gives the add-in version and the fingerprint of the data it answers from.
  */
 import addIn from "../../package.json";
-import { dataFileCount, dataFingerprint } from "../chemistry/data-fingerprint";
-import { getDatabase } from "../chemistry/database";
-import { getElectrodes } from "../chemistry/electrodes";
+import { dataFileCount, dataFingerprint, getDatabase, getElectrodes } from "../chemistry";
 import { CellOutput } from "./cell-values";
 
 /** The metals of the database by symbol, one per row. */

@@ -3,16 +3,22 @@
  * SPECIESTABLE (README). Thin adapters: argument reading and broadcasting come from broadcast.ts, the answers
  * from src/chemistry.
  */
-import { getDatabase, Species } from "../chemistry/database";
-import { formationGibbsAt } from "../chemistry/formation";
-import { pointBoundary } from "../chemistry/point-boundary";
-import { dissolvedAtPoint, MAX_DISSOLVED } from "../chemistry/point-dissolved";
-import { engineAtPoint } from "../chemistry/point-service";
-import { speciesTable as metalSpeciesTable } from "../chemistry/species-tables";
-import { couplePotential, halfReaction, ReactionError } from "../chemistry/reaction";
-import { CONSTANT_GIBBS_MAX_CELSIUS } from "../chemistry/temperature-range";
-import type { SystemSpecies } from "../chemistry/system";
-import { ownEntry } from "../chemistry/own-entry";
+import {
+  CONSTANT_GIBBS_MAX_CELSIUS,
+  couplePotential,
+  dissolvedAtPoint,
+  engineAtPoint,
+  formationGibbsAt,
+  getDatabase,
+  halfReaction,
+  MAX_DISSOLVED,
+  ownEntry,
+  pointBoundary,
+  ReactionError,
+  Species,
+  speciesTable as metalSpeciesTable,
+  type SystemSpecies,
+} from "../chemistry";
 import { mapCells, textArg } from "./broadcast";
 import { argumentError, CellError, CellInput, CellOutput, notAvailable, toHostError, valueError } from "./cell-values";
 import { activityArg, elementArg, pHArg, potentialArg, temperatureArg } from "./common-args";

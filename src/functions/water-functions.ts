@@ -3,10 +3,17 @@
  * (README). Thin adapters: arguments are read and broadcast by broadcast.ts, the answers come from
  * src/chemistry/water.ts, pe.ts and constants.ts. Temperatures in °C, potentials in V vs SHE.
  */
-import { kelvin, nernstFactor } from "../chemistry/constants";
-import { ownEntry } from "../chemistry/own-entry";
-import { ehFromPe, peFromEh } from "../chemistry/pe";
-import { neutralPH, WaterGas, waterLine, waterMargin } from "../chemistry/water";
+import {
+  ehFromPe,
+  kelvin,
+  nernstFactor,
+  neutralPH,
+  ownEntry,
+  peFromEh,
+  WaterGas,
+  waterLine,
+  waterMargin,
+} from "../chemistry";
 import { mapCells, numberArg, textArg } from "./broadcast";
 import { argumentError, argumentNotAvailable, CellInput, CellOutput } from "./cell-values";
 import { pHArg, potentialArg, temperatureArg } from "./common-args";

@@ -6,7 +6,7 @@
  * A header that describes a text field about the measurement ("EC flag", "conductivity comment") is no source.
  * Pure functions: no host, no DOM. The conversion to mol/kg is src/chemistry/ionic-strength.ts (one copy).
  */
-import { ionicStrengthFrom, type IonicStrengthBasis } from "../chemistry/ionic-strength";
+import { ionicStrengthFrom, type IonicStrengthBasis } from "../chemistry";
 import { headerTokens } from "./header-match";
 import { readNumber } from "./numbers";
 

@@ -4,7 +4,7 @@
  * taken as 1 kg (common practice). Molar masses come from the caller (the element records), so this file holds no
  * chemistry data of its own.
  */
-import { CACO3_GRAMS_PER_EQUIVALENT } from "../chemistry/alkalinity";
+import { CACO3_GRAMS_PER_EQUIVALENT } from "../chemistry";
 
 /** Temperature scales a header can name. */
 export type TemperatureScale = "C" | "F" | "K";

@@ -4,9 +4,8 @@
  * very values sample-answers.ts passed for its row — in µg/L. At the sample's pH the call is that row's call, so the
  * chart shows what the sheet gives, by construction. #N/A (no solid can form) becomes a gap (null).
  */
-import { CellError, type CellInput, type CellOutput } from "../functions/cell-values";
-import { dissolvedAt } from "../functions/stability-functions";
-import type { DissolvedEvaluator, PlottedSample } from "../diagram";
+import { CellError, dissolvedAt, type CellInput, type CellOutput } from "../functions";
+import { type DissolvedEvaluator, type PlottedSample } from "../diagram";
 
 /** REDOX.DISSOLVED(metal, pH, the sample's E, T, carbonate, chloride, sulfur, phosphate, I, "ug/L"). */
 function dissolvedCells(metal: string, sample: PlottedSample, celsius: number, pH: CellInput): CellOutput[][] {

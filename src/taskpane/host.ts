@@ -3,7 +3,7 @@
  * inserting a picture and remembering settings with the workbook. Two implementations: excel-adapter.ts and
  * standalone-adapter.ts.
  */
-import type { ColumnRole } from "../tables";
+import { type ColumnRole } from "../tables";
 import type { SampleTable } from "./sample-table";
 
 /** Settings remembered per workbook (Excel) or per browser (standalone). Columns are kept by header text. */

@@ -5,8 +5,7 @@
  * for conductivity and TDS, the stated value otherwise). A blank cell: that sample is answered without the
  * correction (ideal solution) and counted in the caption. Pure: no host, no DOM.
  */
-import { ionicStrengthArgument, type IonicStrengthArgument } from "../functions/ionic-strength-functions";
-import type { CellScalar } from "../functions/cell-values";
+import { ionicStrengthArgument, type CellScalar, type IonicStrengthArgument } from "../functions";
 import { IONIC_UNITS, isNumericColumn, matchIonicColumns, readNumber, type IonicColumn } from "../tables";
 
 /** The column the pane reads the ionic strength from, or null: the first by precedence whose cells are numbers. */

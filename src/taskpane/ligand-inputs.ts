@@ -13,10 +13,16 @@
  * - Column totals are rounded to 0.01 in log10 (2.3 %, finer than an alkalinity titration or an ion
  *   chromatograph resolves — common practice) so rows share systems; the rounded total is the one shown and used.
  */
-import { AlkalinityError, dicFromAlkalinity } from "../chemistry/alkalinity";
-import type { Database } from "../chemistry/database";
-import { hasLigands, LIGAND_ORDER, LigandName, LigandTotals } from "../chemistry/ligand-cells";
-import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
+import {
+  AlkalinityError,
+  dicFromAlkalinity,
+  hasLigands,
+  LIGAND_ORDER,
+  LigandName,
+  LigandTotals,
+  MAX_LIGAND_TOTAL,
+  type Database,
+} from "../chemistry";
 import {
   alkalinityFactor,
   isAlkalinityUnit,
@@ -25,7 +31,7 @@ import {
   type WaterColumn,
   type WaterColumnRole,
 } from "../tables";
-import { formatTotals, LIGAND_WORDS } from "../diagram/water-words";
+import { formatTotals, LIGAND_WORDS } from "../diagram";
 
 export { formatTotals };
 

@@ -4,27 +4,41 @@
  * (diagram-svg.ts), the text panels (pane-notes.ts) and exports (pane-export.ts). The host adapter supplies tables
  * and, in Excel, row selection and picture insertion.
  */
-import { getDatabase } from "../chemistry/database";
-import { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_ACTIVITY, MAX_CELSIUS, MIN_CELSIUS } from "../chemistry/domain";
-import { SystemCache } from "../chemistry/system-cache";
-import { hasLigands, ligandKey, LIGAND_ORDER, LigandTotals } from "../chemistry/ligand-cells";
-import { buildLigandSystem } from "../chemistry/ligand-system";
-import type { MetalSystem } from "../chemistry/system";
-import type { AxisWindow } from "../diagram/axes";
+import {
+  buildLigandSystem,
+  DEFAULT_ACTIVITY,
+  DEFAULT_CELSIUS,
+  getDatabase,
+  hasLigands,
+  LIGAND_ORDER,
+  ligandKey,
+  LigandTotals,
+  MAX_ACTIVITY,
+  MAX_CELSIUS,
+  MIN_CELSIUS,
+  SystemCache,
+  type MetalSystem,
+} from "../chemistry";
 import {
   defaultWindow,
   displayScale,
+  fitWindow,
+  formatActivity,
+  isClustered,
+  ligandEdges,
   PotentialUnit,
+  renderDiagramSvg,
+  sampleText,
   scaleProblem,
   shownRegions,
   shownWaterLines,
-} from "../diagram/diagram-model";
-import { formatActivity, renderDiagramSvg, sampleText } from "../diagram/diagram-svg";
-import { ligandEdges } from "../diagram/ligand-edges";
-import { fitWindow, isClustered, zoomWindow } from "../diagram/view-window";
+  zoomWindow,
+  type AxisWindow,
+  type DisplayScale,
+  type PlottedSample,
+} from "../diagram";
 import { DiagramView, type DrawingOptions } from "./pane-view";
 import { resultsCsv, resultsTsv } from "./results-table";
-import type { DisplayScale, PlottedSample } from "../diagram/diagram-model";
 import { COLUMN_ROLES, ColumnMapping, EMPTY_MAPPING, matchHeaders, WaterColumns, type IonicColumn } from "../tables";
 import { findIonicColumn } from "./ionic-input";
 import { ligandNames, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";

@@ -7,15 +7,14 @@ import {
   DEFAULT_ACTIVITY,
   DEFAULT_CELSIUS,
   FULL_E_LIMIT,
+  getElectrodes,
   MAX_CELSIUS,
   MIN_CELSIUS,
   PH_MAX,
   PH_MIN,
-} from "../chemistry/domain";
-import type { Database } from "../chemistry/database";
-import { getElectrodes } from "../chemistry/electrodes";
-import type { AxisWindow } from "../diagram/axes";
-import type { PlottedSample, PotentialUnit } from "../diagram/diagram-model";
+  type Database,
+} from "../chemistry";
+import { type AxisWindow, type PlottedSample, type PotentialUnit } from "../diagram";
 import { COLUMN_ROLES, ColumnMapping, ColumnRole } from "../tables";
 import type { PaneSettings } from "./host";
 import { $, input, select } from "./pane-dom";

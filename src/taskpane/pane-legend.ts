@@ -3,11 +3,8 @@
  * its dashed lines, the kinetic band when shown, the thin white lines where a ligand's dominant form changes (named
  * by the two forms they separate), and the site colours when samples are coloured by site.
  */
-import { REGIMES } from "../chemistry/domain";
-import type { Regime } from "../chemistry/system";
-import { MARKER_FILLS, markerSvg } from "../diagram/markers";
-import { escapeXml } from "../diagram/diagram-svg";
-import { regionFill, WATER_BAND, WATER_LINE } from "../diagram/palette";
+import { REGIMES, type Regime } from "../chemistry";
+import { escapeXml, MARKER_FILLS, markerSvg, regionFill, WATER_BAND, WATER_LINE } from "../diagram";
 
 /** Site colours: the Okabe–Ito set (Okabe & Ito 2008, Color Universal Design), distinct under colour-vision deficiencies. */
 export const SITE_COLOURS = [

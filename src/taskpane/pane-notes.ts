@@ -2,13 +2,8 @@
  * The pane's text panels beside the drawing: the rows' temperature spread, the rows not drawn, the results table
  * and the pure-water boundary equations.
  */
-import { FULL_E_LIMIT, PH_MAX, PH_MIN } from "../chemistry/domain";
-import type { Database } from "../chemistry/database";
-import { hasLigands, LigandTotals } from "../chemistry/ligand-cells";
-import type { MetalSystem } from "../chemistry/system";
-import { boundaryEquations, equationText } from "../diagram/boundary-equations";
-import type { PlottedSample } from "../diagram/diagram-model";
-import { escapeXml, formatActivity } from "../diagram/diagram-svg";
+import { FULL_E_LIMIT, hasLigands, LigandTotals, PH_MAX, PH_MIN, type Database, type MetalSystem } from "../chemistry";
+import { boundaryEquations, equationText, escapeXml, formatActivity, type PlottedSample } from "../diagram";
 import { $ } from "./pane-dom";
 import { resultsHtml } from "./results-table";
 import { median, readSamples, SkippedRow } from "./sample-table";

@@ -2,9 +2,9 @@
  * The drawn samples: every drawn row's own answer from the worksheet functions (sample-answers.ts) — its reading
  * as logged at its own temperature, its own water. Rows the functions refuse go to the "not drawn" list.
  */
-import { hasLigands, LIGAND_ORDER, LigandName } from "../chemistry/ligand-cells";
-import type { DisplayScale, PlottedSample, PotentialUnit } from "../diagram/diagram-model";
-import type { ColumnMapping, IonicColumn } from "../tables";
+import { hasLigands, LIGAND_ORDER, LigandName } from "../chemistry";
+import { type DisplayScale, type PlottedSample, type PotentialUnit } from "../diagram";
+import { type ColumnMapping, type IonicColumn } from "../tables";
 import { ionicArgumentFor, ionicCaption } from "./ionic-input";
 import type { WaterSettings } from "./ligand-inputs";
 import { AnswerPlan, answerSamples, RowLigand, rowLigand } from "./sample-answers";

@@ -4,8 +4,7 @@
  * and the sample layer as one tab stop whose arrow keys step through the samples in pH order (Home/End to the
  * ends, Enter or Space selects the row). Large sets go on the canvas layer (sample-canvas.ts), which behaves alike.
  */
-import type { PlottedSample } from "../diagram/diagram-model";
-import { escapeXml, renderDiagram, type DiagramSvgOptions, type KeyEntry } from "../diagram/diagram-svg";
+import { escapeXml, renderDiagram, type DiagramSvgOptions, type KeyEntry, type PlottedSample } from "../diagram";
 import { legendHtml, type LegendOptions } from "./pane-legend";
 import { CANVAS_SAMPLES, SampleCanvas } from "./sample-canvas";
 

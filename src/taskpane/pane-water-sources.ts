@@ -2,15 +2,14 @@
  * The pane's ligand fieldset: each ligand's source (a typed total, or a column of the table — a measured DIC column
  * first for carbonate), reading those choices, remembering them and the note on what the diagram uses.
  */
-import { LIGAND_ORDER, LigandName } from "../chemistry/ligand-cells";
-import { MAX_LIGAND_TOTAL } from "../chemistry/ligand-system";
+import { LIGAND_ORDER, LigandName, MAX_LIGAND_TOTAL } from "../chemistry";
 import {
   ColumnMapping,
   matchWaterColumns,
-  waterColumnAt,
-  WaterColumn,
-  WaterColumns,
   WATER_UNIT_WORDS,
+  WaterColumn,
+  waterColumnAt,
+  WaterColumns,
 } from "../tables";
 import type { PaneSettings } from "./host";
 import { LIGAND_COLUMN, LigandSource, resolveWater, WaterSettings, waterCaption } from "./ligand-inputs";

@@ -2,8 +2,7 @@
  * The per-sample results a practitioner copies: row, sample, reading as logged, E vs SHE, species, regime, water
  * margin and equilibrium dissolved metal — as HTML table rows, tab-separated text (pastes into a sheet) and CSV.
  */
-import type { PlottedSample } from "../diagram/diagram-model";
-import { escapeXml } from "../diagram/diagram-svg";
+import { escapeXml, type PlottedSample } from "../diagram";
 
 export const RESULT_HEADERS = [
   "row",

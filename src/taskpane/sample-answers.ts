@@ -6,14 +6,19 @@
  * The pane therefore shows for a row what the sheet and the command line give for it — by construction, not by a
  * second implementation. The diagram behind the markers is drawn separately, at one temperature and one water.
  */
-import { getDatabase } from "../chemistry/database";
-import { LIGAND_ORDER, type LigandName, type LigandTotals } from "../chemistry/ligand-cells";
-import type { Regime } from "../chemistry/system";
-import { CellError, CellOutput, CellScalar, isBlank } from "../functions/cell-values";
-import { dicAt } from "../functions/carbonate-functions";
-import { toSHEAt } from "../functions/electrode-functions";
-import { dissolvedAt, regimeAt, speciesAt } from "../functions/stability-functions";
-import { waterMarginAt } from "../functions/water-functions";
+import { getDatabase, LIGAND_ORDER, type LigandName, type LigandTotals, type Regime } from "../chemistry";
+import {
+  CellError,
+  CellOutput,
+  CellScalar,
+  dicAt,
+  dissolvedAt,
+  isBlank,
+  regimeAt,
+  speciesAt,
+  toSHEAt,
+  waterMarginAt,
+} from "../functions";
 import { ionicArgumentFor } from "./ionic-input";
 import {
   alkalinityFactor,

@@ -7,10 +7,16 @@
  * and the click; the canvas takes keyboard focus, arrow keys step through the samples in pH order (Home/End jump
  * to the ends), Enter or Space selects the row, and a ring marks the current sample.
  */
-import { Axes, makeAxes } from "../diagram/axes";
-import type { PlottedSample } from "../diagram/diagram-model";
-import { MARKER_FILLS, MARKER_OUTLINE, MARKER_RADIUS, traceMarker } from "../diagram/markers";
-import type { Regime } from "../chemistry/system";
+import {
+  Axes,
+  makeAxes,
+  MARKER_FILLS,
+  MARKER_OUTLINE,
+  MARKER_RADIUS,
+  traceMarker,
+  type PlottedSample,
+} from "../diagram";
+import { type Regime } from "../chemistry";
 
 export { MARKER_RADIUS };
 

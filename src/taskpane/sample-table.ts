@@ -4,12 +4,21 @@
  * chosen electrode at the row's own temperature when it has one (the reference electrode sits in that water),
  * otherwise at the diagram's temperature. Pure: no host, no DOM.
  */
-import { boundText, MAX_CELSIUS, MAX_POTENTIAL, MIN_CELSIUS, PH_MAX, PH_MIN } from "../chemistry/domain";
-import { getElectrodes, type Electrode, type ElectrodeTable } from "../chemistry/electrodes";
-import { getDatabase } from "../chemistry/database";
-import type { LigandName } from "../chemistry/ligand-cells";
+import {
+  boundText,
+  getDatabase,
+  getElectrodes,
+  MAX_CELSIUS,
+  MAX_POTENTIAL,
+  MIN_CELSIUS,
+  PH_MAX,
+  PH_MIN,
+  type Electrode,
+  type ElectrodeTable,
+  type LigandName,
+} from "../chemistry";
 import { ColumnMapping, findHeaderRow, POINT_NUMBER, toCelsius, WaterColumn } from "../tables";
-import type { PotentialUnit, SampleInput } from "../diagram/diagram-model";
+import { type PotentialUnit, type SampleInput } from "../diagram";
 import { RowTotals, rowTotal } from "./ligand-inputs";
 
 /** A block of cells as a host hands it over: header texts, data rows, and the row number of each data row. */

@@ -22,8 +22,8 @@ function area(path: string): string {
   return parts[0] === "src" ? `src/${parts[1]}` : parts[0];
 }
 
-/** Every (importing area → imported area) pair with the importing file, relative imports only. */
-function importsOf(top: string): { file: string; from: string; to: string }[] {
+/** Every (importing area → imported area) pair with the importing file and the imported path, relative imports only. */
+function importsOf(top: string): { file: string; from: string; to: string; target: string }[] {
   return tsFiles(join(REPO_ROOT, top)).flatMap((file) => {
     const text = readFileSync(file, "utf8");
     const specifiers = [...text.matchAll(/(?:from|import)\s*\(?\s*"(\.{1,2}\/[^"]+)"/g)].map((m) => m[1]);
@@ -31,6 +31,7 @@ function importsOf(top: string): { file: string; from: string; to: string }[] {
       file: relative(REPO_ROOT, file),
       from: area(file),
       to: area(resolve(dirname(file), s)),
+      target: relative(REPO_ROOT, resolve(dirname(file), s)),
     }));
   });
 }
@@ -70,5 +71,14 @@ describe("imports between the folders", () => {
       offending((from, to) => middle.includes(from) && to.startsWith("src/") && ![from, "src/chemistry"].includes(to)),
     ).toEqual([]);
     expect(offending((from, to) => hosts.includes(from) && hosts.includes(to) && to !== from)).toEqual([]);
+  });
+
+  it("other layers of src reach src/chemistry, src/functions, src/diagram and src/tables through their index.ts", () => {
+    const throughIndex = ["src/chemistry", "src/functions", "src/diagram", "src/tables"];
+    const around = all.filter(
+      (i) => i.from.startsWith("src/") && i.from !== i.to && throughIndex.includes(i.to) && i.target !== i.to,
+    );
+    expect(around.map((i) => `${i.file} → ${i.target}`)).toEqual([]);
+    expect(all.some((i) => i.from === "src/cli" && i.target === "src/chemistry")).toBe(true);
   });
 });
