@@ -34,6 +34,10 @@ const NOT_A_NUMBER = 0 / 0;
 /** Bits of PointEngine.due: aUnit, b and r (a new temperature); aThreshold (a new temperature, threshold or I). */
 const TEMPERATURE_DUE = 1;
 const THRESHOLD_DUE = 2;
+/** The ligands whose activity at a point needs their speciation (chloride is free: its activity is γ·total). */
+const SPECIATED = NEEDS_CARBONATE | NEEDS_SULFUR | NEEDS_PHOSPHATE;
+/** Allowance for rounding between a species' ligand bound and its exact g, V (both ~1e-15 V apart at most). */
+const BOUND_MARGIN = 1e-9;
 
 /** The water of a point: temperature (°C), threshold molality of dissolved metal, ligand totals (mol/kg), I. */
 export interface PointWater {
@@ -64,6 +68,19 @@ export class PointEngine {
   private readonly cpPerAtom: Float64Array;
   private readonly protonPerAtom: Float64Array;
   private readonly perAtom: Float64Array;
+  /** dominant's scratch: g without ligand terms, r of a direct row, the species speciated only if they could win. */
+  private readonly base: Float64Array;
+  private readonly rowR: Float64Array;
+  private readonly candidates: Int32Array;
+  private readonly bounds: Float64Array;
+  /** ln of the largest activity each pivot can have: ln total, plus ln γ where γ would exceed 1 (I beyond Davies). */
+  private boundLnC = 0;
+  private boundLnS = 0;
+  private boundLnP = 0;
+  /** Where lnC, lnS and lnP were last worked out, and which of them are of that point (SPECIATED bits). */
+  private ligandPH = NOT_A_NUMBER;
+  private ligandE = NOT_A_NUMBER;
+  private ligandFresh = 0;
   /** linesAt's answers: g and dg/dE per species. */
   readonly lineG: Float64Array;
   readonly lineSlope: Float64Array;
@@ -108,6 +125,10 @@ export class PointEngine {
     this.c = new Float64Array(n);
     this.r = new Float64Array(n);
     this.aThreshold = new Float64Array(n);
+    this.base = new Float64Array(n);
+    this.rowR = new Float64Array(n);
+    this.candidates = new Int32Array(n);
+    this.bounds = new Float64Array(n);
     this.lineG = new Float64Array(n);
     this.lineSlope = new Float64Array(n);
     const t = this.table;
@@ -157,6 +178,12 @@ export class PointEngine {
     this.lnSulfur = sulfur > 0 ? log(sulfur) : 0;
     this.lnPhosphate = phosphate > 0 ? log(phosphate) : 0;
     this.lnChloride = chloride > 0 ? log(chloride) + this.lnGamma1 : 0; // Cl− is free: a = γ·total
+    this.lnCl = this.lnChloride; // the same at every point of this water
+    const over = this.lnGamma1 > 0 ? this.lnGamma1 : 0; // γ ≤ 1 up to the Davies limit; beyond it allow for γ > 1
+    this.boundLnC = this.lnCarbonate + over; // HCO3−, z = 1
+    this.boundLnS = this.lnSulfur + 4 * over; // SO4²−, z = 2
+    this.boundLnP = this.lnPhosphate + 4 * over; // HPO4²−, z = 2
+    this.ligandFresh = 0; // a new water: no ligand activity of the last point holds
   }
 
   /** The scalars of a new temperature: dT, the ΔCp shape term, k = RT ln10/F and F/RT. */
@@ -209,20 +236,29 @@ export class PointEngine {
 
   /** Exact ligand activities at (pH, E) into lnC, lnS, lnCl, lnP (HPO4²− from the α-fractions of orthophosphate). */
   ligandsAt(pH: number, E: number): void {
-    const present = this.present;
-    if (present & NEEDS_CARBONATE)
+    this.ligandsFor(SPECIATED, pH, E);
+  }
+
+  /** The same for the ligands among `bits` that the water holds (the others keep their last values). */
+  private ligandsFor(bits: number, pH: number, E: number): void {
+    const wanted = bits & this.present;
+    if (wanted & NEEDS_CARBONATE)
       this.lnC = this.carbonateSpeciation
         .at(this.celsius, this.dT, this.shape, this.k, this.f)
         .lnPivot(this.lnCarbonate, this.lnGamma1, pH, E);
-    if (present & NEEDS_SULFUR)
+    if (wanted & NEEDS_SULFUR)
       this.lnS = this.sulfurSpeciation
         .at(this.celsius, this.dT, this.shape, this.k, this.f)
         .lnPivot(this.lnSulfur, this.lnGamma1, pH, E);
-    if (present & NEEDS_PHOSPHATE)
+    if (wanted & NEEDS_PHOSPHATE)
       this.lnP = this.phosphateSpeciation
         .at(this.celsius, this.dT, this.shape, this.k, this.f)
         .lnPivot(this.lnPhosphate, this.lnGamma1, pH, E);
     this.lnCl = this.lnChloride;
+    const samePoint = pH === this.ligandPH && E === this.ligandE;
+    this.ligandFresh = samePoint ? this.ligandFresh | bits : bits;
+    this.ligandPH = pH;
+    this.ligandE = E;
   }
 
   /** d ln a(SO4²−)/dE at the last point (0 without sulfur): the only potential dependence of the ligand terms. */
@@ -248,6 +284,9 @@ export class PointEngine {
   g(i: number, pH: number, E: number, unit = false): number {
     this.ensureColumns();
     const t = this.table;
+    const speciated = t.needs[i] & SPECIATED;
+    if (speciated && (pH !== this.ligandPH || E !== this.ligandE || speciated & ~this.ligandFresh))
+      this.ligandsFor(speciated, pH, E); // dominant may have left this species' ligands unworked
     let g = (unit ? this.aUnit[i] : this.aThreshold[i]) + this.b[i] * pH + this.c[i] * E;
     if (t.needs[i])
       g +=
@@ -289,70 +328,93 @@ export class PointEngine {
     return this.c[i] + this.r[i] * this.table.sulfur[i] * this.sulfurSlope;
   }
 
-  /** Index of the dominant species at (pH, E): the exact argmin of g. */
+  /**
+   * Index of the dominant species at (pH, E): the exact argmin of g (ties to the lower index). The speciation of a
+   * ligand (an exp and a log per form) is worked out only when a species containing it could win: its g is at least
+   * the bound with the ligand's pivot at its total, a_pivot ≤ total (α ≤ 1, γ ≤ 1; the ligand is consumed, ν ≤ 0).
+   */
   dominant(pH: number, E: number): number {
-    this.ligandsAt(pH, E);
-    return this.due === 0 ? this.argmin(pH, E) : this.dominantWhileDue(pH, E);
+    if (this.due !== 0) {
+      if (this.repeats === 0 && !this.correspondence) {
+        this.directBases(pH, E); // a row with its own temperature, threshold or I: nothing stored per species
+        return this.argminOfBases(pH, E, this.rowR);
+      }
+      this.ensureColumns();
+    }
+    this.filledBases(pH, E);
+    return this.argminOfBases(pH, E, this.r);
   }
 
-  /** A row that brought its own temperature, threshold or I: g straight from the fixed columns, nothing stored. */
-  private dominantWhileDue(pH: number, E: number): number {
-    if (this.repeats === 0 && !this.correspondence) return this.dominantDirect(pH, E);
-    this.ensureColumns();
-    return this.argmin(pH, E);
+  /** g without the ligand terms, per species, from the filled columns (argminOfBases adds the ligand terms). */
+  private filledBases(pH: number, E: number): void {
+    const { aThreshold, b, c, base } = this;
+    for (let i = 0, n = aThreshold.length; i < n; i++) base[i] = aThreshold[i] + b[i] * pH + c[i] * E;
   }
 
-  /** The argmin of g over the filled columns (ligand activities from ligandsAt). */
-  private argmin(pH: number, E: number): number {
+  /**
+   * The same from the fixed per-atom columns (constant ΔCp°r, at and below 100 °C): g_i = ΔG°r,i(T)/(x·F) −
+   * ν_H+·k·pH/x − ν_e·E/x + (RT/F)/x·(ln threshold + z²·ln γ1), with r = (RT/F)/x into rowR. The same operations in
+   * the same order as ensureColumns and filledBases: one answer whichever path a row takes.
+   */
+  private directBases(pH: number, E: number): void {
+    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape, k, base, rowR } = this;
+    const { dissolved, chargeSquared } = this.table;
+    const rtOverF = 1 / this.f;
+    const { lnActivity, lnGamma1 } = this;
+    for (let i = 0, n = g0PerAtom.length; i < n; i++) {
+      const aUnit = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape;
+      const r = rtOverF * perAtom[i];
+      const aThreshold = dissolved[i] ? aUnit + r * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit;
+      base[i] = aThreshold + protonPerAtom[i] * k * pH + c[i] * E;
+      rowR[i] = r;
+    }
+  }
+
+  /**
+   * The argmin over `base` plus the ligand terms r·Σ ν_L·ln a_L. Species with chloride only are exact at once (Cl−
+   * is free); those with carbonate, sulfur or orthophosphate first get their bound, and only the ligands of the
+   * species whose bound could beat the best are speciated (ligandsFor).
+   */
+  private argminOfBases(pH: number, E: number, r: Float64Array): number {
     const t = this.table;
-    const { aThreshold, b, c, r } = this;
-    const needs = t.needs;
+    const { base, candidates, bounds } = this;
+    const { needs, carbonate, sulfur, chloride, phosphate } = t;
     const absent = ~this.present;
-    const lnC = this.lnC;
-    const lnS = this.lnS;
-    const lnCl = this.lnCl;
-    const lnP = this.lnP;
+    const lnCl = this.lnChloride;
+    const { boundLnC, boundLnS, boundLnP } = this;
     let best = -1;
     let bestG = INF;
-    for (let i = 0, n = aThreshold.length; i < n; i++) {
+    let count = 0;
+    for (let i = 0, n = base.length; i < n; i++) {
       const need = needs[i];
-      let g = aThreshold[i] + b[i] * pH + c[i] * E;
-      if (need) {
-        if (need & absent) continue;
-        g += r[i] * (t.carbonate[i] * lnC + t.sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP);
+      if (need & absent) continue;
+      let g = base[i];
+      if (need & SPECIATED) {
+        // the bound with each pivot at its total: g ≥ bound (each ν ≤ 0 and ln a ≤ ln total)
+        const bound =
+          g + r[i] * (carbonate[i] * boundLnC + sulfur[i] * boundLnS + chloride[i] * lnCl + phosphate[i] * boundLnP);
+        candidates[count] = i;
+        bounds[count++] = bound;
+        continue;
       }
+      if (need) g += r[i] * (chloride[i] * lnCl);
       if (g < bestG) {
         bestG = g;
         best = i;
       }
     }
-    return best;
-  }
-
-  /**
-   * The same argmin with g_i = ΔG°r,i(T)/(x·F) − ν_H+·k·pH/x − ν_e·E/x + (RT/F)/x·(ln threshold + z²·ln γ1 + ligand
-   * terms) from the fixed per-atom columns (constant ΔCp°r, at and below 100 °C), nothing stored: for a row whose
-   * temperature or water differs from the last one's, cheaper than filling every column first.
-   */
-  private dominantDirect(pH: number, E: number): number {
-    const t = this.table;
-    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape, k } = this;
-    const { needs, dissolved, chargeSquared } = t;
-    const rtOverF = 1 / this.f;
-    const { lnActivity, lnGamma1, lnC, lnS, lnCl, lnP } = this;
-    const absent = ~this.present;
-    let best = -1;
-    let bestG = INF;
-    for (let i = 0, n = g0PerAtom.length; i < n; i++) {
-      const need = needs[i];
-      if (need & absent) continue;
-      // the same operations, in the same order, as ensureColumns and argmin: one answer whichever path a row takes
-      const aUnit = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape;
-      const r = rtOverF * perAtom[i];
-      const aThreshold = dissolved[i] ? aUnit + r * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit;
-      let g = aThreshold + protonPerAtom[i] * k * pH + c[i] * E;
-      if (need) g += r * (t.carbonate[i] * lnC + t.sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP);
-      if (g < bestG) {
+    if (count === 0) return best;
+    let wanted = 0;
+    for (let k = 0; k < count; k++) if (bounds[k] - BOUND_MARGIN <= bestG) wanted |= needs[candidates[k]];
+    wanted &= SPECIATED;
+    if (wanted === 0) return best;
+    this.ligandsFor(wanted, pH, E);
+    const { lnC, lnS, lnP } = this;
+    for (let k = 0; k < count; k++) {
+      if (bounds[k] - BOUND_MARGIN > bestG) continue;
+      const i = candidates[k];
+      const g = base[i] + r[i] * (carbonate[i] * lnC + sulfur[i] * lnS + chloride[i] * lnCl + phosphate[i] * lnP);
+      if (g < bestG || (g === bestG && i < best)) {
         bestG = g;
         best = i;
       }
