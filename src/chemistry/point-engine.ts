@@ -334,15 +334,64 @@ export class PointEngine {
    * the bound with the ligand's pivot at its total, a_pivot ≤ total (α ≤ 1, γ ≤ 1; the ligand is consumed, ν ≤ 0).
    */
   dominant(pH: number, E: number): number {
-    if (this.due !== 0) {
-      if (this.repeats === 0 && !this.correspondence) {
-        this.directBases(pH, E); // a row with its own temperature, threshold or I: nothing stored per species
-        return this.argminOfBases(pH, E, this.rowR);
-      }
-      this.ensureColumns();
+    const direct = this.due !== 0 && this.repeats === 0 && !this.correspondence; // a row with its own T, threshold or I
+    if (!direct) this.ensureColumns();
+    // no ligand to speciate (pure water, chloride only): one pass
+    if (!(this.present & SPECIATED)) return direct ? this.directArgmin(pH, E) : this.filledArgmin(pH, E);
+    if (direct) {
+      this.directBases(pH, E); // nothing stored per species but the scratch
+      return this.argminOfBases(pH, E, this.rowR);
     }
     this.filledBases(pH, E);
     return this.argminOfBases(pH, E, this.r);
+  }
+
+  /** The argmin in one pass over the filled columns, for a water without carbonate, sulfur or orthophosphate. */
+  private filledArgmin(pH: number, E: number): number {
+    const t = this.table;
+    const { aThreshold, b, c, r } = this;
+    const { needs, chloride } = t;
+    const absent = ~this.present;
+    const lnCl = this.lnCl;
+    let best = -1;
+    let bestG = INF;
+    for (let i = 0, n = aThreshold.length; i < n; i++) {
+      const need = needs[i];
+      if (need & absent) continue;
+      let g = aThreshold[i] + b[i] * pH + c[i] * E;
+      if (need) g += r[i] * (chloride[i] * lnCl);
+      if (g < bestG) {
+        bestG = g;
+        best = i;
+      }
+    }
+    return best;
+  }
+
+  /** The same from the fixed per-atom columns (as directBases), nothing stored. */
+  private directArgmin(pH: number, E: number): number {
+    const t = this.table;
+    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape, k } = this;
+    const { needs, dissolved, chargeSquared, chloride } = t;
+    const rtOverF = 1 / this.f;
+    const { lnActivity, lnGamma1, lnCl } = this;
+    const absent = ~this.present;
+    let best = -1;
+    let bestG = INF;
+    for (let i = 0, n = g0PerAtom.length; i < n; i++) {
+      const need = needs[i];
+      if (need & absent) continue;
+      const aUnit = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape;
+      const r = rtOverF * perAtom[i];
+      const aThreshold = dissolved[i] ? aUnit + r * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit;
+      let g = aThreshold + protonPerAtom[i] * k * pH + c[i] * E;
+      if (need) g += r * (chloride[i] * lnCl);
+      if (g < bestG) {
+        bestG = g;
+        best = i;
+      }
+    }
+    return best;
   }
 
   /** g without the ligand terms, per species, from the filled columns (argminOfBases adds the ligand terms). */
