@@ -16,9 +16,6 @@ import {
 import { numberArg, textArg } from "./broadcast";
 import { argumentError } from "./cell-values";
 
-/** Defaults of omitted arguments and the potential range (src/chemistry/domain.ts), re-exported for the functions. */
-export { DEFAULT_ACTIVITY, DEFAULT_CELSIUS, MAX_POTENTIAL };
-
 export const pHArg = numberArg("pH", { min: PH_MIN, max: PH_MAX });
 
 /** What a potential beyond ±3 V (MAX_POTENTIAL: no aqueous redox couple exists there) most likely is, and what to do (a reading in mV typed where volts are expected). */

@@ -3,10 +3,10 @@
  * broadcast.ts; the electrode potentials come from src/chemistry/electrodes.ts. Readings may be in V (default) or
  * mV (`unit`); potentials vs SHE are always in V.
  */
-import { Electrode, getElectrodes, inRange, ownEntry, PH_MAX, PH_MIN } from "../chemistry";
+import { Electrode, getElectrodes, inRange, MAX_POTENTIAL, ownEntry, PH_MAX, PH_MIN } from "../chemistry";
 import { mapCells, numberArg, textArg } from "./broadcast";
 import { argumentError, CellError, CellInput, CellOutput, valueError } from "./cell-values";
-import { MAX_POTENTIAL, potentialArg, potentialMessage, temperatureArg } from "./common-args";
+import { potentialArg, potentialMessage, temperatureArg } from "./common-args";
 
 /** A reference electrode by name or alias, case-insensitive ("SCE", "AgCl-3M", "copper sulfate"). */
 export const electrodeArg = textArg<Electrode>("electrode", (text) => {
