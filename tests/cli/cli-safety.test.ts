@@ -128,7 +128,7 @@ describe("safe output", () => {
   });
 
   it("a metal whose median temperature and water are refused (above 100 °C with chloride) gets no diagram, the others do; exit 4 with the reason", async () => {
-    // iron answers at 250 °C in pure water and at 80 °C with chloride, but not at the median (165 °C) with chloride
+    // copper answers at 250 °C in pure water and at 80 °C with chloride, but not at the median (165 °C) with chloride
     const rows = ["id,metal,pH,Eh_mV,temperature_C,chloride_mg_L"];
     for (const [id, t, cl] of [
       ["a", 250, 0],
@@ -138,7 +138,7 @@ describe("safe output", () => {
       ["e", 80, 350],
       ["f", 80, 350],
     ])
-      rows.push(`${id},Fe,7,-400,${t},${cl}`);
+      rows.push(`${id},Cu,7,-400,${t},${cl}`);
     rows.push("g,Cr,6,-300,300,0");
     const svgDir = join(dir, "median-refused");
     const output = join(dir, "median-refused.csv");
@@ -152,7 +152,7 @@ describe("safe output", () => {
     ]);
     expect(r.code).toBe(4);
     expect(r.stderr).toMatch(
-      /the results are complete, but no Fe diagram \(drawn at the samples' median temperature and water\): temperature 165 °C: Fe with chloride/,
+      /the results are complete, but no Cu diagram \(drawn at the samples' median temperature and water\): temperature 165 °C: Cu with chloride/,
     );
     expect(readdirSync(svgDir)).toEqual(["diagram-Cr.svg"]);
     expect(parseSync(readFileSync(output, "utf8"))).toHaveLength(8);

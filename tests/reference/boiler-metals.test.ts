@@ -7,23 +7,34 @@
  * electrode kinetics of the iron–water system at elevated temperatures", J. Electrochem. Soc. 118, 557 (1971);
  * Beverskog, B., Puigdomenech, I., "Revised Pourbaix diagrams for iron at 25–300 °C", Corros. Sci. 38, 2121 (1996);
  * "Revised Pourbaix diagrams for zinc at 25–300 °C", Corros. Sci. 39, 107 (1997); "Revised Pourbaix diagrams for
- * chromium at 25–300 °C", Corros. Sci. 39, 43 (1997). Only features recalled with confidence are checked: which
+ * chromium at 25–300 °C", Corros. Sci. 39, 43 (1997); "Revised Pourbaix diagrams for copper at 25 to 300 °C",
+ * J. Electrochem. Soc. 144, 3476 (1997); "Revised Pourbaix diagrams for nickel at 25–300 °C", Corros. Sci. 39, 969
+ * (1997). Where the records disagree with a diagram the published answer is kept as an expected failure (it.fails),
+ * so that a change of data that removes the disagreement shows up. Only features recalled with confidence are checked: which
  * field covers a point, not the position of a line to a few mV.
  */
 import { describe, expect, it } from "vitest";
 import snapshot from "../fixtures/species-25c-snapshot.json";
 import { getDatabase } from "../../src/chemistry/database";
-import { temperatureProblem } from "../../src/chemistry/temperature-range";
+import { reactionLogK, standardPotential } from "../../src/chemistry/reaction";
+import { presentLigands, temperatureProblem } from "../../src/chemistry/temperature-range";
 import { neutralPH, waterLine } from "../../src/chemistry/water";
 import { CellError } from "../../src/functions/cell-values";
 import { boundaryFrom, speciesAt } from "../../src/functions/stability-functions";
 
 const db = getDatabase();
-/** Metals whose every pure-water species now has S° (the rest are still refused above 100 °C). */
-const OPENED = ["Fe", "Zn", "Cr"] as const;
+/** Metals whose every pure-water and carbonate species now has S° (the rest are still refused above 100 °C). */
+const OPENED = ["Fe", "Zn", "Cr", "Cu", "Ni"] as const;
 
-const boundary = (metal: string, pH: number, E: number, celsius: number, direction: 1 | -1, carbonate = 0) =>
-  boundaryFrom(metal, pH, E, celsius, 1e-6, carbonate, 0, 0, 0, 0, direction)[0][0];
+const boundary = (
+  metal: string,
+  pH: number,
+  E: number,
+  celsius: number,
+  direction: 1 | -1,
+  carbonate = 0,
+  chloride = 0,
+) => boundaryFrom(metal, pH, E, celsius, 1e-6, carbonate, chloride, 0, 0, 0, direction)[0][0];
 
 describe("25 °C answers unchanged (regression snapshot written before the S° were added, not an outside check)", () => {
   const { grid, answers, gibbs } = snapshot;
@@ -49,10 +60,11 @@ describe("25 °C answers unchanged (regression snapshot written before the S° w
 
 describe("metals opened to 300 °C: answers at 300 °C, continuous across 100 °C", () => {
   for (const metal of OPENED) {
-    it(`${metal}: answered at 150, 250 and 300 °C in pure water`, () => {
+    it(`${metal}: answered at 150, 250 and 300 °C in pure water and with carbonate (2 mmol/kg)`, () => {
       for (const celsius of [150, 250, 300]) {
         expect(temperatureProblem(db, metal, celsius)).toBeNull();
         expect(typeof speciesAt(metal, 7, -0.5, celsius)[0][0]).toBe("string");
+        expect(typeof speciesAt(metal, 7, -0.5, celsius, 1e-6, 0.002)[0][0]).toBe("string");
       }
     });
 
@@ -129,22 +141,141 @@ describe("zinc and chromium at 250–300 °C (Beverskog & Puigdomenech 1997, dia
   }
 });
 
+describe("copper at 250–300 °C (Beverskog & Puigdomenech 1997, copper diagrams at 10^-6 read from memory)", () => {
+  // from memory of the paper's diagrams: copper is immune on the hydrogen line in neutral water at every
+  // temperature; Cu+ gains a field in acid water between Cu and Cu2+ at elevated temperature (none at 25 °C); Cu2+
+  // holds acid oxidising water. (In acid water at 300 °C the records put the Cu+/Cu line at 10^-6 16 mV below the
+  // hydrogen line at pH(T) 3; where the diagrams put it is not recalled, so that point is not checked.)
+  for (const celsius of [250, 300]) {
+    const neutral = neutralPH(celsius);
+    const hydrogen = (pH: number) => waterLine(pH, celsius, "H2");
+    it(`${celsius} °C: copper immune just above the hydrogen line at pH(T) ${neutral.toFixed(2)} and ${(neutral + 1).toFixed(2)}; Cu2+ just below the oxygen line at pH(T) 2`, () => {
+      for (const pH of [neutral, neutral + 1])
+        expect(speciesAt("Cu", pH, hydrogen(pH) + 0.01, celsius, 1e-6)[0][0]).toBe("Cu(s)");
+      expect(speciesAt("Cu", 2, waterLine(2, celsius, "O2") - 0.01, celsius, 1e-6)[0][0]).toBe("Cu2+");
+    });
+    it(`${celsius} °C: at pH(T) 2 a Cu+ field lies between copper and Cu2+ (at 25 °C Cu2+ follows copper directly)`, () => {
+      const fields = (t: number) => {
+        const seen: string[] = [];
+        for (let E = -0.5; E <= 1.2; E += 0.005) {
+          const s = String(speciesAt("Cu", 2, E, t, 1e-6)[0][0]);
+          if (seen.at(-1) !== s) seen.push(s);
+        }
+        return seen;
+      };
+      expect(fields(celsius)).toEqual(["Cu(s)", "Cu+", "Cu2+"]);
+      expect(fields(25)).toEqual(["Cu(s)", "Cu2+"]);
+    });
+  }
+
+  it("300 °C: the Cu2O/Cu line stays more than 0.2 V above the hydrogen line (common practice: copper is immune in de-aerated, hydrogenated water)", () => {
+    // both lines fall by k(T) per pH unit, so their distance is E°(Cu2O/Cu) at 1 bar H2
+    expect(standardPotential(db, "Cu2O(s)", "Cu(s)", 300)).toBeGreaterThan(0.2);
+  });
+
+  // Documented disagreement (expected to fail until the data change): the diagrams show CuO (and Cu2O below it)
+  // passive from about neutral into mildly alkaline pH(T) at 250–300 °C; the records put HCuO2- there, because the
+  // estimated S° of the hydroxo-anion (cu.json, ISO94) makes its formation strongly endothermic (README, Limits).
+  for (const celsius of [250, 300])
+    it.fails(
+      `${celsius} °C, pH(T) neutral + 1, 0.3 V below the oxygen line: CuO(s) as published (the records give HCuO2-)`,
+      () => {
+        const pH = neutralPH(celsius) + 1;
+        expect(speciesAt("Cu", pH, waterLine(pH, celsius, "O2") - 0.3, celsius, 1e-6)[0][0]).toBe("CuO(s)");
+      },
+    );
+});
+
+describe("nickel at 250–300 °C (Beverskog & Puigdomenech 1997, nickel diagrams at 10^-6 read from memory)", () => {
+  for (const celsius of [250, 300]) {
+    const neutral = neutralPH(celsius);
+    const hydrogen = (pH: number) => waterLine(pH, celsius, "H2");
+    it(`${celsius} °C: nickel immune 0.1 V below the hydrogen line at pH(T) ${neutral.toFixed(2)}; Ni2+ just above it at pH(T) 3`, () => {
+      expect(speciesAt("Ni", neutral, hydrogen(neutral) - 0.1, celsius, 1e-6)[0][0]).toBe("Ni(s)");
+      expect(speciesAt("Ni", 3, hydrogen(3) + 0.01, celsius, 1e-6)[0][0]).toBe("Ni2+");
+    });
+  }
+
+  it("the Ni/NiO line closes on the hydrogen line: more than 0.1 V above it at 25 °C, less than 0.08 V at 300 °C", () => {
+    // from memory of the diagrams, and of the nickel/nickel-oxide transition measured in hydrogenated water at
+    // 288–360 °C (Attanasio & Morton 2003), which lies near the dissolved hydrogen of pressurised-water reactors:
+    // the line runs just above the hydrogen line at 300 °C. A field check, not a line position to a few mV.
+    expect(standardPotential(db, "NiO(s)", "Ni(s)", 25)).toBeGreaterThan(0.1);
+    const at300 = standardPotential(db, "NiO(s)", "Ni(s)", 300);
+    expect(at300).toBeGreaterThan(0);
+    expect(at300).toBeLessThan(0.08);
+  });
+
+  it("150 °C, pH(T) neutral + 1, 0.1 V above the hydrogen line: NiO(s), as in the diagrams", () => {
+    const pH = neutralPH(150) + 1;
+    expect(speciesAt("Ni", pH, waterLine(pH, 150, "H2") + 0.1, 150, 1e-6)[0][0]).toBe("NiO(s)");
+  });
+
+  // Documented disagreement (expected to fail until the data change): the diagrams keep a NiO field near neutral
+  // pH(T) at 250–300 °C (and NiO solubility there is far below 10^-6 mol/kg, common practice in reactor water
+  // chemistry); the records give HNiO2- from about pH(T) 5.9 at 250 °C and 5.2 at 300 °C (7.7 at 150 °C), because the
+  // estimated S° of the hydroxo-anion (ni.json, ISO94) makes its formation strongly endothermic (README, Limits).
+  for (const celsius of [250, 300])
+    it.fails(
+      `${celsius} °C, pH(T) neutral + 1, 0.1 V above the hydrogen line: NiO(s) as published (the records give HNiO2-)`,
+      () => {
+        const pH = neutralPH(celsius) + 1;
+        expect(speciesAt("Ni", pH, waterLine(pH, celsius, "H2") + 0.1, celsius, 1e-6)[0][0]).toBe("NiO(s)");
+      },
+    );
+});
+
+describe("iron with chloride to 300 °C (FeCl+, FeCl 2+ with estimated S°)", () => {
+  it("answered at 150, 250 and 300 °C with 0.01 mol/kg chloride", () => {
+    for (const celsius of [150, 250, 300]) {
+      expect(temperatureProblem(db, "Fe", celsius, presentLigands(0, 0.01))).toBeNull();
+      expect(typeof speciesAt("Fe", 7, -0.5, celsius, 1e-6, 0, 0.01)[0][0]).toBe("string");
+    }
+  });
+
+  it("with 0.1 mol/kg chloride: REDOX.BOUNDARY continuous across 100 °C like pure water", () => {
+    let compared = 0;
+    for (let pH = 1; pH <= 9; pH += 0.5)
+      for (const E of [-0.8, -0.4, 0, 0.4, 0.8])
+        for (const direction of [1, -1] as const) {
+          const [before, below, above] = [99.7, 99.9, 100.1].map((t) => boundary("Fe", pH, E, t, direction, 0, 0.1));
+          if (typeof below !== "number" || typeof above !== "number" || typeof before !== "number") continue;
+          expect(Math.abs(above - below), `pH ${pH}, E ${E}, direction ${direction}`).toBeLessThan(0.003);
+          expect(Math.abs(above - below)).toBeLessThan(Math.abs(below - before) + 3e-4);
+          compared++;
+        }
+    expect(compared).toBeGreaterThan(40);
+  });
+
+  it("the chloro-complexes strengthen with temperature: log β1 of FeCl+ and FeCl 2+ higher at 300 °C than at 25 °C", () => {
+    // common practice in hydrothermal geochemistry (chloro-complexes of Fe(II) and Fe(III) grow stronger with
+    // temperature, e.g. Heinrich & Seward 1990 for Fe(II), from memory); a sign check of the estimated S°, not a value
+    for (const [complex, ion] of [
+      ["FeCl+", "Fe2+"],
+      ["FeCl2+", "Fe3+"],
+    ]) {
+      const r = { [ion]: -1, "Cl-": -1, [complex]: 1 };
+      expect(reactionLogK(db, r, 300), complex).toBeGreaterThan(reactionLogK(db, r, 25) + 0.5);
+    }
+  });
+});
+
 describe("refusals that remain above 100 °C", () => {
-  it("nickel is refused at 200 °C, naming only Ni4(OH)4 4+ (no published S° and no analogue of its charge types)", () => {
-    const out = speciesAt("Ni", 7, 0, 200)[0][0] as CellError;
+  it("copper with chloride is refused at 250 °C, naming its chloro-complexes and atacamite (no S°)", () => {
+    const out = speciesAt("Cu", 7, 0, 250, 1e-6, 0, 0.01)[0][0] as CellError;
     expect(out).toBeInstanceOf(CellError);
-    expect(out.message).toMatch(/Ni is modelled 0–100 °C only; above 100 °C the records lack S° for Ni4\(OH\)44\+$/);
+    expect(out.message).toMatch(/Cu with chloride is modelled 0–100 °C only;.*Cu2Cl\(OH\)3\(s\), CuCl\+, CuCl32-$/);
   });
 
-  it("copper is refused at 200 °C, naming only Cu2(OH)2 2+ (no published S° and no analogue of its charge types)", () => {
-    const out = speciesAt("Cu", 7, 0, 200)[0][0] as CellError;
+  it("lead is refused at 200 °C in pure water, naming its hydroxo-complexes", () => {
+    const out = speciesAt("Pb", 7, 0, 200)[0][0] as CellError;
     expect(out).toBeInstanceOf(CellError);
-    expect(out.message).toMatch(/Cu is modelled 0–100 °C only; above 100 °C the records lack S° for Cu2\(OH\)22\+$/);
+    expect(out.message).toMatch(/Pb is modelled 0–100 °C only; above 100 °C the records lack S° for PbOH\+/);
   });
 
-  it("iron with chloride is refused at 250 °C, naming FeCl+ (its chloro-complexes lack S°)", () => {
-    const out = speciesAt("Fe", 7, -0.5, 250, 1e-6, 0, 0.01)[0][0] as CellError;
+  it("iron with sulfur is refused at 250 °C, naming FeS(s)", () => {
+    const out = speciesAt("Fe", 7, -0.5, 250, 1e-6, 0, 0, 0.001)[0][0] as CellError;
     expect(out).toBeInstanceOf(CellError);
-    expect(out.message).toMatch(/Fe with chloride is modelled 0–100 °C only;.*FeCl\+/);
+    expect(out.message).toMatch(/Fe with sulfur is modelled 0–100 °C only;.*FeS\(s\)/);
   });
 });
