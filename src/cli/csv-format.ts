@@ -57,13 +57,19 @@ const VOLT_FRACTIONS: readonly string[] = Array.from({ length: 10_000 }, (_, f) 
   f === 0 ? "" : `.${String(f).padStart(4, "0").replace(/0+$/, "")}`,
 );
 
+/** Volts as a whole number of tenths of a millivolt, or null where that is not below 10¹⁵ (or not a number). */
+export function voltsTenths(x: number): number | null {
+  const n = Math.round(x * 1e4);
+  return Math.abs(n) < 1e15 ? n : null;
+}
+
 /**
  * Volts to 0.1 mV, written from the integer number of tenths of a millivolt: the text String(round(x·1e4)/1e4)
  * gives (no trailing zeros), without formatting a double.
  */
 function voltsText(x: number): string {
-  const n = Math.round(x * 1e4);
-  if (!(Math.abs(n) < 1e15)) return String(n / 1e4);
+  const n = voltsTenths(x);
+  if (n === null) return String(Math.round(x * 1e4) / 1e4);
   const a = n < 0 ? -n : n;
   const whole = Math.floor(a / 1e4);
   const text = String(whole) + VOLT_FRACTIONS[a - whole * 1e4];
@@ -90,26 +96,33 @@ function decimalText(m: number, k: number): string {
 }
 
 /**
- * 4 significant figures: the text String(Number(x.toPrecision(4))) gives, from the integer of the four digits
- * (toPrecision formats the double's exact decimal expansion, slowly). Outside 10⁻⁶…10¹⁵ (exponent notation) and
- * within 10⁻⁷ of a tie between two roundings it leaves the answer to toPrecision.
+ * The four significant figures of x ≠ 0 as m·10^−k (1000 ≤ m ≤ 9999, −11 ≤ k ≤ 9), packed as m·32 + k + 11, from
+ * the integer of the four digits; −1 outside 10⁻⁶…10¹⁵ (exponent notation) and within 10⁻⁷ of a tie between two
+ * roundings, where the answer is left to toPrecision (which formats the double's exact decimal expansion, slowly).
  */
-function fourFigures(x: number): string {
-  if (x === 0) return "0";
+export function fourFigureParts(x: number): number {
   const a = x < 0 ? -x : x;
-  if (!(a >= 1e-6 && a < 1e15)) return String(Number(x.toPrecision(4)));
+  if (!(a >= 1e-6 && a < 1e15)) return -1;
   let k = 3 - Math.floor(Math.log10(a)); // a·10^k in [1000, 10000): −11 ≤ k ≤ 9
   let scaled = timesPowerOfTen(a, k);
   if (scaled < 1000) scaled = timesPowerOfTen(a, ++k);
   else if (scaled >= 10000) scaled = timesPowerOfTen(a, --k);
   const below = Math.floor(scaled);
-  if (Math.abs(scaled - below - 0.5) < 1e-7) return String(Number(x.toPrecision(4)));
+  if (Math.abs(scaled - below - 0.5) < 1e-7) return -1;
   let m = Math.round(scaled);
   if (m === 10000) {
     m = 1000;
     k--;
   }
-  const text = decimalText(m, k);
+  return m * 32 + k + 11;
+}
+
+/** 4 significant figures: the text String(Number(x.toPrecision(4))) gives (fourFigureParts). */
+function fourFigures(x: number): string {
+  if (x === 0) return "0";
+  const parts = fourFigureParts(x);
+  if (parts < 0) return String(Number(x.toPrecision(4)));
+  const text = decimalText(Math.floor(parts / 32), (parts % 32) - 11);
   return x < 0 ? "-" + text : text;
 }
 

@@ -13,7 +13,7 @@ import {
   type LigandTotals,
 } from "../chemistry";
 import { displayScale, plotSamples, renderDiagramSvg, shownRegions, shownWaterLines } from "../diagram";
-import type { SamplePoint } from "./evaluate";
+import type { SamplePoint } from "./sample-offers";
 import { Reservoir } from "./reservoir";
 
 /** Points drawn per diagram at most (the pane's budget is 10 k samples, DEVELOPERS.md Speed budgets). */
