@@ -134,17 +134,28 @@ export class CsvBytes {
     const n = voltsTenths(x);
     if (n === null) return false;
     const a = n < 0 ? -n : n;
-    if (n < 0) this.byte(45);
     const whole = Math.floor(a / 1e4);
-    this.digits(whole);
+    if (whole >= 10) {
+      if (n < 0) this.byte(45);
+      this.digits(whole);
+    } else {
+      this.reserve(2);
+      if (n < 0) this.bytes[this.length++] = 45;
+      this.bytes[this.length++] = 48 + whole;
+    }
     let fraction = a - whole * 1e4;
     if (fraction === 0) return true;
-    this.byte(this.mark);
+    // the point and up to four digits, without trailing zeros
+    this.reserve(5);
+    const bytes = this.bytes;
+    let at = this.length;
+    bytes[at++] = this.mark;
     for (let unit = 1000; fraction > 0; unit /= 10) {
       const d = Math.floor(fraction / unit);
-      this.byte(48 + d);
+      bytes[at++] = 48 + d;
       fraction -= d * unit;
     }
+    this.length = at;
     return true;
   }
 

@@ -106,8 +106,9 @@ export function rowProblems(
   argNotes: Record<string, string>,
 ): RowMessage[] | null {
   let problems: RowMessage[] | null = null;
-  for (const c of cells) {
-    if (!(c instanceof CellError)) continue;
+  for (let i = 0; i < cells.length; i++) {
+    const c = cells[i];
+    if (typeof c !== "object" || !(c instanceof CellError)) continue;
     const [arg, rest] = splitMessage(c);
     if (
       !SERIOUS.has(c.code) &&
