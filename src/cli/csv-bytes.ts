@@ -4,6 +4,7 @@
  * csv-format.ts gives (numberField, textField), without a string per cell, per line and per batch to build, join
  * and encode again.
  */
+import { readNumber } from "../tables";
 import { numberField, textField, voltsTenths, fourFigureParts, type CsvFormat, type NumberKind } from "./csv-format";
 
 /** Bytes kept before the buffer grows (a few batches' lines). */
@@ -89,16 +90,36 @@ export class CsvBytes {
     this.length = at;
   }
 
-  /** Line text copied as read when every character is printable ASCII; false (nothing written) otherwise. */
-  printableAscii(text: string): boolean {
-    const n = text.length;
-    this.reserve(n);
+  /**
+   * Copies an unquoted record's line when every field of it is written as it was read (textField leaves it as it
+   * is): printable ASCII, no space at either end of a field, and no field that a spreadsheet would take for a formula
+   * (=, +, -, @ not starting a number). Returns false, with nothing written, when a field needs textField.
+   */
+  lineAsRead(text: string, fields: readonly string[]): boolean {
+    const d = this.delimiter;
+    if (d < 0) return false;
+    const { rawText, decimalMark } = this.format;
+    const end = text.length;
+    this.reserve(end);
     const bytes = this.bytes;
     let at = this.length;
-    for (let i = 0; i < n; i++) {
+    let field = 0;
+    let start = true;
+    for (let i = 0; i < end; i++) {
       const c = text.charCodeAt(i);
-      if (c < 32 || c > 126) return false;
       bytes[at++] = c;
+      if (c === d) {
+        field++;
+        start = true;
+        continue;
+      }
+      if (c === 32) {
+        if (start || i + 1 === end || text.charCodeAt(i + 1) === d) return false;
+      } else if (c < 32 || c > 126) return false;
+      else if (start && !rawText && (c === 61 || c === 43 || c === 45 || c === 64)) {
+        if (readNumber(fields[field], decimalMark) === null) return false;
+      }
+      start = false;
     }
     this.length = at;
     return true;

@@ -3,9 +3,8 @@
  * written into the results bytes (csv-bytes.ts).
  */
 import type { CellOutput } from "../functions";
-import { readNumber } from "../tables";
 import type { CsvBytes } from "./csv-bytes";
-import { textField, type CsvFormat, type NumberKind } from "./csv-format";
+import { textField, type NumberKind } from "./csv-format";
 import type { EvaluationPlan } from "./evaluation-plan";
 import type { InputRow } from "./record-reader";
 import { clip, ECHO_LIMIT } from "./row-messages";
@@ -18,36 +17,6 @@ export function cellKinds(ligandColumns: number, targets: number): NumberKind[] 
   return kinds;
 }
 
-/**
- * Whether every field of an unquoted record is written as it was read (textField leaves it as it is), so that the
- * record's line can be copied: printable ASCII, no space at either end of a field, and no field that a spreadsheet
- * would take for a formula (=, +, -, @ not starting a number). Anything else takes the field-by-field path.
- */
-function writtenAsRead(row: InputRow, format: CsvFormat): row is InputRow & { readonly text: string } {
-  const text = row.text;
-  if (text === undefined || format.delimiter.length !== 1) return false;
-  const d = format.delimiter.charCodeAt(0);
-  const end = text.length;
-  let field = 0;
-  let start = true;
-  for (let i = 0; i < end; i++) {
-    const c = text.charCodeAt(i);
-    if (c === d) {
-      field++;
-      start = true;
-      continue;
-    }
-    if (c === 32) {
-      if (start || i + 1 === end || text.charCodeAt(i + 1) === d) return false;
-    } else if (c < 32 || c > 126) return false;
-    else if (start && !format.rawText && (c === 61 || c === 43 || c === 45 || c === 64)) {
-      if (readNumber(row.fields[field], format.decimalMark) === null) return false;
-    }
-    start = false;
-  }
-  return true;
-}
-
 /** One output line: the input fields (unless dropped), the result cells and the errors cell. */
 export function writeOutputLine(
   out: CsvBytes,
@@ -58,8 +27,8 @@ export function writeOutputLine(
   errors: string,
 ): void {
   if (plan.keepInput) {
-    if (writtenAsRead(row, out.format)) out.text(row.text);
-    else
+    // an unquoted record's line as read where that is what its fields give (CsvBytes.lineAsRead)
+    if (row.text === undefined || !out.lineAsRead(row.text, row.fields))
       for (let i = 0; i < row.fields.length; i++) {
         if (i > 0) out.delimiterByte();
         out.text(textField(row.fields[i], out.format));

@@ -56,14 +56,10 @@ export function argumentColumns(plan: EvaluationPlan): Record<string, string | n
   return columns;
 }
 
-/**
- * The argument at fault as the error records it (CellError.argument; the message text is never parsed) and the
- * message without its "argument: " lead.
- */
-function splitMessage(error: CellError): [string | null, string] {
-  if (error.argument === undefined) return [null, error.message];
-  const lead = `${error.argument}: `;
-  return [error.argument, error.message.startsWith(lead) ? error.message.slice(lead.length) : error.message];
+/** The error's message without its "argument: " lead (the argument it records, CellError.argument; never parsed). */
+function messageAfterArgument(error: CellError, argument: string): string {
+  const lead = `${argument}: `;
+  return error.message.startsWith(lead) ? error.message.slice(lead.length) : error.message;
 }
 
 /** Notes added to messages about converted arguments: the functions name them in mol/kg or °C, say the source unit. */
@@ -109,7 +105,7 @@ export function rowProblems(
   for (let i = 0; i < cells.length; i++) {
     const c = cells[i];
     if (typeof c !== "object" || !(c instanceof CellError)) continue;
-    const [arg, rest] = splitMessage(c);
+    const arg = c.argument ?? null;
     if (
       !SERIOUS.has(c.code) &&
       !(c.code === "#N/A" && arg !== null && Object.prototype.hasOwnProperty.call(argColumns, arg))
@@ -117,7 +113,7 @@ export function rowProblems(
       continue;
     const col = arg !== null && arg in argColumns ? argColumns[arg] : null;
     const text = clip(
-      col !== null ? `${rest}${(arg !== null && argNotes[arg]) || ""} (${c.code})` : `${c.message} (${c.code})`,
+      col !== null ? `${messageAfterArgument(c, arg!)}${argNotes[arg!] || ""} (${c.code})` : `${c.message} (${c.code})`,
     );
     problems ??= [];
     if (!problems.some((m) => m.column === col && m.text === text))
