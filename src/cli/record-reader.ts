@@ -10,8 +10,11 @@
 export interface InputRow {
   readonly fields: readonly string[];
   readonly line: number;
-  /** The record's line as read (without its line break) when it holds no quote: its fields joined by the delimiter. */
-  readonly text?: string;
+  /**
+   * The record's line as read (without its line break) when it holds no quote: its fields joined by the delimiter;
+   * else undefined (every row has the same properties, so code reading rows sees one shape).
+   */
+  readonly text: string | undefined;
 }
 
 export class MalformedCsvError extends Error {}
@@ -135,7 +138,7 @@ export class RecordSplitter {
       }
       this.headerSeen = true;
     }
-    if (lineText === null) out.push({ fields: fields as string[], line: this.line });
+    if (lineText === null) out.push({ fields: fields as string[], line: this.line, text: undefined });
     else out.push({ fields: lineText.split(this.delimiter), line: this.line, text: lineText });
   }
 }

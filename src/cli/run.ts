@@ -327,7 +327,8 @@ class StreamedRun {
     const n = row.fields.length;
     this.rows++;
     if (n === width) return row;
-    if (n < width) return { line: row.line, fields: [...row.fields, ...new Array<string>(width - n).fill("")] };
+    if (n < width)
+      return { fields: [...row.fields, ...new Array<string>(width - n).fill("")], line: row.line, text: undefined };
     const extra = row.fields.slice(width);
     if (extra.some((f) => f.trim() !== ""))
       this.message({
@@ -336,7 +337,7 @@ class StreamedRun {
         text: `${n} fields, the header has ${width}; the fields after column ${width} are not written`,
         kind: "blank",
       });
-    return { line: row.line, fields: row.fields.slice(0, width) };
+    return { fields: row.fields.slice(0, width), line: row.line, text: undefined };
   }
 
   private message(m: RowMessage): void {
