@@ -5,7 +5,15 @@
  * and encode again.
  */
 import { readNumber } from "../tables";
-import { numberField, textField, voltsTenths, fourFigureParts, type CsvFormat, type NumberKind } from "./csv-format";
+import {
+  EXPONENT_SCALE,
+  fourFigureParts,
+  numberField,
+  textField,
+  voltsTenths,
+  type CsvFormat,
+  type NumberKind,
+} from "./csv-format";
 
 /** Bytes kept before the buffer grows (a few batches' lines). */
 const INITIAL_BYTES = 1 << 21;
@@ -188,18 +196,20 @@ export class CsvBytes {
     }
     const parts = fourFigureParts(x);
     if (parts < 0) return false;
-    const m = Math.floor(parts / 32);
-    const k = (parts % 32) - 11;
+    const m = Math.floor(parts / 512);
+    const k = (parts % 512) - 11;
     if (x < 0) this.byte(45);
     if (k <= 0) {
       this.digits(m * 10 ** -k);
       return true;
     }
-    // the four digits with the point before the last k of them, trailing zeros (and a bare point) left out
+    // the four digits with the point before the last k of them (after the first in exponent notation), trailing
+    // zeros (and a bare point) left out
     let last = 4;
     for (let rest = m; rest % 10 === 0; rest /= 10) last--;
-    const whole = 4 - k;
-    if (whole > 0) this.digits(Math.floor(m / 10 ** k));
+    const exponent = k > EXPONENT_SCALE;
+    const whole = exponent ? 1 : 4 - k;
+    if (whole > 0) this.digits(Math.floor(m / 10 ** (4 - whole)));
     else {
       this.byte(48);
       this.byte(this.mark);
@@ -207,6 +217,11 @@ export class CsvBytes {
     }
     if (whole > 0 && last > whole) this.byte(this.mark);
     for (let i = Math.max(whole, 0); i < last; i++) this.byte(48 + (Math.floor(m / 10 ** (3 - i)) % 10));
+    if (exponent) {
+      this.byte(101); // e
+      this.byte(45);
+      this.digits(k - 3);
+    }
     return true;
   }
 }

@@ -328,8 +328,9 @@ describe("number text", () => {
   it("the results bytes hold exactly numberField's text, at every magnitude, sign, tie and decimal mark", () => {
     const random = mulberry32(11);
     const values = [0, -0, 1, -1, 0.5, 9999.5, 0.00012345, 1e-6, 9.9995e-7, 1e15, 1e16, 123456789.5, NaN, Infinity];
+    values.push(1e-7, 1.5e-300, 5e-324, 9.99951e-301, 1e-310, 2.5e-12, 9.9999e-10, -3.21e-45, 1e21, 1e300);
     for (let i = 0; i < 20_000; i++) {
-      const x = (random() - 0.3) * 10 ** Math.floor(random() * 24 - 9);
+      const x = (random() - 0.3) * 10 ** Math.floor(random() * 60 - 40);
       values.push(x, Math.round(x * 1e4) / 1e4 + 0.00005, Number(x.toPrecision(4)));
     }
     const comma = { ...DEFAULT_FORMAT, delimiter: ";", decimalMark: "," as const };
@@ -342,5 +343,8 @@ describe("number text", () => {
         }
         expect(bytes.takeText()).toBe(values.map((x) => numberField(x, kind, format) + "\n").join(""));
       }
+    // amounts: the text of the 4-figure double as JavaScript writes it (ECMA-262, Number::toString)
+    const amounts = values.map((x) => numberField(x, "amount", DEFAULT_FORMAT));
+    expect(amounts).toEqual(values.map((x) => String(Number(x.toPrecision(4)))));
   });
 });
