@@ -95,7 +95,10 @@ export class RecordSplitter {
       const end = nl > pos && text.charCodeAt(nl - 1) === 13 ? nl - 1 : nl;
       if (quote >= 0 && quote < pos) quote = text.indexOf('"', pos);
       if (quote < 0 || quote > nl) {
-        this.emit(text.slice(pos, end), null, out);
+        const lineText = text.slice(pos, end);
+        // after the header (almost every line) the record is made here, without the preamble's checks
+        if (this.headerSeen) out.push({ fields: lineText.split(d), line: this.line, text: lineText });
+        else this.emit(lineText, null, out);
         pos = nl + 1;
         this.line++;
         continue;
