@@ -32,7 +32,12 @@ const TIE = 1e-12;
 /** The species dominant just past E in direction d (ties at E go to the one that stays lowest); leaves linesAt(E). */
 function speciesPast(engine: PointEngine, pH: number, E: number, d: 1 | -1): number {
   engine.linesAt(pH, E);
-  const { lineG, lineSlope } = engine;
+  return pastOnLines(engine, lowestLine(engine), d);
+}
+
+/** The species with the lowest line at the engine's last linesAt (ties to the lower index): the dominant there. */
+function lowestLine(engine: PointEngine): number {
+  const { lineG } = engine;
   let first = -1;
   let gFirst = INF;
   for (let i = 0; i < lineG.length; i++) {
@@ -41,6 +46,13 @@ function speciesPast(engine: PointEngine, pH: number, E: number, d: 1 | -1): num
       first = i;
     }
   }
+  return first;
+}
+
+/** Among the species tied with `first` on the last lines, the one that stays lowest going in direction d. */
+function pastOnLines(engine: PointEngine, first: number, d: 1 | -1): number {
+  const { lineG, lineSlope } = engine;
+  const gFirst = lineG[first];
   let best = first;
   let bestSlope = d * lineSlope[first];
   for (let i = 0; i < lineG.length; i++) {
@@ -95,18 +107,22 @@ export function pointBoundary(engine: PointEngine, pH: number, E: number, d: 1 |
     const { distance, next } = tangentCrossing(engine, here, d);
     // tangents are exact as far as the sulfur term stays linear; inside a bend, steps of at most MAX_STEP
     const straight = engine.sulfurStraightFor;
-    const reach = min(distance, max(straight, MAX_STEP), d * (limit - current));
+    const toLimit = d * (limit - current);
+    if (min(distance, toLimit) <= straight) {
+      // every line straight up to the crossing (or the search limit): the tangent crossing is exact, as without sulfur
+      if (next < 0 || distance >= toLimit) return null;
+      return crossing(current + d * distance, here, next, d);
+    }
+    const reach = min(distance, max(straight, MAX_STEP), toLimit);
     const probe = current + d * (reach + BOUNDARY_TOLERANCE / 4);
-    const there = engine.dominant(pH, probe);
+    engine.linesAt(pH, probe); // the lines there give the dominant species (their lowest) and the next tangents
+    const there = lowestLine(engine);
     if (there === here) {
       if (d * (limit - probe) <= 0) return null;
       current = probe;
-      here = speciesPast(engine, pH, current, d);
+      here = pastOnLines(engine, there, d);
       continue;
     }
-    // lines straight all the way and the predicted taker found past it: the tangent crossing is the boundary
-    if (distance <= straight && reach === distance && there === next)
-      return crossing(current + d * distance, here, next, d);
     return bisect(engine, pH, current, probe, here, there, d);
   }
   return null;

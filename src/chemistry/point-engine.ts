@@ -68,7 +68,7 @@ export class PointEngine {
   private readonly cpPerAtom: Float64Array;
   private readonly protonPerAtom: Float64Array;
   private readonly perAtom: Float64Array;
-  /** dominant's scratch: g without ligand terms, r of a direct row, the species speciated only if they could win. */
+  /** ligandArgmin's scratch, per candidate (a species speciated only if it could win): g without ligand terms, r, bound. */
   private readonly base: Float64Array;
   private readonly rowR: Float64Array;
   private readonly candidates: Int32Array;
@@ -338,12 +338,7 @@ export class PointEngine {
     if (!direct) this.ensureColumns();
     // no ligand to speciate (pure water, chloride only): one pass
     if (!(this.present & SPECIATED)) return direct ? this.directArgmin(pH, E) : this.filledArgmin(pH, E);
-    if (direct) {
-      this.directBases(pH, E); // nothing stored per species but the scratch
-      return this.argminOfBases(pH, E, this.rowR);
-    }
-    this.filledBases(pH, E);
-    return this.argminOfBases(pH, E, this.r);
+    return this.ligandArgmin(pH, E, direct);
   }
 
   /** The argmin in one pass over the filled columns, for a water without carbonate, sulfur or orthophosphate. */
@@ -368,7 +363,11 @@ export class PointEngine {
     return best;
   }
 
-  /** The same from the fixed per-atom columns (as directBases), nothing stored. */
+  /**
+   * The same from the fixed per-atom columns (constant ΔCp°r, at and below 100 °C), nothing stored: g_i =
+   * ΔG°r,i(T)/(x·F) − ν_H+·k·pH/x − ν_e·E/x + (RT/F)/x·(ln threshold + z²·ln γ1). The same operations in the same
+   * order as ensureColumns and filledArgmin: one answer whichever path a row takes.
+   */
   private directArgmin(pH: number, E: number): number {
     const t = this.table;
     const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape, k } = this;
@@ -394,75 +393,64 @@ export class PointEngine {
     return best;
   }
 
-  /** g without the ligand terms, per species, from the filled columns (argminOfBases adds the ligand terms). */
-  private filledBases(pH: number, E: number): void {
-    const { aThreshold, b, c, base } = this;
-    for (let i = 0, n = aThreshold.length; i < n; i++) base[i] = aThreshold[i] + b[i] * pH + c[i] * E;
-  }
-
   /**
-   * The same from the fixed per-atom columns (constant ΔCp°r, at and below 100 °C): g_i = ΔG°r,i(T)/(x·F) −
-   * ν_H+·k·pH/x − ν_e·E/x + (RT/F)/x·(ln threshold + z²·ln γ1), with r = (RT/F)/x into rowR. The same operations in
-   * the same order as ensureColumns and filledBases: one answer whichever path a row takes.
+   * The argmin where the water holds a ligand to speciate, in one pass over the species (g from the filled columns,
+   * or from the per-atom ones for a `direct` row, as in filledArgmin and directArgmin). Species with chloride only
+   * are exact at once (Cl− is free); those with carbonate, sulfur or orthophosphate first get their bound, and only
+   * the ligands of the species whose bound could beat the best are speciated (ligandsFor).
    */
-  private directBases(pH: number, E: number): void {
-    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape, k, base, rowR } = this;
-    const { dissolved, chargeSquared } = this.table;
-    const rtOverF = 1 / this.f;
-    const { lnActivity, lnGamma1 } = this;
-    for (let i = 0, n = g0PerAtom.length; i < n; i++) {
-      const aUnit = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape;
-      const r = rtOverF * perAtom[i];
-      const aThreshold = dissolved[i] ? aUnit + r * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit;
-      base[i] = aThreshold + protonPerAtom[i] * k * pH + c[i] * E;
-      rowR[i] = r;
-    }
-  }
-
-  /**
-   * The argmin over `base` plus the ligand terms r·Σ ν_L·ln a_L. Species with chloride only are exact at once (Cl−
-   * is free); those with carbonate, sulfur or orthophosphate first get their bound, and only the ligands of the
-   * species whose bound could beat the best are speciated (ligandsFor).
-   */
-  private argminOfBases(pH: number, E: number, r: Float64Array): number {
+  private ligandArgmin(pH: number, E: number, direct: boolean): number {
     const t = this.table;
-    const { base, candidates, bounds } = this;
-    const { needs, carbonate, sulfur, chloride, phosphate } = t;
+    const { aThreshold, b, c, r, g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, dT, shape, k } = this;
+    const { base, rowR, candidates, bounds } = this;
+    const { needs, carbonate, sulfur, chloride, phosphate, dissolved, chargeSquared } = t;
+    const rtOverF = 1 / this.f;
+    const { lnActivity, lnGamma1, boundLnC, boundLnS, boundLnP } = this;
     const absent = ~this.present;
     const lnCl = this.lnChloride;
-    const { boundLnC, boundLnS, boundLnP } = this;
     let best = -1;
     let bestG = INF;
     let count = 0;
-    for (let i = 0, n = base.length; i < n; i++) {
+    let reach = 0; // the ligands of the candidates whose bound does not yet lose to the best
+    for (let i = 0, n = needs.length; i < n; i++) {
       const need = needs[i];
       if (need & absent) continue;
-      let g = base[i];
+      let g: number;
+      let ri: number;
+      if (direct) {
+        const aUnit = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape;
+        ri = rtOverF * perAtom[i];
+        const aTh = dissolved[i] ? aUnit + ri * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit;
+        g = aTh + protonPerAtom[i] * k * pH + c[i] * E;
+      } else {
+        g = aThreshold[i] + b[i] * pH + c[i] * E;
+        ri = r[i];
+      }
       if (need & SPECIATED) {
         // the bound with each pivot at its total: g ≥ bound (each ν ≤ 0 and ln a ≤ ln total)
         const bound =
-          g + r[i] * (carbonate[i] * boundLnC + sulfur[i] * boundLnS + chloride[i] * lnCl + phosphate[i] * boundLnP);
+          g + ri * (carbonate[i] * boundLnC + sulfur[i] * boundLnS + chloride[i] * lnCl + phosphate[i] * boundLnP);
         candidates[count] = i;
+        base[count] = g;
+        rowR[count] = ri;
         bounds[count++] = bound;
         continue;
       }
-      if (need) g += r[i] * (chloride[i] * lnCl);
+      if (need) g += ri * (chloride[i] * lnCl);
       if (g < bestG) {
         bestG = g;
         best = i;
       }
     }
-    if (count === 0) return best;
-    let wanted = 0;
-    for (let k = 0; k < count; k++) if (bounds[k] - BOUND_MARGIN <= bestG) wanted |= needs[candidates[k]];
-    wanted &= SPECIATED;
-    if (wanted === 0) return best;
-    this.ligandsFor(wanted, pH, E);
+    for (let m = 0; m < count; m++) if (bounds[m] - BOUND_MARGIN <= bestG) reach |= needs[candidates[m]];
+    reach &= SPECIATED;
+    if (reach === 0) return best;
+    this.ligandsFor(reach, pH, E);
     const { lnC, lnS, lnP } = this;
-    for (let k = 0; k < count; k++) {
-      if (bounds[k] - BOUND_MARGIN > bestG) continue;
-      const i = candidates[k];
-      const g = base[i] + r[i] * (carbonate[i] * lnC + sulfur[i] * lnS + chloride[i] * lnCl + phosphate[i] * lnP);
+    for (let m = 0; m < count; m++) {
+      if (bounds[m] - BOUND_MARGIN > bestG) continue;
+      const i = candidates[m];
+      const g = base[m] + rowR[m] * (carbonate[i] * lnC + sulfur[i] * lnS + chloride[i] * lnCl + phosphate[i] * lnP);
       if (g < bestG || (g === bestG && i < best)) {
         bestG = g;
         best = i;

@@ -211,20 +211,25 @@ export function mapCells<A extends unknown[]>(
   // Arguments given as one cell are parsed once, before the loop; only ranges are read cell by cell.
   const { args, varying, constantError, constantBlank } = constantArguments(specs, inputs, shapes);
   const columns = varying.map((i) => varyingColumn(i, specs[i], inputs[i] as CellScalar[][], shapes[i]));
-  const varyingCount = columns.length;
+  // columns of plain numbers (a lab export) are read from parallel arrays, the rest cell by cell
+  const plainColumns = columns.filter((column) => column.plain !== null);
+  const readColumns = columns.filter((column) => column.plain === null);
+  const plainCount = plainColumns.length;
+  const plainIndex = Int32Array.from(plainColumns, (column) => column.index);
+  const plainRowStep = Int32Array.from(plainColumns, (column) => column.rowStep);
+  const plainColStep = Int32Array.from(plainColumns, (column) => column.colStep);
+  const plainValues = plainColumns.map((column) => column.plain as Float64Array);
+  const readCount = readColumns.length;
 
   // One result cell: the row's varying arguments read into `args`, then the computation.
   const cell = (r: number, c: number, guarded: boolean): CellOutput => {
     let blank = constantBlank;
     let errorIndex = constantError;
-    for (let k = 0; k < varyingCount; k++) {
-      const column = columns[k];
+    for (let k = 0; k < plainCount; k++)
+      args[plainIndex[k]] = plainValues[k][r * plainRowStep[k] + c * plainColStep[k]];
+    for (let k = 0; k < readCount; k++) {
+      const column = readColumns[k];
       const i = column.index;
-      const plain = column.plain;
-      if (plain !== null) {
-        args[i] = plain[r * column.rowStep + c * column.colStep];
-        continue;
-      }
       const value = column.range[r * column.rowStep][c * column.colStep];
       // a text cell equal to the one above reads the same (readers are pure): a metal column repeats its symbols
       let parsed: unknown;
@@ -244,7 +249,24 @@ export function mapCells<A extends unknown[]>(
     }
     if (errorIndex >= 0) return toHostError(args[errorIndex] as CellError);
     if (blank) return "";
-    return finish(guarded ? safeCompute(compute, args as A) : compute(...(args as A)));
+    if (guarded) return finish(safeCompute(compute, args as A));
+    const a = args;
+    return finish(
+      (compute as (...x: unknown[]) => CellOutput)(
+        a[0],
+        a[1],
+        a[2],
+        a[3],
+        a[4],
+        a[5],
+        a[6],
+        a[7],
+        a[8],
+        a[9],
+        a[10],
+        a[11],
+      ),
+    );
   };
   // Computations almost never throw: run unguarded, and only if one does, run again guarding every cell.
   const fill = (guarded: boolean): CellOutput[][] => {
