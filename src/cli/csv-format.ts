@@ -57,59 +57,85 @@ const VOLT_FRACTIONS: readonly string[] = Array.from({ length: 10_000 }, (_, f) 
   f === 0 ? "" : `.${String(f).padStart(4, "0").replace(/0+$/, "")}`,
 );
 
+/** Volts as a whole number of tenths of a millivolt, or null where that is not below 10¹⁵ (or not a number). */
+export function voltsTenths(x: number): number | null {
+  const n = Math.round(x * 1e4);
+  return Math.abs(n) < 1e15 ? n : null;
+}
+
 /**
  * Volts to 0.1 mV, written from the integer number of tenths of a millivolt: the text String(round(x·1e4)/1e4)
  * gives (no trailing zeros), without formatting a double.
  */
 function voltsText(x: number): string {
-  const n = Math.round(x * 1e4);
-  if (!(Math.abs(n) < 1e15)) return String(n / 1e4);
+  const n = voltsTenths(x);
+  if (n === null) return String(Math.round(x * 1e4) / 1e4);
   const a = n < 0 ? -n : n;
   const whole = Math.floor(a / 1e4);
   const text = String(whole) + VOLT_FRACTIONS[a - whole * 1e4];
   return n < 0 && a !== 0 ? "-" + text : text;
 }
 
-const POWERS_OF_TEN: readonly number[] = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
+/** 10^k as doubles, 0 ≤ k ≤ 308 (exact to 10²², then correctly rounded). */
+const POWERS_OF_TEN: readonly number[] = Array.from({ length: 309 }, (_, k) => Number(`1e${k}`));
 
-/** a·10^k with one rounding (the powers of ten to 10²² are exact doubles). */
+/** a·10^k (one rounding where |k| ≤ 22, where the power of ten is an exact double; two beyond). */
 function timesPowerOfTen(a: number, k: number): number {
   return k >= 0 ? a * POWERS_OF_TEN[k] : a / POWERS_OF_TEN[-k];
 }
 
-/** The shortest text of a 4-digit decimal m·10^−k (1000 ≤ m ≤ 9999, −11 ≤ k ≤ 9): "1.235", "0.0012", "120". */
+/** Scale k of the smallest amounts written with 4 figures here (m·10^−k, k ≤ 303: about 10⁻³⁰⁰); past it, toPrecision. */
+const MAX_SCALE = 303;
+
+/** Exponent notation below 10⁻⁶, as Number.prototype.toString writes it (ECMA-262, Number::toString): k > 9. */
+export const EXPONENT_SCALE = 9;
+
+/**
+ * The shortest text of a 4-digit decimal m·10^−k (1000 ≤ m ≤ 9999, −11 ≤ k ≤ 303), as String of its double
+ * writes it: "1.235", "0.0012", "120", "1.2e-7".
+ */
 function decimalText(m: number, k: number): string {
   if (k <= 0) return String(m * POWERS_OF_TEN[-k]);
   const digits = String(m);
-  const whole = 4 - k;
+  const exponent = k > EXPONENT_SCALE;
+  const whole = exponent ? 1 : 4 - k;
   const text = whole > 0 ? `${digits.slice(0, whole)}.${digits.slice(whole)}` : `0.${"0".repeat(-whole)}${digits}`;
   let end = text.length;
   while (text.charCodeAt(end - 1) === 48) end--; // trailing zeros
   if (text.charCodeAt(end - 1) === 46) end--; // and a bare point
-  return text.slice(0, end);
+  return exponent ? `${text.slice(0, end)}e-${k - 3}` : text.slice(0, end);
 }
 
 /**
- * 4 significant figures: the text String(Number(x.toPrecision(4))) gives, from the integer of the four digits
- * (toPrecision formats the double's exact decimal expansion, slowly). Outside 10⁻⁶…10¹⁵ (exponent notation) and
- * within 10⁻⁷ of a tie between two roundings it leaves the answer to toPrecision.
+ * The four significant figures of x ≠ 0 as m·10^−k (1000 ≤ m ≤ 9999, −11 ≤ k ≤ 303), packed as m·512 + k + 11,
+ * from the integer of the four digits; −1 from 10¹⁵ up (and below about 10⁻³⁰⁰) and within 10⁻⁷ of a tie between
+ * two roundings, where the answer is left to toPrecision (which formats the double's exact decimal expansion,
+ * slowly). The scaling's rounding error (a few units in the last place) is far inside that margin.
  */
-function fourFigures(x: number): string {
-  if (x === 0) return "0";
+export function fourFigureParts(x: number): number {
   const a = x < 0 ? -x : x;
-  if (!(a >= 1e-6 && a < 1e15)) return String(Number(x.toPrecision(4)));
-  let k = 3 - Math.floor(Math.log10(a)); // a·10^k in [1000, 10000): −11 ≤ k ≤ 9
+  if (!(a < 1e15)) return -1;
+  let k = 3 - Math.floor(Math.log10(a)); // a·10^k in [1000, 10000)
+  if (!(k < MAX_SCALE)) return -1; // also a = 0 (k = Infinity)
   let scaled = timesPowerOfTen(a, k);
   if (scaled < 1000) scaled = timesPowerOfTen(a, ++k);
   else if (scaled >= 10000) scaled = timesPowerOfTen(a, --k);
   const below = Math.floor(scaled);
-  if (Math.abs(scaled - below - 0.5) < 1e-7) return String(Number(x.toPrecision(4)));
+  if (Math.abs(scaled - below - 0.5) < 1e-7) return -1;
   let m = Math.round(scaled);
   if (m === 10000) {
     m = 1000;
     k--;
   }
-  const text = decimalText(m, k);
+  return m * 512 + k + 11;
+}
+
+/** 4 significant figures: the text String(Number(x.toPrecision(4))) gives (fourFigureParts). */
+function fourFigures(x: number): string {
+  if (x === 0) return "0";
+  const parts = fourFigureParts(x);
+  if (parts < 0) return String(Number(x.toPrecision(4)));
+  const text = decimalText(Math.floor(parts / 512), (parts % 512) - 11);
   return x < 0 ? "-" + text : text;
 }
 

@@ -13,17 +13,24 @@ import {
   type LigandTotals,
 } from "../chemistry";
 import { displayScale, plotSamples, renderDiagramSvg, shownRegions, shownWaterLines } from "../diagram";
-import type { SamplePoint } from "./evaluate";
+import type { SamplePoint } from "./sample-offers";
 import { Reservoir } from "./reservoir";
 
 /** Points drawn per diagram at most (the pane's budget is 10 k samples, DEVELOPERS.md Speed budgets). */
 export const POINTS_PER_DIAGRAM = 10_000;
 
+interface MetalSamples {
+  readonly symbol: string;
+  readonly reservoir: Reservoir<SamplePoint>;
+}
+
+/** Metal cells whose symbol is kept (a metal column holds a handful of spellings). */
+const MAX_NAMES = 1024;
+
 export class DiagramSamples {
   private readonly bySymbol = new Map<string, Reservoir<SamplePoint>>();
-  /** The metal cell last offered, what it resolved to, and where a kept sample goes. */
-  private lastName: string | null = null;
-  private lastSymbol: string | null = null;
+  /** Metal cells offered → the metal's symbol and reservoir, or null for a cell that names no metal. */
+  private readonly byName = new Map<string, MetalSamples | null>();
   private pending: { reservoir: Reservoir<SamplePoint>; slot: number } | null = null;
 
   /**
@@ -33,19 +40,26 @@ export class DiagramSamples {
    */
   offer(name: string): string | null {
     this.pending = null;
-    if (name !== this.lastName) {
-      this.lastName = name;
-      this.lastSymbol = getDatabase().resolveMetal(name) ?? null;
+    let metal = this.byName.get(name);
+    if (metal === undefined) {
+      metal = this.metalNamed(name);
+      if (this.byName.size < MAX_NAMES) this.byName.set(name, metal);
     }
-    const symbol = this.lastSymbol;
+    if (metal === null) return null;
+    const slot = metal.reservoir.nextSlot();
+    if (slot < 0) return null;
+    this.pending = { reservoir: metal.reservoir, slot };
+    return metal.symbol;
+  }
+
+  /** The metal a cell names and its reservoir (made on first use); null when it names none. */
+  private metalNamed(name: string): MetalSamples | null {
+    const symbol = getDatabase().resolveMetal(name);
     if (!symbol) return null;
     let reservoir = this.bySymbol.get(symbol);
     if (!reservoir)
       this.bySymbol.set(symbol, (reservoir = new Reservoir<SamplePoint>(POINTS_PER_DIAGRAM, hashSeed(symbol))));
-    const slot = reservoir.nextSlot();
-    if (slot < 0) return null;
-    this.pending = { reservoir, slot };
-    return symbol;
+    return { symbol, reservoir };
   }
 
   /** Stores the point of the sample `offer` last kept (its symbol the one `offer` returned). */

@@ -14,7 +14,8 @@ import {
   type TemperatureScale,
 } from "../tables";
 import type { CsvFormat } from "./csv-format";
-import { clip, type EvaluationPlan, type MetalTarget } from "./evaluate";
+import type { EvaluationPlan, MetalTarget } from "./evaluation-plan";
+import { clip } from "./row-messages";
 import { UsageError, type CliOptions } from "./options";
 import { planWater } from "./water";
 import { planIonic } from "./ionic";

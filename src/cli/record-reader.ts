@@ -10,8 +10,11 @@
 export interface InputRow {
   readonly fields: readonly string[];
   readonly line: number;
-  /** The record's line as read (without its line break) when it holds no quote: its fields joined by the delimiter. */
-  readonly text?: string;
+  /**
+   * The record's line as read (without its line break) when it holds no quote: its fields joined by the delimiter;
+   * else undefined (every row has the same properties, so code reading rows sees one shape).
+   */
+  readonly text: string | undefined;
 }
 
 export class MalformedCsvError extends Error {}
@@ -92,7 +95,10 @@ export class RecordSplitter {
       const end = nl > pos && text.charCodeAt(nl - 1) === 13 ? nl - 1 : nl;
       if (quote >= 0 && quote < pos) quote = text.indexOf('"', pos);
       if (quote < 0 || quote > nl) {
-        this.emit(text.slice(pos, end), null, out);
+        const lineText = text.slice(pos, end);
+        // after the header (almost every line) the record is made here, without the preamble's checks
+        if (this.headerSeen) out.push({ fields: lineText.split(d), line: this.line, text: lineText });
+        else this.emit(lineText, null, out);
         pos = nl + 1;
         this.line++;
         continue;
@@ -135,7 +141,7 @@ export class RecordSplitter {
       }
       this.headerSeen = true;
     }
-    if (lineText === null) out.push({ fields: fields as string[], line: this.line });
+    if (lineText === null) out.push({ fields: fields as string[], line: this.line, text: undefined });
     else out.push({ fields: lineText.split(this.delimiter), line: this.line, text: lineText });
   }
 }

@@ -5,7 +5,7 @@
 import { mkdirSync, renameSync, unlinkSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { DiagramSamples, diagramCelsius, diagramTotals, renderDiagram, totalsText } from "./diagrams";
-import type { EvaluationPlan } from "./evaluate";
+import type { EvaluationPlan } from "./evaluation-plan";
 import type { CliOptions } from "./options";
 import { DEFAULT_CELSIUS, SystemError } from "../chemistry";
 

@@ -7,6 +7,7 @@
 import { createReadStream, statSync } from "node:fs";
 import type { Writable } from "node:stream";
 import { DiagramSamples } from "./diagrams";
+import { CsvBytes } from "./csv-bytes";
 import { DEFAULT_FORMAT, textLine, type CsvFormat } from "./csv-format";
 import { clip, evaluateBatch, outputHeader, type EvaluationPlan, type RowMessage } from "./evaluate";
 import { probeInput } from "./input-probe";
@@ -39,8 +40,8 @@ export interface RunResult {
 const PROGRAM = "redox-cells";
 /** A record longer than this is refused (an unclosed quote would otherwise read the whole file into memory). */
 const MAX_RECORD_CHARS = 64 * 1024 * 1024;
-/** Results text gathered before one write. */
-const WRITE_CHARS = 1 << 20;
+/** Results bytes gathered before one write. */
+const WRITE_BYTES = 1 << 20;
 
 /** Entry point: parses argv, runs, returns the exit code. Never throws. */
 export async function runCli(
@@ -224,6 +225,8 @@ class StreamedRun {
   messageCount = 0;
   readonly regimes: Record<string, Record<string, number>> = {};
   readonly diagrams: DiagramSamples | null;
+  /** The results lines not written yet. */
+  private bytes: CsvBytes | null = null;
   private readonly progress: ProgressBar | null;
 
   constructor(
@@ -305,19 +308,16 @@ class StreamedRun {
     all: boolean,
   ): Promise<InputRow[]> {
     const size = this.options.batchSize;
+    const bytes = (this.bytes ??= new CsvBytes(plan.format));
     let start = 0;
     // batches' lines are written together, about 1 MiB at a time (one write per batch costs more than the batch)
-    let text = "";
     while (rows.length - start >= size || (all && start < rows.length)) {
       const batch = rows.slice(start, start + size).map((r) => this.fitted(plan, r));
       start += batch.length;
-      text += this.evaluate(plan, batch);
-      if (text.length >= WRITE_CHARS) {
-        await this.write(out, text, state);
-        text = "";
-      }
+      this.evaluate(plan, batch, bytes);
+      if (bytes.length >= WRITE_BYTES) await this.write(out, bytes.take(), state);
     }
-    if (text !== "") await this.write(out, text, state);
+    if (all && bytes.length > 0) await this.write(out, bytes.take(), state);
     return rows.slice(start);
   }
 
@@ -327,7 +327,8 @@ class StreamedRun {
     const n = row.fields.length;
     this.rows++;
     if (n === width) return row;
-    if (n < width) return { line: row.line, fields: [...row.fields, ...new Array<string>(width - n).fill("")] };
+    if (n < width)
+      return { fields: [...row.fields, ...new Array<string>(width - n).fill("")], line: row.line, text: undefined };
     const extra = row.fields.slice(width);
     if (extra.some((f) => f.trim() !== ""))
       this.message({
@@ -336,7 +337,7 @@ class StreamedRun {
         text: `${n} fields, the header has ${width}; the fields after column ${width} are not written`,
         kind: "blank",
       });
-    return { line: row.line, fields: row.fields.slice(0, width) };
+    return { fields: row.fields.slice(0, width), line: row.line, text: undefined };
   }
 
   private message(m: RowMessage): void {
@@ -344,8 +345,8 @@ class StreamedRun {
     this.messageCount++;
   }
 
-  private evaluate(plan: EvaluationPlan, batch: InputRow[]): string {
-    const result = evaluateBatch(plan, batch, this.fns, this.diagrams);
+  private evaluate(plan: EvaluationPlan, batch: InputRow[], bytes: CsvBytes): void {
+    const result = evaluateBatch(plan, batch, this.fns, bytes, this.diagrams);
     this.errorRows += result.errorRows;
     this.blankRows += result.blankRows;
     for (const m of result.messages) this.message(m);
@@ -353,10 +354,9 @@ class StreamedRun {
       const into = (this.regimes[prefix] ??= {});
       for (const [regime, n] of counts) into[regime] = (into[regime] ?? 0) + n;
     }
-    return result.lines.join("");
   }
 
-  private async write(out: Writable, text: string, state: { failed: unknown }): Promise<void> {
+  private async write(out: Writable, text: string | Buffer, state: { failed: unknown }): Promise<void> {
     if (state.failed) throw cannotWrite(this.options, state.failed);
     if (!out.write(text)) await drained(out);
     if (state.failed) throw cannotWrite(this.options, state.failed);

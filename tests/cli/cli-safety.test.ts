@@ -20,7 +20,9 @@ import { Writable } from "node:stream";
 import { parse as parseSync } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_BATCH_SIZE } from "../../src/cli/options";
-import { DEFAULT_FORMAT, numberField } from "../../src/cli/csv-format";
+import { CsvBytes } from "../../src/cli/csv-bytes";
+import { DEFAULT_FORMAT, numberField, type NumberKind } from "../../src/cli/csv-format";
+import { mulberry32 } from "../../src/cli/seeded-random";
 import { runCommand, type CliStreams } from "../../src/cli/run";
 
 class Capture extends Writable {
@@ -321,5 +323,28 @@ describe("number text", () => {
     expect(numberField(-0.00004, "volts", DEFAULT_FORMAT)).toBe("0");
     expect(numberField(-1.25, "volts", { ...DEFAULT_FORMAT, delimiter: ";", decimalMark: "," })).toBe("-1,25");
     expect(numberField(1.234567e-7, "amount", DEFAULT_FORMAT)).toBe("1.235e-7");
+  });
+
+  it("the results bytes hold exactly numberField's text, at every magnitude, sign, tie and decimal mark", () => {
+    const random = mulberry32(11);
+    const values = [0, -0, 1, -1, 0.5, 9999.5, 0.00012345, 1e-6, 9.9995e-7, 1e15, 1e16, 123456789.5, NaN, Infinity];
+    values.push(1e-7, 1.5e-300, 5e-324, 9.99951e-301, 1e-310, 2.5e-12, 9.9999e-10, -3.21e-45, 1e21, 1e300);
+    for (let i = 0; i < 20_000; i++) {
+      const x = (random() - 0.3) * 10 ** Math.floor(random() * 60 - 40);
+      values.push(x, Math.round(x * 1e4) / 1e4 + 0.00005, Number(x.toPrecision(4)));
+    }
+    const comma = { ...DEFAULT_FORMAT, delimiter: ";", decimalMark: "," as const };
+    for (const format of [DEFAULT_FORMAT, comma, { ...DEFAULT_FORMAT, fullPrecision: true }])
+      for (const kind of ["volts", "amount"] as NumberKind[]) {
+        const bytes = new CsvBytes(format);
+        for (const x of values) {
+          bytes.number(x, kind);
+          bytes.byte(10);
+        }
+        expect(bytes.takeText()).toBe(values.map((x) => numberField(x, kind, format) + "\n").join(""));
+      }
+    // amounts: the text of the 4-figure double as JavaScript writes it (ECMA-262, Number::toString)
+    const amounts = values.map((x) => numberField(x, "amount", DEFAULT_FORMAT));
+    expect(amounts).toEqual(values.map((x) => String(Number(x.toPrecision(4)))));
   });
 });
