@@ -9,9 +9,9 @@
  * "Revised Pourbaix diagrams for zinc at 25–300 °C", Corros. Sci. 39, 107 (1997); "Revised Pourbaix diagrams for
  * chromium at 25–300 °C", Corros. Sci. 39, 43 (1997); "Revised Pourbaix diagrams for copper at 25 to 300 °C",
  * J. Electrochem. Soc. 144, 3476 (1997); "Revised Pourbaix diagrams for nickel at 25–300 °C", Corros. Sci. 39, 969
- * (1997). Where the records disagree with a diagram the published answer is kept as an expected failure (it.fails),
- * so that a change of data that removes the disagreement shows up. Only features recalled with confidence are checked: which
- * field covers a point, not the position of a line to a few mV.
+ * (1997). Where the records disagree with a diagram the published answer is kept as an expected failure
+ * (it.fails; none at present), so that a change of data that removes the disagreement shows up. Only features
+ * recalled with confidence are checked: which field covers a point, not the position of a line to a few mV.
  */
 import { describe, expect, it } from "vitest";
 import snapshot from "../fixtures/species-25c-snapshot.json";
