@@ -9,9 +9,9 @@
  * "Revised Pourbaix diagrams for zinc at 25–300 °C", Corros. Sci. 39, 107 (1997); "Revised Pourbaix diagrams for
  * chromium at 25–300 °C", Corros. Sci. 39, 43 (1997); "Revised Pourbaix diagrams for copper at 25 to 300 °C",
  * J. Electrochem. Soc. 144, 3476 (1997); "Revised Pourbaix diagrams for nickel at 25–300 °C", Corros. Sci. 39, 969
- * (1997). Where the records disagree with a diagram the published answer is kept as an expected failure (it.fails),
- * so that a change of data that removes the disagreement shows up. Only features recalled with confidence are checked: which
- * field covers a point, not the position of a line to a few mV.
+ * (1997). Where the records disagree with a diagram the published answer is kept as an expected failure
+ * (it.fails; none at present), so that a change of data that removes the disagreement shows up. Only features
+ * recalled with confidence are checked: which field covers a point, not the position of a line to a few mV.
  */
 import { describe, expect, it } from "vitest";
 import snapshot from "../fixtures/species-25c-snapshot.json";
@@ -173,17 +173,13 @@ describe("copper at 250–300 °C (Beverskog & Puigdomenech 1997, copper diagram
     expect(standardPotential(db, "Cu2O(s)", "Cu(s)", 300)).toBeGreaterThan(0.2);
   });
 
-  // Documented disagreement (expected to fail until the data change): the diagrams show CuO (and Cu2O below it)
-  // passive from about neutral into mildly alkaline pH(T) at 250–300 °C; the records put HCuO2- there, because the
-  // estimated S° of the hydroxo-anion (cu.json, ISO94) makes its formation strongly endothermic (README, Limits).
+  // the diagrams show CuO (and Cu2O below it) passive from about neutral into mildly alkaline pH(T) at 250–300 °C
+  // (formerly an expected failure: without a Cp° of HCuO2- its hydrolysis took ΔCp = 0; cu.json, ISO94)
   for (const celsius of [250, 300])
-    it.fails(
-      `${celsius} °C, pH(T) neutral + 1, 0.3 V below the oxygen line: CuO(s) as published (the records give HCuO2-)`,
-      () => {
-        const pH = neutralPH(celsius) + 1;
-        expect(speciesAt("Cu", pH, waterLine(pH, celsius, "O2") - 0.3, celsius, 1e-6)[0][0]).toBe("CuO(s)");
-      },
-    );
+    it(`${celsius} °C, pH(T) neutral + 1, 0.3 V below the oxygen line: CuO(s) as published`, () => {
+      const pH = neutralPH(celsius) + 1;
+      expect(speciesAt("Cu", pH, waterLine(pH, celsius, "O2") - 0.3, celsius, 1e-6)[0][0]).toBe("CuO(s)");
+    });
 });
 
 describe("nickel at 250–300 °C (Beverskog & Puigdomenech 1997, nickel diagrams at 10^-6 read from memory)", () => {
@@ -211,18 +207,14 @@ describe("nickel at 250–300 °C (Beverskog & Puigdomenech 1997, nickel diagram
     expect(speciesAt("Ni", pH, waterLine(pH, 150, "H2") + 0.1, 150, 1e-6)[0][0]).toBe("NiO(s)");
   });
 
-  // Documented disagreement (expected to fail until the data change): the diagrams keep a NiO field near neutral
-  // pH(T) at 250–300 °C (and NiO solubility there is far below 10^-6 mol/kg, common practice in reactor water
-  // chemistry); the records give HNiO2- from about pH(T) 5.9 at 250 °C and 5.2 at 300 °C (7.7 at 150 °C), because the
-  // estimated S° of the hydroxo-anion (ni.json, ISO94) makes its formation strongly endothermic (README, Limits).
+  // the diagrams keep a NiO field near neutral pH(T) at 250–300 °C (and NiO solubility there is far below
+  // 10^-6 mol/kg, common practice in reactor water chemistry); formerly an expected failure (HNiO2- from pH(T) 5.2 at
+  // 300 °C, because without a Cp° of HNiO2- its hydrolysis took ΔCp = 0; ni.json, ISO94)
   for (const celsius of [250, 300])
-    it.fails(
-      `${celsius} °C, pH(T) neutral + 1, 0.1 V above the hydrogen line: NiO(s) as published (the records give HNiO2-)`,
-      () => {
-        const pH = neutralPH(celsius) + 1;
-        expect(speciesAt("Ni", pH, waterLine(pH, celsius, "H2") + 0.1, celsius, 1e-6)[0][0]).toBe("NiO(s)");
-      },
-    );
+    it(`${celsius} °C, pH(T) neutral + 1, 0.1 V above the hydrogen line: NiO(s) as published`, () => {
+      const pH = neutralPH(celsius) + 1;
+      expect(speciesAt("Ni", pH, waterLine(pH, celsius, "H2") + 0.1, celsius, 1e-6)[0][0]).toBe("NiO(s)");
+    });
 });
 
 describe("iron with chloride to 300 °C (FeCl+, FeCl 2+ with estimated S°)", () => {
@@ -257,6 +249,36 @@ describe("iron with chloride to 300 °C (FeCl+, FeCl 2+ with estimated S°)", ()
       const r = { [ion]: -1, "Cl-": -1, [complex]: 1 };
       expect(reactionLogK(db, r, 300), complex).toBeGreaterThan(reactionLogK(db, r, 25) + 0.5);
     }
+  });
+});
+
+describe("zinc with chloride to 300 °C (ZnCl+ with estimated S°)", () => {
+  it("answered at 150, 250 and 300 °C with 0.01 mol/kg chloride", () => {
+    for (const celsius of [150, 250, 300]) {
+      expect(temperatureProblem(db, "Zn", celsius, presentLigands(0, 0.01))).toBeNull();
+      expect(typeof speciesAt("Zn", 7, -0.5, celsius, 1e-6, 0, 0.01)[0][0]).toBe("string");
+    }
+  });
+
+  it("with 0.1 mol/kg chloride: REDOX.BOUNDARY continuous across 100 °C like pure water", () => {
+    let compared = 0;
+    for (let pH = 1; pH <= 12; pH += 0.5)
+      for (const E of [-1.2, -0.8, -0.4, 0, 0.4])
+        for (const direction of [1, -1] as const) {
+          const [before, below, above] = [99.7, 99.9, 100.1].map((t) => boundary("Zn", pH, E, t, direction, 0, 0.1));
+          if (typeof below !== "number" || typeof above !== "number" || typeof before !== "number") continue;
+          expect(Math.abs(above - below), `pH ${pH}, E ${E}, direction ${direction}`).toBeLessThan(0.003);
+          expect(Math.abs(above - below)).toBeLessThan(Math.abs(below - before) + 3e-4);
+          compared++;
+        }
+    expect(compared).toBeGreaterThan(40);
+  });
+
+  it("ZnCl+ strengthens with temperature: log β1 higher at 300 °C than at 25 °C", () => {
+    // common practice in hydrothermal geochemistry (zinc chloro-complexes grow stronger with temperature, e.g.
+    // Ruaya & Seward 1986, from memory); a sign check of the estimated S°, not a value
+    const r = { "Zn2+": -1, "Cl-": -1, "ZnCl+": 1 };
+    expect(reactionLogK(db, r, 300)).toBeGreaterThan(reactionLogK(db, r, 25) + 0.5);
   });
 });
 
