@@ -300,22 +300,36 @@ interface VaryingColumn {
  * memory instead of one row array per cell of every argument, which was most of a row's cost with many columns.
  */
 function varyingColumn(index: number, spec: ArgSpec<unknown>, range: CellScalar[][], shape: Shape): VaryingColumn {
-  const rowStep = shape.rows === 1 ? 0 : shape.cols;
-  const colStep = shape.cols === 1 ? 0 : 1;
-  const base = { index, range, rowStep: shape.rows === 1 ? 0 : 1, colStep, lastText: null, lastParsed: undefined };
   const accepts = spec.accepts;
-  if (!accepts) return { ...base, plain: null };
-  const plain = new Float64Array(shape.rows * shape.cols);
-  for (let r = 0; r < shape.rows; r++) {
+  const plain = accepts ? plainNumbers(range, shape, accepts.low, accepts.high) : null;
+  return {
+    index,
+    range,
+    rowStep: plain ? (shape.rows === 1 ? 0 : shape.cols) : shape.rows === 1 ? 0 : 1,
+    colStep: shape.cols === 1 ? 0 : 1,
+    plain,
+    lastText: null,
+    lastParsed: undefined,
+  };
+}
+
+/**
+ * The range's cells row by row in one typed array, or null unless every one is a number in [low, high]. A loop of
+ * its own returning a primitive result: the optimised loop then has no object to build at its exits, which cost a
+ * deoptimisation (and a run through the interpreter) on every range before.
+ */
+function plainNumbers(range: CellScalar[][], shape: Shape, low: number, high: number): Float64Array | null {
+  const { rows, cols } = shape;
+  const plain = new Float64Array(rows * cols);
+  for (let r = 0; r < rows; r++) {
     const cells = range[r];
-    for (let c = 0; c < shape.cols; c++) {
+    for (let c = 0; c < cols; c++) {
       const value = cells[c];
-      if (typeof value !== "number" || !(value >= accepts.low && value <= accepts.high))
-        return { ...base, plain: null };
-      plain[r * shape.cols + c] = value;
+      if (typeof value !== "number" || !(value >= low && value <= high)) return null;
+      plain[r * cols + c] = value;
     }
   }
-  return { ...base, rowStep, plain };
+  return plain;
 }
 
 /** Reads one cell; `given` is false only for an omitted argument (a top-level blank). */
@@ -362,12 +376,17 @@ function shapeOf(input: CellInput): Shape | null {
   const first = input[0];
   if (!isArray(first)) return null;
   const cols = first.length;
-  if (cols === 0) return null;
-  for (let r = 1; r < rows; r++) {
-    const row = input[r];
-    if (!isArray(row) || row.length !== cols) return null;
-  }
+  if (cols === 0 || !rowsOfLength(input, cols)) return null;
   return { rows, cols };
+}
+
+/** Whether every row of `input` is an array of `cols` cells (a loop of its own, as in plainNumbers). */
+function rowsOfLength(input: readonly unknown[], cols: number): boolean {
+  for (let r = 1; r < input.length; r++) {
+    const row = input[r];
+    if (!isArray(row) || row.length !== cols) return false;
+  }
+  return true;
 }
 
 function cellAt(input: CellInput, r: number, c: number): unknown {
