@@ -38,6 +38,8 @@ const THRESHOLD_DUE = 2;
 const SPECIATED = NEEDS_CARBONATE | NEEDS_SULFUR | NEEDS_PHOSPHATE;
 /** Allowance for rounding between a species' ligand bound and its exact g, V (both ~1e-15 V apart at most). */
 const BOUND_MARGIN = 1e-9;
+/** Coefficients per species in PointEngine.directRow (11 used, padded to 12). */
+const DIRECT_WIDTH = 12;
 
 /** The water of a point: temperature (°C), threshold molality of dissolved metal, ligand totals (mol/kg), I. */
 export interface PointWater {
@@ -68,9 +70,14 @@ export class PointEngine {
   private readonly cpPerAtom: Float64Array;
   private readonly protonPerAtom: Float64Array;
   private readonly perAtom: Float64Array;
-  /** ligandArgmin's scratch, per candidate (a species speciated only if it could win): g without ligand terms, r, bound. */
-  private readonly base: Float64Array;
-  private readonly rowR: Float64Array;
+  /**
+   * Per species, DIRECT_WIDTH coefficients of the row features (directFeatures) whose sum is g: ΔG°r(25 °C), −ΔS°r and
+   * ΔCp°r per atom and faraday; −ν_H+/x; −ν_e/x; 1/x and z²/x for dissolved species (0 for solids); ν_L/x per ligand.
+   */
+  private readonly directRow: Float64Array;
+  /** The row features: 1, dT, shape, k·pH, E, (RT/F)·(ln threshold, ln γ1, ln a of carbonate, sulfur, chloride, P). */
+  private readonly feature = new Float64Array(DIRECT_WIDTH);
+  /** ligandArgmin's scratch, per candidate (a species speciated only if it could win): its index and bound. */
   private readonly candidates: Int32Array;
   private readonly bounds: Float64Array;
   /** ln of the largest activity each pivot can have: ln total, plus ln γ where γ would exceed 1 (I beyond Davies). */
@@ -125,8 +132,6 @@ export class PointEngine {
     this.c = new Float64Array(n);
     this.r = new Float64Array(n);
     this.aThreshold = new Float64Array(n);
-    this.base = new Float64Array(n);
-    this.rowR = new Float64Array(n);
     this.candidates = new Int32Array(n);
     this.bounds = new Float64Array(n);
     this.lineG = new Float64Array(n);
@@ -139,6 +144,7 @@ export class PointEngine {
     this.protonPerAtom = per(t.proton, -1);
     this.perAtom = Float64Array.from(t.x, (x) => 1 / x);
     t.electron.forEach((e, i) => (this.c[i] = -e / t.x[i])); // dg/dE does not depend on temperature
+    this.directRow = directCoefficients(t, this.g0PerAtom, this.sPerAtom, this.cpPerAtom, this.protonPerAtom, this.c);
   }
 
   get size(): number {
@@ -364,27 +370,20 @@ export class PointEngine {
   }
 
   /**
-   * The same from the fixed per-atom columns (constant ΔCp°r, at and below 100 °C), nothing stored: g_i =
-   * ΔG°r,i(T)/(x·F) − ν_H+·k·pH/x − ν_e·E/x + (RT/F)/x·(ln threshold + z²·ln γ1). The same operations in the same
-   * order as ensureColumns and filledArgmin: one answer whichever path a row takes.
+   * The same from the fixed coefficient rows (constant ΔCp°r, at and below 100 °C), nothing stored: g_i is the sum of
+   * its row times the row features (directFeatures), the ligands at their activities (chloride only here: exact).
    */
   private directArgmin(pH: number, E: number): number {
-    const t = this.table;
-    const { g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, c, dT, shape, k } = this;
-    const { needs, dissolved, chargeSquared, chloride } = t;
-    const rtOverF = 1 / this.f;
-    const { lnActivity, lnGamma1, lnCl } = this;
+    const { needs } = this.table;
+    const { directRow, feature } = this;
+    this.directFeatures(pH, E);
     const absent = ~this.present;
     let best = -1;
     let bestG = INF;
-    for (let i = 0, n = g0PerAtom.length; i < n; i++) {
+    for (let i = 0, n = needs.length; i < n; i++) {
       const need = needs[i];
       if (need & absent) continue;
-      const aUnit = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape;
-      const r = rtOverF * perAtom[i];
-      const aThreshold = dissolved[i] ? aUnit + r * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit;
-      let g = aThreshold + protonPerAtom[i] * k * pH + c[i] * E;
-      if (need) g += r * (chloride[i] * lnCl);
+      const g = rowDot(directRow, i * DIRECT_WIDTH, feature, need !== 0);
       if (g < bestG) {
         bestG = g;
         best = i;
@@ -395,19 +394,19 @@ export class PointEngine {
 
   /**
    * The argmin where the water holds a ligand to speciate, in one pass over the species (g from the filled columns,
-   * or from the per-atom ones for a `direct` row, as in filledArgmin and directArgmin). Species with chloride only
+   * or from the coefficient rows for a `direct` row, as in filledArgmin and directArgmin). Species with chloride only
    * are exact at once (Cl− is free); those with carbonate, sulfur or orthophosphate first get their bound, and only
    * the ligands of the species whose bound could beat the best are speciated (ligandsFor).
    */
   private ligandArgmin(pH: number, E: number, direct: boolean): number {
     const t = this.table;
-    const { aThreshold, b, c, r, g0PerAtom, sPerAtom, cpPerAtom, protonPerAtom, perAtom, dT, shape, k } = this;
-    const { base, rowR, candidates, bounds } = this;
-    const { needs, carbonate, sulfur, chloride, phosphate, dissolved, chargeSquared } = t;
+    const { aThreshold, b, c, r, candidates, bounds, directRow, feature } = this;
+    const { needs, carbonate, sulfur, chloride, phosphate } = t;
     const rtOverF = 1 / this.f;
-    const { lnActivity, lnGamma1, boundLnC, boundLnS, boundLnP } = this;
+    const { boundLnC, boundLnS, boundLnP } = this;
     const absent = ~this.present;
     const lnCl = this.lnChloride;
+    if (direct) this.directFeatures(pH, E);
     let best = -1;
     let bestG = INF;
     let count = 0;
@@ -416,27 +415,18 @@ export class PointEngine {
       const need = needs[i];
       if (need & absent) continue;
       let g: number;
-      let ri: number;
-      if (direct) {
-        const aUnit = g0PerAtom[i] - sPerAtom[i] * dT + cpPerAtom[i] * shape;
-        ri = rtOverF * perAtom[i];
-        const aTh = dissolved[i] ? aUnit + ri * (lnActivity + chargeSquared[i] * lnGamma1) : aUnit;
-        g = aTh + protonPerAtom[i] * k * pH + c[i] * E;
-      } else {
+      if (direct) g = rowDot(directRow, i * DIRECT_WIDTH, feature, need !== 0);
+      else {
         g = aThreshold[i] + b[i] * pH + c[i] * E;
-        ri = r[i];
+        // the bound with each pivot at its total: g ≥ bound (each ν ≤ 0 and ln a ≤ ln total)
+        if (need)
+          g += r[i] * (carbonate[i] * boundLnC + sulfur[i] * boundLnS + chloride[i] * lnCl + phosphate[i] * boundLnP);
       }
       if (need & SPECIATED) {
-        // the bound with each pivot at its total: g ≥ bound (each ν ≤ 0 and ln a ≤ ln total)
-        const bound =
-          g + ri * (carbonate[i] * boundLnC + sulfur[i] * boundLnS + chloride[i] * lnCl + phosphate[i] * boundLnP);
         candidates[count] = i;
-        base[count] = g;
-        rowR[count] = ri;
-        bounds[count++] = bound;
+        bounds[count++] = g;
         continue;
       }
-      if (need) g += ri * (chloride[i] * lnCl);
       if (g < bestG) {
         bestG = g;
         best = i;
@@ -446,17 +436,38 @@ export class PointEngine {
     reach &= SPECIATED;
     if (reach === 0) return best;
     this.ligandsFor(reach, pH, E);
-    const { lnC, lnS, lnP } = this;
+    // exact g = bound + (RT/F)·Σ (ν_L/x)·(ln a_L − its bound), over the speciated ligands
+    const dC = rtOverF * (this.lnC - boundLnC);
+    const dS = rtOverF * (this.lnS - boundLnS);
+    const dP = rtOverF * (this.lnP - boundLnP);
     for (let m = 0; m < count; m++) {
       if (bounds[m] - BOUND_MARGIN > bestG) continue;
       const i = candidates[m];
-      const g = base[m] + rowR[m] * (carbonate[i] * lnC + sulfur[i] * lnS + chloride[i] * lnCl + phosphate[i] * lnP);
+      const row = i * DIRECT_WIDTH;
+      const g = bounds[m] + directRow[row + 7] * dC + directRow[row + 8] * dS + directRow[row + 10] * dP;
       if (g < bestG || (g === bestG && i < best)) {
         bestG = g;
         best = i;
       }
     }
     return best;
+  }
+
+  /** The row features of directRow at (pH, E) for the current water, the ligands at their bounds (chloride exact). */
+  private directFeatures(pH: number, E: number): void {
+    const f = this.feature;
+    const rtOverF = 1 / this.f;
+    f[0] = 1;
+    f[1] = this.dT;
+    f[2] = this.shape;
+    f[3] = this.k * pH;
+    f[4] = E;
+    f[5] = rtOverF * this.lnActivity;
+    f[6] = rtOverF * this.lnGamma1;
+    f[7] = rtOverF * this.boundLnC;
+    f[8] = rtOverF * this.boundLnS;
+    f[9] = rtOverF * this.lnChloride;
+    f[10] = rtOverF * this.boundLnP;
   }
 
   /** F/RT at the current temperature. */
@@ -468,6 +479,39 @@ export class PointEngine {
   lnGamma(i: number): number {
     return this.table.chargeSquared[i] * this.lnGamma1;
   }
+}
+
+/** Σ_k row_k·feature_k over the first 7 features, and the 4 ligand ones where the species has a ligand. */
+function rowDot(m: Float64Array, at: number, f: Float64Array, ligands: boolean): number {
+  let g = m[at] + m[at + 1] * f[1] + m[at + 2] * f[2] + m[at + 3] * f[3] + m[at + 4] * f[4];
+  g += m[at + 5] * f[5] + m[at + 6] * f[6];
+  if (ligands) g += m[at + 7] * f[7] + m[at + 8] * f[8] + m[at + 9] * f[9] + m[at + 10] * f[10];
+  return g;
+}
+
+/**
+ * PointEngine.directRow from the per-atom columns: g_i = ΔG°r(T)/(xF) − (ν_H+/x)·k·pH − (ν_e/x)·E + (RT/F)/x·(ln
+ * threshold + z²·ln γ1 + Σ ν_L·ln a_L), with ΔG°r(T) = ΔG°r − ΔS°r·dT + ΔCp°r·shape (constant ΔCp°r, thermo.ts).
+ */
+function directCoefficients(
+  t: SpeciesTable,
+  g0PerAtom: Float64Array,
+  sPerAtom: Float64Array,
+  cpPerAtom: Float64Array,
+  protonPerAtom: Float64Array,
+  c: Float64Array,
+): Float64Array {
+  const m = new Float64Array(t.species.length * DIRECT_WIDTH);
+  for (let i = 0; i < t.species.length; i++) {
+    const at = i * DIRECT_WIDTH;
+    const perAtom = 1 / t.x[i];
+    const dissolved = t.dissolved[i] ? perAtom : 0;
+    const row = [g0PerAtom[i], -sPerAtom[i], cpPerAtom[i], protonPerAtom[i], c[i], dissolved];
+    row.push(dissolved * t.chargeSquared[i], t.carbonate[i] * perAtom, t.sulfur[i] * perAtom);
+    row.push(t.chloride[i] * perAtom, t.phosphate[i] * perAtom);
+    m.set(row, at);
+  }
+  return m;
 }
 
 const engines = new WeakMap<Database, Map<string, PointEngine>>();
