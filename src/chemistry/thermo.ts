@@ -32,7 +32,10 @@ export interface ReactionProperties {
   readonly dG0: number;
   /** ΔS°r, J/(mol·K); null when a species lacks S° (then ΔG°r is taken as independent of T). */
   readonly dS: number | null;
-  /** ΔCp°r, J/(mol·K); 0 when a species lacks Cp° (docs/method.md, Temperature; the records' notes). */
+  /**
+   * ΔCp°r, J/(mol·K); 0 when any species lacks Cp° — the whole sum, so it depends on how the reaction is written
+   * (every answer writes formations from the element's basis; docs/method.md, Temperature; the records' notes).
+   */
   readonly dCp: number;
   /** True when some Cp° was missing and ΔCp°r was set to 0. */
   readonly cpMissing: boolean;

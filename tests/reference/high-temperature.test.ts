@@ -190,6 +190,16 @@ describe("functions at 100–300 °C", () => {
     expect(refused.message).toMatch(/lack S° for PbOH\+/);
   });
 
+  it("copper with sulfur is answered above 100 °C (Cu2S, CuS and the sulfur forms carry S°), with chloride refused by name", () => {
+    // chalcocite at strongly reducing potential in sulfide-bearing water, as at 25 °C (common practice: copper
+    // sulfide films form in sulfidic waters); 1e-3 mol/kg sulfur, pH 7, −0.6 V
+    for (const celsius of [25, 150, 250])
+      expect(speciesAt("Cu", 7, -0.6, celsius, 1e-6, 0, 0, 1e-3)[0][0]).toBe("Cu2S(s)");
+    const refused = speciesAt("Cu", 7, -0.6, 150, 1e-6, 0, 1e-3)[0][0] as CellError;
+    expect(refused.code).toBe("#VALUE!");
+    expect(refused.message).toMatch(/Cu with chloride is modelled 0–100 °C only;.*CuCl\+/);
+  });
+
   it("temperatures beyond 300 °C are refused", () => {
     expect(neutralPHAt(301)[0][0]).toBeInstanceOf(CellError);
   });
