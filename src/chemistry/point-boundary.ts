@@ -32,26 +32,13 @@ const TIE = 1e-12;
 /** The species dominant just past E in direction d (ties at E go to the one that stays lowest); leaves linesAt(E). */
 function speciesPast(engine: PointEngine, pH: number, E: number, d: 1 | -1): number {
   engine.linesAt(pH, E);
-  return pastOnLines(engine, lowestLine(engine), d);
-}
-
-/** The species with the lowest line at the engine's last linesAt (ties to the lower index): the dominant there. */
-function lowestLine(engine: PointEngine): number {
-  const { lineG } = engine;
-  let first = -1;
-  let gFirst = INF;
-  for (let i = 0; i < lineG.length; i++) {
-    if (lineG[i] < gFirst) {
-      gFirst = lineG[i];
-      first = i;
-    }
-  }
-  return first;
+  return pastOnLines(engine, engine.lineLowest, d);
 }
 
 /** Among the species tied with `first` on the last lines, the one that stays lowest going in direction d. */
 function pastOnLines(engine: PointEngine, first: number, d: 1 | -1): number {
   const { lineG, lineSlope } = engine;
+  if (first === engine.lineLowest && engine.lineGap > TIE) return first; // no other line within TIE of it
   const gFirst = lineG[first];
   let best = first;
   let bestSlope = d * lineSlope[first];
@@ -116,7 +103,7 @@ export function pointBoundary(engine: PointEngine, pH: number, E: number, d: 1 |
     const reach = min(distance, max(straight, MAX_STEP), toLimit);
     const probe = current + d * (reach + BOUNDARY_TOLERANCE / 4);
     engine.linesAt(pH, probe); // the lines there give the dominant species (their lowest) and the next tangents
-    const there = lowestLine(engine);
+    const there = engine.lineLowest;
     if (there === here) {
       if (d * (limit - probe) <= 0) return null;
       current = probe;

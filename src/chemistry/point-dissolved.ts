@@ -25,17 +25,16 @@ export interface DissolvedAnswer {
   readonly solid: number;
 }
 
-/** The controlling solid: lowest g among the solids available in the water (ligands at the point). */
+/** The controlling solid: lowest g among the solids available in the water (ligands at the point); leaves the unit lines. */
 export function controllingSolid(engine: PointEngine, pH: number, E: number): number {
-  engine.ligandsAt(pH, E);
+  engine.linesAt(pH, E, true);
+  const { lineG } = engine;
   const dissolved = engine.table.dissolved;
   let best = -1;
   let bestG = INF;
-  for (let i = 0; i < engine.size; i++) {
-    if (dissolved[i] || !engine.available(i)) continue;
-    const g = engine.g(i, pH, E, true);
-    if (g < bestG) {
-      bestG = g;
+  for (let i = 0, n = lineG.length; i < n; i++) {
+    if (!dissolved[i] && lineG[i] < bestG) {
+      bestG = lineG[i];
       best = i;
     }
   }
@@ -45,14 +44,14 @@ export function controllingSolid(engine: PointEngine, pH: number, E: number): nu
 /** Total dissolved metal in equilibrium with the controlling solid at (pH, E), in the engine's current water. */
 export function dissolvedAtPoint(engine: PointEngine, pH: number, E: number): DissolvedAnswer {
   const solid = controllingSolid(engine, pH, E);
-  const gSolid = engine.g(solid, pH, E, true);
-  const t = engine.table;
+  const { lineG } = engine;
+  const gSolid = lineG[solid];
+  const { dissolved, x } = engine.table;
   const f = engine.fOverRT;
   let total = 0;
-  for (let i = 0; i < engine.size; i++) {
-    if (!t.dissolved[i] || !engine.available(i)) continue;
-    const x = t.x[i];
-    total += x * exp(x * f * (gSolid - engine.g(i, pH, E, true)) - engine.lnGamma(i));
+  for (let i = 0, n = lineG.length; i < n; i++) {
+    if (!dissolved[i] || lineG[i] === INF) continue; // +∞: the water lacks a ligand the species needs
+    total += x[i] * exp(x[i] * f * (gSolid - lineG[i]) - engine.lnGamma(i));
   }
   return { total, solid };
 }

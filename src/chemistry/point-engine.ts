@@ -88,9 +88,11 @@ export class PointEngine {
   private ligandPH = NOT_A_NUMBER;
   private ligandE = NOT_A_NUMBER;
   private ligandFresh = 0;
-  /** linesAt's answers: g and dg/dE per species. */
+  /** linesAt's answers: g and dg/dE per species, the lowest line and its gap to the next lowest (V). */
   readonly lineG: Float64Array;
   readonly lineSlope: Float64Array;
+  lineLowest = -1;
+  lineGap = 0;
   /** Which per-species columns are out of date (TEMPERATURE_DUE, THRESHOLD_DUE bits); filled when first needed. */
   private due = 0;
   /** Rows in a row set with this temperature, threshold and ionic strength (0: this row brought new ones). */
@@ -303,29 +305,42 @@ export class PointEngine {
 
   /**
    * g and dg/dE of every species at (pH, E) into lineG and lineSlope (+∞ and 0 where the water lacks a ligand the
-   * species needs): the tangent lines a boundary search follows, in one pass.
+   * species needs): the tangent lines a boundary search follows, in one pass. `unit`: dissolved species at unit
+   * activity (the controlling solid's equilibrium, point-dissolved.ts). The lowest line (ties to the lower index) goes
+   * to lineLowest, and the gap from it to the next lowest to lineGap.
    */
-  linesAt(pH: number, E: number): void {
+  linesAt(pH: number, E: number, unit = false): void {
     this.ligandsAt(pH, E);
     this.ensureColumns();
     const t = this.table;
-    const { aThreshold, b, c, r, lineG, lineSlope } = this;
+    const { b, c, r, lineG, lineSlope } = this;
+    const a = unit ? this.aUnit : this.aThreshold;
     const { needs, sulfur } = t;
     const absent = ~this.present;
     const { lnC, lnS, lnCl, lnP } = this;
     const sulfurSlope = this.sulfurSlope;
-    for (let i = 0, n = aThreshold.length; i < n; i++) {
+    let lowest = -1;
+    let gLowest = INF;
+    let gNext = INF;
+    for (let i = 0, n = a.length; i < n; i++) {
       const need = needs[i];
       if (need & absent) {
         lineG[i] = INF;
         lineSlope[i] = 0;
         continue;
       }
-      let g = aThreshold[i] + b[i] * pH + c[i] * E;
+      let g = a[i] + b[i] * pH + c[i] * E;
       if (need) g += r[i] * (t.carbonate[i] * lnC + sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP);
       lineG[i] = g;
       lineSlope[i] = c[i] + r[i] * sulfur[i] * sulfurSlope;
+      if (g < gLowest) {
+        gNext = gLowest;
+        gLowest = g;
+        lowest = i;
+      } else if (g < gNext) gNext = g;
     }
+    this.lineLowest = lowest;
+    this.lineGap = gNext - gLowest;
   }
 
   /** dg_i/dE at the last point (the sulfur term bends it). */
