@@ -93,6 +93,11 @@ export class PointEngine {
   readonly lineSlope: Float64Array;
   lineLowest = -1;
   lineGap = 0;
+  /** Where the lines were last drawn (NaN: not reusable), at unit activity or not, and in which water. */
+  private linesPH = NOT_A_NUMBER;
+  private linesE = NOT_A_NUMBER;
+  private linesUnit = false;
+  private linesStamp = -1;
   /** Which per-species columns are out of date (TEMPERATURE_DUE, THRESHOLD_DUE bits); filled when first needed. */
   private due = 0;
   /** Rows in a row set with this temperature, threshold and ionic strength (0: this row brought new ones). */
@@ -108,7 +113,12 @@ export class PointEngine {
   private dT = 0;
   private shape = 0;
   private k = 0;
-  // per water
+  // per water: the totals as given, and a count of the waters set (linesAt's reuse)
+  private carbonate = NOT_A_NUMBER;
+  private chloride = NOT_A_NUMBER;
+  private sulfur = NOT_A_NUMBER;
+  private phosphate = NOT_A_NUMBER;
+  private waterStamp = 0;
   private lnActivity = 0;
   private lnGamma1 = 0;
   private ionicStrength = 0;
@@ -166,6 +176,23 @@ export class PointEngine {
     ionicStrength: number,
     phosphate = 0,
   ): void {
+    if (
+      celsius === this.celsius &&
+      activity === this.activity &&
+      ionicStrength === this.ionicStrength &&
+      carbonate === this.carbonate &&
+      chloride === this.chloride &&
+      sulfur === this.sulfur &&
+      phosphate === this.phosphate
+    ) {
+      this.repeats++; // the same water as the last point: everything worked out for it still holds
+      return;
+    }
+    this.waterStamp++;
+    this.carbonate = carbonate;
+    this.chloride = chloride;
+    this.sulfur = sulfur;
+    this.phosphate = phosphate;
     const newTemperature = celsius !== this.celsius;
     if (newTemperature) this.setTemperature(celsius);
     if (newTemperature || activity !== this.activity || ionicStrength !== this.ionicStrength) {
@@ -310,6 +337,17 @@ export class PointEngine {
    * to lineLowest, and the gap from it to the next lowest to lineGap.
    */
   linesAt(pH: number, E: number, unit = false): void {
+    // the same lines again (a boundary below after the one above, in the same water): without a ligand to speciate
+    // they depend on nothing else
+    const reusable = !(this.present & SPECIATED);
+    if (
+      reusable &&
+      pH === this.linesPH &&
+      E === this.linesE &&
+      unit === this.linesUnit &&
+      this.linesStamp === this.waterStamp
+    )
+      return;
     this.ligandsAt(pH, E);
     this.ensureColumns();
     const t = this.table;
@@ -341,6 +379,10 @@ export class PointEngine {
     }
     this.lineLowest = lowest;
     this.lineGap = gNext - gLowest;
+    this.linesPH = reusable ? pH : NOT_A_NUMBER;
+    this.linesE = E;
+    this.linesUnit = unit;
+    this.linesStamp = this.waterStamp;
   }
 
   /** dg_i/dE at the last point (the sulfur term bends it). */

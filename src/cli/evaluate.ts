@@ -136,7 +136,7 @@ export function evaluateBatch(
       continue;
     }
     const e = eShe[r];
-    const eError = e instanceof CellError ? e : null;
+    const eError = typeof e === "object" && e instanceof CellError ? e : null;
     // the spreadsheet passes an error in an argument cell straight through: the potential first, then the carbonate
     const passOn = eError ?? (carbonateErrors === null ? null : carbonateErrors[r]) ?? ionic?.errors[r] ?? null;
     fillRowCells(cells, r, e, eError ?? margin[r], ligandCells, perTarget, passOn);

@@ -48,7 +48,7 @@ export function sampleColumns(plan: EvaluationPlan, rows: readonly InputRow[], f
   const potential: CellScalar[] = new Array(n);
   for (let r = 0; r < n; r++) {
     const e = eShe[r];
-    potential[r] = e instanceof CellError ? "" : (e as number | string);
+    potential[r] = typeof e === "object" && e instanceof CellError ? "" : (e as number | string);
   }
   const margin = answersOf(fns.waterMargin(asRange(pH), asRange(potential), temperature, plan.overpotential), n);
   return { pH, temperature, temperatureAt, eShe, potential, margin };

@@ -6,9 +6,6 @@
  * columns (one output row per input row).
  */
 import {
-  BOUNDARY_SEARCH_HIGH,
-  BOUNDARY_SEARCH_LOW,
-  boundText,
   dissolvedAtPoint,
   engineAtPoint,
   getDatabase,
@@ -28,7 +25,16 @@ import {
   toHostError,
   valueError,
 } from "./cell-values";
-import { DISSOLVED_UNITS, POINT_ARGS, PointArguments, temperatureError, unitArg } from "./stability-functions";
+import {
+  DISSOLVED_UNITS,
+  NO_BOUNDARY_ABOVE,
+  NO_BOUNDARY_BELOW,
+  noSolidForms,
+  POINT_ARGS,
+  PointArguments,
+  temperatureError,
+  unitArg,
+} from "./stability-functions";
 
 export const ASSESS_COLUMNS = [
   "species",
@@ -63,10 +69,7 @@ function dissolvedWithSolid(
 ): { total: number; controllingSolid: string } | CellError {
   const { total, solid } = dissolvedAtPoint(engine, pH, E);
   const controllingSolid = engine.table.species[solid].formula;
-  if (!(total <= MAX_DISSOLVED))
-    return notAvailable(
-      `no solid forms here: ${controllingSolid}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`,
-    );
+  if (!(total <= MAX_DISSOLVED)) return noSolidForms(controllingSolid);
   return { total, controllingSolid };
 }
 
@@ -89,10 +92,7 @@ function assessRow(element: string, pH: number, E: number, water: Water, unit: s
   }
   const dominant = engine.table.species[engine.dominant(pH, E)];
   const boundary = (direction: 1 | -1): CellOutput =>
-    pointBoundary(engine, pH, E, direction)?.E ??
-    notAvailable(
-      `no boundary ${direction > 0 ? "above" : "below"} this point between ${boundText(BOUNDARY_SEARCH_LOW)} and +${BOUNDARY_SEARCH_HIGH} V`,
-    );
+    pointBoundary(engine, pH, E, direction)?.E ?? (direction > 0 ? NO_BOUNDARY_ABOVE : NO_BOUNDARY_BELOW);
   const above = boundary(1);
   const below = boundary(-1);
   const dissolved = dissolvedWithSolid(engine, pH, E); // the engine already holds this row's water

@@ -261,6 +261,7 @@ export function mapCells<A extends unknown[]>(
   // Computations almost never throw: run unguarded, and only if one does, run again guarding every cell.
   const fill = (guarded: boolean): CellOutput[][] => {
     const result: CellOutput[][] = new Array(rows);
+    if (rows > 1 && rows < cols) return fillByColumns(result, guarded);
     for (let r = 0; r < rows; r++) {
       // a one-cell literal for a column (the usual lab export): an empty literal grown by one cell reserves room for
       // many, and those rows stay alive until the host takes the result, so every collection copies them
@@ -271,6 +272,13 @@ export function mapCells<A extends unknown[]>(
         result[r] = row;
       }
     }
+    return result;
+  };
+  // A few rows over many columns (a row of samples against a column of choices, as BOUNDARY's directions): column by
+  // column, so that the answers for one sample are worked out one after the other (the engine keeps its lines).
+  const fillByColumns = (result: CellOutput[][], guarded: boolean): CellOutput[][] => {
+    for (let r = 0; r < rows; r++) result[r] = [];
+    for (let c = 0; c < cols; c++) for (let r = 0; r < rows; r++) result[r][c] = cell(r, c, guarded);
     return result;
   };
   try {

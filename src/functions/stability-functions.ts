@@ -4,6 +4,9 @@
  * from src/chemistry.
  */
 import {
+  BOUNDARY_SEARCH_HIGH,
+  BOUNDARY_SEARCH_LOW,
+  boundText,
   CONSTANT_GIBBS_MAX_CELSIUS,
   couplePotential,
   dissolvedAtPoint,
@@ -86,15 +89,21 @@ export const speciesAt = dominantFunction((s) => s.formula);
 /** REDOX.REGIME: immunity, passivation or corrosion, from the dominant species. */
 export const regimeAt = dominantFunction((s) => s.regime);
 
+/** The #N/A of a point with no boundary above (d = 1) or below in the searched span: one error value each, shared. */
+const noBoundary = (direction: 1 | -1): CellError =>
+  notAvailable(
+    `no boundary ${direction > 0 ? "above" : "below"} this point between ${boundText(BOUNDARY_SEARCH_LOW)} and +${BOUNDARY_SEARCH_HIGH} V`,
+  );
+export const NO_BOUNDARY_ABOVE = noBoundary(1);
+export const NO_BOUNDARY_BELOW = noBoundary(-1);
+
 /** REDOX.BOUNDARY: the point arguments, then the direction (1 above, −1 below). */
 export function boundaryFrom(...inputs: [...PointArguments, direction?: CellInput]): CellOutput[][] {
   return mapCells([...POINT_ARGS, directionArg], inputs, (el, p, e, t, a, co3, cl, s, po4, i, d) => {
     const engine = engineAtPoint(getDatabase(), el, t, a, co3, cl, s, po4, i);
     if (typeof engine === "string") return temperatureError(engine);
     const crossing = pointBoundary(engine, p, e, d);
-    return crossing
-      ? crossing.E
-      : notAvailable(`no boundary ${d > 0 ? "above" : "below"} this point between −3 and +3 V`);
+    return crossing ? crossing.E : d > 0 ? NO_BOUNDARY_ABOVE : NO_BOUNDARY_BELOW;
   });
 }
 
@@ -167,6 +176,20 @@ export const unitArg = textArg(
   { optional: true, defaultValue: "mol/kg" },
 );
 
+const noSolidErrors = new Map<string, CellError>();
+
+/** The #N/A of a point where `formula`, the most stable solid, would all dissolve: one error value per solid. */
+export function noSolidForms(formula: string): CellError {
+  let error = noSolidErrors.get(formula);
+  if (!error) {
+    error = notAvailable(
+      `no solid forms here: ${formula}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`,
+    );
+    noSolidErrors.set(formula, error);
+  }
+  return error;
+}
+
 export function dissolvedAt(
   element: CellInput,
   pH: CellInput,
@@ -197,11 +220,7 @@ export function dissolvedAt(
       const engine = engineAtPoint(getDatabase(), el, t, 1, co3, cl, s, po4, i);
       if (typeof engine === "string") return temperatureError(engine);
       const { total, solid } = dissolvedAtPoint(engine, p, e);
-      if (!(total <= MAX_DISSOLVED)) {
-        return notAvailable(
-          `no solid forms here: ${engine.table.species[solid].formula}, the most stable solid, would dissolve to more than ${MAX_DISSOLVED} mol/kg`,
-        );
-      }
+      if (!(total <= MAX_DISSOLVED)) return noSolidForms(engine.table.species[solid].formula);
       const weight = getDatabase().element(el)?.atomicWeight ?? NaN;
       return total * DISSOLVED_UNITS[u](weight);
     },
