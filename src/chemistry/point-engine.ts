@@ -337,9 +337,9 @@ export class PointEngine {
    * to lineLowest, and the gap from it to the next lowest to lineGap.
    */
   linesAt(pH: number, E: number, unit = false): void {
-    // the same lines again (a boundary below after the one above, in the same water): without a ligand to speciate
-    // they depend on nothing else
-    const reusable = !(this.present & SPECIATED);
+    // the same lines again (a boundary below after the one above, in the same water): without sulfur nothing in them
+    // depends on E but E itself (carbonate and orthophosphate speciate with pH only), and pH, E and water are the same
+    const reusable = !(this.present & NEEDS_SULFUR);
     if (
       reusable &&
       pH === this.linesPH &&
