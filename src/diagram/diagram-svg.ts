@@ -10,6 +10,7 @@ import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./a
 import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
 import { formulaSegments, Segment } from "./formula-markup";
 import { formatTotals } from "./water-words";
+import { fixedText } from "./fixed-text";
 import { markerPath } from "./markers";
 import { LabelPlan, planLabels } from "./region-labels";
 import {
@@ -102,7 +103,7 @@ export function escapeXml(text: string): string {
     .replace(/'/g, "&apos;");
 }
 
-const fixed = (v: number, digits = 2) => Number(v.toFixed(digits)).toString();
+const fixed = (v: number, digits = 2) => Number(fixedText(v, digits)).toString();
 
 /** Width (px) of a typeset formula at a font size — a fixed-advance estimate for sans-serif text. */
 export function formulaWidth(segments: readonly Segment[], size: number): number {
@@ -137,14 +138,14 @@ export function formatActivity(a: number): string {
 
 /** Hover and focus text of a sample: the reading as logged, E vs SHE, the row's own temperature and water, its answer. */
 export function sampleText(s: PlottedSample, unit: "V" | "mV"): string {
-  const shown = unit === "mV" ? `${Math.round(s.E)} mV` : `${s.E.toFixed(3)} V`;
-  const reading = s.reading ? `reading ${s.reading} = ${s.eSHE.toFixed(3)} V vs SHE` : `E ${shown}`;
-  const margin = `${s.waterMargin >= 0 ? "+" : "\u2212"}${Math.abs(s.waterMargin).toFixed(2)} V ${s.waterMargin >= 0 ? "inside" : "outside"} the water window`;
+  const shown = unit === "mV" ? `${Math.round(s.E)} mV` : `${fixedText(s.E, 3)} V`;
+  const reading = s.reading ? `reading ${s.reading} = ${fixedText(s.eSHE, 3)} V vs SHE` : `E ${shown}`;
+  const margin = `${s.waterMargin >= 0 ? "+" : "\u2212"}${fixedText(Math.abs(s.waterMargin), 2)} V ${s.waterMargin >= 0 ? "inside" : "outside"} the water window`;
   const who = s.id ? `${s.id} (row ${s.row})` : `row ${s.row}`;
-  const at = s.celsius === undefined ? "" : ` at ${Number(s.celsius.toFixed(1))} \u00b0C`;
+  const at = s.celsius === undefined ? "" : ` at ${Number(fixedText(s.celsius, 1))} \u00b0C`;
   const water = s.ligands ? formatTotals(s.ligands) : "";
   const ionic = s.ionicStrength ? `, I ${Number(s.ionicStrength.toPrecision(3))} mol/kg` : "";
-  return `${who}: pH ${s.pH.toFixed(2)}, ${reading}${at}${water ? `, water ${water}` : ""}${ionic}; ${s.formula}, ${s.regime}; water margin ${margin}`;
+  return `${who}: pH ${fixedText(s.pH, 2)}, ${reading}${at}${water ? `, water ${water}` : ""}${ionic}; ${s.formula}, ${s.regime}; water margin ${margin}`;
 }
 
 function patternDefs(): string {

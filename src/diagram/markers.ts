@@ -71,27 +71,31 @@ function twoDecimals(v: number): string {
   return n < 0 ? "-" + text : text;
 }
 
+/** The SVG path builder markerPath traces into (one for every marker: no closures made per marker). */
+const svgPath = {
+  d: "",
+  moveTo(a: number, b: number): void {
+    this.d += `M${twoDecimals(a)} ${twoDecimals(b)}`;
+  },
+  lineTo(a: number, b: number): void {
+    this.d += `L${twoDecimals(a)} ${twoDecimals(b)}`;
+  },
+  // a full circle as two half arcs
+  arc(cx: number, cy: number, radius: number): void {
+    const r = twoDecimals(radius);
+    const y = twoDecimals(cy);
+    this.d += `A${r} ${r} 0 1 0 ${twoDecimals(cx - radius)} ${y}A${r} ${r} 0 1 0 ${twoDecimals(cx + radius)} ${y}`;
+  },
+  closePath(): void {
+    this.d += "Z";
+  },
+};
+
 /** SVG path data of a marker. */
 export function markerPath(regime: Regime, x: number, y: number, r = MARKER_RADIUS): string {
-  const parts: string[] = [];
-  const f = twoDecimals;
-  traceMarker(
-    {
-      moveTo: (a, b) => parts.push(`M${f(a)} ${f(b)}`),
-      lineTo: (a, b) => parts.push(`L${f(a)} ${f(b)}`),
-      // a full circle as two half arcs
-      arc: (cx, cy, radius) =>
-        parts.push(
-          `A${f(radius)} ${f(radius)} 0 1 0 ${f(cx - radius)} ${f(cy)}A${f(radius)} ${f(radius)} 0 1 0 ${f(cx + radius)} ${f(cy)}`,
-        ),
-      closePath: () => parts.push("Z"),
-    },
-    regime,
-    x,
-    y,
-    r,
-  );
-  return parts.join("");
+  svgPath.d = "";
+  traceMarker(svgPath, regime, x, y, r);
+  return svgPath.d;
 }
 
 /** The legend's marker of a regime as a small standalone SVG (for HTML legends and tables). */

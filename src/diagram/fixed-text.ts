@@ -1,0 +1,23 @@
+/**
+ * Number.prototype.toFixed for 0–3 decimals without its cost: toFixed formats the double's exact decimal expansion,
+ * slowly, and a diagram's sample titles call it for tens of thousands of markers. The value is scaled to an integer
+ * of the last decimal and its digits written; within 10⁻⁶ of a rounding tie, and beyond 10⁹ of that unit (where the
+ * scaling's rounding could matter), the answer is left to toFixed itself, so the text is always toFixed's.
+ */
+
+const SCALE = [1, 10, 100, 1000] as const;
+
+/** x.toFixed(digits) for digits 0–3 (other digit counts go to toFixed). */
+export function fixedText(x: number, digits: number): string {
+  const scale = SCALE[digits];
+  if (scale === undefined) return x.toFixed(digits);
+  const scaled = Math.abs(x) * scale;
+  if (!(scaled < 1e9) || Math.abs(scaled - Math.floor(scaled) - 0.5) < 1e-6) return x.toFixed(digits);
+  const n = Math.round(scaled);
+  // toFixed keeps the sign of a negative value that rounds to zero ("-0.00"), and writes −0 as "0.00"
+  const sign = x < 0 ? "-" : "";
+  if (digits === 0) return sign + String(n);
+  const whole = Math.floor(n / scale);
+  const fraction = String(n - whole * scale).padStart(digits, "0");
+  return `${sign}${whole}.${fraction}`;
+}
