@@ -10,7 +10,7 @@ import { Axes, AxisWindow, formatTick, makeAxes, niceTicks, PlotArea } from "./a
 import type { PlottedSample, ShownLine, ShownRegion } from "./diagram-model";
 import { formulaSegments, Segment } from "./formula-markup";
 import { formatTotals } from "./water-words";
-import { fixedText } from "./fixed-text";
+import { fixedText, twoDecimals } from "./fixed-text";
 import { markerPath } from "./markers";
 import { LabelPlan, planLabels } from "./region-labels";
 import {
@@ -103,7 +103,8 @@ export function escapeXml(text: string): string {
     .replace(/'/g, "&apos;");
 }
 
-const fixed = (v: number, digits = 2) => Number(fixedText(v, digits)).toString();
+/** v to `digits` decimals without trailing zeros, as Number(v.toFixed(digits)).toString() writes it. */
+const fixed = (v: number, digits = 2) => (digits === 2 ? twoDecimals(v) : Number(fixedText(v, digits)).toString());
 
 /** Width (px) of a typeset formula at a font size — a fixed-advance estimate for sans-serif text. */
 export function formulaWidth(segments: readonly Segment[], size: number): number {

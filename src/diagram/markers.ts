@@ -4,6 +4,7 @@
  * passivation, a triangle pointing up for corrosion — each outlined in MARKER_OUTLINE.
  */
 import { type Regime } from "../chemistry";
+import { twoDecimals } from "./fixed-text";
 import { MARKER_FILLS, MARKER_OUTLINE } from "./palette";
 
 export { MARKER_FILLS, MARKER_OUTLINE };
@@ -48,27 +49,6 @@ export function traceMarker(sink: PathSink, regime: Regime, x: number, y: number
     sink.lineTo(x - h * 0.866, y + h * 0.5);
   }
   sink.closePath();
-}
-
-/** ".01" … ".99" without a trailing zero, "" for 0: the decimals of a coordinate in hundredths of a pixel. */
-const HUNDREDTHS: readonly string[] = Array.from({ length: 100 }, (_, f) =>
-  f === 0 ? "" : `.${String(f).padStart(2, "0").replace(/0$/, "")}`,
-);
-
-/**
- * A coordinate to 2 decimals as Number(v.toFixed(2)).toString() writes it, from the integer of hundredths (toFixed
- * formats the double's exact decimal expansion, slowly: a diagram has tens of thousands of markers); within 10⁻⁶ of
- * a tie, and for huge values, it leaves the answer to toFixed.
- */
-function twoDecimals(v: number): string {
-  const scaled = v * 100;
-  if (!(Math.abs(scaled) < 1e15) || Math.abs(scaled - Math.floor(scaled) - 0.5) < 1e-6)
-    return Number(v.toFixed(2)).toString();
-  const n = Math.round(scaled);
-  const a = n < 0 ? -n : n;
-  const whole = Math.floor(a / 100);
-  const text = String(whole) + HUNDREDTHS[a - whole * 100];
-  return n < 0 ? "-" + text : text;
 }
 
 /** The SVG path builder markerPath traces into (one for every marker: no closures made per marker). */
