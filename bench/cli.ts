@@ -94,7 +94,7 @@ class Best {
 
 async function main(): Promise<void> {
   const rows = Number(process.argv[2] ?? 1_000_000);
-  // enough rows that the fixed start-up (about 0.2 s) is a small part of the own-water time per row, as of the pure
+  // enough rows that the fixed start-up (about 0.2 s) is as small a part of the own-water time per row as of the pure
   const waterRows = Number(process.argv[3] ?? 300_000);
   const rounds = Number(process.argv[4] ?? process.env.REDOX_BENCH_ROUNDS ?? 3);
   if (!existsSync(join(root, "dist/cli/redox-cells.cjs")))
