@@ -1,7 +1,7 @@
 /**
- * Standard potentials of the iron and copper oxide couples at 25–300 °C against a compilation independent of the
- * records: the NASA polynomials of McBride, Gordon & Reno 1993 (TM-4513) for the solids and hydrogen, IAPWS-95 for
- * water (fixtures/high-temperature/oxide-couples.json, written by scripts/make-oxide-couple-fixtures.py).
+ * Standard potentials of the iron, copper and chromium oxide couples at 25–300 °C against a compilation independent
+ * of the records: the NASA polynomials of McBride, Gordon & Reno 1993 (TM-4513) for the iron and copper solids and
+ * hydrogen, of McBride, Zehe & Gordon 2002 (TP-2002-211556) for chromium and eskolaite, IAPWS-95 for water (fixtures/high-temperature/oxide-couples.json, written by scripts/make-oxide-couple-fixtures.py).
  *
  * These couples hold no ion, so the check isolates what the records do for solids, water and hydrogen at
  * temperature (constant Cp° at 25 °C, docs/method.md, Temperature) from the ions' correspondence. Two checks per
@@ -60,7 +60,7 @@ describe("the same lines through REDOX.BOUNDARY at boiler temperatures (activity
   const expected = (id: string) => checks.find((c) => c.id === id)!;
 
   for (const celsius of [200, 250, 300]) {
-    it(`${celsius} °C, pH 7: Fe/Fe3O4, Cu/Cu2O and Cu2O/CuO lie within 30 mV of the compilation's E° − k·pH`, () => {
+    it(`${celsius} °C, pH 7: Fe/Fe3O4, Cu/Cu2O, Cu2O/CuO and Cr/Cr2O3 lie within 30 mV of the compilation's E° − k·pH`, () => {
       const pH = 7;
       const k = nernstFactor(kelvin(celsius));
       const iron = lineAt("Fe", pH, -2, celsius);
@@ -72,6 +72,9 @@ describe("the same lines through REDOX.BOUNDARY at boiler temperatures (activity
       const cuprite = lineAt("Cu", pH, copper + 1e-3, celsius);
       expect(speciesAt("Cu", pH, cuprite + 1e-3, celsius, 1e-2)[0][0]).toBe("CuO(s)");
       expect(Math.abs(cuprite - (expected(`E°(CuO/Cu2O) at ${celsius} °C`).value - k * pH))).toBeLessThan(0.03);
+      const chromium = lineAt("Cr", pH, -2, celsius);
+      expect(speciesAt("Cr", pH, chromium + 1e-3, celsius, 1e-2)[0][0]).toBe("Cr2O3(s)");
+      expect(Math.abs(chromium - (expected(`E°(Cr2O3/Cr) at ${celsius} °C`).value - k * pH))).toBeLessThan(0.03);
     });
   }
 });
