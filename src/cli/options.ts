@@ -158,7 +158,7 @@ Chemistry
   -m, --metal LIST           metals evaluated on every row, comma-separated symbols or names: Fe,Cu,Pb
                              (at least one of --metal or a metal column is needed)
   -e, --electrode NAME       reference electrode of the readings: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M,
-                             AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M, RHE (default: from the header)
+                             AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M, AgCl-EPB, RHE (default: from the header)
   -u, --unit V|mV            unit of the readings (default: from the header)
   -t, --temperature C        temperature in °C when there is no temperature column (default ${DEFAULT_CELSIUS}), and for the
                              blank cells of one (default: none — a blank temperature is a missing measurement,

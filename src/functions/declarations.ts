@@ -39,7 +39,7 @@ const required = (name: string, description: string): ArgumentDeclaration => ({ 
 const optional = (name: string, description: string): ArgumentDeclaration => ({ name, description, optional: true });
 
 const ELECTRODE_NAMES =
-  "SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M or RHE (case-insensitive; common spellings accepted)";
+  "SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M, AgCl-EPB or RHE (case-insensitive; common spellings accepted)";
 const ELEMENT_NAMES = "Fe, Cu, Zn, Pb, Ni, Cr, Al, Mn, Sn, Co, Mg, Ti, Ag, Cd, Mo, V, W, Bi, Au, Pt, Hg, As, Sb, Se, U";
 const PRESSURE_NOTE = "1 atm below 100 °C, saturation pressure above";
 /** The temperature argument as the water and scale functions word it, and as the species functions do. */

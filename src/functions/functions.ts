@@ -49,7 +49,7 @@ export function watermargin(pH: any[][], potential: any[][], temperature?: any[]
  * Converts a reading against a reference electrode to the standard hydrogen scale (V vs SHE).
  * @customfunction TOSHE
  * @param {any[][]} reading Measured potential against the reference electrode, in V (or mV with unit "mV").
- * @param {any[][]} electrode Reference electrode: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M or RHE (case-insensitive; common spellings accepted).
+ * @param {any[][]} electrode Reference electrode: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M, AgCl-EPB or RHE (case-insensitive; common spellings accepted).
  * @param {any[][]} [temperature] Temperature of the reference electrode in °C (default 25).
  * @param {any[][]} [pH] pH of the solution, −2 to 16; needed only for RHE.
  * @param {any[][]} [unit] Unit of the reading: "V" (default) or "mV". The result is always in V vs SHE.
@@ -69,7 +69,7 @@ export function toshe(
  * Converts a potential on the standard hydrogen scale to the reading against a reference electrode.
  * @customfunction FROMSHE
  * @param {any[][]} potential Potential in V vs SHE, −3 to +3.
- * @param {any[][]} electrode Reference electrode: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M or RHE (case-insensitive; common spellings accepted).
+ * @param {any[][]} electrode Reference electrode: SHE, SCE, AgCl-sat, AgCl-3.5M, AgCl-3M, AgCl-1M, AgCl-sea, CSE, MSE, HgO-1M, AgCl-EPB or RHE (case-insensitive; common spellings accepted).
  * @param {any[][]} [temperature] Temperature of the reference electrode in °C (default 25).
  * @param {any[][]} [pH] pH of the solution, −2 to 16; needed only for RHE.
  * @param {any[][]} [unit] Unit of the result: "V" (default) or "mV".

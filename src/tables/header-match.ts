@@ -73,7 +73,7 @@ function isPH(tokens: readonly string[]): boolean {
 }
 
 function isPotential(tokens: readonly string[]): boolean {
-  if (has(tokens, "orp", "eh", "potential", "redox", "ecorr", "e.h")) return true;
+  if (has(tokens, "orp", "eh", "potential", "redox", "ecorr", "ecp", "e.h")) return true; // ECP: corrosion potential (loops)
   if (tokens[0] === "e" && !has(tokens, "coli")) return true; // "E", "E (V)", "E vs SCE"
   if (tokens.length === 1 && tokens[0] === "mv") return true;
   return false;
@@ -137,6 +137,7 @@ export function electrodeNamed(tokens: readonly string[]): string | null {
   if (has(tokens, "rhe")) return "RHE";
   if (has(tokens, "cse", "cuso", "cuso4")) return "CSE";
   if (has(tokens, "mse", "hg2so4")) return "MSE";
+  if (has(tokens, "epbre", "epb")) return "AgCl-EPB"; // external pressure-balanced Ag/AgCl, before the fillings
   if (has(tokens, "agcl")) {
     if (has(tokens, "sat", "saturated")) return "AgCl-sat";
     if (tokens.includes("3.5") || tokens.includes("3.5m")) return "AgCl-3.5M";

@@ -63,6 +63,13 @@ const derivedCases: Case[] = [
     "derived: E°(AgCl/Ag) of Bates & Bower 1954 with a(Cl−) = m·γ±, 1 mol/L KCl = 1.033 mol/kg, γ± = 0.604 (Robinson & Stokes, Electrolyte Solutions 1959) (from memory)",
   ),
   derived(
+    "AgCl-EPB",
+    25,
+    agclStandard(25) - nernst(25) * Math.log10(0.1 * 0.77),
+    0.003,
+    "derived: at 25 °C (no thermal junction) the pressure-balanced electrode is Ag/AgCl in 0.1 mol/kg KCl: E°(AgCl/Ag) of Bates & Bower 1954 with a(Cl−) = 0.1·γ±, γ± = 0.770 (Robinson & Stokes, Electrolyte Solutions 1959) (from memory)",
+  ),
+  derived(
     "AgCl-sat",
     40,
     agclStandard(40) + sceSawyer(40) - calomelStandard(40),
@@ -115,6 +122,7 @@ describe("reference electrodes vs SHE", () => {
       "CSE",
       "MSE",
       "HgO-1M",
+      "AgCl-EPB",
       "RHE",
     ];
     expect(
@@ -146,6 +154,8 @@ describe("names", () => {
     ["Hg/HgO", "HgO-1M"],
     ["nhe", "SHE"],
     ["rhe", "RHE"],
+    ["EPBRE", "AgCl-EPB"],
+    ["Ag/AgCl EPB", "AgCl-EPB"],
   ])("%s → %s", (name, id) => {
     const found = table.lookup(name);
     expect("electrode" in found && found.electrode.id).toBe(id);

@@ -61,6 +61,14 @@ describe("header matching", () => {
     expect(electrodeNamed(headerTokens("ORP_mV_AgCl_3M"))).toBe("AgCl-3M");
     expect(electrodeNamed(headerTokens("E vs HgO"))).toBe("HgO-1M");
   });
+
+  it("a loop log's corrosion potential against the pressure-balanced electrode: ECP column, AgCl-EPB (not a filling)", () => {
+    const match = matchHeaders(["Loop", "pH(T)", "ECP_mV_AgCl_EPB", "T_C"]);
+    expect(match.mapping.potential).toBe(2);
+    expect(match.hints.electrode).toBe("AgCl-EPB");
+    expect(electrodeNamed(headerTokens("E (mV vs EPBRE)"))).toBe("AgCl-EPB");
+    expect(electrodeNamed(headerTokens("ECP mV Ag/AgCl EPBRE 0.1M"))).toBe("AgCl-EPB");
+  });
 });
 
 describe("delimiters and decimal marks", () => {
