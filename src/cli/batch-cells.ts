@@ -48,10 +48,3 @@ export function answersOf(result: CellOutput[][], n: number): CellOutput[] {
   if (result.length === 1 && first.length === n) return first;
   return new Array<CellOutput>(n).fill(first[0]);
 }
-
-/** The two rows of answers of a call over a 2 × n broadcast, each one per row (a one-cell answer fills both). */
-export function twoAnswersOf(result: CellOutput[][], n: number): [CellOutput[], CellOutput[]] {
-  if (result.length === 2 && result[0].length === n) return [result[0], result[1]];
-  const fill = new Array<CellOutput>(n).fill(result[0][0]);
-  return [fill, fill];
-}

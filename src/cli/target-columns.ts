@@ -1,13 +1,13 @@
 /**
- * One metal's result columns for a batch: REDOX.SPECIES, the regime read from it (regimes.ts), REDOX.BOUNDARY
- * above and below, and REDOX.DISSOLVED — each function called once per metal over the whole batch, as a worksheet
- * range would call it.
+ * One metal's result columns for a batch: the answers of REDOX.SPECIES, REGIME, BOUNDARY above and below and
+ * DISSOLVED, from one REDOX.ASSESS call per metal over the whole batch (as a worksheet range would call it), which
+ * works each row out once instead of once per function (tests/properties/kept-lines.test.ts checks that ASSESS and
+ * the single functions agree).
  */
 import type { CellInput, CellOutput, CellScalar } from "../functions";
-import { answersOf, asRange, textColumn, twoAnswersOf } from "./batch-cells";
+import { asRange, textColumn } from "./batch-cells";
 import type { EvaluationPlan, MetalTarget } from "./evaluation-plan";
 import type { InputRow } from "./record-reader";
-import { regimeColumn } from "./regimes";
 import type { SampleColumns } from "./sample-columns";
 import type { WaterColumns } from "./water-columns";
 import type { WorksheetFunctions } from "./worksheet";
@@ -24,10 +24,7 @@ export interface TargetColumns {
   readonly dissolved: CellOutput[];
 }
 
-/** BOUNDARY's direction argument as a 2 × 1 range: above (1) in the first row of the answer, below (−1) in the second. */
-const DIRECTIONS: CellScalar[][] = [[1], [-1]];
-
-/** Calls the stability functions once per metal target over the whole batch (as a worksheet range would). */
+/** Calls ASSESS once per metal target over the whole batch (as a worksheet range would). */
 export function targetColumns(
   plan: EvaluationPlan,
   rows: readonly InputRow[],
@@ -47,19 +44,8 @@ export function targetColumns(
   return plan.targets.map((t) => {
     const elements = t.symbol === null ? textColumn(rows, plan.metalColumn as number) : null;
     const element: CellInput = elements === null ? t.symbol : asRange(elements);
-    const sample = [element, pH, potential, temperature] as const;
-    const species = answersOf(fns.species(...sample, plan.activity, ...waterArgs), n);
-    // one BOUNDARY call for both directions: a 2 × 1 direction range broadcasts to the rows above and below
-    const [above, below] = twoAnswersOf(fns.boundary(...sample, plan.activity, ...waterArgs, DIRECTIONS), n);
-    return {
-      target: t,
-      elements,
-      species,
-      regime: regimeColumn(species, elements ?? (t.symbol as string)),
-      above,
-      below,
-      // DISSOLVED has no activity: it is the controlling solid's solubility
-      dissolved: answersOf(fns.dissolved(...sample, ...waterArgs, plan.dissolvedUnit), n),
-    };
+    const answers = fns.assess(n, element, pH, potential, temperature, plan.activity, ...waterArgs, plan.dissolvedUnit);
+    // DISSOLVED has no activity (it is the controlling solid's solubility): ASSESS's dissolved metal is the same
+    return { target: t, elements, ...answers };
   });
 }

@@ -5,26 +5,9 @@
  * Optionally a header row first. Arguments are read and broadcast by broadcast.ts; samples come as single cells or
  * columns (one output row per input row).
  */
-import {
-  dissolvedAtPoint,
-  engineAtPoint,
-  getDatabase,
-  MAX_DISSOLVED,
-  pointBoundary,
-  waterMargin,
-  type PointEngine,
-} from "../chemistry";
-import { mapCells } from "./broadcast";
-import {
-  argumentError,
-  CellError,
-  CellInput,
-  CellOutput,
-  isBlank,
-  notAvailable,
-  toHostError,
-  valueError,
-} from "./cell-values";
+import { dissolvedAtPoint, engineAtPoint, getDatabase, MAX_DISSOLVED, pointBoundary, waterMargin } from "../chemistry";
+import { finish as finishCell, mapCells } from "./broadcast";
+import { argumentError, CellError, CellInput, CellOutput, isBlank, toHostError, valueError } from "./cell-values";
 import {
   DISSOLVED_UNITS,
   NO_BOUNDARY_ABOVE,
@@ -46,66 +29,85 @@ export const ASSESS_COLUMNS = [
   "controlling solid",
 ] as const;
 const WIDTH = ASSESS_COLUMNS.length;
-// Held in a module constant: in a sandboxed host each global lookup per cell is slow.
-const isFiniteNumber = Number.isFinite;
 
-/** The water a sample is evaluated in: ligand totals in mol/kg (0 = absent). */
-interface Water {
-  celsius: number;
-  activity: number;
-  carbonate: number;
-  chloride: number;
-  sulfur: number;
-  /** Total orthophosphate, mol/kg as P. */
-  phosphate: number;
-  ionicStrength: number;
-}
+/**
+ * The answers of a run of samples, column by column in ASSESS_COLUMNS order: `add` works one sample out with the
+ * same engine calls as the single functions (SPECIES, REGIME, BOUNDARY both ways, WATERMARGIN, DISSOLVED), sharing
+ * the engine's water and lines between them, and returns the sample's index in the columns.
+ */
+class AssessAnswers {
+  readonly columns: CellOutput[][] = ASSESS_COLUMNS.map(() => []);
+  private count = 0;
+  /** The dissolved unit's factor for the last element and unit (mol/kg → the unit: atomic weight). */
+  private factorElement = "";
+  private factorUnit = "";
+  private factor = NaN;
 
-/** Equilibrium dissolved metal (mol/kg) and the controlling solid (the point engine set to the row's water, as REDOX.DISSOLVED), or #N/A. */
-function dissolvedWithSolid(
-  engine: PointEngine,
-  pH: number,
-  E: number,
-): { total: number; controllingSolid: string } | CellError {
-  const { total, solid } = dissolvedAtPoint(engine, pH, E);
-  const controllingSolid = engine.table.species[solid].formula;
-  if (!(total <= MAX_DISSOLVED)) return noSolidForms(controllingSolid);
-  return { total, controllingSolid };
-}
+  /** `margin`: whether to work out the water margin (the command line has its own, with the overpotential). */
+  constructor(private readonly margin: boolean) {}
 
-/** The seven answers for one sample, in ASSESS_COLUMNS order (the same engine calls as the single functions). */
-function assessRow(element: string, pH: number, E: number, water: Water, unit: string): CellOutput[] {
-  const engine = engineAtPoint(
-    getDatabase(),
-    element,
-    water.celsius,
-    water.activity,
-    water.carbonate,
-    water.chloride,
-    water.sulfur,
-    water.phosphate,
-    water.ionicStrength,
-  );
-  if (typeof engine === "string") {
-    const error = temperatureError(engine); // e.g. above 100 °C without S° (temperature-range.ts)
-    return ASSESS_COLUMNS.map(() => error);
+  add(
+    element: string,
+    pH: number,
+    E: number,
+    celsius: number,
+    activity: number,
+    carbonate: number,
+    chloride: number,
+    sulfur: number,
+    phosphate: number,
+    ionicStrength: number,
+    unit: string,
+  ): number {
+    const k = this.count++;
+    const [species, regime, above, below, margin, dissolved, solid] = this.columns;
+    const engine = engineAtPoint(
+      getDatabase(),
+      element,
+      celsius,
+      activity,
+      carbonate,
+      chloride,
+      sulfur,
+      phosphate,
+      ionicStrength,
+    );
+    if (typeof engine === "string") {
+      const error = temperatureError(engine); // e.g. above 100 °C without S° (temperature-range.ts)
+      for (const column of this.columns) column[k] = error;
+      return k;
+    }
+    const dominant = engine.table.species[engine.dominant(pH, E)];
+    species[k] = dominant.formula;
+    regime[k] = dominant.regime;
+    above[k] = pointBoundary(engine, pH, E, 1)?.E ?? NO_BOUNDARY_ABOVE;
+    below[k] = pointBoundary(engine, pH, E, -1)?.E ?? NO_BOUNDARY_BELOW;
+    margin[k] = this.margin ? waterMargin(pH, E, celsius, 0) : "";
+    // the equilibrium dissolved metal and its controlling solid (the engine already holds this row's water)
+    const equilibrium = dissolvedAtPoint(engine, pH, E);
+    const formula = engine.table.species[equilibrium.solid].formula;
+    const soluble = equilibrium.total <= MAX_DISSOLVED;
+    dissolved[k] = soluble ? equilibrium.total * this.unitFactor(element, unit) : noSolidForms(formula);
+    solid[k] = soluble ? formula : noSolidForms(formula);
+    return k;
   }
-  const dominant = engine.table.species[engine.dominant(pH, E)];
-  const boundary = (direction: 1 | -1): CellOutput =>
-    pointBoundary(engine, pH, E, direction)?.E ?? (direction > 0 ? NO_BOUNDARY_ABOVE : NO_BOUNDARY_BELOW);
-  const above = boundary(1);
-  const below = boundary(-1);
-  const dissolved = dissolvedWithSolid(engine, pH, E); // the engine already holds this row's water
-  const weight = getDatabase().element(element)?.atomicWeight ?? NaN;
-  return [
-    dominant.formula,
-    dominant.regime,
-    above,
-    below,
-    waterMargin(pH, E, water.celsius, 0),
-    dissolved instanceof CellError ? dissolved : dissolved.total * DISSOLVED_UNITS[unit](weight),
-    dissolved instanceof CellError ? dissolved : dissolved.controllingSolid,
-  ];
+
+  /** mol/kg → `unit` for `element`, as REDOX.DISSOLVED converts (DISSOLVED_UNITS). */
+  private unitFactor(element: string, unit: string): number {
+    if (element !== this.factorElement || unit !== this.factorUnit) {
+      this.factorElement = element;
+      this.factorUnit = unit;
+      this.factor = DISSOLVED_UNITS[unit](getDatabase().element(element)?.atomicWeight ?? NaN);
+    }
+    return this.factor;
+  }
+}
+
+/** Works out every sample of `inputs` (the point arguments and the unit) into `answers`; the cells give each sample's index. */
+function assessCells(inputs: readonly CellInput[], answers: AssessAnswers): CellOutput[][] {
+  return mapCells([...POINT_ARGS, unitArg], inputs, (el, p, e, t, a, co3, cl, s, po4, i, u) =>
+    answers.add(el, p, e, t, a, co3, cl, s, po4, i, u),
+  );
 }
 
 /** Reads the header switch: omitted, blank, FALSE or 0 → no header; TRUE or 1 → header. */
@@ -154,37 +156,44 @@ export function assessAt(...args: [...PointArguments, unit?: CellInput, header?:
   const wantHeader = readHeader(header);
   const problem = wantHeader instanceof CellError ? wantHeader : widthProblem(inputs);
   if (problem) return [[toHostError(problem)]];
-  const rows: CellOutput[][] = [];
-  const cells = mapCells(
-    [...POINT_ARGS, unitArg],
-    inputs,
-    (el, p, e, t, a, co3, cl, s, po4, i, u) =>
-      rows.push(
-        assessRow(
-          el,
-          p,
-          e,
-          { celsius: t, activity: a, carbonate: co3, chloride: cl, sulfur: s, phosphate: po4, ionicStrength: i },
-          u,
-        ),
-      ) - 1,
-  );
+  const answers = new AssessAnswers(true);
+  const cells = assessCells(inputs, answers);
+  const { columns } = answers;
   // a blank row stays blank, a row with a bad cell shows its error in every column, others their seven answers
   const out = cells.map(([cell]) =>
-    typeof cell === "number" ? finishRow(rows[cell]) : new Array<CellOutput>(WIDTH).fill(cell),
+    typeof cell === "number"
+      ? columns.map((column) => finishCell(column[cell]))
+      : new Array<CellOutput>(WIDTH).fill(cell),
   );
   return wantHeader ? [headerRow(unit), ...out] : out;
 }
 
-/** The row's answers as the host shows them, in place (a copy per row would be one more array per sample to collect). */
-function finishRow(row: CellOutput[]): CellOutput[] {
-  for (let i = 0; i < row.length; i++) row[i] = finishCell(row[i]);
-  return row;
+/** ASSESS's answers that the command line writes, one column each, one cell per sample. */
+export interface AssessedColumns {
+  readonly species: CellOutput[];
+  readonly regime: CellOutput[];
+  readonly above: CellOutput[];
+  readonly below: CellOutput[];
+  readonly dissolved: CellOutput[];
 }
 
-function finishCell(value: CellOutput): CellOutput {
-  if (value instanceof CellError) return toHostError(value);
-  if (typeof value === "number" && !isFiniteNumber(value))
-    return toHostError(notAvailable("no finite answer exists at this input"));
-  return value;
+/**
+ * ASSESS for a batch given as rows (1 × n ranges, the command line's batches): the species, regime, boundaries and
+ * dissolved metal of each sample as columns of n cells, without the water margin (the command line works out its own,
+ * with the overpotential). A one-cell answer (an argument's error for the whole batch) fills all n.
+ */
+export function assessColumns(n: number, ...args: [...PointArguments, unit?: CellInput]): AssessedColumns {
+  const answers = new AssessAnswers(false);
+  const result = assessCells(args, answers);
+  const [species, regime, above, below, , dissolved] = answers.columns;
+  const cells = result.length === 1 && result[0].length === n ? result[0] : new Array<CellOutput>(n).fill(result[0][0]);
+  const pick = (column: CellOutput[]) =>
+    cells.map((cell) => (typeof cell === "number" ? finishCell(column[cell]) : cell));
+  return {
+    species: pick(species),
+    regime: pick(regime),
+    above: pick(above),
+    below: pick(below),
+    dissolved: pick(dissolved),
+  };
 }

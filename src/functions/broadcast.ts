@@ -370,7 +370,8 @@ function safeCompute<A extends unknown[]>(compute: (...args: A) => CellOutput, a
   }
 }
 
-function finish(value: CellOutput): CellOutput {
+/** A computed cell as the host shows it: CellError → the host's error, a non-finite number → #N/A. */
+export function finish(value: CellOutput): CellOutput {
   if (value instanceof CellError) return toHostError(value);
   if (typeof value === "number" && !isFiniteNumber(value))
     return toHostError(notAvailable("no finite answer exists at this input"));
