@@ -199,6 +199,18 @@ describe("valid input gives numbers of the broadcast shape", () => {
     );
   });
 
+  it("FROMSHE undoes TOSHE for the pressure-balanced electrode over its 25–275 °C, and refuses outside it", () => {
+    const reading2 = fc.double({ min: -2, max: 2, noNaN: true });
+    fc.assert(
+      fc.property(reading2, fc.double({ min: 25, max: 275, noNaN: true }), (reading, t) => {
+        const she = toshe([[reading]], [["AgCl-EPB"]], [[t]])[0][0] as number;
+        expect(typeof she).toBe("number");
+        expect(fromshe([[she]], [["AgCl-EPB"]], [[t]])[0][0] as number).toBeCloseTo(reading, 9);
+      }),
+    );
+    for (const t of [20, 280]) expect(typeof toshe([[0.1]], [["AgCl-EPB"]], [[t]])[0][0]).not.toBe("number");
+  });
+
   it("EH undoes PE at any temperature", () => {
     fc.assert(
       fc.property(volts, fc.double({ min: 0, max: 100, noNaN: true }), (e, t) => {
