@@ -37,12 +37,13 @@ function speciesPast(engine: PointEngine, pH: number, E: number, d: 1 | -1): num
 
 /** Among the species tied with `first` on the last lines, the one that stays lowest going in direction d. */
 function pastOnLines(engine: PointEngine, first: number, d: 1 | -1): number {
-  const { lineG, lineSlope } = engine;
+  const { lineG, lineSlope, lineSpecies, lineCount } = engine;
   if (first === engine.lineLowest && engine.lineGap > TIE) return first; // no other line within TIE of it
   const gFirst = lineG[first];
   let best = first;
   let bestSlope = d * lineSlope[first];
-  for (let i = 0; i < lineG.length; i++) {
+  for (let k = 0; k < lineCount; k++) {
+    const i = lineSpecies[k];
     if (i === best || lineG[i] - gFirst > TIE) continue;
     const s = d * lineSlope[i];
     if (s < bestSlope - TIE || (abs(s - bestSlope) <= TIE && i < best)) {
@@ -58,13 +59,14 @@ function pastOnLines(engine: PointEngine, first: number, d: 1 | -1): number {
  * Reads the lines of the engine's last linesAt (speciesPast at the same point).
  */
 function tangentCrossing(engine: PointEngine, here: number, d: 1 | -1): { distance: number; next: number } {
-  const { lineG, lineSlope } = engine;
+  const { lineG, lineSlope, lineSpecies, lineCount } = engine;
   const gHere = lineG[here];
   const sHere = d * lineSlope[here];
   let distance = INF;
   let next = -1;
   let nextSlope = INF;
-  for (let j = 0; j < lineG.length; j++) {
+  for (let k = 0; k < lineCount; k++) {
+    const j = lineSpecies[k];
     if (j === here || lineG[j] === INF) continue;
     const sj = d * lineSlope[j];
     if (sj >= sHere) continue; // never overtakes in this direction

@@ -28,11 +28,12 @@ export interface DissolvedAnswer {
 /** The controlling solid: lowest g among the solids available in the water (ligands at the point); leaves the unit lines. */
 export function controllingSolid(engine: PointEngine, pH: number, E: number): number {
   engine.linesAt(pH, E, true);
-  const { lineG } = engine;
+  const { lineG, lineSpecies, lineCount } = engine;
   const dissolved = engine.table.dissolved;
   let best = -1;
   let bestG = INF;
-  for (let i = 0, n = lineG.length; i < n; i++) {
+  for (let k = 0; k < lineCount; k++) {
+    const i = lineSpecies[k];
     if (!dissolved[i] && lineG[i] < bestG) {
       bestG = lineG[i];
       best = i;
@@ -44,13 +45,14 @@ export function controllingSolid(engine: PointEngine, pH: number, E: number): nu
 /** Total dissolved metal in equilibrium with the controlling solid at (pH, E), in the engine's current water. */
 export function dissolvedAtPoint(engine: PointEngine, pH: number, E: number): DissolvedAnswer {
   const solid = controllingSolid(engine, pH, E);
-  const { lineG } = engine;
+  const { lineG, lineSpecies, lineCount } = engine;
   const gSolid = lineG[solid];
   const { dissolved, x } = engine.table;
   const f = engine.fOverRT;
   let total = 0;
-  for (let i = 0, n = lineG.length; i < n; i++) {
-    if (!dissolved[i] || lineG[i] === INF) continue; // +∞: the water lacks a ligand the species needs
+  for (let k = 0; k < lineCount; k++) {
+    const i = lineSpecies[k];
+    if (!dissolved[i] || lineG[i] === INF) continue; // a line at +∞ (a guard: none expected where the water allows it)
     total += x[i] * exp(x[i] * f * (gSolid - lineG[i]) - engine.lnGamma(i));
   }
   return { total, solid };

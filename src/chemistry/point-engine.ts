@@ -91,6 +91,14 @@ export class PointEngine {
   /** linesAt's answers: g and dg/dE per species, the lowest line and its gap to the next lowest (V). */
   readonly lineG: Float64Array;
   readonly lineSlope: Float64Array;
+  /**
+   * The species the current water allows (its ligands present), ascending, in lineSpecies[0 … lineCount − 1]: the
+   * only lines linesAt draws and its readers need (the others stay +∞ with slope 0 until the ligands change).
+   */
+  readonly lineSpecies: Int32Array;
+  lineCount = 0;
+  /** The ligands (present bits) lineSpecies was made for; −1 before the first lines. */
+  private linesPresent = -1;
   lineLowest = -1;
   lineGap = 0;
   /** Where the lines were last drawn (NaN: not reusable), at unit activity or not, and in which water. */
@@ -148,6 +156,7 @@ export class PointEngine {
     this.bounds = new Float64Array(n);
     this.lineG = new Float64Array(n);
     this.lineSlope = new Float64Array(n);
+    this.lineSpecies = new Int32Array(n);
     const t = this.table;
     const per = (column: ArrayLike<number>, scale = 1) => Float64Array.from(t.x, (x, i) => (column[i] * scale) / x);
     this.g0PerAtom = per(t.g0, 1 / FARADAY);
@@ -350,23 +359,19 @@ export class PointEngine {
       return;
     this.ligandsAt(pH, E);
     this.ensureColumns();
+    if (this.present !== this.linesPresent) this.allowLines();
     const t = this.table;
-    const { b, c, r, lineG, lineSlope } = this;
+    const { b, c, r, lineG, lineSlope, lineSpecies, lineCount } = this;
     const a = unit ? this.aUnit : this.aThreshold;
     const { needs, sulfur } = t;
-    const absent = ~this.present;
     const { lnC, lnS, lnCl, lnP } = this;
     const sulfurSlope = this.sulfurSlope;
     let lowest = -1;
     let gLowest = INF;
     let gNext = INF;
-    for (let i = 0, n = a.length; i < n; i++) {
+    for (let k = 0; k < lineCount; k++) {
+      const i = lineSpecies[k];
       const need = needs[i];
-      if (need & absent) {
-        lineG[i] = INF;
-        lineSlope[i] = 0;
-        continue;
-      }
       let g = a[i] + b[i] * pH + c[i] * E;
       if (need) g += r[i] * (t.carbonate[i] * lnC + sulfur[i] * lnS + t.chloride[i] * lnCl + t.phosphate[i] * lnP);
       lineG[i] = g;
@@ -383,6 +388,21 @@ export class PointEngine {
     this.linesE = E;
     this.linesUnit = unit;
     this.linesStamp = this.waterStamp;
+  }
+
+  /** lineSpecies for the current water: the species whose ligands it holds; the others' lines +∞ with slope 0. */
+  private allowLines(): void {
+    const { needs } = this.table;
+    const absent = ~this.present;
+    let count = 0;
+    for (let i = 0; i < needs.length; i++) {
+      if (needs[i] & absent) {
+        this.lineG[i] = INF;
+        this.lineSlope[i] = 0;
+      } else this.lineSpecies[count++] = i;
+    }
+    this.lineCount = count;
+    this.linesPresent = this.present;
   }
 
   /** dg_i/dE at the last point (the sulfur term bends it). */
