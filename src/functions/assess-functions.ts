@@ -178,15 +178,22 @@ export interface AssessedColumns {
 }
 
 /**
- * ASSESS for a batch given as rows (1 × n ranges, the command line's batches): the species, regime, boundaries and
- * dissolved metal of each sample as columns of n cells, without the water margin (the command line works out its own,
- * with the overpotential). A one-cell answer (an argument's error for the whole batch) fills all n.
+ * ASSESS for a batch of n samples given as rows (1 × n ranges, the command line's batches) or as columns: the
+ * species, regime, boundaries and dissolved metal of each sample as columns of n cells, without the water margin (the
+ * command line works out its own, with the overpotential). A one-cell answer (an argument's error for the whole
+ * batch) fills all n.
  */
 export function assessColumns(n: number, ...args: [...PointArguments, unit?: CellInput]): AssessedColumns {
   const answers = new AssessAnswers(false);
   const result = assessCells(args, answers);
   const [species, regime, above, below, , dissolved] = answers.columns;
-  const cells = result.length === 1 && result[0].length === n ? result[0] : new Array<CellOutput>(n).fill(result[0][0]);
+  // one cell per sample from a row (1 × n) or a column (n × 1) of them; a single cell fills all n
+  const cells =
+    result.length === 1 && result[0].length === n
+      ? result[0]
+      : result.length === n && n > 1
+        ? result.map((row) => row[0])
+        : new Array<CellOutput>(n).fill(result[0][0]);
   const pick = (column: CellOutput[]) =>
     cells.map((cell) => (typeof cell === "number" ? finishCell(column[cell]) : cell));
   return {
