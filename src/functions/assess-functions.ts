@@ -5,7 +5,15 @@
  * Optionally a header row first. Arguments are read and broadcast by broadcast.ts; samples come as single cells or
  * columns (one output row per input row).
  */
-import { dissolvedAtPoint, engineAtPoint, getDatabase, MAX_DISSOLVED, pointBoundary, waterMargin } from "../chemistry";
+import {
+  dissolvedAtPoint,
+  engineAtPoint,
+  getDatabase,
+  MAX_DISSOLVED,
+  pointBoundary,
+  waterMargin,
+  type PointEngine,
+} from "../chemistry";
 import { finish as finishCell, mapCells } from "./broadcast";
 import { argumentError, CellError, CellInput, CellOutput, isBlank, toHostError, valueError } from "./cell-values";
 import {
@@ -46,32 +54,10 @@ class AssessAnswers {
   /** `margin`: whether to work out the water margin (the command line has its own, with the overpotential). */
   constructor(private readonly margin: boolean) {}
 
-  add(
-    element: string,
-    pH: number,
-    E: number,
-    celsius: number,
-    activity: number,
-    carbonate: number,
-    chloride: number,
-    sulfur: number,
-    phosphate: number,
-    ionicStrength: number,
-    unit: string,
-  ): number {
+  /** Adds the sample at (pH, E) in the water `engine` was set to (or the reason it was refused); returns its index. */
+  add(element: string, pH: number, E: number, celsius: number, unit: string, engine: PointEngine | string): number {
     const k = this.count++;
     const [species, regime, above, below, margin, dissolved, solid] = this.columns;
-    const engine = engineAtPoint(
-      getDatabase(),
-      element,
-      celsius,
-      activity,
-      carbonate,
-      chloride,
-      sulfur,
-      phosphate,
-      ionicStrength,
-    );
     if (typeof engine === "string") {
       const error = temperatureError(engine); // e.g. above 100 °C without S° (temperature-range.ts)
       for (const column of this.columns) column[k] = error;
@@ -106,7 +92,7 @@ class AssessAnswers {
 /** Works out every sample of `inputs` (the point arguments and the unit) into `answers`; the cells give each sample's index. */
 function assessCells(inputs: readonly CellInput[], answers: AssessAnswers): CellOutput[][] {
   return mapCells([...POINT_ARGS, unitArg], inputs, (el, p, e, t, a, co3, cl, s, po4, i, u) =>
-    answers.add(el, p, e, t, a, co3, cl, s, po4, i, u),
+    answers.add(el, p, e, t, u, engineAtPoint(getDatabase(), el, t, a, co3, cl, s, po4, i)),
   );
 }
 
