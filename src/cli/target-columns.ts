@@ -1,8 +1,8 @@
 /**
  * One metal's result columns for a batch: the answers of REDOX.SPECIES, REGIME, BOUNDARY above and below and
  * DISSOLVED, from one REDOX.ASSESS call per metal over the whole batch (as a worksheet range would call it), which
- * works each row out once instead of once per function (tests/properties/kept-lines.test.ts checks that ASSESS and
- * the single functions agree).
+ * works each row out once instead of once per function (tests/unit/assess-columns.test.ts checks its columns against
+ * the single functions, row by row).
  */
 import type { CellInput, CellOutput, CellScalar } from "../functions";
 import { asRange, textColumn } from "./batch-cells";

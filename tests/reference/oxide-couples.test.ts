@@ -25,7 +25,7 @@ const SHIFT_TOLERANCE = 0.005;
 const checks = loadReferenceFixture(
   new URL("./fixtures/high-temperature/oxide-couples.json", import.meta.url),
   z.strictObject({ oxidized: z.string(), reduced: z.string(), celsius: z.number() }),
-  { ceiling: () => 0.05 }, // the 50 mV within which published 25–300 °C lines are compared (issue's method)
+  { ceiling: () => 0.05 }, // the largest tolerance allowed: 50 mV, as for published 25–300 °C lines where sources agree
 );
 const at25 = (oxidized: string, reduced: string) =>
   checks.find((c) => c.inputs.oxidized === oxidized && c.inputs.reduced === reduced && c.inputs.celsius === 25)!;
