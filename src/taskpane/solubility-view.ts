@@ -17,6 +17,13 @@ import { $, input, select } from "./pane-dom";
 /** Default threshold, µg/L: the lead parametric value of Directive (EU) 2020/2184 (10 µg/L until 2036). */
 export const DEFAULT_THRESHOLD = 10;
 
+/**
+ * At most this many samples are listed to choose from; the others are chosen on the diagram (Enter or a click on the
+ * marker), which adds them to the list. A list of every sample of a 10 000-row log was unusable to scroll and cost
+ * the pane a layout of every entry on each drawing.
+ */
+export const LISTED_SAMPLES = 300;
+
 /** What the chart is drawn for besides the sample: metal, its name, the diagram's pH range and temperature. */
 export interface ChartContext {
   readonly metal: string;
@@ -74,21 +81,32 @@ export class SolubilityView {
     this.render();
   }
 
-  /** The sample chosen in the diagram (Enter or a click on its marker). */
+  /** The sample chosen in the diagram (Enter or a click on its marker); listed first if the list did not hold it. */
   follow(sample: PlottedSample): void {
+    if (!this.samples.some((s) => s.row === sample.row)) return;
     const list = select("solubility-sample");
-    if (![...list.options].some((o) => o.value === String(sample.row))) return;
-    list.value = String(sample.row);
+    const value = String(sample.row);
+    if (![...list.options].some((o) => o.value === value)) list.prepend(sampleOption(sample));
+    list.value = value;
     this.render();
   }
 
+  /** The first LISTED_SAMPLES samples (and the chosen one, kept), then a line saying how to reach the others. */
   private fillList(samples: readonly PlottedSample[]): void {
     const list = select("solubility-sample");
     const keep = list.value;
-    list.replaceChildren(
-      ...samples.map((s) => new Option(`${s.id || `row ${s.row}`} · pH ${s.pH.toFixed(2)}`, String(s.row))),
-    );
-    if (samples.some((s) => String(s.row) === keep)) list.value = keep;
+    const listed = samples.slice(0, LISTED_SAMPLES);
+    const kept = samples.find((s) => String(s.row) === keep);
+    if (kept && !listed.includes(kept)) listed.unshift(kept);
+    const options = listed.map(sampleOption);
+    const more = samples.length - listed.length;
+    if (more > 0) {
+      const note = new Option(`… ${more.toLocaleString("en")} more: choose them on the diagram`, "");
+      note.disabled = true;
+      options.push(note);
+    }
+    list.replaceChildren(...options);
+    if (kept) list.value = keep;
   }
 
   private chosen(): PlottedSample | undefined {
@@ -137,4 +155,9 @@ export class SolubilityView {
     this.container.dataset.drawnWidth = String(this.width);
     $("solubility-summary").textContent = chart.summary;
   }
+}
+
+/** A sample's entry in the list: its id (or row) and pH. */
+function sampleOption(s: PlottedSample): HTMLOptionElement {
+  return new Option(`${s.id || `row ${s.row}`} · pH ${s.pH.toFixed(2)}`, String(s.row));
 }

@@ -3,7 +3,8 @@
  * the chosen sample's potential) appears for lead and for copper, fits the pane, has no text over other text, is
  * labelled for screen readers and reachable by keyboard; its marker is the row's REDOX.DISSOLVED (the worksheet
  * function called in the test as a sheet chains it: REDOX.TOSHE of the reading, REDOX.DIC of the alkalinity);
- * typing a threshold moves the line to its height on the log axis. Saves a screenshot under test-results/.
+ * typing a threshold moves the line to its height on the log axis; a long log lists its first samples and adds one
+ * chosen on the diagram. Saves a screenshot under test-results/.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { copyFileSync, mkdirSync } from "fs";
@@ -13,6 +14,7 @@ import { OpenPane, openStandalonePane, ROOT } from "../../test-support/serve-dis
 import { tabStops } from "../../test-support/layout-probe";
 import { demoRowDissolved } from "../../test-support/demo-dissolved";
 import { getDatabase } from "../../src/chemistry/database";
+import { LISTED_SAMPLES } from "../../src/taskpane/solubility-view";
 
 const WIDTH = 350;
 
@@ -201,5 +203,29 @@ describe(`the solubility chart in the pane ${WIDTH} px wide with the demo data`,
         problems.push(`${metal}: ${m.overlaps.join("; ")} ${m.outside} outside, right ${m.svg.right}`);
     }
     expect(problems).toEqual([]);
+  });
+
+  it(`lists the first ${LISTED_SAMPLES} samples of a long log, says how to reach the others, and adds one chosen on the diagram`, async () => {
+    // an invented log of 400 rows, pH rising with the row, so that the last marker (End) is the last row
+    const rows = Array.from({ length: 400 }, (_, i) => `S${i + 1},${(5 + i * 0.01).toFixed(2)},150`);
+    await page.click("#paste-details summary");
+    await page.fill("#paste-input", ["id,pH,ORP (mV) vs AgCl sat", ...rows].join("\n"));
+    await page.click("#draw-pasted");
+    await page.waitForFunction(() => (document.querySelector("#solubility-sample") as HTMLSelectElement).length > 300);
+    const list = () =>
+      page.$eval("#solubility-sample", (s) =>
+        [...(s as HTMLSelectElement).options].map((o) => ({ text: o.text, disabled: o.disabled })),
+      );
+    const before = await list();
+    expect(before).toHaveLength(LISTED_SAMPLES + 1);
+    expect(before[0].text).toMatch(/^S1 · pH 5\.00$/);
+    expect(before[LISTED_SAMPLES]).toEqual({ text: "… 100 more: choose them on the diagram", disabled: true });
+    await page.focus("#diagram .rc-samples");
+    await page.keyboard.press("End");
+    await page.keyboard.press("Enter");
+    await expect.poll(chosenId).toBe("S400");
+    const after = await list();
+    expect(after).toHaveLength(LISTED_SAMPLES + 2);
+    expect(after[0].text).toMatch(/^S400 · pH 8\.99$/);
   });
 });
