@@ -211,7 +211,10 @@ describe(`the solubility chart in the pane ${WIDTH} px wide with the demo data`,
     await page.click("#paste-details summary");
     await page.fill("#paste-input", ["id,pH,ORP (mV) vs AgCl sat", ...rows].join("\n"));
     await page.click("#draw-pasted");
-    await page.waitForFunction(() => (document.querySelector("#solubility-sample") as HTMLSelectElement).length > 300);
+    await page.waitForFunction(
+      (listed) => (document.querySelector("#solubility-sample") as HTMLSelectElement).length > listed,
+      LISTED_SAMPLES,
+    );
     const list = () =>
       page.$eval("#solubility-sample", (s) =>
         [...(s as HTMLSelectElement).options].map((o) => ({ text: o.text, disabled: o.disabled })),
