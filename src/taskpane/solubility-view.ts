@@ -20,7 +20,7 @@ export const DEFAULT_THRESHOLD = 10;
 /**
  * At most this many samples are listed to choose from; the others are chosen on the diagram (Enter or a click on the
  * marker), which adds them to the list. A list of every sample of a 10 000-row log was unusable to scroll and cost
- * the pane a layout of every entry on each drawing.
+ * the pane a style and layout of every entry whenever the drawn rows changed.
  */
 export const LISTED_SAMPLES = 300;
 
