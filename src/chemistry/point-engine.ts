@@ -26,6 +26,7 @@ import {
   speciesTable,
 } from "./species-tables";
 import { correspondenceBasis, NO_CORRESPONDENCE } from "./criss-cobble";
+import { SpeciesPruning } from "./species-pruning";
 
 // Built-ins held in module constants: in a sandboxed host each global lookup per row is slow.
 const { log } = Math;
@@ -40,6 +41,7 @@ const SPECIATED = NEEDS_CARBONATE | NEEDS_SULFUR | NEEDS_PHOSPHATE;
 const BOUND_MARGIN = 1e-9;
 /** Coefficients per species in PointEngine.directRow (11 used, padded to 12). */
 const DIRECT_WIDTH = 12;
+const DIRECT_FEATURES = 11;
 
 /** The water of a point: temperature (°C), threshold molality of dissolved metal, ligand totals (mol/kg), I. */
 export interface PointWater {
@@ -77,6 +79,8 @@ export class PointEngine {
   private readonly directRow: Float64Array;
   /** The row features: 1, dT, shape, k·pH, E, (RT/F)·(ln threshold, ln γ1, ln a of carbonate, sulfur, chloride, P). */
   private readonly feature = new Float64Array(DIRECT_WIDTH);
+  /** Per set of ligands present (bits), the species its rows need evaluate (species-pruning.ts), made when first met. */
+  private readonly pruning: (SpeciesPruning | undefined)[] = [];
   /** ligandArgmin's scratch, per candidate (a species speciated only if it could win): its index and bound. */
   private readonly candidates: Int32Array;
   private readonly bounds: Float64Array;
@@ -415,6 +419,7 @@ export class PointEngine {
    * Index of the dominant species at (pH, E): the exact argmin of g (ties to the lower index). The speciation of a
    * ligand (an exp and a log per form) is worked out only when a species containing it could win: its g is at least
    * the bound with the ligand's pivot at its total, a_pivot ≤ total (α ≤ 1, γ ≤ 1; the ligand is consumed, ν ≤ 0).
+   * A row with a water of its own evaluates only the species not beaten everywhere in its rows' range (pruning).
    */
   dominant(pH: number, E: number): number {
     const direct = this.due !== 0 && this.repeats === 0 && !this.correspondence; // a row with its own T, threshold or I
@@ -454,12 +459,13 @@ export class PointEngine {
     const { needs } = this.table;
     const { directRow, feature } = this;
     this.directFeatures(pH, E);
-    const absent = ~this.present;
+    const pruning = this.admitted();
+    const list = pruning.list;
     let best = -1;
     let bestG = INF;
-    for (let i = 0, n = needs.length; i < n; i++) {
+    for (let m = 0, n = pruning.count; m < n; m++) {
+      const i = list[m];
       const need = needs[i];
-      if (need & absent) continue;
       const g = rowDot(directRow, i * DIRECT_WIDTH, feature, need !== 0);
       if (g < bestG) {
         bestG = g;
@@ -481,16 +487,18 @@ export class PointEngine {
     const { needs, carbonate, sulfur, chloride, phosphate } = t;
     const rtOverF = 1 / this.f;
     const { boundLnC, boundLnS, boundLnP } = this;
-    const absent = ~this.present;
     const lnCl = this.lnChloride;
-    if (direct) this.directFeatures(pH, E);
+    this.directFeatures(pH, E);
+    const pruning = this.correspondence ? this.availableHere() : this.admitted();
+    const list = this.correspondence ? pruning.all : pruning.list;
+    const listed = this.correspondence ? pruning.all.length : pruning.count;
     let best = -1;
     let bestG = INF;
     let count = 0;
     let reach = 0; // the ligands of the candidates whose bound does not yet lose to the best
-    for (let i = 0, n = needs.length; i < n; i++) {
+    for (let q = 0; q < listed; q++) {
+      const i = list[q];
       const need = needs[i];
-      if (need & absent) continue;
       let g: number;
       if (direct) g = rowDot(directRow, i * DIRECT_WIDTH, feature, need !== 0);
       else {
@@ -530,6 +538,28 @@ export class PointEngine {
     return best;
   }
 
+  /** The pruning of the current water's ligand set, with this row's features admitted (constant ΔCp°r rows only). */
+  private admitted(): SpeciesPruning {
+    const pruning = this.availableHere();
+    pruning.admit(this.feature);
+    return pruning;
+  }
+
+  /** The pruning of the current water's ligand set (its `all`: the species the water allows). */
+  private availableHere(): SpeciesPruning {
+    const present = this.present;
+    let pruning = this.pruning[present];
+    if (!pruning) {
+      const { needs } = this.table;
+      const available: number[] = [];
+      for (let i = 0; i < needs.length; i++) if ((needs[i] & ~present) === 0) available.push(i);
+      const exact = available.map((i) => (needs[i] & SPECIATED) === 0);
+      pruning = new SpeciesPruning(this.directRow, DIRECT_WIDTH, DIRECT_FEATURES, available, exact);
+      this.pruning[present] = pruning;
+    }
+    return pruning;
+  }
+
   /** The row features of directRow at (pH, E) for the current water, the ligands at their bounds (chloride exact). */
   private directFeatures(pH: number, E: number): void {
     const f = this.feature;
@@ -545,6 +575,11 @@ export class PointEngine {
     f[8] = rtOverF * this.boundLnS;
     f[9] = rtOverF * this.lnChloride;
     f[10] = rtOverF * this.boundLnP;
+  }
+
+  /** How many species a row of the current ligand set evaluates at and below 100 °C (the rest cannot win: pruning). */
+  get evaluatedSpecies(): number {
+    return this.pruning[this.present]?.count ?? this.size;
   }
 
   /** F/RT at the current temperature. */
