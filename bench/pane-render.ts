@@ -1,8 +1,9 @@
 /**
  * Task pane drawing figure (DEVELOPERS.md budget: 10 k samples < 0.5 s, with a water of their own per row too): every sample's
  * answer through the worksheet functions as the pane computes it (src/taskpane/sample-answers.ts), then the whole
- * SVG as text (src/diagram), in Node. The browser's own parse and
- * paint of that SVG is measured by bench/pane-browser.ts.
+ * SVG as text (src/diagram), in Node: the SVG the pane exports, every sample a marker in it (on screen the pane paints
+ * the markers of more than 2 000 samples on a canvas instead). The pane's own drawing in the browser, from Draw to
+ * paint, is measured by bench/pane-browser.ts.
  *
  *   npx tsx bench/pane-render.ts          prints the figure
  *   import { benchPaneRender }            returns BenchRow[] for bench/index.ts
@@ -94,7 +95,7 @@ export function benchPaneRender(count = 10_000): BenchRow[] {
       if (r.ms < best.ms) best = r;
     }
     return {
-      name: `(f${ownWater ? "′" : ""}) pane: ${count.toLocaleString("en")} samples${ownWater ? ", each with its own temperature and alkalinity," : ""} → answers (worksheet functions) and SVG text (Node)`,
+      name: `(f${ownWater ? "′" : ""}) pane: ${count.toLocaleString("en")} samples${ownWater ? ", each with its own temperature and alkalinity," : ""} → answers (worksheet functions) and the exported SVG with every marker (Node)`,
       figure: `${best.ms.toFixed(1)} ms (${(best.bytes / 1e6).toFixed(1)} MB SVG)`,
       target: "< 500 ms",
       met: best.ms < 500,

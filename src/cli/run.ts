@@ -19,6 +19,7 @@ import { writeDiagrams } from "./run-diagrams";
 import { SafeOutput, sameFile, type StreamOpener } from "./safe-output";
 import { summaryText, type RunSummary } from "./summary";
 import { ionicSummary } from "./ionic";
+import { waterSummary } from "./water";
 import { version } from "./version";
 import { worksheetFunctions, WorksheetFunctions } from "./worksheet";
 
@@ -204,10 +205,12 @@ async function finish(
     regimes: run.regimes,
     svgFiles,
     header: outputHeader(plan),
-    notes:
-      plan.ionic && (plan.ionic.kind !== "ideal" || plan.ionic.ignored.length > 0)
+    notes: [
+      waterSummary(plan.ligands, plan.headers, options),
+      ...(plan.ionic && (plan.ionic.kind !== "ideal" || plan.ionic.ignored.length > 0)
         ? [ionicSummary(plan.ionic, plan.headers)]
-        : [],
+        : []),
+    ],
   };
   if (!options.quiet) (options.output === "-" ? err : streams.stdout).write(summaryText(summary));
   if (diagramFailure !== null) {

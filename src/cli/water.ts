@@ -144,3 +144,21 @@ export function planWater(
   if (clash !== undefined) throw new UsageError(`the column "${headers[clash]}" is named for two ligands`);
   return inputs;
 }
+
+/**
+ * One summary line on the water every row was answered in: the columns feeding each ligand, or pure water and why
+ * (a log whose water columns have headers the program does not know is answered as pure water: say so).
+ */
+export function waterSummary(ligands: readonly LigandInput[], headers: readonly string[], options: CliOptions): string {
+  if (options.pureWater) return "water: pure water on every row (--pure-water; the water columns are ignored)";
+  if (ligands.length === 0)
+    return (
+      "water: pure water on every row; no alkalinity, DIC, chloride, sulfate or orthophosphate column was found by " +
+      "its header (name one with --alkalinity-column, --dic-column, --chloride-column, --sulfur-column or --phosphate-column)"
+    );
+  const parts = ligands.map((l) => {
+    const how = l.kind === "alkalinity" ? ", through REDOX.DIC with the row's pH and temperature" : "";
+    return `${l.ligand} from "${headers[l.column]}" (${l.unit}${how})`;
+  });
+  return `water: ${parts.join("; ")}`;
+}

@@ -175,3 +175,27 @@ describe("a blank temperature is a missing measurement", () => {
     expect(resultsOf(defaulted.rows[1])).toEqual(resultsOf(defaulted.rows[0]));
   });
 });
+
+describe("the summary says which water every row was answered in", () => {
+  const known = "id,pH,ORP_mV_AgCl_sat,temp_C,Alkalinity (mg/L CaCO3),Chloride (mg/L)\nA,7.2,215,12.5,120,25\n";
+  // a German lab's headers: the program does not know them, so the rows are pure water, and the summary must say so
+  const unknown = "Probe,pH,ORP_mV_AgCl_sat,temp_C,Alkalinität (mg/L CaCO3),Chlorid (mg/L)\nA,7.2,215,12.5,120,25\n";
+
+  it("names the columns feeding each ligand, and says pure water when none was found or --pure-water is given", async () => {
+    const water = async (name: string, text: string, args: string[] = []) =>
+      (await results(name, text, ["--metal", "Fe", ...args])).r.summary?.notes?.find((n) => n.startsWith("water:"));
+    expect(await water("known.csv", known)).toBe(
+      'water: carbonate from "Alkalinity (mg/L CaCO3)" (alkalinity in mg/L as CaCO3, through REDOX.DIC with the ' +
+        'row\'s pH and temperature); chloride from "Chloride (mg/L)" (chloride in mg/L)',
+    );
+    expect(await water("unknown.csv", unknown)).toMatch(
+      /^water: pure water on every row; no alkalinity, DIC, chloride/,
+    );
+    expect(await water("named.csv", unknown, ["--alkalinity-column", "5"])).toMatch(
+      /^water: carbonate from "Alkalinität \(mg\/L CaCO3\)"/,
+    );
+    expect(await water("pure.csv", known, ["--pure-water"])).toBe(
+      "water: pure water on every row (--pure-water; the water columns are ignored)",
+    );
+  });
+});
