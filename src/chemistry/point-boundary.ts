@@ -144,7 +144,7 @@ function bisect(
       if (d * (outside - estimate) <= half && d * (estimate - inside) > 0) {
         // the root sits at the outside end (a walk step aimed there): one test just inside it closes the bracket
         const near = outside - d * 0.9 * BOUNDARY_TOLERANCE;
-        const s = engine.dominant(pH, near);
+        const s = engine.dominant(pH, near, true);
         if (s === here) inside = near;
         else {
           outside = near;
@@ -154,7 +154,7 @@ function bisect(
       }
       if (d * (estimate - inside) > half && d * (outside - estimate) > half) {
         const before = estimate - d * half;
-        const s = engine.dominant(pH, before);
+        const s = engine.dominant(pH, before, true);
         if (s !== here) {
           outside = before;
           other = s;
@@ -165,7 +165,7 @@ function bisect(
         if (d * (outside - middle) <= 0) continue;
       }
     }
-    const s = engine.dominant(pH, middle);
+    const s = engine.dominant(pH, middle, true);
     if (s === here) inside = middle;
     else {
       outside = middle;

@@ -81,6 +81,8 @@ export class PointEngine {
   private readonly feature = new Float64Array(DIRECT_WIDTH);
   /** Per set of ligands present (bits), the species its rows need evaluate (species-pruning.ts), made when first met. */
   private readonly pruning: (SpeciesPruning | undefined)[] = [];
+  /** How many species of its list the last point evaluated (rowSpecies). */
+  private listed = 0;
   /** ligandArgmin's scratch, per candidate (a species speciated only if it could win): its index and bound. */
   private readonly candidates: Int32Array;
   private readonly bounds: Float64Array;
@@ -419,14 +421,15 @@ export class PointEngine {
    * Index of the dominant species at (pH, E): the exact argmin of g (ties to the lower index). The speciation of a
    * ligand (an exp and a log per form) is worked out only when a species containing it could win: its g is at least
    * the bound with the ligand's pivot at its total, a_pivot ≤ total (α ≤ 1, γ ≤ 1; the ligand is consumed, ν ≤ 0).
-   * A row with a water of its own evaluates only the species not beaten everywhere in its rows' range (pruning).
+   * A row with a water of its own evaluates only the species not beaten everywhere in its rows' range (pruning);
+   * a `probe` (a point searched along a boundary or across a diagram, not a row) does not widen that range.
    */
-  dominant(pH: number, E: number): number {
+  dominant(pH: number, E: number, probe = false): number {
     const direct = this.due !== 0 && this.repeats === 0 && !this.correspondence; // a row with its own T, threshold or I
     if (!direct) this.ensureColumns();
     // no ligand to speciate (pure water, chloride only): one pass
-    if (!(this.present & SPECIATED)) return direct ? this.directArgmin(pH, E) : this.filledArgmin(pH, E);
-    return this.ligandArgmin(pH, E, direct);
+    if (!(this.present & SPECIATED)) return direct ? this.directArgmin(pH, E, probe) : this.filledArgmin(pH, E);
+    return this.ligandArgmin(pH, E, direct, probe);
   }
 
   /** The argmin in one pass over the filled columns, for a water without carbonate, sulfur or orthophosphate. */
@@ -455,15 +458,14 @@ export class PointEngine {
    * The same from the fixed coefficient rows (constant ΔCp°r, at and below 100 °C), nothing stored: g_i is the sum of
    * its row times the row features (directFeatures), the ligands at their activities (chloride only here: exact).
    */
-  private directArgmin(pH: number, E: number): number {
+  private directArgmin(pH: number, E: number, probe: boolean): number {
     const { needs } = this.table;
     const { directRow, feature } = this;
     this.directFeatures(pH, E);
-    const pruning = this.admitted();
-    const list = pruning.list;
+    const list = this.rowSpecies(probe);
     let best = -1;
     let bestG = INF;
-    for (let m = 0, n = pruning.count; m < n; m++) {
+    for (let m = 0, n = this.listed; m < n; m++) {
       const i = list[m];
       const need = needs[i];
       const g = rowDot(directRow, i * DIRECT_WIDTH, feature, need !== 0);
@@ -481,7 +483,7 @@ export class PointEngine {
    * are exact at once (Cl− is free); those with carbonate, sulfur or orthophosphate first get their bound, and only
    * the ligands of the species whose bound could beat the best are speciated (ligandsFor).
    */
-  private ligandArgmin(pH: number, E: number, direct: boolean): number {
+  private ligandArgmin(pH: number, E: number, direct: boolean, probe: boolean): number {
     const t = this.table;
     const { aThreshold, b, c, r, candidates, bounds, directRow, feature } = this;
     const { needs, carbonate, sulfur, chloride, phosphate } = t;
@@ -489,9 +491,8 @@ export class PointEngine {
     const { boundLnC, boundLnS, boundLnP } = this;
     const lnCl = this.lnChloride;
     this.directFeatures(pH, E);
-    const pruning = this.correspondence ? this.availableHere() : this.admitted();
-    const list = this.correspondence ? pruning.all : pruning.list;
-    const listed = this.correspondence ? pruning.all.length : pruning.count;
+    const list = this.rowSpecies(probe);
+    const listed = this.listed;
     let best = -1;
     let bestG = INF;
     let count = 0;
@@ -538,11 +539,16 @@ export class PointEngine {
     return best;
   }
 
-  /** The pruning of the current water's ligand set, with this row's features admitted (constant ΔCp°r rows only). */
-  private admitted(): SpeciesPruning {
+  /**
+   * The species this point evaluates (the first `listed`), its features already in `feature`: those left by the
+   * pruning inside its settled box, else every species the water allows (above 100 °C always: the box's planes are
+   * those of constant ΔCp°r).
+   */
+  private rowSpecies(probe: boolean): Int32Array {
     const pruning = this.availableHere();
-    pruning.admit(this.feature);
-    return pruning;
+    const pruned = !this.correspondence && pruning.admit(this.feature, !probe);
+    this.listed = pruned ? pruning.count : pruning.all.length;
+    return pruned ? pruning.list : pruning.all;
   }
 
   /** The pruning of the current water's ligand set (its `all`: the species the water allows). */
@@ -577,9 +583,9 @@ export class PointEngine {
     f[10] = rtOverF * this.boundLnP;
   }
 
-  /** How many species a row of the current ligand set evaluates at and below 100 °C (the rest cannot win: pruning). */
+  /** How many species the last point with a water of its own evaluated (the others proved unable to win there). */
   get evaluatedSpecies(): number {
-    return this.pruning[this.present]?.count ?? this.size;
+    return this.listed;
   }
 
   /** F/RT at the current temperature. */

@@ -30,7 +30,7 @@ interface Column {
 }
 
 function column(engine: PointEngine, pH: number, w: DiagramWindow): Column {
-  const species = [engine.dominant(pH, w.eMin)];
+  const species = [engine.dominant(pH, w.eMin, true)]; // a probe of the diagram, not a row
   const edges: number[] = [];
   let from = w.eMin;
   for (let k = 0; k < 200; k++) {

@@ -23,9 +23,9 @@ const GROWTH = 0.03;
 export class SpeciesPruning {
   private readonly lo: Float64Array;
   private readonly hi: Float64Array;
-  /** Every available species, ascending (what a row outside the range of the box's model evaluates). */
+  /** Every available species, ascending: what a row evaluates outside a settled box. */
   readonly all: Int32Array;
-  /** The species to evaluate, ascending (every available one until the box settles), and how many. */
+  /** The species a row inside the settled box evaluates, ascending, and how many. */
   readonly list: Int32Array;
   count = 0;
   private rowsInside = 0;
@@ -50,12 +50,21 @@ export class SpeciesPruning {
     this.count = available.length;
   }
 
-  /** Admits a row's features (its first `features` entries): grows the box if needed; list and count are then valid. */
-  admit(f: Float64Array): void {
-    if (!this.inside(f)) return this.grow(f);
-    if (this.settled || ++this.rowsInside < SETTLE_ROWS) return;
-    this.prune();
-    this.settled = true;
+  /**
+   * Admits a row's features (its first `features` entries). True: the row evaluates `list` (its first `count`);
+   * false: every species in `all`. A row outside the box widens it, unless `widen` is false (a point probed on the
+   * way to a boundary or across a diagram, not a row of the column: it would widen the box past the rows).
+   */
+  admit(f: Float64Array, widen = true): boolean {
+    if (!this.inside(f)) {
+      if (widen) this.grow(f);
+      return false;
+    }
+    if (!this.settled && ++this.rowsInside >= SETTLE_ROWS) {
+      this.prune();
+      this.settled = true;
+    }
+    return this.settled;
   }
 
   /** Whether the features lie in the box (feature 0 is the constant 1; the box is empty until a row grows it). */
@@ -66,7 +75,7 @@ export class SpeciesPruning {
     return inside === 1;
   }
 
-  /** Widens the box to hold f (and a margin past it), and evaluates every available species until it settles. */
+  /** Widens the box to hold f (and a margin past it); its species are worked out again once rows settle in it. */
   private grow(f: Float64Array): void {
     const { lo, hi } = this;
     for (let k = 0; k < this.features; k++) {
@@ -80,8 +89,6 @@ export class SpeciesPruning {
     this.empty = false;
     this.settled = false;
     this.rowsInside = 0;
-    this.list.set(this.available);
-    this.count = this.available.length;
   }
 
   /** The species no exact species is below everywhere in the box, into list. */

@@ -44,8 +44,7 @@ describe("species pruning", () => {
             for (let k = 0; k < FEATURES; k++) sum += rows[i * WIDTH + k] * f[k];
             return exact[i] ? sum : sum + next(); // an inexact species is somewhere above its row
           });
-          pruning.admit(f);
-          const kept = pruning.list.slice(0, pruning.count);
+          const kept = pruning.admit(f) ? pruning.list.slice(0, pruning.count) : pruning.all;
           if (kept.length < available.length) pruned++;
           expect(lowest(g, kept)).toBe(lowest(g, available));
         }
@@ -55,14 +54,20 @@ describe("species pruning", () => {
     expect(pruned).toBeGreaterThan(0); // the pruned path was taken
   });
 
-  it("a row outside the box evaluates every available species", () => {
+  it("a row outside the box evaluates every available species; a probe outside it does not widen it", () => {
     // two planes: species 1 is 1 V above species 0 wherever feature 1 is below 2, and below it past 2
     const rows = Float64Array.from([0, 0, 0, 0, 1, -0.5, 0, 0]);
     const pruning = new SpeciesPruning(rows, WIDTH, FEATURES, [0, 1], [true, true]);
+    const row = (x: number, widen = true) => pruning.admit(Float64Array.from([1, x, 0, 0]), widen);
     // the box grows to [0, 1] (and a little past), then settles after rows inside it
-    for (const x of [0, 1, 0.5, 0.2, 0.9, 0.4, 0.6, 0.1, 0.8, 0.3, 0.7]) pruning.admit(Float64Array.from([1, x, 0, 0]));
+    for (const x of [0, 1, 0.5, 0.2, 0.9, 0.4, 0.6, 0.1, 0.8, 0.3, 0.7]) row(x);
+    expect(row(0.5)).toBe(true);
     expect([...pruning.list.slice(0, pruning.count)]).toEqual([0]); // species 1 cannot win for feature 1 in [0, 1]
-    pruning.admit(Float64Array.from([1, 3, 0, 0]));
+    expect(row(3, false)).toBe(false); // a probe at 3: every species, and the box stays
+    expect(row(0.5)).toBe(true);
+    expect(row(3)).toBe(false); // a row at 3 widens the box: every species until it settles again
+    for (let k = 0; k < 10; k++) row(k / 4);
+    expect(row(1)).toBe(true);
     expect([...pruning.list.slice(0, pruning.count)]).toEqual([0, 1]);
   });
 });
