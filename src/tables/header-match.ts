@@ -6,7 +6,9 @@
  *
  * Headers also hint at the potential's unit (mV or V) and reference electrode ("vs SCE", "AgCl sat", "Eh" is vs
  * SHE by definition — common practice) and at a temperature in °F or K; the pane offers these as defaults and the
- * command line uses them.
+ * command line uses them. Lab exports in German, French, Spanish, Italian, Dutch and Portuguese name the same
+ * columns in their own words ("Temperatur", "Redoxpotential", "Chlorid", "Sulfat", "Alkalinität", "TAC (°f)",
+ * "KS 4,3", "cloruros", "solfati"): accents are dropped before matching, and those words are matched too.
  */
 import { type TemperatureScale, type WaterUnit } from "./units";
 
@@ -58,6 +60,8 @@ export function headerTokens(header: string): string[] {
   return header
     .toLowerCase()
     .replace(/[µμ]/g, "u")
+    .normalize("NFD")
+    .replace(/[\u0300-\u036f]/g, "") // accents off: "température" → "temperature", "Säure" → "saure"
     .replace(/°\s*c\b/g, " degc ")
     .replace(/°\s*f\b/g, " degf ")
     .replace(/℃/g, " degc ")
@@ -69,19 +73,39 @@ export function headerTokens(header: string): string[] {
 const has = (tokens: readonly string[], ...words: string[]) => words.some((w) => tokens.includes(w));
 
 function isPH(tokens: readonly string[]): boolean {
-  return tokens.includes("ph") && !has(tokens, "mv", "orp", "eh", "temp", "temperature");
+  if (!tokens.includes("ph") || has(tokens, "mv", "orp", "eh", "temp", "temperature")) return false;
+  return !namesAlkalinity(tokens); // "Alkalinity to pH 4.5", "Säurekapazität bis pH 4,3"
 }
+
+/** "potential" and "redox potential" in the languages of European lab exports (one word in German and Dutch). */
+const POTENTIAL_WORDS = ["potentiel", "potencial", "potenziale", "redoxpotential", "redoxpotentiaal", "redoxspannung"];
 
 function isPotential(tokens: readonly string[]): boolean {
   if (has(tokens, "orp", "eh", "potential", "redox", "ecorr", "ecp", "e.h")) return true; // ECP: corrosion potential (loops)
+  if (has(tokens, ...POTENTIAL_WORDS)) return true;
   if (tokens[0] === "e" && !has(tokens, "coli")) return true; // "E", "E (V)", "E vs SCE"
   if (tokens.length === 1 && tokens[0] === "mv") return true;
   return false;
 }
 
+/** Conductivity in other languages: de, fr, es, it, nl, pt (ionic-columns.ts reads them too). */
+export const CONDUCTIVITY_WORDS = [
+  "leitfahigkeit",
+  "conductivite",
+  "conductividad",
+  "conducibilita",
+  "conduttivita",
+  "geleidbaarheid",
+  "geleidendheid",
+  "condutividade",
+];
+
 function isTemperature(tokens: readonly string[]): boolean {
-  if (has(tokens, "conductivity", "conductance", "ec", "sc", "spcond")) return false; // "Conductivity (µS/cm at 25 °C)"
+  // "Conductivity (µS/cm at 25 °C)"; "TAC (°f)" is alkalinity in French degrees
+  if (has(tokens, "conductivity", "conductance", "ec", "sc", "spcond", ...CONDUCTIVITY_WORDS)) return false;
+  if (namesAlkalinity(tokens)) return false;
   if (has(tokens, "temp", "temperature", "degc", "degf", "celsius", "fahrenheit", "kelvin")) return true;
+  if (has(tokens, "temperatur", "temperatura", "temperatuur", "wassertemperatur")) return true; // de, es/it/pt, nl
   // "T", "T (C)", "t_c", "T °C", "T (K)"
   return (
     tokens[0] === "t" && tokens.length <= 3 && tokens.slice(1).every((t) => ["c", "f", "k", "degc", "degf"].includes(t))
@@ -133,7 +157,7 @@ export const BARE_SILVER_CHLORIDE = "Ag/AgCl";
  */
 export function electrodeNamed(tokens: readonly string[]): string | null {
   if (has(tokens, "she", "nhe") || tokens.includes("eh")) return "SHE";
-  if (has(tokens, "sce", "calomel")) return "SCE";
+  if (has(tokens, "sce", "calomel", "ecs")) return "SCE"; // ECS: French and Spanish for SCE
   if (has(tokens, "rhe")) return "RHE";
   if (has(tokens, "cse", "cuso", "cuso4")) return "CSE";
   if (has(tokens, "mse", "hg2so4")) return "MSE";
@@ -235,8 +259,26 @@ export interface WaterColumn {
 
 export type WaterColumns = Partial<Record<WaterColumnRole, WaterColumn>>;
 
+/** Total alkalinity in other languages: de, fr, es, it, nl, pt. */
+const ALKALINITY_WORDS = ["alkalinitat", "alcalinite", "alcalinidad", "alcalinita", "alkaliniteit", "alcalinidade"];
+
 function isAlkalinity(tokens: readonly string[]): boolean {
-  return has(tokens, "alkalinity", "alk", "talk", "tac") || (tokens[0] === "ta" && tokens.length <= 4);
+  return namesAlkalinity(tokens) || (tokens[0] === "ta" && tokens.length <= 4);
+}
+
+/** A header naming alkalinity by a word of its own (not the bare "TA"), in any of the languages matched. */
+function namesAlkalinity(tokens: readonly string[]): boolean {
+  return has(tokens, "alkalinity", "alk", "talk", "tac", ...ALKALINITY_WORDS) || isAcidCapacity(tokens);
+}
+
+/**
+ * The acid capacity to pH 4.3 of German practice, "KS 4,3", "Säurekapazität bis pH 4,3", "m-Wert": the total
+ * alkalinity in mmol/L (common practice; DIN 38409-7), so meq/L when the header names no unit.
+ */
+function isAcidCapacity(tokens: readonly string[]): boolean {
+  if (has(tokens, "saurekapazitat", "saeurekapazitaet")) return true;
+  if (tokens[0] === "m" && tokens[1] === "wert") return true;
+  return tokens[0] === "ks" && (tokens[1] === "4" || tokens[1] === "4.3");
 }
 
 function isChloride(tokens: readonly string[]): boolean {
@@ -246,32 +288,43 @@ function isChloride(tokens: readonly string[]): boolean {
     (tokens.includes("cl") && tokens[tokens.indexOf("cl") + 1] === "2")
   )
     return false;
-  return has(tokens, "chloride", "chlorides", "cl");
+  return has(tokens, "chloride", "chlorides", "cl", ...CHLORIDE_WORDS);
 }
 
+/** Chloride in other languages: de, fr, es, it, pt. */
+const CHLORIDE_WORDS = ["chlorid", "chlorure", "chlorures", "cloruro", "cloruros", "cloruri", "cloreto", "cloretos"];
+
+/** Sulfate in other languages: de, es/pt, it, nl. */
+const SULFATE_WORDS = ["sulfat", "sulfato", "sulfatos", "solfato", "solfati", "sulfaat"];
+
 function isSulfate(tokens: readonly string[]): boolean {
-  if (has(tokens, "sulfate", "sulphate", "sulfates", "sulphates")) return true;
+  if (has(tokens, "sulfate", "sulphate", "sulfates", "sulphates", ...SULFATE_WORDS)) return true;
   const at = tokens.indexOf("so");
   return at >= 0 && tokens[at + 1] === "4";
 }
+
+/** Orthophosphate in other languages: de, es/it/pt, nl. */
+const PHOSPHATE_WORDS = ["phosphat", "orthophosphat", "fosfato", "fosfatos", "fosfati", "ortofosfato", "fosfaat"];
 
 /**
  * A header naming orthophosphate: "orthophosphate", "phosphate", "PO4", "ortho-P". Total phosphorus is not
  * orthophosphate (it counts organic and condensed phosphorus too) and is not matched.
  */
 function isPhosphate(tokens: readonly string[]): boolean {
-  if (has(tokens, "orthophosphate", "phosphate", "phosphates", "orthophosphates")) return true;
+  if (has(tokens, "orthophosphate", "phosphate", "phosphates", "orthophosphates", ...PHOSPHATE_WORDS)) return true;
   if (has(tokens, "ortho") && (has(tokens, "p", "phosphorus") || tokens.includes("po"))) return true;
   const at = tokens.indexOf("po");
   return at >= 0 && tokens[at + 1] === "4";
 }
 
-/** Orthophosphate "as P": "PO4-P", "ortho-P", "(mg/L as P)"; otherwise mg/L as PO4. */
+/** Orthophosphate "as P": "PO4-P", "ortho-P", "Phosphat-P", "(mg/L as P)"; otherwise mg/L as PO4. */
 function phosphateAsP(tokens: readonly string[]): boolean {
+  const phosphateWord = (t: string | undefined) =>
+    t !== undefined && (has([t], "orthophosphate", "phosphate", ...PHOSPHATE_WORDS) || t === "ortho");
   return tokens.some(
     (t, i) =>
       t === "p" &&
-      (tokens[i - 1] === "as" || tokens[i - 1] === "ortho" || (tokens[i - 1] === "4" && tokens[i - 2] === "po")),
+      (tokens[i - 1] === "as" || phosphateWord(tokens[i - 1]) || (tokens[i - 1] === "4" && tokens[i - 2] === "po")),
   );
 }
 
@@ -287,7 +340,13 @@ function saysMolPerKg(tokens: readonly string[]): boolean {
 
 function waterUnit(role: WaterColumnRole, tokens: readonly string[]): WaterUnit {
   const millimoles = has(tokens, "mmol", "mm", "mmol/l");
-  if (role === "alkalinity") return has(tokens, "meq", "mval") || millimoles ? "meq/L" : "mg/L CaCO3";
+  if (role === "alkalinity") {
+    if (has(tokens, "meq", "mval") || millimoles) return "meq/L";
+    if (tokens.includes("degf")) return "degf"; // "TAC (°f)": French degrees
+    if (has(tokens, "mg", "ppm", "caco")) return "mg/L CaCO3";
+    if (isAcidCapacity(tokens)) return "meq/L";
+    return tokens.includes("tac") ? "degf" : "mg/L CaCO3"; // a bare "TAC" is French: in French degrees (common practice)
+  }
   if (millimoles) return "mmol/L";
   if (has(tokens, "umol")) return "umol/L";
   if (saysMolPerKg(tokens)) return "mol/kg";

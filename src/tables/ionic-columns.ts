@@ -7,7 +7,7 @@
  * Pure functions: no host, no DOM. The conversion to mol/kg is src/chemistry/ionic-strength.ts (one copy).
  */
 import { ionicStrengthFrom, type IonicStrengthBasis } from "../chemistry";
-import { headerTokens } from "./header-match";
+import { CONDUCTIVITY_WORDS, headerTokens } from "./header-match";
 import { readNumber } from "./numbers";
 
 export type IonicColumnRole = "ionicStrength" | "conductivity" | "tds";
@@ -66,7 +66,18 @@ function isIonicStrength(tokens: readonly string[]): boolean {
 }
 
 function isConductivity(tokens: readonly string[]): boolean {
-  return has(tokens, "conductivity", "conductance", "cond", "spcond", "ec", "sc", "spc", "kappa");
+  return has(
+    tokens,
+    "conductivity",
+    "conductance",
+    "cond",
+    "spcond",
+    "ec",
+    "sc",
+    "spc",
+    "kappa",
+    ...CONDUCTIVITY_WORDS,
+  );
 }
 
 function isTds(tokens: readonly string[]): boolean {

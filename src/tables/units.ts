@@ -29,14 +29,15 @@ export type PotentialUnit = "V" | "mV";
 export const POTENTIAL_UNITS: Readonly<Record<PotentialUnit, number>> = { V: 1, mV: 1e-3 };
 
 /**
- * Units of the water columns. Alkalinity: mg/L as CaCO3 (the utility unit, the default) or meq/L (also written
- * mmol/L: the acid capacity to pH 4.3). Totals: mg/L or µg/L of the column's own ion, mg/L as SO4, as S or as C,
+ * Units of the water columns. Alkalinity: mg/L as CaCO3 (the utility unit, the default), meq/L (also written
+ * mmol/L: the acid capacity to pH 4.3) or French degrees (°f, the "TAC" of French labs: 10 mg/L as CaCO3). Totals: mg/L or µg/L of the column's own ion, mg/L as SO4, as S or as C,
  * orthophosphate mg/L as PO4 or as P,
  * mmol/L, µmol/L, or mol/kg.
  */
 export type WaterUnit =
   | "mg/L CaCO3"
   | "meq/L"
+  | "degf"
   | "mg/L"
   | "ug/L"
   | "mmol/L"
@@ -65,6 +66,8 @@ interface WaterUnitEntry {
 export const WATER_UNITS: Readonly<Record<WaterUnit, WaterUnitEntry>> = {
   "mg/L CaCO3": { words: "mg/L as CaCO3", perLitre: 1e-3, weighed: null, asCaCO3: 1 },
   "meq/L": { words: "meq/L", perLitre: 1e-3, weighed: null, asCaCO3: CACO3_GRAMS_PER_EQUIVALENT },
+  // one French degree is 10 mg/L as CaCO3 (common practice: the French degree of hardness and of TA/TAC)
+  degf: { words: "°f (French degrees)", perLitre: 1e-2, weighed: null, asCaCO3: 10 },
   "mg/L": { words: "mg/L", perLitre: 1e-3, weighed: "own", asCaCO3: null },
   "ug/L": { words: "µg/L", perLitre: 1e-6, weighed: "own", asCaCO3: null },
   "mmol/L": { words: "mmol/L", perLitre: 1e-3, weighed: null, asCaCO3: null },

@@ -178,8 +178,8 @@ describe("a blank temperature is a missing measurement", () => {
 
 describe("the summary says which water every row was answered in", () => {
   const known = "id,pH,ORP_mV_AgCl_sat,temp_C,Alkalinity (mg/L CaCO3),Chloride (mg/L)\nA,7.2,215,12.5,120,25\n";
-  // a German lab's headers: the program does not know them, so the rows are pure water, and the summary must say so
-  const unknown = "Probe,pH,ORP_mV_AgCl_sat,temp_C,Alkalinität (mg/L CaCO3),Chlorid (mg/L)\nA,7.2,215,12.5,120,25\n";
+  // a Polish lab's headers: the program does not know them, so the rows are pure water, and the summary must say so
+  const unknown = "Próbka,pH,ORP_mV_AgCl_sat,temp_C,Zasadowość (mg/L CaCO3),Chlorki (mg/L)\nA,7.2,215,12.5,120,25\n";
 
   it("names the columns feeding each ligand, and says pure water when none was found or --pure-water is given", async () => {
     const water = async (name: string, text: string, args: string[] = []) =>
@@ -192,10 +192,42 @@ describe("the summary says which water every row was answered in", () => {
       /^water: pure water on every row; no alkalinity, DIC, chloride/,
     );
     expect(await water("named.csv", unknown, ["--alkalinity-column", "5"])).toMatch(
-      /^water: carbonate from "Alkalinität \(mg\/L CaCO3\)"/,
+      /^water: carbonate from "Zasadowość \(mg\/L CaCO3\)"/,
     );
     expect(await water("pure.csv", known, ["--pure-water"])).toBe(
       "water: pure water on every row (--pure-water; the water columns are ignored)",
     );
+  });
+});
+
+describe("European lab exports: headers in their own language", () => {
+  // the same two samples, written as a German lab (semicolons, decimal commas, "KS 4,3" in mmol/L) and an English
+  // one would write them; every answer must agree
+  const english =
+    "id,pH,ORP (mV vs Ag/AgCl 3 M),Temperature (°C),Alkalinity (meq/L),Chloride (mg/L),Sulfate (mg/L),Conductivity (µS/cm)\n" +
+    "A,7.2,215,12.5,2.4,25,40,450\nB,8.1,-120,18.0,1.1,60,12,820\n";
+  const german =
+    "Probe;pH-Wert;Redoxpotential (mV, Ag/AgCl 3 M);Temperatur (°C);KS 4,3 (mmol/l);Chlorid (mg/l);Sulfat (mg/l);Leitfähigkeit (µS/cm)\n" +
+    "A;7,2;215;12,5;2,4;25;40;450\nB;8,1;-120;18,0;1,1;60;12;820\n";
+  const WATER = ["E_SHE_V", "DIC_mol_kg", "chloride_mol_kg", "sulfur_mol_kg", "ionic_strength_mol_kg"];
+  const columns = (row: Record<string, string>) => [...WATER, ...RESULTS].map((c) => row[c]?.replace(",", "."));
+
+  it("a German export is read as the English one: same potentials, water, ionic strength and answers", async () => {
+    const en = await results("en.csv", english, ["--metal", "Fe"]);
+    const de = await results("de.csv", german, ["--metal", "Fe"], ";");
+    expect(de.r.code).toBe(0);
+    expect(de.rows.map(columns)).toEqual(en.rows.map(columns));
+    expect(de.rows[0].DIC_mol_kg).not.toBe(""); // the carbonate column was found (not pure water)
+    expect(de.r.summary?.notes?.find((n) => n.startsWith("water:"))).toMatch(/carbonate from "KS 4,3 \(mmol\/l\)"/);
+  });
+
+  it("French degrees: TAC 12 °f is 120 mg/L as CaCO3, the potential against ECS (SCE), not a °F temperature", async () => {
+    const french =
+      "Échantillon;pH;Potentiel redox (mV/ECS);Température (°C);TAC (°f);Chlorures (mg/L)\nA;7,2;215;12,5;12;25\n";
+    const same = "id,pH,ORP (mV vs SCE),Temp (°C),Alkalinity (mg/L CaCO3),Chloride (mg/L)\nA,7.2,215,12.5,120,25\n";
+    const fr = await results("fr.csv", french, ["--metal", "Fe"], ";");
+    const en = await results("en-sce.csv", same, ["--metal", "Fe"]);
+    expect(fr.r.code).toBe(0);
+    expect(fr.rows.map(columns)).toEqual(en.rows.map(columns));
   });
 });

@@ -18,7 +18,9 @@ describe("ionic-strength columns by header", () => {
     expect(roles(["SC"])).toEqual([["conductivity", 0, "uS/cm"]]);
     expect(roles(["SpCond (mS/cm)"])).toEqual([["conductivity", 0, "mS/cm"]]);
     expect(roles(["EC (mS/m)"])).toEqual([["conductivity", 0, "mS/m"]]);
-    expect(roles(["Leitfähigkeit"])).toEqual([]);
+    // German and French lab exports (accents dropped before matching)
+    expect(roles(["Leitfähigkeit (µS/cm)"])).toEqual([["conductivity", 0, "uS/cm"]]);
+    expect(roles(["Conductivité (mS/m)"])).toEqual([["conductivity", 0, "mS/m"]]);
   });
 
   it("finds TDS headers: mg/L, ppm as mg/L, g/L", () => {

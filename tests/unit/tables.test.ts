@@ -47,6 +47,52 @@ describe("header matching", () => {
     expect(matchWaterColumns(["pH", "ORP", "Total P (mg/L)"]).phosphate).toBeUndefined();
   });
 
+  it("reads German, French, Spanish and Italian lab headers, with the units their trades use", () => {
+    const german = ["Probe", "pH-Wert", "Redoxpotential (mV)", "Temperatur (°C)", "Säurekapazität bis pH 4,3"];
+    const de = matchHeaders([...german, "Chlorid (mg/l)", "Sulfat (mg/l)", "Orthophosphat-P (mg/l)"]);
+    expect(de.mapping).toMatchObject({ pH: 1, potential: 2, temperature: 3 });
+    expect(de.hints).toMatchObject({ potentialUnit: "mV", temperatureScale: "C" });
+    // the acid capacity to pH 4.3 is alkalinity in mmol/L (DIN 38409-7, common practice), not the pH column
+    const deWater = matchWaterColumns(
+      [...german, "Chlorid (mg/l)", "Sulfat (mg/l)", "Orthophosphat-P (mg/l)"],
+      de.mapping,
+    );
+    expect(deWater).toMatchObject({
+      alkalinity: { index: 4, unit: "meq/L" },
+      chloride: { index: 5, unit: "mg/L" },
+      sulfate: { index: 6, unit: "mg/L SO4" },
+      phosphate: { index: 7, unit: "mg/L P" },
+    });
+    expect(matchWaterColumns(["m-Wert"]).alkalinity?.unit).toBe("meq/L");
+    expect(matchWaterColumns(["TAC"]).alkalinity?.unit).toBe("degf"); // French practice: TAC in French degrees
+    expect(matchWaterColumns(["TAC (mg/L CaCO3)"]).alkalinity?.unit).toBe("mg/L CaCO3");
+    expect(matchWaterColumns(["KS4,3 (mg/l CaCO3)"]).alkalinity?.unit).toBe("mg/L CaCO3");
+    // French: TAC in French degrees left of the temperature is alkalinity, not a °F temperature; ECS is the SCE
+    const french = ["TAC (°f)", "pH", "Potentiel redox (mV/ECS)", "Température (°C)", "Chlorures (mg/L)"];
+    const fr = matchHeaders(french);
+    expect(fr.mapping).toMatchObject({ pH: 1, potential: 2, temperature: 3 });
+    expect(fr.hints).toMatchObject({ electrode: "SCE", temperatureScale: "C" });
+    expect(matchWaterColumns(french, fr.mapping)).toMatchObject({
+      alkalinity: { index: 0, unit: "degf" },
+      chloride: { index: 4 },
+    });
+    // Spanish, Italian
+    expect(matchHeaders(["pH", "Potencial (mV)", "Temperatura"]).mapping).toMatchObject({
+      potential: 1,
+      temperature: 2,
+    });
+    expect(matchWaterColumns(["Alcalinidad (mg/L CaCO3)", "Cloruros (mg/L)", "Solfati (mg/L)"])).toMatchObject({
+      alkalinity: { index: 0, unit: "mg/L CaCO3" },
+      chloride: { index: 1 },
+      sulfate: { index: 2 },
+    });
+  });
+
+  it("a conductivity header at 25 °C in German or French is not the temperature column", () => {
+    expect(matchHeaders(["pH", "ORP", "Leitfähigkeit bei 25 °C (µS/cm)", "Temp"]).mapping.temperature).toBe(3);
+    expect(matchHeaders(["pH", "ORP", "Conductivité à 25 °C", "T (°C)"]).mapping.temperature).toBe(3);
+  });
+
   it("reads the temperature scale: °F, K, else °C", () => {
     expect(matchHeaders(["pH", "ORP", "Water temp °F"]).hints.temperatureScale).toBe("F");
     expect(matchHeaders(["pH", "ORP", "T (K)"]).hints.temperatureScale).toBe("K");
@@ -113,6 +159,8 @@ describe("the unit table", () => {
     expect(molalFactor("mol/kg", { Cl: 1 }, weight)).toBe(1);
     // 1 meq/L of alkalinity is 50.04 mg/L as CaCO3 (CaCO3 100.087 g/mol, 2 eq/mol — common practice)
     expect(alkalinityFactor("meq/L")).toBeCloseTo(50.0435, 4);
+    // one French degree is 10 mg/L as CaCO3 (common practice)
+    expect(alkalinityFactor("degf")).toBe(10);
     expect(() => molalFactor("meq/L", {}, weight)).toThrow();
   });
 });
