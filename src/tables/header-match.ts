@@ -7,8 +7,9 @@
  * Headers also hint at the potential's unit (mV or V) and reference electrode ("vs SCE", "AgCl sat", "Eh" is vs
  * SHE by definition — common practice) and at a temperature in °F or K; the pane offers these as defaults and the
  * command line uses them. Lab exports in German, French, Spanish, Italian, Dutch and Portuguese name the same
- * columns in their own words ("Temperatur", "Redoxpotential", "Chlorid", "Sulfat", "Alkalinität", "TAC (°f)",
- * "KS 4,3", "cloruros", "solfati"): accents are dropped before matching, and those words are matched too.
+ * columns in their own words ("Probe", "Messstelle", "Temperatur", "Redoxpotential", "Chlorid", "Sulfat",
+ * "Alkalinität", "TAC (°f)", "KS 4,3", "Échantillon", "cloruros", "solfati"): accents are dropped before matching,
+ * and those words are matched too.
  */
 import { type TemperatureScale, type WaterUnit } from "./units";
 
@@ -119,14 +120,24 @@ export function temperatureScale(tokens: readonly string[]): TemperatureScale {
   return "C";
 }
 
+/** "Sample" in other languages: de, fr, es, it, nl, pt ("Probe" alone: as a word of a longer header it is a sensor). */
+const SAMPLE_WORDS = ["probe", "probennummer", "echantillon", "muestra", "campione", "monster", "amostra"];
+
 function isId(tokens: readonly string[]): boolean {
   if (has(tokens, "id", "sampleid", "label", "code")) return true;
   if (tokens[0] === "sample" && tokens.length <= 2 && !has(tokens, "date", "time")) return true;
+  if (has([tokens[0]], ...SAMPLE_WORDS) && tokens.length <= 2 && !has(tokens, "datum", "date", "fecha", "data"))
+    return true;
   return tokens.length === 1 && has(tokens, "name", "no", "number", "#");
 }
 
+/** Sampling point in other languages: de, fr, es, it, nl, pt. */
+const SITE_WORDS = ["messstelle", "entnahmestelle", "probenahmestelle", "standort", "lieu", "punto", "estacion"];
+const MORE_SITE_WORDS = ["stazione", "meetpunt", "locatie", "local", "ponto"];
+
 function isSite(tokens: readonly string[]): boolean {
-  return has(tokens, "site", "location", "station", "well", "tap", "point") && !has(tokens, "id");
+  const named = has(tokens, "site", "location", "station", "well", "tap", "point", ...SITE_WORDS, ...MORE_SITE_WORDS);
+  return named && !has(tokens, "id");
 }
 
 function isMetal(tokens: readonly string[]): boolean {

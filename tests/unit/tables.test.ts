@@ -50,7 +50,14 @@ describe("header matching", () => {
   it("reads German, French, Spanish and Italian lab headers, with the units their trades use", () => {
     const german = ["Probe", "pH-Wert", "Redoxpotential (mV)", "Temperatur (°C)", "Säurekapazität bis pH 4,3"];
     const de = matchHeaders([...german, "Chlorid (mg/l)", "Sulfat (mg/l)", "Orthophosphat-P (mg/l)"]);
-    expect(de.mapping).toMatchObject({ pH: 1, potential: 2, temperature: 3 });
+    expect(de.mapping).toMatchObject({ id: 0, pH: 1, potential: 2, temperature: 3 });
+    expect(matchHeaders(["Messstelle", "Probe", "pH", "ORP"]).mapping).toMatchObject({ site: 0, id: 1 });
+    expect(matchHeaders(["Échantillon", "Point de prélèvement", "pH", "ORP"]).mapping).toMatchObject({
+      id: 0,
+      site: 1,
+    });
+    expect(matchHeaders(["Muestra", "Punto de muestreo", "pH", "ORP"]).mapping).toMatchObject({ id: 0, site: 1 });
+    expect(matchHeaders(["Probe Datum", "pH", "ORP"]).mapping.id).toBe(-1); // a date, not the sample's name
     expect(de.hints).toMatchObject({ potentialUnit: "mV", temperatureScale: "C" });
     // the acid capacity to pH 4.3 is alkalinity in mmol/L (DIN 38409-7, common practice), not the pH column
     const deWater = matchWaterColumns(
