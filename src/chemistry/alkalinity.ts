@@ -11,6 +11,9 @@
  * taken as −log [H+]); other proton acceptors (borate, silicate, phosphate, organic acids) counted as carbonate.
  * Alkalinity in mg/L as CaCO3 (the utility unit): 1 meq/L = 50.04 mg/L as CaCO3 (half the molar mass of CaCO3,
  * 100.087 g/mol). K1, K2 from Plummer & Busenberg (1982) (carbonic-acid.ts); Kw from IAPWS R11-07 (water.ts).
+ *
+ * A laboratory may report bicarbonate (HCO3−, mg/L) instead (German analyses list "Hydrogencarbonat"): with the
+ * same approximations, DIC = [HCO3−] / α1 at the pH (dicFromBicarbonateOrProblem).
  */
 import { DEFAULT_CELSIUS } from "./domain";
 import { carbonicPK1, carbonicPK2 } from "./carbonic-acid";
@@ -65,6 +68,33 @@ export function dicOrProblem(alkalinityMgL: number, pH: number, celsius = DEFAUL
   const alpha1 = (k1 * h) / d;
   const alpha2 = (k1 * k2) / d;
   return carbonateAlkalinity / (alpha1 + 2 * alpha2);
+}
+
+/** Grams of HCO3− per mole: 1.008 + 12.011 + 3 × 15.999 (IUPAC standard atomic weights, abridged; common practice). */
+export const HCO3_GRAMS_PER_MOLE = 61.016;
+
+/** Below this α1 (the fraction of DIC that is HCO3−) a bicarbonate reading says too little of the carbonate. */
+const LEAST_BICARBONATE_FRACTION = 1e-3;
+
+/**
+ * Total dissolved inorganic carbon (mol/kg) from bicarbonate (mg/L as HCO3−), pH and temperature (°C): DIC = [HCO3−]/α1,
+ * α1 = K1·h/(h² + K1·h + K1·K2); an AlkalinityProblem where α1 < 10⁻³ (far below pK1 or above pK2, where the
+ * bicarbonate reading would carry the carbonate total by a factor over a thousand).
+ */
+export function dicFromBicarbonateOrProblem(
+  bicarbonateMgL: number,
+  pH: number,
+  celsius = DEFAULT_CELSIUS,
+): number | AlkalinityProblem {
+  const h = 10 ** -pH;
+  const k1 = 10 ** -carbonicPK1(celsius);
+  const k2 = 10 ** -carbonicPK2(celsius);
+  const alpha1 = (k1 * h) / (h * h + k1 * h + k1 * k2);
+  if (!(alpha1 >= LEAST_BICARBONATE_FRACTION))
+    return new AlkalinityProblem(
+      `at pH ${pH} bicarbonate is ${alpha1.toPrecision(2)} of the dissolved carbonate: it does not determine DIC there`,
+    );
+  return bicarbonateMgL / (HCO3_GRAMS_PER_MOLE * 1000) / alpha1;
 }
 
 /** dicOrProblem that throws AlkalinityError with the problem's message. */

@@ -17,6 +17,8 @@ export {
   CACO3_GRAMS_PER_EQUIVALENT,
   dicFromAlkalinity,
   dicOrProblem,
+  dicFromBicarbonateOrProblem,
+  HCO3_GRAMS_PER_MOLE,
 } from "./alkalinity";
 export { kelvin, nernstFactor } from "./constants";
 export { dataFileCount, dataFingerprint } from "./data-fingerprint";

@@ -106,10 +106,11 @@ ionic-strength column ("ionic strength", "I (mol/kg)"; mol/L read as mol/kg for 
 then conductivity, then TDS; the summary names the one used. A blank cell: that row is answered without the
 correction (ideal solution) and reported. Above 0.5 mol/kg the row's results are #VALUE!.
 
-Columns are found by their headers (case and punctuation ignored): pH ("pH"), the potential reading ("ORP",
+Columns are found by their headers (case, accents and punctuation ignored): pH ("pH"), the potential reading ("ORP",
 "Eh", "redox", "potential", …), temperature ("temp", "temperature", …), the metal of each row ("metal",
-"element", "pipe metal"), and the water: alkalinity ("alkalinity", "alk", "TA"), DIC ("DIC", "TIC"), chloride
-("chloride", "Cl"), sulfate ("sulfate", "SO4"). The unit and electrode are read from the potential header when it names them
+"element", "pipe metal"), and the water: alkalinity ("alkalinity", "alk", "TA"; or bicarbonate, "HCO3"), DIC
+("DIC", "TIC"), chloride ("chloride", "Cl"), sulfate ("sulfate", "SO4"); German, French, Spanish, Italian, Dutch
+and Portuguese lab headers too ("Temperatur", "Redoxpotential", "KS 4,3", "TAC (°f)", "Chlorures", …). The unit and electrode are read from the potential header when it names them
 ("ORP_mV_AgCl_sat", "Eh (V)"); otherwise give --unit and --electrode. A silver chloride header must name its
 filling ("AgCl sat", "Ag/AgCl 3M"), or give --electrode. A temperature header naming °F or K ("Temp (°F)",
 "T_K") is converted to °C. Blank lines and lines starting with # before the header are skipped; after it every

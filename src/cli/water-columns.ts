@@ -65,7 +65,7 @@ export function waterColumns(
   for (const l of plan.ligands) {
     const column = numericColumn(rows, l.column, f, l.factor);
     if (l.kind === "alkalinity") {
-      const dic = answersOf(fns.dic(asRange(column), asRange(pH), temperature), n);
+      const dic = answersOf(fns.dic(asRange(column), asRange(pH), temperature, l.basis ?? "alkalinity"), n);
       carbonateErrors = dic.map((d) => (d instanceof CellError ? d : null));
       ligandArgs.carbonate = dic.map((d) => (d instanceof CellError ? "" : (d as number | string)));
       ligandCells.push(dic);

@@ -4,7 +4,8 @@
  *
  * - Carbonate from a DIC column (mol/kg as written; mmol/L, µmol/L or mg/L as C when the header says so), else
  *   from an alkalinity column (mg/L as CaCO3, or meq/L when the header says so) through REDOX.DIC with the row's
- *   own pH and temperature, exactly as a worksheet would pass REDOX.DIC(alkalinity, pH, temperature).
+ *   own pH and temperature, exactly as a worksheet would pass REDOX.DIC(alkalinity, pH, temperature); else from a
+ *   bicarbonate column (mg/L as HCO3, or mmol/L) through REDOX.DIC(bicarbonate, pH, temperature, "bicarbonate").
  * - Orthophosphate: mg/L as PO4, or as P when the header says so ("PO4-P", "as P"); mmol/L or mol/kg (as P) likewise.
  * - Chloride and sulfur: mol/kg when the header says mol/kg; otherwise mg/L (µg/L, mmol/L when the header says
  *   so) converted with the atomic weights of the element records. A sulfate column counts as total sulfur (in oxic
@@ -16,6 +17,7 @@
 import { getDatabase, type LigandName } from "../chemistry";
 import {
   alkalinityFactor,
+  dicBasis,
   matchWaterColumns,
   molalFactor,
   WATER_UNITS,
@@ -34,6 +36,8 @@ export interface LigandInput {
   /** "alkalinity": the column's number × factor is mg/L as CaCO3, passed through REDOX.DIC; "total": × factor is mol/kg. */
   readonly kind: "alkalinity" | "total";
   readonly factor: number;
+  /** REDOX.DIC's basis for an "alkalinity" input: total alkalinity, or bicarbonate (× factor is mg/L as HCO3). */
+  readonly basis?: "alkalinity" | "bicarbonate";
   /** The unit read, in words, for the summary and messages. */
   readonly unit: string;
 }
@@ -81,9 +85,10 @@ const LIGAND_OF: Readonly<Record<WaterColumnRole, LigandName>> = {
 
 /** The input for a column serving `role`, in the unit its header names (units.ts). */
 function inputFor(role: WaterColumnRole, column: number, unit: WaterUnit): LigandInput {
-  const words = `${WHAT[role]} in ${WATER_UNITS[unit].words}`;
+  const basis = role === "alkalinity" ? dicBasis(unit) : undefined;
+  const words = `${basis === "bicarbonate" ? "bicarbonate" : WHAT[role]} in ${WATER_UNITS[unit].words}`;
   if (role === "alkalinity")
-    return { ligand: "carbonate", column, kind: "alkalinity", factor: alkalinityFactor(unit), unit: words };
+    return { ligand: "carbonate", column, kind: "alkalinity", factor: alkalinityFactor(unit), unit: words, basis };
   return {
     ligand: LIGAND_OF[role],
     column,
@@ -157,7 +162,8 @@ export function waterSummary(ligands: readonly LigandInput[], headers: readonly 
       "its header (name one with --alkalinity-column, --dic-column, --chloride-column, --sulfur-column or --phosphate-column)"
     );
   const parts = ligands.map((l) => {
-    const how = l.kind === "alkalinity" ? ", through REDOX.DIC with the row's pH and temperature" : "";
+    const basis = l.basis === "bicarbonate" ? ' and basis "bicarbonate"' : "";
+    const how = l.kind === "alkalinity" ? `, through REDOX.DIC with the row's pH and temperature${basis}` : "";
     return `${l.ligand} from "${headers[l.column]}" (${l.unit}${how})`;
   });
   return `water: ${parts.join("; ")}`;

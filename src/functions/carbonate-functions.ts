@@ -1,9 +1,10 @@
 /**
- * REDOX.DIC: total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3), pH and temperature —
- * the number to give the [carbonate] argument of the stability functions. Chemistry in src/chemistry/alkalinity.ts.
+ * REDOX.DIC: total dissolved inorganic carbon (mol/kg) from total alkalinity (mg/L as CaCO3) — or, with basis
+ * "bicarbonate", from bicarbonate (mg/L as HCO3−) — pH and temperature: the number to give the [carbonate] argument
+ * of the stability functions. Chemistry in src/chemistry/alkalinity.ts.
  */
-import { AlkalinityProblem, dicOrProblem } from "../chemistry";
-import { mapCells, numberArg } from "./broadcast";
+import { AlkalinityProblem, dicFromBicarbonateOrProblem, dicOrProblem } from "../chemistry";
+import { mapCells, numberArg, textArg } from "./broadcast";
 import { argumentError, argumentNotAvailable, CellInput, CellOutput } from "./cell-values";
 import { pHArg, temperatureArg } from "./common-args";
 
@@ -13,14 +14,33 @@ const alkalinityArg = numberArg("alkalinity", { min: 0, max: 100000, unit: "mg/L
 /** Highest temperature of the carbonic-acid fits as this function has always accepted them, °C (fitted 0–90 °C at 1 atm). */
 const CARBONIC_MAX_CELSIUS = 100;
 
-export function dicAt(alkalinity: CellInput, pH: CellInput, temperature?: CellInput): CellOutput[][] {
-  return mapCells([alkalinityArg, pHArg, temperatureArg], [alkalinity, pH, temperature], (alk, p, t) => {
+/** What the first argument measures: total alkalinity (the default) or bicarbonate. */
+export type DicBasis = "alkalinity" | "bicarbonate";
+
+const basisArg = textArg<DicBasis>(
+  "basis",
+  (text) => {
+    const word = text.trim().toLowerCase();
+    if (word === "alkalinity" || word === "bicarbonate") return word;
+    return argumentError("basis", `"${text}" is not "alkalinity" (mg/L as CaCO3) or "bicarbonate" (mg/L as HCO3−)`);
+  },
+  { optional: true, defaultValue: "alkalinity" },
+);
+
+export function dicAt(
+  alkalinity: CellInput,
+  pH: CellInput,
+  temperature?: CellInput,
+  basis?: CellInput,
+): CellOutput[][] {
+  const args = [alkalinityArg, pHArg, temperatureArg, basisArg] as const;
+  return mapCells([...args], [alkalinity, pH, temperature, basis], (alk, p, t, b) => {
     if (t > CARBONIC_MAX_CELSIUS)
       return argumentError(
         "temperature",
         `${t} °C is outside 0 to ${CARBONIC_MAX_CELSIUS} °C, the range of the carbonic-acid constants (Plummer & Busenberg 1982)`,
       );
-    const dic = dicOrProblem(alk, p, t);
+    const dic = b === "bicarbonate" ? dicFromBicarbonateOrProblem(alk, p, t) : dicOrProblem(alk, p, t);
     // valid inputs with no DIC (below the end point, or more hydroxide than alkalinity): no answer exists
     return dic instanceof AlkalinityProblem ? argumentNotAvailable("alkalinity, pH", dic.message) : dic;
   });

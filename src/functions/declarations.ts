@@ -279,11 +279,18 @@ const POINT_FUNCTIONS: readonly WorksheetFunctionDeclaration[] = [
   {
     id: "DIC",
     description:
-      "Total dissolved inorganic carbon (mol/kg) from total alkalinity and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. #N/A below the alkalinity end point (pH 4.5), where alkalinity does not determine DIC.",
+      "Total dissolved inorganic carbon (mol/kg) from total alkalinity (or bicarbonate) and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. #N/A below the alkalinity end point (pH 4.5), where alkalinity does not determine DIC, and for bicarbonate where it is under a thousandth of the carbonate.",
     parameters: [
-      required("alkalinity", "Total alkalinity in mg/L as CaCO3, 0 or more."),
+      required(
+        "alkalinity",
+        'Total alkalinity in mg/L as CaCO3, 0 or more (with basis "bicarbonate": bicarbonate in mg/L as HCO3−).',
+      ),
       PH,
       optional("temperature", TEMPERATURE),
+      optional(
+        "basis",
+        '"alkalinity" (the default) or "bicarbonate": what the first argument is. DIC = bicarbonate / α1 at the pH.',
+      ),
     ],
     returns: "Dissolved inorganic carbon in mol/kg.",
     implementation: ["carbonate-functions", "dicAt"],

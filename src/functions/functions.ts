@@ -315,15 +315,16 @@ export function speciestable(element: any[][], temperature?: any[][]): any[][] {
 }
 
 /**
- * Total dissolved inorganic carbon (mol/kg) from total alkalinity and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. #N/A below the alkalinity end point (pH 4.5), where alkalinity does not determine DIC.
+ * Total dissolved inorganic carbon (mol/kg) from total alkalinity (or bicarbonate) and pH, for the carbonate argument of SPECIES, REGIME, BOUNDARY and DISSOLVED. Carbonic acid constants and their temperature dependence from Plummer & Busenberg (1982); ideal dilute water (activity coefficients 1, mg/L taken per kg); other bases (borate, silicate, phosphate, organics) counted as carbonate. #N/A below the alkalinity end point (pH 4.5), where alkalinity does not determine DIC, and for bicarbonate where it is under a thousandth of the carbonate.
  * @customfunction DIC
- * @param {any[][]} alkalinity Total alkalinity in mg/L as CaCO3, 0 or more.
+ * @param {any[][]} alkalinity Total alkalinity in mg/L as CaCO3, 0 or more (with basis "bicarbonate": bicarbonate in mg/L as HCO3−).
  * @param {any[][]} pH pH, from -2 to 16.
  * @param {any[][]} [temperature] Temperature in °C, 0 to 300 (1 atm below 100 °C, saturation pressure above). Default 25.
+ * @param {any[][]} [basis] "alkalinity" (the default) or "bicarbonate": what the first argument is. DIC = bicarbonate / α1 at the pH.
  * @returns {any[][]} Dissolved inorganic carbon in mol/kg.
  */
-export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][]): any[][] {
-  return dicAt(alkalinity, pH, temperature);
+export function dic(alkalinity: any[][], pH: any[][], temperature?: any[][], basis?: any[][]): any[][] {
+  return dicAt(alkalinity, pH, temperature, basis);
 }
 
 /**

@@ -339,6 +339,28 @@ function phosphateAsP(tokens: readonly string[]): boolean {
   );
 }
 
+/** Bicarbonate in the languages matched: en, de, fr, es/pt, it, nl; and the formula HCO3. */
+const BICARBONATE_WORDS = [
+  "bicarbonate",
+  "bicarbonates",
+  "hydrogencarbonat",
+  "hydrogenocarbonate",
+  "hydrogenocarbonates",
+  "bicarbonato",
+  "bicarbonatos",
+  "idrogenocarbonato",
+  "idrogenocarbonati",
+  "bicarbonaat",
+  "waterstofcarbonaat",
+];
+
+/** A header naming bicarbonate (HCO3−, a laboratory's report of the carbonate instead of alkalinity). */
+function isBicarbonate(tokens: readonly string[]): boolean {
+  if (has(tokens, ...BICARBONATE_WORDS)) return true;
+  const at = tokens.indexOf("hco");
+  return at >= 0 && tokens[at + 1] === "3";
+}
+
 /** A header naming dissolved inorganic carbon: "DIC", "TIC", "dissolved inorganic carbon (mmol/L)". */
 function isDic(tokens: readonly string[]): boolean {
   return has(tokens, "dic", "tic") || (has(tokens, "inorganic") && has(tokens, "carbon"));
@@ -351,6 +373,9 @@ function saysMolPerKg(tokens: readonly string[]): boolean {
 
 function waterUnit(role: WaterColumnRole, tokens: readonly string[]): WaterUnit {
   const millimoles = has(tokens, "mmol", "mm", "mmol/l");
+  // bicarbonate as HCO3 (not "bicarbonate alkalinity as CaCO3", which is alkalinity)
+  if (role === "alkalinity" && isBicarbonate(tokens) && !namesAlkalinity(tokens) && !has(tokens, "caco"))
+    return millimoles ? "mmol/L HCO3" : "mg/L HCO3";
   if (role === "alkalinity") {
     if (has(tokens, "meq", "mval") || millimoles) return "meq/L";
     if (tokens.includes("degf")) return "degf"; // "TAC (°f)": French degrees
@@ -389,7 +414,9 @@ export function matchWaterColumns(headers: readonly unknown[], mapping: ColumnMa
     phosphate: isPhosphate,
   };
   for (const role of WATER_COLUMN_ROLES) {
-    const index = tokens.findIndex((t, i) => !taken.has(i) && t.length > 0 && tests[role](t));
+    let index = tokens.findIndex((t, i) => !taken.has(i) && t.length > 0 && tests[role](t));
+    // no alkalinity column: a bicarbonate column gives the carbonate the same way (through REDOX.DIC)
+    if (index < 0 && role === "alkalinity") index = tokens.findIndex((t, i) => !taken.has(i) && isBicarbonate(t));
     if (index < 0) continue;
     taken.add(index);
     out[role] = { index, unit: waterUnit(role, tokens[index]) };

@@ -46,6 +46,7 @@ export { DELIMITERS, guessDelimiter } from "./delimiter";
 export { COMMA_NUMBER, guessDecimalMark, POINT_NUMBER, readNumber, writeDecimal, type DecimalMark } from "./numbers";
 export {
   alkalinityFactor,
+  dicBasis,
   isAlkalinityUnit,
   molalFactor,
   POTENTIAL_UNITS,

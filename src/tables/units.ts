@@ -4,7 +4,7 @@
  * taken as 1 kg (common practice). Molar masses come from the caller (the element records), so this file holds no
  * chemistry data of its own.
  */
-import { CACO3_GRAMS_PER_EQUIVALENT } from "../chemistry";
+import { CACO3_GRAMS_PER_EQUIVALENT, HCO3_GRAMS_PER_MOLE } from "../chemistry";
 
 /** Temperature scales a header can name. */
 export type TemperatureScale = "C" | "F" | "K";
@@ -30,7 +30,8 @@ export const POTENTIAL_UNITS: Readonly<Record<PotentialUnit, number>> = { V: 1, 
 
 /**
  * Units of the water columns. Alkalinity: mg/L as CaCO3 (the utility unit, the default), meq/L (also written
- * mmol/L: the acid capacity to pH 4.3) or French degrees (°f, the "TAC" of French labs: 10 mg/L as CaCO3). Totals: mg/L or µg/L of the column's own ion, mg/L as SO4, as S or as C,
+ * mmol/L: the acid capacity to pH 4.3) or French degrees (°f, the "TAC" of French labs: 10 mg/L as CaCO3); or
+ * bicarbonate, which goes the same way through REDOX.DIC (its basis "bicarbonate"): mg/L as HCO3 or mmol/L of HCO3. Totals: mg/L or µg/L of the column's own ion, mg/L as SO4, as S or as C,
  * orthophosphate mg/L as PO4 or as P,
  * mmol/L, µmol/L, or mol/kg.
  */
@@ -38,6 +39,8 @@ export type WaterUnit =
   | "mg/L CaCO3"
   | "meq/L"
   | "degf"
+  | "mg/L HCO3"
+  | "mmol/L HCO3"
   | "mg/L"
   | "ug/L"
   | "mmol/L"
@@ -61,6 +64,8 @@ interface WaterUnitEntry {
   readonly weighed: FormulaParts | "own" | null;
   /** Alkalinity units: mg/L as CaCO3 per unit (null for totals). */
   readonly asCaCO3: number | null;
+  /** Bicarbonate units: mg/L as HCO3 per unit (absent for the others). */
+  readonly asHCO3?: number;
 }
 
 export const WATER_UNITS: Readonly<Record<WaterUnit, WaterUnitEntry>> = {
@@ -68,6 +73,9 @@ export const WATER_UNITS: Readonly<Record<WaterUnit, WaterUnitEntry>> = {
   "meq/L": { words: "meq/L", perLitre: 1e-3, weighed: null, asCaCO3: CACO3_GRAMS_PER_EQUIVALENT },
   // one French degree is 10 mg/L as CaCO3 (common practice: the French degree of hardness and of TA/TAC)
   degf: { words: "°f (French degrees)", perLitre: 1e-2, weighed: null, asCaCO3: 10 },
+  "mg/L HCO3": { words: "mg/L as HCO3", perLitre: 1e-3, weighed: null, asCaCO3: null, asHCO3: 1 },
+  // 1 mmol of HCO3− is 61.016 mg (alkalinity.ts, IUPAC atomic weights)
+  "mmol/L HCO3": { words: "mmol/L of HCO3", perLitre: 1e-3, weighed: null, asCaCO3: null, asHCO3: HCO3_GRAMS_PER_MOLE },
   "mg/L": { words: "mg/L", perLitre: 1e-3, weighed: "own", asCaCO3: null },
   "ug/L": { words: "µg/L", perLitre: 1e-6, weighed: "own", asCaCO3: null },
   "mmol/L": { words: "mmol/L", perLitre: 1e-3, weighed: null, asCaCO3: null },
@@ -85,9 +93,17 @@ export const WATER_UNIT_WORDS: Readonly<Record<WaterUnit, string>> = Object.from
   Object.entries(WATER_UNITS).map(([unit, entry]) => [unit, entry.words]),
 ) as Record<WaterUnit, string>;
 
-/** Whether a unit is an alkalinity unit (converted to mg/L as CaCO3, then to DIC with the row's pH). */
+/**
+ * Whether a unit goes through REDOX.DIC with the row's pH (an alkalinity unit, converted to mg/L as CaCO3, or a
+ * bicarbonate unit, converted to mg/L as HCO3: dicBasis says which).
+ */
 export function isAlkalinityUnit(unit: WaterUnit): boolean {
-  return WATER_UNITS[unit].asCaCO3 !== null;
+  return WATER_UNITS[unit].asCaCO3 !== null || WATER_UNITS[unit].asHCO3 !== undefined;
+}
+
+/** The basis REDOX.DIC takes a unit's numbers in: "bicarbonate" for the bicarbonate units, else "alkalinity". */
+export function dicBasis(unit: WaterUnit): "alkalinity" | "bicarbonate" {
+  return WATER_UNITS[unit].asHCO3 !== undefined ? "bicarbonate" : "alkalinity";
 }
 
 /**
@@ -96,14 +112,14 @@ export function isAlkalinityUnit(unit: WaterUnit): boolean {
  */
 export function molalFactor(unit: WaterUnit, ownIon: FormulaParts, molarMass: (parts: FormulaParts) => number): number {
   const entry = WATER_UNITS[unit];
-  if (entry.asCaCO3 !== null) throw new Error(`${entry.words} is an alkalinity unit, not a total`);
+  if (isAlkalinityUnit(unit)) throw new Error(`${entry.words} is an alkalinity unit, not a total`);
   if (entry.weighed === null) return entry.perLitre;
   return entry.perLitre / molarMass(entry.weighed === "own" ? ownIon : entry.weighed);
 }
 
-/** mg/L as CaCO3 per unit of an alkalinity column. */
+/** mg/L as CaCO3 per unit of an alkalinity column (mg/L as HCO3 per unit of a bicarbonate one: dicBasis). */
 export function alkalinityFactor(unit: WaterUnit): number {
-  const factor = WATER_UNITS[unit].asCaCO3;
-  if (factor === null) throw new Error(`${WATER_UNITS[unit].words} is not an alkalinity unit`);
+  const factor = WATER_UNITS[unit].asCaCO3 ?? WATER_UNITS[unit].asHCO3;
+  if (factor === null || factor === undefined) throw new Error(`${WATER_UNITS[unit].words} is not an alkalinity unit`);
   return factor;
 }

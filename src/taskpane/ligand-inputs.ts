@@ -15,7 +15,9 @@
  */
 import {
   AlkalinityError,
+  AlkalinityProblem,
   dicFromAlkalinity,
+  dicFromBicarbonateOrProblem,
   hasLigands,
   LIGAND_ORDER,
   LigandName,
@@ -25,6 +27,7 @@ import {
 } from "../chemistry";
 import {
   alkalinityFactor,
+  dicBasis,
   isAlkalinityUnit,
   molalFactor,
   readNumber,
@@ -114,14 +117,20 @@ export function rowTotal(
   if (ligand === "carbonate" && !isAlkalinityUnit(column.unit))
     total = value * molalFactor(column.unit, { C: 1 }, (parts) => molarMass(db, parts));
   else if (ligand === "carbonate") {
-    const mgCaCO3 = value * alkalinityFactor(column.unit);
-    if (mgCaCO3 === 0) return { problem: "alkalinity is 0" };
-    try {
-      total = dicFromAlkalinity(mgCaCO3, pH, celsius, db);
-    } catch (error) {
-      if (error instanceof AlkalinityError) return { problem: error.message };
-      throw error;
-    }
+    const measured = value * alkalinityFactor(column.unit); // mg/L as CaCO3, or as HCO3 (dicBasis)
+    const bicarbonate = dicBasis(column.unit) === "bicarbonate";
+    if (measured === 0) return { problem: `${bicarbonate ? "bicarbonate" : "alkalinity"} is 0` };
+    if (bicarbonate) {
+      const dic = dicFromBicarbonateOrProblem(measured, pH, celsius);
+      if (dic instanceof AlkalinityProblem) return { problem: dic.message };
+      total = dic;
+    } else
+      try {
+        total = dicFromAlkalinity(measured, pH, celsius, db);
+      } catch (error) {
+        if (error instanceof AlkalinityError) return { problem: error.message };
+        throw error;
+      }
   } else total = value * molalFactor(column.unit, OWN_ION[ligand], (parts) => molarMass(db, parts));
   if (total === 0) return 0;
   if (!(total > 0 && total <= MAX_LIGAND_TOTAL))

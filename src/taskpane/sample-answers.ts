@@ -22,6 +22,7 @@ import {
 import { ionicArgumentFor } from "./ionic-input";
 import {
   alkalinityFactor,
+  dicBasis,
   isAlkalinityUnit,
   molalFactor,
   type FormulaParts,
@@ -35,6 +36,8 @@ export interface RowLigand {
   readonly column: number;
   readonly kind: "alkalinity" | "total";
   readonly factor: number;
+  /** REDOX.DIC's basis for an "alkalinity" column: total alkalinity, or bicarbonate (× factor is mg/L as HCO3). */
+  readonly basis?: "alkalinity" | "bicarbonate";
 }
 
 /** The arguments every row shares, and where the per-row ones come from. */
@@ -126,7 +129,7 @@ function ligandColumns(
   for (const l of plan.ligands) {
     const values = column(rows, l.column, (c) => cellValue(c, l.factor));
     if (l.kind === "alkalinity") {
-      const dic = dicAt(values, pH, temperature);
+      const dic = dicAt(values, pH, temperature, l.basis ?? "alkalinity");
       dic.forEach(([d], r) => (errors[r] ??= d instanceof CellError ? d : null));
       args[l.ligand] = dic.map(([d]) => [passOn(d)]);
     } else args[l.ligand] = values;
@@ -198,7 +201,13 @@ export function answerSamples(plan: AnswerPlan, rows: readonly (readonly unknown
  */
 export function rowLigand(ligand: LigandName, column: WaterColumn): RowLigand {
   if (ligand === "carbonate" && isAlkalinityUnit(column.unit))
-    return { ligand, column: column.index, kind: "alkalinity", factor: alkalinityFactor(column.unit) };
+    return {
+      ligand,
+      column: column.index,
+      kind: "alkalinity",
+      factor: alkalinityFactor(column.unit),
+      basis: dicBasis(column.unit),
+    };
   const ownIon: FormulaParts = ligand === "carbonate" ? { C: 1 } : ligand === "chloride" ? { Cl: 1 } : { S: 1, O: 4 };
   return { ligand, column: column.index, kind: "total", factor: molalFactor(column.unit, ownIon, molarMass) };
 }

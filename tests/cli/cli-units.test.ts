@@ -9,6 +9,7 @@ import { join } from "node:path";
 import { Writable } from "node:stream";
 import { parse as parseSync } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { dicFromBicarbonateOrProblem } from "../../src/chemistry/alkalinity";
 import { runCommand } from "../../src/cli/run";
 
 class Capture extends Writable {
@@ -229,5 +230,17 @@ describe("European lab exports: headers in their own language", () => {
     const en = await results("en-sce.csv", same, ["--metal", "Fe"]);
     expect(fr.r.code).toBe(0);
     expect(fr.rows.map(columns)).toEqual(en.rows.map(columns));
+  });
+
+  it('a German analysis reporting Hydrogencarbonat: DIC through REDOX.DIC with basis "bicarbonate"', async () => {
+    const text =
+      "Probe;pH-Wert;Redoxpotential (mV, Ag/AgCl 3 M);Temperatur (°C);Hydrogencarbonat (mg/l)\nA;7,4;180;11,0;183\n";
+    const de = await results("hco3.csv", text, ["--metal", "Cu"], ";");
+    expect(de.r.code).toBe(0);
+    const expected = dicFromBicarbonateOrProblem(183, 7.4, 11) as number;
+    expect(Number(de.rows[0].DIC_mol_kg.replace(",", "."))).toBeCloseTo(expected, 12);
+    expect(de.r.summary?.notes?.find((n) => n.startsWith("water:"))).toMatch(
+      /carbonate from "Hydrogencarbonat \(mg\/l\)" \(bicarbonate in mg\/L as HCO3, through REDOX.DIC .* basis "bicarbonate"\)/,
+    );
   });
 });

@@ -9,7 +9,12 @@
  */
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { alkalinityEquivalents, dicFromAlkalinity } from "../../src/chemistry/alkalinity";
+import {
+  AlkalinityProblem,
+  alkalinityEquivalents,
+  dicFromAlkalinity,
+  dicFromBicarbonateOrProblem,
+} from "../../src/chemistry/alkalinity";
 import { carbonicPK1, carbonicPK2, logHenryCO2 } from "../../src/chemistry/carbonic-acid";
 import { getDatabase } from "../../src/chemistry/database";
 import { ligandOwnCells } from "../../src/chemistry/ligand-cells";
@@ -120,5 +125,50 @@ describe("dissolved inorganic carbon from alkalinity (hand calculations)", () =>
     expect((hot[0][0] as CellError).message).toMatch(
       /^temperature: 150 °C is outside 0 to 100 °C.*Plummer & Busenberg/,
     );
+  });
+});
+
+describe("dissolved inorganic carbon from bicarbonate (hand calculations)", () => {
+  it("122 mg/L HCO3 at pH 7.5, 25 °C: DIC = [HCO3−]/α1, step by step", () => {
+    const h = 10 ** -7.5;
+    const k1 = 10 ** -6.352; // Harned & Davis 1943 via Plummer & Busenberg 1982 (from memory)
+    const k2 = 10 ** -10.329; // Harned & Scholes 1941 via Plummer & Busenberg 1982 (from memory)
+    const alpha1 = (k1 * h) / (h * h + k1 * h + k1 * k2); // 0.932: some 7 % of DIC is CO2(aq)
+    const hco3 = 122 / 61016; // mol/L: HCO3− 61.016 g/mol (IUPAC atomic weights; common practice)
+    const expected = hco3 / alpha1;
+    expect(expected).toBeGreaterThan(2.13e-3);
+    expect(expected).toBeLessThan(2.16e-3);
+    expect(Math.abs((dicFromBicarbonateOrProblem(122, 7.5, 25) as number) / expected - 1)).toBeLessThan(2e-3);
+  });
+
+  it("one water, two reports: its bicarbonate and its alkalinity give the same DIC (pH 6–10, 0–90 °C)", () => {
+    for (const celsius of [0, 12, 25, 60, 90])
+      for (const pH of [6, 7, 7.8, 8.3, 9, 10]) {
+        const dicTrue = 2.5e-3; // mol/kg
+        const h = 10 ** -pH;
+        const k1 = 10 ** -carbonicPK1(celsius);
+        const k2 = 10 ** -carbonicPK2(celsius);
+        const d = h * h + k1 * h + k1 * k2;
+        const hco3MgL = dicTrue * ((k1 * h) / d) * 61016;
+        const alkMgL = (dicTrue * ((k1 * h + 2 * k1 * k2) / d) + 10 ** -pKw(celsius) / h - h) * 50043.5;
+        expect(dicFromBicarbonateOrProblem(hco3MgL, pH, celsius)).toBeCloseTo(dicTrue, 9);
+        expect(dicFromAlkalinity(alkMgL, pH, celsius)).toBeCloseTo(dicTrue, 9);
+      }
+  });
+
+  it("no answer where bicarbonate is under a thousandth of the carbonate (pH 2, pH 13.5)", () => {
+    expect(dicFromBicarbonateOrProblem(100, 2, 25)).toBeInstanceOf(AlkalinityProblem);
+    expect(dicFromBicarbonateOrProblem(100, 13.5, 25)).toBeInstanceOf(AlkalinityProblem);
+    expect(dicFromBicarbonateOrProblem(100, 4, 25)).not.toBeInstanceOf(AlkalinityProblem);
+  });
+
+  it('REDOX.DIC with basis "bicarbonate"; an unknown basis is #VALUE! naming both', () => {
+    const out = dic([[122], [122]], [[7.5], [7.5]], [[25]], [["bicarbonate"], ["Alkalinity"]]);
+    expect(out[0][0]).toBeCloseTo(dicFromBicarbonateOrProblem(122, 7.5, 25) as number, 15);
+    expect(out[1][0]).toBeCloseTo(dicFromAlkalinity(122, 7.5, 25), 15);
+    const bad = dic([[122]], [[7.5]], [[25]], [["HCO3"]]);
+    expect((bad[0][0] as CellError).code).toBe("#VALUE!");
+    expect((bad[0][0] as CellError).message).toMatch(/"alkalinity".*"bicarbonate"/);
+    expect((dic([[100]], [[13.5]], [[25]], [["bicarbonate"]])[0][0] as CellError).code).toBe("#N/A");
   });
 });

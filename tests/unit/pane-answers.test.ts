@@ -284,3 +284,52 @@ describe("a log with a conductivity column (fixture, invented)", () => {
     expect(changed).toBeGreaterThan(0);
   });
 });
+
+describe("a log reporting bicarbonate instead of alkalinity (fixture, invented)", () => {
+  it('pane, command line and worksheet functions agree: DIC through REDOX.DIC(…, "bicarbonate")', async () => {
+    const text = [
+      "Messstelle;pH-Wert;Eh (V);Temperatur (°C);Hydrogencarbonat (mg/l)",
+      "A;7.4;-0.05;11;183",
+      "B;8.2;0.35;9;250",
+      "C;6.9;0.1;14;60",
+    ].join("\n");
+    const file = join(dir, "hco3.csv");
+    const output = join(dir, "hco3-results.csv");
+    writeFileSync(file, text);
+    const result = await runCommand([file, "--metal", "Cu,Pb", "--output", output, "--no-svg", "--full-precision"], {
+      stdout: new PassThrough(),
+      stderr: new PassThrough(),
+    });
+    expect(result.code).toBe(0);
+    const lines = parse(readFileSync(output, "utf8"), { columns: true, delimiter: ";" }) as Record<string, string>[];
+    const t = tableFromText(text, "hco3");
+    const headers = t.headers as string[];
+    const m = matchHeaders(headers).mapping;
+    const carbonate = matchWaterColumns(headers, m).alkalinity!;
+    expect(carbonate).toEqual({ index: 4, unit: "mg/L HCO3" });
+    for (const metal of ["Cu", "Pb"]) {
+      const plan = {
+        metal,
+        phColumn: 1,
+        potentialColumn: 2,
+        temperatureColumn: 3,
+        temperatureUnit: "C" as const,
+        celsius: 25,
+        electrode: "SHE",
+        unit: "V" as const,
+        activity: 1e-6,
+        ligands: [rowLigand("carbonate", carbonate)],
+        typed: {},
+      };
+      answerSamples(plan, t.rows).forEach((a, r) => {
+        const row = t.rows[r].map(Number);
+        const co3 = dicAt(row[4], row[1], row[3], "bicarbonate")[0][0] as number;
+        expect(Number(lines[r].DIC_mol_kg)).toBeCloseTo(co3, 12);
+        const sheet = speciesAt(metal, row[1], row[2], row[3], 1e-6, co3)[0][0];
+        expect("error" in a ? a.error : a.species, `${metal} row ${r}`).toBe(sheet);
+        if (!("error" in a)) expect(a.water.carbonate).toBeCloseTo(co3, 15); // the total the pane passed
+        expect(lines[r][`${metal}_species`]).toBe(sheet);
+      });
+    }
+  });
+});

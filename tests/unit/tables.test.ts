@@ -95,6 +95,23 @@ describe("header matching", () => {
     });
   });
 
+  it("a bicarbonate column gives the carbonate when no alkalinity column does (mg/L as HCO3, or mmol/L)", () => {
+    expect(matchWaterColumns(["pH", "ORP", "Hydrogencarbonat (mg/l)"]).alkalinity).toEqual({
+      index: 2,
+      unit: "mg/L HCO3",
+    });
+    expect(matchWaterColumns(["HCO3 (mmol/L)"]).alkalinity).toEqual({ index: 0, unit: "mmol/L HCO3" });
+    expect(matchWaterColumns(["Bicarbonate (mg/L)"]).alkalinity?.unit).toBe("mg/L HCO3");
+    // "bicarbonate alkalinity as CaCO3" is alkalinity; an alkalinity column wins over a bicarbonate one
+    expect(matchWaterColumns(["Bicarbonate alkalinity (mg/L as CaCO3)"]).alkalinity?.unit).toBe("mg/L CaCO3");
+    expect(matchWaterColumns(["HCO3 (mg/L)", "Alkalinity (mg/L CaCO3)"]).alkalinity).toEqual({
+      index: 1,
+      unit: "mg/L CaCO3",
+    });
+    // 1 mmol/L of HCO3− is 61.016 mg/L (IUPAC atomic weights; common practice)
+    expect(alkalinityFactor("mmol/L HCO3")).toBeCloseTo(61.016, 3);
+  });
+
   it("a conductivity header at 25 °C in German or French is not the temperature column", () => {
     expect(matchHeaders(["pH", "ORP", "Leitfähigkeit bei 25 °C (µS/cm)", "Temp"]).mapping.temperature).toBe(3);
     expect(matchHeaders(["pH", "ORP", "Conductivité à 25 °C", "T (°C)"]).mapping.temperature).toBe(3);

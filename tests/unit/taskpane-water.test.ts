@@ -33,6 +33,7 @@ import { diagramLayout, renderDiagram, sampleText } from "../../src/diagram/diag
 import { makeAxes } from "../../src/diagram/axes";
 import { touchingGroups } from "../../src/diagram/label-placement";
 import { readSamples } from "../../src/taskpane/sample-table";
+import { rowLigand } from "../../src/taskpane/sample-answers";
 import { EMPTY_MAPPING } from "../../src/tables";
 
 const db = getDatabase();
@@ -91,6 +92,24 @@ describe("row values → ligand totals", () => {
     expect(rowTotal(db, "carbonate", { index: 0, unit: "meq/L" }, 2, 7.8, 12)).toBe(
       roundTotal(dicFromAlkalinity(2 * 50.0435, 7.8, 12)),
     );
+  });
+
+  it('bicarbonate gives REDOX.DIC\'s value with basis "bicarbonate" (mg/L as HCO3, or mmol/L × 61.016)', () => {
+    const expected = dicAt(183, 7.4, 11, "bicarbonate")[0][0] as number;
+    expect(rowTotal(db, "carbonate", { index: 0, unit: "mg/L HCO3" }, "183", 7.4, 11)).toBe(roundTotal(expected));
+    expect(rowTotal(db, "carbonate", { index: 0, unit: "mmol/L HCO3" }, 3, 7.4, 11)).toBe(
+      roundTotal(dicAt(3 * 61.016, 7.4, 11, "bicarbonate")[0][0] as number),
+    );
+    // not the alkalinity reading of the same number (183 mg/L as CaCO3 is 3.66 meq/L, as HCO3 3.00 mmol/L)
+    expect(expected / (dicAt(183, 7.4, 11)[0][0] as number)).toBeLessThan(0.85);
+    const far = rowTotal(db, "carbonate", { index: 0, unit: "mg/L HCO3" }, 100, 13.5, 25);
+    expect(far).toMatchObject({ problem: expect.stringMatching(/bicarbonate/) });
+    // the pane's per-row answers pass the basis on to REDOX.DIC
+    expect(rowLigand("carbonate", { index: 4, unit: "mg/L HCO3" })).toMatchObject({
+      kind: "alkalinity",
+      basis: "bicarbonate",
+    });
+    expect(rowLigand("carbonate", { index: 4, unit: "mg/L CaCO3" })).toMatchObject({ basis: "alkalinity" });
   });
 
   it("chloride and sulfate by their molar masses (hand calculation, atomic weights of data/elements.json)", () => {
