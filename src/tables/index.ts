@@ -43,7 +43,15 @@ export {
   type IonicUnit,
 } from "./ionic-columns";
 export { DELIMITERS, guessDelimiter } from "./delimiter";
-export { COMMA_NUMBER, guessDecimalMark, POINT_NUMBER, readNumber, writeDecimal, type DecimalMark } from "./numbers";
+export {
+  COMMA_NUMBER,
+  guessDecimalMark,
+  POINT_NUMBER,
+  readNumber,
+  withDecimalCommas,
+  writeDecimal,
+  type DecimalMark,
+} from "./numbers";
 export {
   alkalinityFactor,
   dicBasis,

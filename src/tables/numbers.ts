@@ -76,3 +76,14 @@ export function guessDecimalMark(delimiter: string, fields: readonly string[]): 
   const { comma, point } = markVotes(fields);
   return comma > point ? "," : ".";
 }
+
+/**
+ * The cells of a delimited table with its decimal-comma numbers as numbers, when the table writes them so (its
+ * delimiter ";" or tab, and guessDecimalMark says ","); the other cells, and every cell of a decimal-point table,
+ * as they are. For readers that take only decimal points (the pane's sample reader).
+ */
+export function withDecimalCommas(rows: readonly (readonly string[])[], delimiter: string): (string | number)[][] {
+  const mark = guessDecimalMark(delimiter, rows.flat());
+  if (mark === ".") return rows.map((row) => [...row]);
+  return rows.map((row) => row.map((cell) => (cell.includes(",") ? (readNumber(cell, ",") ?? cell) : cell)));
+}

@@ -5,17 +5,18 @@
  */
 import type { HostAdapter, PaneSettings } from "./host";
 import { SETTINGS_KEY } from "./host";
-import { parseDelimited } from "../tables";
+import { parseDelimited, withDecimalCommas } from "../tables";
 import { SampleTable, tableFromBlock } from "./sample-table";
 
 /** The demo log, emitted by the bundler as a file next to the page. */
 export const DEMO_URL = new URL("../../data/demo/sample-log.csv", import.meta.url);
 export const DEMO_NAME = "demo: invented sample log (data/demo/sample-log.csv)";
 
-/** A table from delimited text; row numbers are the text's line numbers. */
+/** A table from delimited text; row numbers are the text's line numbers; decimal commas read where the text uses them. */
 export function tableFromText(text: string, source: string): SampleTable {
   const parsed = parseDelimited(text);
-  return tableFromBlock(parsed.rows, parsed.lines, source);
+  // a European export (";" or tab, decimal commas): its numbers as numbers, as the spreadsheet would hold them
+  return tableFromBlock(withDecimalCommas(parsed.rows, parsed.delimiter), parsed.lines, source);
 }
 
 export interface StandaloneElements {

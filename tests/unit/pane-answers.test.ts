@@ -289,9 +289,9 @@ describe("a log reporting bicarbonate instead of alkalinity (fixture, invented)"
   it('pane, command line and worksheet functions agree: DIC through REDOX.DIC(…, "bicarbonate")', async () => {
     const text = [
       "Messstelle;pH-Wert;Eh (V);Temperatur (°C);Hydrogencarbonat (mg/l)",
-      "A;7.4;-0.05;11;183",
-      "B;8.2;0.35;9;250",
-      "C;6.9;0.1;14;60",
+      "A;7,4;-0,05;11;183",
+      "B;8,2;0,35;9;250",
+      "C;6,9;0,1;14;60",
     ].join("\n");
     const file = join(dir, "hco3.csv");
     const output = join(dir, "hco3-results.csv");
@@ -322,9 +322,9 @@ describe("a log reporting bicarbonate instead of alkalinity (fixture, invented)"
         typed: {},
       };
       answerSamples(plan, t.rows).forEach((a, r) => {
-        const row = t.rows[r].map(Number);
+        const row = t.rows[r].map(Number); // the pasted table holds numbers, its decimal commas read
         const co3 = dicAt(row[4], row[1], row[3], "bicarbonate")[0][0] as number;
-        expect(Number(lines[r].DIC_mol_kg)).toBeCloseTo(co3, 12);
+        expect(Number(lines[r].DIC_mol_kg.replace(",", "."))).toBeCloseTo(co3, 12);
         const sheet = speciesAt(metal, row[1], row[2], row[3], 1e-6, co3)[0][0];
         expect("error" in a ? a.error : a.species, `${metal} row ${r}`).toBe(sheet);
         if (!("error" in a)) expect(a.water.carbonate).toBeCloseTo(co3, 15); // the total the pane passed

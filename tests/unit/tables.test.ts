@@ -17,6 +17,7 @@ import {
   readNumber,
   toCelsius,
   waterColumnAt,
+  withDecimalCommas,
 } from "../../src/tables";
 
 const weight = (parts: Readonly<Record<string, number>>) =>
@@ -153,6 +154,21 @@ describe("delimiters and decimal marks", () => {
     expect(guessDecimalMark(";", ["7.25", "201.5", "1,5"])).toBe(".");
     expect(guessDecimalMark(",", ["7,25"])).toBe(".");
     expect(guessDecimalMark("\t", ["15", "20"])).toBe(".");
+  });
+
+  it("a pasted European table: its decimal-comma numbers become numbers, headers and text stay", () => {
+    const rows = [
+      ["Probe", "pH-Wert", "KS 4,3 (mmol/l)"],
+      ["A", "7,25", "2,4"],
+      ["B", "8", "1,5E-1"],
+    ];
+    expect(withDecimalCommas(rows, ";")).toEqual([
+      ["Probe", "pH-Wert", "KS 4,3 (mmol/l)"],
+      ["A", 7.25, 2.4],
+      ["B", "8", 0.15],
+    ]);
+    // a comma-delimited table has decimal points: nothing is converted
+    expect(withDecimalCommas([["pH"], ["7.25"]], ",")).toEqual([["pH"], ["7.25"]]);
   });
 
   it("reads numbers with either mark; thousands separators are not numbers", () => {
