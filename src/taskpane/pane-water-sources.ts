@@ -6,6 +6,7 @@ import { LIGAND_ORDER, LigandName, MAX_LIGAND_TOTAL } from "../chemistry";
 import {
   ColumnMapping,
   matchWaterColumns,
+  dicBasis,
   WATER_UNIT_WORDS,
   WaterColumn,
   waterColumnAt,
@@ -77,10 +78,12 @@ export function buildWaterSources(
     for (const i of order) {
       if (taken(i)) continue; // pH, potential… are not water columns
       if (i !== found?.index && !mostlyNumbers(table, i)) continue; // site, date, note… are not either
-      const unit = WATER_UNIT_WORDS[waterColumnAt(role, headers, i).unit];
+      const read = waterColumnAt(role, headers, i).unit;
+      const unit = WATER_UNIT_WORDS[read];
+      const what = role === "alkalinity" && dicBasis(read) === "bicarbonate" ? "bicarbonate" : role;
       menu.add(
         columnOption(
-          `from ${i === found?.index ? `the ${role} column` : "column"} “${headers[i] || `column ${i + 1}`}” (${unit})`,
+          `from ${i === found?.index ? `the ${what} column` : "column"} “${headers[i] || `column ${i + 1}`}” (${unit})`,
           `col:${i}`,
           headers[i],
         ),
