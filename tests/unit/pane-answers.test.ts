@@ -18,7 +18,7 @@ import { toSHEAt } from "../../src/functions/electrode-functions";
 import { dissolvedAt, regimeAt, speciesAt } from "../../src/functions/stability-functions";
 import { waterMarginAt } from "../../src/functions/water-functions";
 import { matchHeaders, matchWaterColumns } from "../../src/tables";
-import { answerSamples, rowLigand } from "../../src/taskpane/sample-answers";
+import { answerSamples, rowLigand, type RowLigand } from "../../src/taskpane/sample-answers";
 import { findIonicColumn } from "../../src/taskpane/ionic-input";
 import { ionicStrengthAt } from "../../src/functions/ionic-strength-functions";
 import { tableFromText } from "../../src/taskpane/standalone-adapter";
@@ -45,6 +45,34 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 const cellOf = (v: unknown) =>
   typeof v === "number" ? v : typeof v === "string" && v.trim() !== "" && Number.isFinite(Number(v)) ? Number(v) : v;
+/** Runs a fixture log through the command line; its exit code and result rows (objects by header). */
+async function commandLineRows(name: string, text: string, args: string[], delimiter = ",") {
+  const file = join(dir, `${name}.csv`);
+  const output = join(dir, `${name}-results.csv`);
+  writeFileSync(file, text);
+  const result = await runCommand([file, "--output", output, "--no-svg", ...args], {
+    stdout: new PassThrough(),
+    stderr: new PassThrough(),
+  });
+  const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true, delimiter });
+  return { code: result.code, lines: lines as Record<string, string>[] };
+}
+
+/** The pane's plan for a fixture with pH, E (V vs SHE) and °C in columns 1–3 and the given ligand columns. */
+const fixturePlan = (metal: string, ligands: RowLigand[]) => ({
+  metal,
+  phColumn: 1,
+  potentialColumn: 2,
+  temperatureColumn: 3,
+  temperatureUnit: "C" as const,
+  celsius: 25,
+  electrode: "SHE",
+  unit: "V" as const,
+  activity: 1e-6,
+  ligands,
+  typed: {},
+});
+
 const REGIMES = ["immunity", "passivation", "corrosion"];
 const close = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(b));
 /** The command line writes potentials to 0.1 mV and other numbers to four significant figures. */
@@ -161,39 +189,14 @@ describe("a log with a measured DIC column", () => {
       "D,7.2,0.05,15,",
       "E,6.2,0.55,22,4.4",
     ].join("\n");
-    const file = join(dir, "dic.csv");
-    const output = join(dir, "dic-results.csv");
-    writeFileSync(file, text);
-    const result = await runCommand([file, "--metal", "Cu,Pb,Fe", "--output", output, "--no-svg"], {
-      stdout: new PassThrough(),
-      stderr: new PassThrough(),
-    });
-    expect(result.code).toBe(0);
-    const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<
-      string,
-      string
-    >[];
+    const { code, lines } = await commandLineRows("dic", text, ["--metal", "Cu,Pb,Fe"]);
+    expect(code).toBe(0);
     const t = tableFromText(text, "dic");
     const headers = t.headers as string[];
     const dic = matchWaterColumns(headers, matchHeaders(headers).mapping).dic!;
     expect(dic.index).toBe(4);
     for (const metal of ["Cu", "Pb", "Fe"]) {
-      const answers = answerSamples(
-        {
-          metal,
-          phColumn: 1,
-          potentialColumn: 2,
-          temperatureColumn: 3,
-          temperatureUnit: "C",
-          celsius: 25,
-          electrode: "SHE",
-          unit: "V",
-          activity: 1e-6,
-          ligands: [rowLigand("carbonate", dic)],
-          typed: {},
-        },
-        t.rows,
-      );
+      const answers = answerSamples(fixturePlan(metal, [rowLigand("carbonate", dic)]), t.rows);
       answers.forEach((a, r) => {
         expect("error" in a ? a.error : `${a.species}/${a.regime}`, `${metal} row ${r}`).toBe(
           `${lines[r][`${metal}_species`]}/${lines[r][`${metal}_regime`]}`,
@@ -216,18 +219,8 @@ describe("a log with a conductivity column (fixture, invented)", () => {
       "E,8.3,-0.25,9,90,2400",
       "F,7.0,-0.307,25,40,40000",
     ].join("\n");
-    const file = join(dir, "cond.csv");
-    const output = join(dir, "cond-results.csv");
-    writeFileSync(file, text);
-    const result = await runCommand([file, "--metal", "Cu,Pb,Fe,Zn", "--output", output, "--no-svg"], {
-      stdout: new PassThrough(),
-      stderr: new PassThrough(),
-    });
-    expect(result.code).toBe(1); // row F: 40 000 µS/cm is above the Davies equation's 0.5 mol/kg
-    const lines = parse(readFileSync(output, "utf8"), { columns: true, skip_empty_lines: true }) as Record<
-      string,
-      string
-    >[];
+    const { code, lines } = await commandLineRows("cond", text, ["--metal", "Cu,Pb,Fe,Zn"]);
+    expect(code).toBe(1); // row F: 40 000 µS/cm is above the Davies equation's 0.5 mol/kg
     const t = tableFromText(text, "cond");
     const headers = t.headers as string[];
     const m = matchHeaders(headers).mapping;
@@ -236,19 +229,7 @@ describe("a log with a conductivity column (fixture, invented)", () => {
     expect(ionic).toEqual({ role: "conductivity", index: 5, unit: "uS/cm" });
     let changed = 0;
     for (const metal of ["Cu", "Pb", "Fe", "Zn"]) {
-      const plan = {
-        metal,
-        phColumn: 1,
-        potentialColumn: 2,
-        temperatureColumn: 3,
-        temperatureUnit: "C" as const,
-        celsius: 25,
-        electrode: "SHE",
-        unit: "V" as const,
-        activity: 1e-6,
-        ligands: [rowLigand("carbonate", alkalinity)],
-        typed: {},
-      };
+      const plan = fixturePlan(metal, [rowLigand("carbonate", alkalinity)]);
       const answers = answerSamples({ ...plan, ionic }, t.rows);
       const ideal = answerSamples(plan, t.rows);
       answers.forEach((a, r) => {
@@ -293,34 +274,15 @@ describe("a log reporting bicarbonate instead of alkalinity (fixture, invented)"
       "B;8,2;0,35;9;250",
       "C;6,9;0,1;14;60",
     ].join("\n");
-    const file = join(dir, "hco3.csv");
-    const output = join(dir, "hco3-results.csv");
-    writeFileSync(file, text);
-    const result = await runCommand([file, "--metal", "Cu,Pb", "--output", output, "--no-svg", "--full-precision"], {
-      stdout: new PassThrough(),
-      stderr: new PassThrough(),
-    });
-    expect(result.code).toBe(0);
-    const lines = parse(readFileSync(output, "utf8"), { columns: true, delimiter: ";" }) as Record<string, string>[];
+    const { code, lines } = await commandLineRows("hco3", text, ["--metal", "Cu,Pb", "--full-precision"], ";");
+    expect(code).toBe(0);
     const t = tableFromText(text, "hco3");
     const headers = t.headers as string[];
     const m = matchHeaders(headers).mapping;
     const carbonate = matchWaterColumns(headers, m).alkalinity!;
     expect(carbonate).toEqual({ index: 4, unit: "mg/L HCO3" });
     for (const metal of ["Cu", "Pb"]) {
-      const plan = {
-        metal,
-        phColumn: 1,
-        potentialColumn: 2,
-        temperatureColumn: 3,
-        temperatureUnit: "C" as const,
-        celsius: 25,
-        electrode: "SHE",
-        unit: "V" as const,
-        activity: 1e-6,
-        ligands: [rowLigand("carbonate", carbonate)],
-        typed: {},
-      };
+      const plan = fixturePlan(metal, [rowLigand("carbonate", carbonate)]);
       answerSamples(plan, t.rows).forEach((a, r) => {
         const row = t.rows[r].map(Number); // the pasted table holds numbers, its decimal commas read
         const co3 = dicAt(row[4], row[1], row[3], "bicarbonate")[0][0] as number;
