@@ -157,6 +157,15 @@ export interface ResolvedWater {
   readonly fallbacks: Partial<Record<LigandName, number>>;
   /** Ligands set to read from a column that gave no usable row at all (left out of the water). */
   readonly unusable: LigandName[];
+  /** Per ligand read per row, what its column holds ("alkalinity", "bicarbonate", "DIC", "chloride" …). */
+  readonly readFrom: Partial<Record<LigandName, string>>;
+}
+
+/** What a ligand's column holds, in words: the carbonate's as its unit says (alkalinity, bicarbonate or DIC). */
+function columnContent(ligand: LigandName, column: WaterColumn): string {
+  if (ligand !== "carbonate") return LIGAND_COLUMN[ligand];
+  if (!isAlkalinityUnit(column.unit)) return "DIC";
+  return dicBasis(column.unit) === "bicarbonate" ? "bicarbonate" : "alkalinity";
 }
 
 /**
@@ -168,6 +177,7 @@ export function resolveWater(settings: WaterSettings, rows: readonly RowTotals[]
   const fromColumns: LigandName[] = [];
   const fallbacks: Partial<Record<LigandName, number>> = {};
   const unusable: LigandName[] = [];
+  const readFrom: Partial<Record<LigandName, string>> = {};
   for (const ligand of LIGAND_ORDER) {
     const source = settings[ligand];
     if (source.kind === "typed") {
@@ -182,6 +192,7 @@ export function resolveWater(settings: WaterSettings, rows: readonly RowTotals[]
     const median = medianOf(values);
     if (median > 0) diagram[ligand] = roundTotal(median);
     fromColumns.push(ligand);
+    readFrom[ligand] = columnContent(ligand, source.column);
     fallbacks[ligand] = rows.length - values.length;
   }
   const perSample = rows.map((r) => {
@@ -196,7 +207,7 @@ export function resolveWater(settings: WaterSettings, rows: readonly RowTotals[]
     }
     return own;
   });
-  return { diagram, perSample, fromColumns, fallbacks, unusable };
+  return { diagram, perSample, fromColumns, fallbacks, unusable, readFrom };
 }
 
 /** Names of the ligands present, for titles: "carbonate, chloride and sulfur". */
@@ -211,7 +222,9 @@ export function ligandNames(totals: LigandTotals): string {
 export function waterCaption(water: ResolvedWater): string {
   if (!hasLigands(water.diagram)) return "";
   const per = water.fromColumns.map(
-    (l) => `${LIGAND_WORDS[l]} is the median of the rows' ${LIGAND_COLUMN[l]} values and each sample uses its own`,
+    (l) =>
+      `${LIGAND_WORDS[l]} is the median of the rows' totals from their ${water.readFrom[l] ?? LIGAND_COLUMN[l]} and ` +
+      "each sample uses its own",
   );
   return (
     `Water: ${formatTotals(water.diagram)}${per.length > 0 ? ` (${per.join("; ")})` : ""}; ` +

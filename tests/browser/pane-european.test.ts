@@ -54,6 +54,9 @@ describe("a German lab export pasted into the pane at 350 px", () => {
     }));
     expect(setting).toMatchObject({ unit: "mV", electrode: "AgCl-3M" });
     expect(setting.carbonate).toBe("from the bicarbonate column “Hydrogencarbonat (mg/l)” (mg/L as HCO3)");
+    expect(await page.textContent("#diagram-caption")).toMatch(
+      /DIC is the median of the rows' totals from their bicarbonate/,
+    );
   });
 
   it("draws every row, each marker's regime that of REDOX.REGIME with its DIC from its bicarbonate", async () => {

@@ -142,7 +142,7 @@ describe("lead rows of the demo log in a water with carbonate, chloride and sulf
     expect(await page.textContent("#diagram-title")).toBe("Lead in water with carbonate, sulfur and chloride");
     const caption = (await page.textContent("#diagram-caption")) ?? "";
     expect(caption).toMatch(/Water: DIC [\d.]+, S 0\.2, Cl 0\.5 mmol\/kg/);
-    expect(caption).toMatch(/median of the rows' alkalinity/);
+    expect(caption).toMatch(/median of the rows' totals from their alkalinity/);
     expect(caption).toMatch(/speciated\s*exactly\s*at\s*every\s*point/);
     await page.focus("#diagram .rc-samples");
     await page.keyboard.press("ArrowRight");

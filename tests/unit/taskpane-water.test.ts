@@ -170,8 +170,15 @@ describe("the diagram's and each sample's water", () => {
     expect(r.fallbacks).toEqual({ carbonate: 1 });
     expect(formatTotals(r.diagram)).toBe("DIC 2, Cl 0.5 mmol/kg");
     expect(waterCaption(r)).toMatch(
-      /^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' alkalinity values.*\); each ligand is speciated exactly at every point/,
+      /^Water: DIC 2, Cl 0\.5 mmol\/kg \(DIC is the median of the rows' totals from their alkalinity.*\); each ligand is speciated exactly at every point/,
     );
+    // the caption names what the column holds: a bicarbonate or a DIC column is not called alkalinity
+    const from = (unit: "mg/L HCO3" | "mmol/L") =>
+      waterCaption(
+        resolveWater({ ...settings, carbonate: { kind: "column", column: { index: 0, unit } } }, [{ carbonate: 1e-3 }]),
+      );
+    expect(from("mg/L HCO3")).toMatch(/DIC is the median of the rows' totals from their bicarbonate/);
+    expect(from("mmol/L")).toMatch(/DIC is the median of the rows' totals from their DIC/);
     const none = resolveWater(settings, [{ carbonate: { problem: "blank" } }]);
     expect(none.unusable).toEqual(["carbonate"]);
     expect(none.diagram).toEqual({ chloride: 5e-4 });
