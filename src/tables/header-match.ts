@@ -120,7 +120,7 @@ export function temperatureScale(tokens: readonly string[]): TemperatureScale {
   return "C";
 }
 
-/** "Sample" in other languages: de, fr, es, it, nl, pt ("Probe" alone: as a word of a longer header it is a sensor). */
+/** "Sample" in other languages: de, fr, es, it, nl, pt; only as a short header's first word ("ORP probe" is a sensor). */
 const SAMPLE_WORDS = ["probe", "probennummer", "echantillon", "muestra", "campione", "monster", "amostra"];
 
 function isId(tokens: readonly string[]): boolean {
@@ -132,12 +132,22 @@ function isId(tokens: readonly string[]): boolean {
 }
 
 /** Sampling point in other languages: de, fr, es, it, nl, pt. */
-const SITE_WORDS = ["messstelle", "entnahmestelle", "probenahmestelle", "standort", "lieu", "punto", "estacion"];
-const MORE_SITE_WORDS = ["stazione", "meetpunt", "locatie", "local", "ponto"];
+const SITE_WORDS = [
+  "messstelle",
+  "entnahmestelle",
+  "probenahmestelle",
+  "standort",
+  "lieu",
+  "punto",
+  "estacion",
+  "stazione",
+  "meetpunt",
+  "locatie",
+  "ponto",
+];
 
 function isSite(tokens: readonly string[]): boolean {
-  const named = has(tokens, "site", "location", "station", "well", "tap", "point", ...SITE_WORDS, ...MORE_SITE_WORDS);
-  return named && !has(tokens, "id");
+  return has(tokens, "site", "location", "station", "well", "tap", "point", ...SITE_WORDS) && !has(tokens, "id");
 }
 
 function isMetal(tokens: readonly string[]): boolean {
