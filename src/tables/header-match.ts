@@ -101,9 +101,21 @@ export const CONDUCTIVITY_WORDS = [
   "condutividade",
 ];
 
+/**
+ * Total dissolved solids, as labs name it: "TDS", "total dissolved solids", and in other languages the evaporation
+ * residue (de), "résidu sec" (fr), "residuo fisso" (it), "sólidos disueltos" (es), "droogrest" (nl) …
+ */
+export function namesDissolvedSolids(tokens: readonly string[]): boolean {
+  if (has(tokens, "tds") || (has(tokens, "dissolved") && has(tokens, "solids"))) return true;
+  if (has(tokens, "abdampfruckstand", "trockenruckstand", "droogrest")) return true;
+  if (has(tokens, "residu", "residuo") && has(tokens, "sec", "seco", "fisso", "secco")) return true;
+  return has(tokens, "solidos", "solides", "solidi") && has(tokens, "dissous", "disueltos", "dissolvidos", "disciolti");
+}
+
 function isTemperature(tokens: readonly string[]): boolean {
-  // "Conductivity (µS/cm at 25 °C)"; "TAC (°f)" is alkalinity in French degrees
+  // "Conductivity (µS/cm at 25 °C)", "Résidu sec à 180 °C"; "TAC (°f)" is alkalinity in French degrees
   if (has(tokens, "conductivity", "conductance", "ec", "sc", "spcond", ...CONDUCTIVITY_WORDS)) return false;
+  if (namesDissolvedSolids(tokens)) return false;
   if (namesAlkalinity(tokens)) return false;
   if (has(tokens, "temp", "temperature", "degc", "degf", "celsius", "fahrenheit", "kelvin")) return true;
   if (has(tokens, "temperatur", "temperatura", "temperatuur", "wassertemperatur")) return true; // de, es/it/pt, nl

@@ -7,7 +7,7 @@
  * Pure functions: no host, no DOM. The conversion to mol/kg is src/chemistry/ionic-strength.ts (one copy).
  */
 import { ionicStrengthFrom, type IonicStrengthBasis } from "../chemistry";
-import { CONDUCTIVITY_WORDS, headerTokens } from "./header-match";
+import { CONDUCTIVITY_WORDS, headerTokens, namesDissolvedSolids } from "./header-match";
 import { readNumber } from "./numbers";
 
 export type IonicColumnRole = "ionicStrength" | "conductivity" | "tds";
@@ -81,7 +81,7 @@ function isConductivity(tokens: readonly string[]): boolean {
 }
 
 function isTds(tokens: readonly string[]): boolean {
-  return has(tokens, "tds") || (has(tokens, "dissolved") && has(tokens, "solids"));
+  return namesDissolvedSolids(tokens);
 }
 
 const TESTS: Readonly<Record<IonicColumnRole, (t: readonly string[]) => boolean>> = {

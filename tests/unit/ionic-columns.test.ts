@@ -27,6 +27,12 @@ describe("ionic-strength columns by header", () => {
     expect(roles(["TDS (mg/L)"])).toEqual([["tds", 0, "mg/L"]]);
     expect(roles(["TDS ppm"])).toEqual([["tds", 0, "mg/L"]]);
     expect(roles(["Total dissolved solids (g/L)"])).toEqual([["tds", 0, "g/L"]]);
+    // other languages' names for it (accents dropped before matching)
+    expect(roles(["Abdampfrückstand (mg/l)"])).toEqual([["tds", 0, "mg/L"]]);
+    expect(roles(["Résidu sec à 180 °C (mg/L)"])).toEqual([["tds", 0, "mg/L"]]);
+    expect(roles(["Sólidos disueltos totales (mg/L)"])).toEqual([["tds", 0, "mg/L"]]);
+    expect(roles(["Residuo fisso (mg/L)"])).toEqual([["tds", 0, "mg/L"]]);
+    expect(roles(["ORP std (mV)"])).toEqual([]); // a standard deviation, not the Spanish "STD"
   });
 
   it("finds an explicit ionic strength; mol/L is read as mol/kg", () => {

@@ -113,9 +113,10 @@ describe("header matching", () => {
     expect(alkalinityFactor("mmol/L HCO3")).toBeCloseTo(61.016, 3);
   });
 
-  it("a conductivity header at 25 °C in German or French is not the temperature column", () => {
+  it("a conductivity or dissolved-solids header naming °C in German or French is not the temperature column", () => {
     expect(matchHeaders(["pH", "ORP", "Leitfähigkeit bei 25 °C (µS/cm)", "Temp"]).mapping.temperature).toBe(3);
     expect(matchHeaders(["pH", "ORP", "Conductivité à 25 °C", "T (°C)"]).mapping.temperature).toBe(3);
+    expect(matchHeaders(["pH", "ORP", "Résidu sec à 180 °C (mg/L)", "T (°C)"]).mapping.temperature).toBe(3);
   });
 
   it("reads the temperature scale: °F, K, else °C", () => {
