@@ -97,6 +97,21 @@ export function dicFromBicarbonateOrProblem(
   return bicarbonateMgL / (HCO3_GRAMS_PER_MOLE * 1000) / alpha1;
 }
 
+/** What a carbonate reading measures: total alkalinity (mg/L as CaCO3) or bicarbonate (mg/L as HCO3−). */
+export type DicBasis = "alkalinity" | "bicarbonate";
+
+/** DIC (mol/kg) from a reading on its basis, pH and temperature, or the AlkalinityProblem why none exists. */
+export function dicFromReadingOrProblem(
+  reading: number,
+  basis: DicBasis,
+  pH: number,
+  celsius = DEFAULT_CELSIUS,
+): number | AlkalinityProblem {
+  return basis === "bicarbonate"
+    ? dicFromBicarbonateOrProblem(reading, pH, celsius)
+    : dicOrProblem(reading, pH, celsius);
+}
+
 /** dicOrProblem that throws AlkalinityError with the problem's message. */
 export function dicFromAlkalinity(
   alkalinityMgL: number,

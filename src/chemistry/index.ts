@@ -18,6 +18,8 @@ export {
   dicFromAlkalinity,
   dicOrProblem,
   dicFromBicarbonateOrProblem,
+  dicFromReadingOrProblem,
+  type DicBasis,
   HCO3_GRAMS_PER_MOLE,
 } from "./alkalinity";
 export { kelvin, nernstFactor } from "./constants";

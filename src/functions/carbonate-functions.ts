@@ -3,7 +3,7 @@
  * "bicarbonate", from bicarbonate (mg/L as HCO3−) — pH and temperature: the number to give the [carbonate] argument
  * of the stability functions. Chemistry in src/chemistry/alkalinity.ts.
  */
-import { AlkalinityProblem, dicFromBicarbonateOrProblem, dicOrProblem } from "../chemistry";
+import { AlkalinityProblem, dicFromReadingOrProblem, type DicBasis } from "../chemistry";
 import { mapCells, numberArg, textArg } from "./broadcast";
 import { argumentError, argumentNotAvailable, CellInput, CellOutput } from "./cell-values";
 import { pHArg, temperatureArg } from "./common-args";
@@ -13,9 +13,6 @@ const alkalinityArg = numberArg("alkalinity", { min: 0, max: 100000, unit: "mg/L
 
 /** Highest temperature of the carbonic-acid fits as this function has always accepted them, °C (fitted 0–90 °C at 1 atm). */
 const CARBONIC_MAX_CELSIUS = 100;
-
-/** What the first argument measures: total alkalinity (the default) or bicarbonate. */
-export type DicBasis = "alkalinity" | "bicarbonate";
 
 const basisArg = textArg<DicBasis>(
   "basis",
@@ -40,7 +37,7 @@ export function dicAt(
         "temperature",
         `${t} °C is outside 0 to ${CARBONIC_MAX_CELSIUS} °C, the range of the carbonic-acid constants (Plummer & Busenberg 1982)`,
       );
-    const dic = b === "bicarbonate" ? dicFromBicarbonateOrProblem(alk, p, t) : dicOrProblem(alk, p, t);
+    const dic = dicFromReadingOrProblem(alk, b, p, t);
     // valid inputs with no DIC (below the end point, or more hydroxide than alkalinity): no answer exists
     return dic instanceof AlkalinityProblem ? argumentNotAvailable("alkalinity, pH", dic.message) : dic;
   });

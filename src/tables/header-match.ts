@@ -138,7 +138,7 @@ const SAMPLE_WORDS = ["probe", "probennummer", "echantillon", "muestra", "campio
 function isId(tokens: readonly string[]): boolean {
   if (has(tokens, "id", "sampleid", "label", "code")) return true;
   if (tokens[0] === "sample" && tokens.length <= 2 && !has(tokens, "date", "time")) return true;
-  if (has([tokens[0]], ...SAMPLE_WORDS) && tokens.length <= 2 && !has(tokens, "datum", "date", "fecha", "data"))
+  if (SAMPLE_WORDS.includes(tokens[0]) && tokens.length <= 2 && !has(tokens, "datum", "date", "fecha", "data"))
     return true;
   return tokens.length === 1 && has(tokens, "name", "no", "number", "#");
 }
@@ -353,7 +353,7 @@ function isPhosphate(tokens: readonly string[]): boolean {
 /** Orthophosphate "as P": "PO4-P", "ortho-P", "Phosphat-P", "(mg/L as P)"; otherwise mg/L as PO4. */
 function phosphateAsP(tokens: readonly string[]): boolean {
   const phosphateWord = (t: string | undefined) =>
-    t !== undefined && (has([t], "orthophosphate", "phosphate", ...PHOSPHATE_WORDS) || t === "ortho");
+    t !== undefined && ["orthophosphate", "phosphate", "ortho", ...PHOSPHATE_WORDS].includes(t);
   return tokens.some(
     (t, i) =>
       t === "p" &&

@@ -31,9 +31,9 @@ export const POTENTIAL_UNITS: Readonly<Record<PotentialUnit, number>> = { V: 1, 
 /**
  * Units of the water columns. Alkalinity: mg/L as CaCO3 (the utility unit, the default), meq/L (also written
  * mmol/L: the acid capacity to pH 4.3) or French degrees (°f, the "TAC" of French labs: 10 mg/L as CaCO3); or
- * bicarbonate, which goes the same way through REDOX.DIC (its basis "bicarbonate"): mg/L as HCO3 or mmol/L of HCO3. Totals: mg/L or µg/L of the column's own ion, mg/L as SO4, as S or as C,
- * orthophosphate mg/L as PO4 or as P,
- * mmol/L, µmol/L, or mol/kg.
+ * bicarbonate, which goes the same way through REDOX.DIC (its basis "bicarbonate"): mg/L as HCO3 or mmol/L of
+ * HCO3. Totals: mg/L or µg/L of the column's own ion, mg/L as SO4, as S or as C, orthophosphate mg/L as PO4 or as
+ * P, mmol/L, µmol/L, or mol/kg.
  */
 export type WaterUnit =
   | "mg/L CaCO3"

@@ -14,10 +14,8 @@
  *   chromatograph resolves — common practice) so rows share systems; the rounded total is the one shown and used.
  */
 import {
-  AlkalinityError,
   AlkalinityProblem,
-  dicFromAlkalinity,
-  dicFromBicarbonateOrProblem,
+  dicFromReadingOrProblem,
   hasLigands,
   LIGAND_ORDER,
   LigandName,
@@ -117,20 +115,12 @@ export function rowTotal(
   if (ligand === "carbonate" && !isAlkalinityUnit(column.unit))
     total = value * molalFactor(column.unit, { C: 1 }, (parts) => molarMass(db, parts));
   else if (ligand === "carbonate") {
-    const measured = value * alkalinityFactor(column.unit); // mg/L as CaCO3, or as HCO3 (dicBasis)
-    const bicarbonate = dicBasis(column.unit) === "bicarbonate";
-    if (measured === 0) return { problem: `${bicarbonate ? "bicarbonate" : "alkalinity"} is 0` };
-    if (bicarbonate) {
-      const dic = dicFromBicarbonateOrProblem(measured, pH, celsius);
-      if (dic instanceof AlkalinityProblem) return { problem: dic.message };
-      total = dic;
-    } else
-      try {
-        total = dicFromAlkalinity(measured, pH, celsius, db);
-      } catch (error) {
-        if (error instanceof AlkalinityError) return { problem: error.message };
-        throw error;
-      }
+    const basis = dicBasis(column.unit);
+    const measured = value * alkalinityFactor(column.unit); // mg/L as CaCO3, or as HCO3 on that basis
+    if (measured === 0) return { problem: `${basis} is 0` };
+    const dic = dicFromReadingOrProblem(measured, basis, pH, celsius);
+    if (dic instanceof AlkalinityProblem) return { problem: dic.message };
+    total = dic;
   } else total = value * molalFactor(column.unit, OWN_ION[ligand], (parts) => molarMass(db, parts));
   if (total === 0) return 0;
   if (!(total > 0 && total <= MAX_LIGAND_TOTAL))
