@@ -153,6 +153,7 @@ export class PointEngine {
     this.sulfurSpeciation = new LigandAtPoint(ligandTable(db, LIGAND_BASIS.sulfur));
     this.phosphateSpeciation = new LigandAtPoint(ligandTable(db, LIGAND_BASIS.phosphate));
     const n = this.table.species.length;
+    consumesLigands(this.table);
     this.aUnit = new Float64Array(n);
     this.b = new Float64Array(n);
     this.c = new Float64Array(n);
@@ -597,6 +598,16 @@ export class PointEngine {
   lnGamma(i: number): number {
     return this.table.chargeSquared[i] * this.lnGamma1;
   }
+}
+
+/**
+ * Throws unless every species consumes its ligand pivots (ν_L ≤ 0 in its formation from metal and pivots): the
+ * argmin's bounds rest on it (g only grows as a pivot's activity falls below its total).
+ */
+export function consumesLigands(t: SpeciesTable): void {
+  for (let i = 0; i < t.species.length; i++)
+    for (const column of [t.carbonate, t.sulfur, t.chloride, t.phosphate])
+      if (column[i] > 0) throw new Error(`species ${t.species[i].formula} releases a ligand pivot in its formation`);
 }
 
 /** Σ_k row_k·feature_k over the first 7 features, and the 4 ligand ones where the species has a ligand. */

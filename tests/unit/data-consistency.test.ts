@@ -7,7 +7,8 @@
  *   - ΔG°f ≈ ΔH°f − T·ΔfS° within 1.5 kJ/mol wherever all three are given;
  *   - the formation reaction of every species from its elements (conventional scale: + z H+ → + z/2 H2) balances
  *     in every element and in charge, and the engine's ΔG°r of it equals the record's ΔG°f;
- *   - the water records reproduce the ionisation constant of water from 0 to 100 °C within 0.05 in pKw.
+ *   - the water records reproduce the ionisation constant of water from 0 to 100 °C within 0.05 in pKw;
+ *   - every species consumes the ligand pivots of its formation (the point engine's bounds rest on it).
  */
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
@@ -16,6 +17,8 @@ import { Database, getDatabase } from "../../src/chemistry/database";
 import { DATA_FILES, ELEMENTS_FILE } from "../../src/chemistry/data-files";
 import { parseFormula } from "../../src/chemistry/formula";
 import { reactionLogK } from "../../src/chemistry/reaction";
+import { consumesLigands, pointEngine } from "../../src/chemistry/point-engine";
+import { speciesTable } from "../../src/chemistry/species-tables";
 import { GAS_CONSTANT, LN10, T0 } from "../../src/chemistry/constants";
 
 const SPECIES_DIR = join(__dirname, "..", "..", "data", "species");
@@ -167,4 +170,20 @@ describe("water records: pKw(T) within 0.05 of Bandura & Lvov 2006", () => {
       expect(Math.abs(pKw - c.value)).toBeLessThanOrEqual(0.05);
     });
   }
+});
+
+describe("species tables: ligand pivots are consumed", () => {
+  // the point engine's argmin bounds a species' g from below with each ligand pivot at its total: sound only where
+  // every species takes its pivots in (ν_L ≤ 0 in its formation from metal, pivots, H2O, H+ and e−)
+  it("every metal's engine builds (its constructor checks each species)", () => {
+    for (const metal of getDatabase().metals()) expect(() => pointEngine(getDatabase(), metal)).not.toThrow();
+  });
+
+  it("a species that would release a pivot fails loudly, named", () => {
+    const table = speciesTable(getDatabase(), "Pb");
+    const i = table.species.findIndex((s) => s.formula === "PbCO3(s)");
+    const broken = { ...table, carbonate: Float64Array.from(table.carbonate, (x, j) => (j === i ? 1 : x)) };
+    expect(() => consumesLigands(table)).not.toThrow();
+    expect(() => consumesLigands(broken)).toThrow(/PbCO3\(s\) releases a ligand pivot/);
+  });
 });
