@@ -8,8 +8,10 @@
  * SHE by definition — common practice) and at a temperature in °F or K; the pane offers these as defaults and the
  * command line uses them. Lab exports in German, French, Spanish, Italian, Dutch and Portuguese name the same
  * columns in their own words ("Probe", "Messstelle", "Temperatur", "Redoxpotential", "Chlorid", "Sulfat",
- * "Alkalinität", "TAC (°f)", "KS 4,3", "Échantillon", "cloruros", "solfati"): accents are dropped before matching,
- * and those words are matched too.
+ * "Alkalinität", "TAC (°f)", "KS 4,3", "Échantillon", "cloruros", "solfati"), and so do those in Swedish, Danish,
+ * Norwegian, Finnish, Polish and Czech ("Prøve", "Lämpötila", "Przewodność", "Chlorki", "Teplota", "KNK 4,5"):
+ * accents are dropped before matching (ł, ø, æ and ß spelt out), and those words are matched too. The words are the
+ * languages' ordinary names for these quantities (from memory, not from a lab's export).
  */
 import { type TemperatureScale, type WaterUnit } from "./units";
 
@@ -63,6 +65,10 @@ export function headerTokens(header: string): string[] {
     .replace(/[µμ]/g, "u")
     .normalize("NFD")
     .replace(/[\u0300-\u036f]/g, "") // accents off: "température" → "temperature", "Säure" → "saure"
+    .replace(/ł/g, "l") // letters NFD leaves whole: "potencjał" → "potencjal", "prøve" → "prove", "Meß" → "mess"
+    .replace(/ø/g, "o")
+    .replace(/æ/g, "ae")
+    .replace(/ß/g, "ss")
     .replace(/°\s*c\b/g, " degc ")
     .replace(/°\s*f\b/g, " degf ")
     .replace(/℃/g, " degc ")
@@ -79,7 +85,17 @@ function isPH(tokens: readonly string[]): boolean {
 }
 
 /** "potential" and "redox potential" in the languages of European lab exports (one word in German and Dutch). */
-const POTENTIAL_WORDS = ["potentiel", "potencial", "potenziale", "redoxpotential", "redoxpotentiaal", "redoxspannung"];
+const POTENTIAL_WORDS = [
+  "potentiel",
+  "potencial", // es, pt, cs
+  "potenziale",
+  "redoxpotential", // de, sv, da, no
+  "redoxpotentiaal",
+  "redoxspannung",
+  "potencjal", // pl
+  "potentiaali", // fi
+  "redoks",
+];
 
 function isPotential(tokens: readonly string[]): boolean {
   if (has(tokens, "orp", "eh", "potential", "redox", "ecorr", "ecp", "e.h")) return true; // ECP: corrosion potential (loops)
@@ -89,7 +105,7 @@ function isPotential(tokens: readonly string[]): boolean {
   return false;
 }
 
-/** Conductivity in other languages: de, fr, es, it, nl, pt (ionic-columns.ts reads them too). */
+/** Conductivity in other languages: de, fr, es, it, nl, pt, sv, da/no, fi, pl, cs (ionic-columns.ts reads them too). */
 export const CONDUCTIVITY_WORDS = [
   "leitfahigkeit",
   "conductivite",
@@ -99,6 +115,14 @@ export const CONDUCTIVITY_WORDS = [
   "geleidbaarheid",
   "geleidendheid",
   "condutividade",
+  "konduktivitet",
+  "ledningsevne",
+  "sahkonjohtavuus",
+  "johtokyky",
+  "przewodnosc",
+  "konduktywnosc",
+  "vodivost",
+  "konduktivita",
 ];
 
 /**
@@ -118,7 +142,8 @@ function isTemperature(tokens: readonly string[]): boolean {
   if (namesDissolvedSolids(tokens)) return false;
   if (namesAlkalinity(tokens)) return false;
   if (has(tokens, "temp", "temperature", "degc", "degf", "celsius", "fahrenheit", "kelvin")) return true;
-  if (has(tokens, "temperatur", "temperatura", "temperatuur", "wassertemperatur")) return true; // de, es/it/pt, nl
+  if (has(tokens, "temperatur", "temperatura", "temperatuur", "wassertemperatur")) return true; // de/sv/da/no, es/it/pt/pl, nl
+  if (has(tokens, "lampotila", "teplota")) return true; // fi, cs
   // "T", "T (C)", "t_c", "T °C", "T (K)"
   return (
     tokens[0] === "t" && tokens.length <= 3 && tokens.slice(1).every((t) => ["c", "f", "k", "degc", "degf"].includes(t))
@@ -132,18 +157,35 @@ export function temperatureScale(tokens: readonly string[]): TemperatureScale {
   return "C";
 }
 
-/** "Sample" in other languages: de, fr, es, it, nl, pt; only as a short header's first word ("ORP probe" is a sensor). */
-const SAMPLE_WORDS = ["probe", "probennummer", "echantillon", "muestra", "campione", "monster", "amostra"];
+/**
+ * "Sample" in other languages: de, fr, es, it, nl, pt, sv, da/no, fi, pl, cs; only as a short header's first word
+ * ("ORP probe" is a sensor).
+ */
+const SAMPLE_WORDS = [
+  "probe",
+  "probennummer",
+  "echantillon",
+  "muestra",
+  "campione",
+  "monster",
+  "amostra",
+  "prov",
+  "prove",
+  "nayte",
+  "probka",
+  "vzorek",
+];
+/** "Date" in those languages: a sample word followed by it names the sampling date, not the sample. */
+const DATE_WORDS = ["datum", "date", "fecha", "data", "dato", "pvm"];
 
 function isId(tokens: readonly string[]): boolean {
   if (has(tokens, "id", "sampleid", "label", "code")) return true;
   if (tokens[0] === "sample" && tokens.length <= 2 && !has(tokens, "date", "time")) return true;
-  if (SAMPLE_WORDS.includes(tokens[0]) && tokens.length <= 2 && !has(tokens, "datum", "date", "fecha", "data"))
-    return true;
+  if (SAMPLE_WORDS.includes(tokens[0]) && tokens.length <= 2 && !has(tokens, ...DATE_WORDS)) return true;
   return tokens.length === 1 && has(tokens, "name", "no", "number", "#");
 }
 
-/** Sampling point in other languages: de, fr, es, it, nl, pt. */
+/** Sampling point in other languages: de, fr, es, it, nl, pt, sv, da/no, fi, pl, cs. */
 const SITE_WORDS = [
   "messstelle",
   "entnahmestelle",
@@ -156,6 +198,15 @@ const SITE_WORDS = [
   "meetpunt",
   "locatie",
   "ponto",
+  "provplats",
+  "provtagningsplats",
+  "provested",
+  "malested",
+  "naytepaikka",
+  "naytteenottopaikka",
+  "punkt",
+  "stanowisko",
+  "misto",
 ];
 
 function isSite(tokens: readonly string[]): boolean {
@@ -181,6 +232,22 @@ function potentialUnit(tokens: readonly string[]): "V" | "mV" | null {
   return null;
 }
 
+/** "Saturated" (of the KCl filling) in de, fr, es/pt, it, nl, sv, da, no, fi, pl, cs. */
+const SATURATED_WORDS = [
+  "gesattigt",
+  "sature",
+  "saturee",
+  "saturado",
+  "saturo",
+  "verzadigd",
+  "mattad",
+  "maettet",
+  "mettet",
+  "kyllainen",
+  "nasycony",
+  "nasyceny",
+];
+
 /** The name a bare silver chloride header gives: an ambiguous name of the electrode records (which filling?). */
 export const BARE_SILVER_CHLORIDE = "Ag/AgCl";
 
@@ -196,7 +263,7 @@ export function electrodeNamed(tokens: readonly string[]): string | null {
   if (has(tokens, "mse", "hg2so4")) return "MSE";
   if (has(tokens, "epbre", "epb")) return "AgCl-EPB"; // external pressure-balanced Ag/AgCl, before the fillings
   if (has(tokens, "agcl")) {
-    if (has(tokens, "sat", "saturated")) return "AgCl-sat";
+    if (has(tokens, "sat", "saturated", ...SATURATED_WORDS)) return "AgCl-sat";
     if (tokens.includes("3.5") || tokens.includes("3.5m")) return "AgCl-3.5M";
     if (tokens.includes("3") || tokens.includes("3m")) return "AgCl-3M";
     if (tokens.includes("1") || tokens.includes("1m")) return "AgCl-1M";
@@ -292,8 +359,19 @@ export interface WaterColumn {
 
 export type WaterColumns = Partial<Record<WaterColumnRole, WaterColumn>>;
 
-/** Total alkalinity in other languages: de, fr, es, it, nl, pt. */
-const ALKALINITY_WORDS = ["alkalinitat", "alcalinite", "alcalinidad", "alcalinita", "alkaliniteit", "alcalinidade"];
+/** Total alkalinity in other languages: de, fr, es, it, nl, pt, sv/da/no, fi, pl, cs. */
+const ALKALINITY_WORDS = [
+  "alkalinitat",
+  "alcalinite",
+  "alcalinidad",
+  "alcalinita",
+  "alkaliniteit",
+  "alcalinidade",
+  "alkalinitet",
+  "alkaliniteetti",
+  "zasadowosc",
+  "alkalita",
+];
 
 function isAlkalinity(tokens: readonly string[]): boolean {
   return namesAlkalinity(tokens) || (tokens[0] === "ta" && tokens.length <= 4);
@@ -305,12 +383,14 @@ function namesAlkalinity(tokens: readonly string[]): boolean {
 }
 
 /**
- * The acid capacity to pH 4.3 of German practice, "KS 4,3", "Säurekapazität bis pH 4,3", "m-Wert": the total
+ * The acid capacity to pH 4.3 of German practice, "KS 4,3", "Säurekapazität bis pH 4,3", "m-Wert", and the acid
+ * neutralising capacity to pH 4.5 of Czech practice, "KNK 4,5" (kyselinová neutralizační kapacita): the total
  * alkalinity in mmol/L (common practice; DIN 38409-7), so meq/L when the header names no unit.
  */
 function isAcidCapacity(tokens: readonly string[]): boolean {
   if (has(tokens, "saurekapazitat", "saeurekapazitaet")) return true;
   if (tokens[0] === "m" && tokens[1] === "wert") return true;
+  if (tokens[0] === "knk" && (tokens[1] === "4" || tokens[1] === "4.5")) return true;
   return tokens[0] === "ks" && (tokens[1] === "4" || tokens[1] === "4.3");
 }
 
@@ -324,11 +404,36 @@ function isChloride(tokens: readonly string[]): boolean {
   return has(tokens, "chloride", "chlorides", "cl", ...CHLORIDE_WORDS);
 }
 
-/** Chloride in other languages: de, fr, es, it, pt. */
-const CHLORIDE_WORDS = ["chlorid", "chlorure", "chlorures", "cloruro", "cloruros", "cloruri", "cloreto", "cloretos"];
+/** Chloride in other languages: de, fr, es, it, pt, sv/da/no, fi, pl, cs. */
+const CHLORIDE_WORDS = [
+  "chlorid",
+  "chlorure",
+  "chlorures",
+  "cloruro",
+  "cloruros",
+  "cloruri",
+  "cloreto",
+  "cloretos",
+  "klorid",
+  "klorider",
+  "kloridi",
+  "chlorki",
+  "chloridy",
+];
 
-/** Sulfate in other languages: de, es/pt, it, nl. */
-const SULFATE_WORDS = ["sulfat", "sulfato", "sulfatos", "solfato", "solfati", "sulfaat"];
+/** Sulfate in other languages: de/sv/da/no, es/pt, it, nl, fi, pl, cs. */
+const SULFATE_WORDS = [
+  "sulfat",
+  "sulfato",
+  "sulfatos",
+  "solfato",
+  "solfati",
+  "sulfaat",
+  "sulfaatti",
+  "siarczany",
+  "siarczan",
+  "sirany",
+];
 
 function isSulfate(tokens: readonly string[]): boolean {
   if (has(tokens, "sulfate", "sulphate", "sulfates", "sulphates", ...SULFATE_WORDS)) return true;
@@ -336,8 +441,20 @@ function isSulfate(tokens: readonly string[]): boolean {
   return at >= 0 && tokens[at + 1] === "4";
 }
 
-/** Orthophosphate in other languages: de, es/it/pt, nl. */
-const PHOSPHATE_WORDS = ["phosphat", "orthophosphat", "fosfato", "fosfatos", "fosfati", "ortofosfato", "fosfaat"];
+/** Orthophosphate in other languages: de, es/it/pt, nl, sv/da/no, fi, pl, cs. */
+const PHOSPHATE_WORDS = [
+  "phosphat",
+  "orthophosphat",
+  "fosfato",
+  "fosfatos",
+  "fosfati",
+  "ortofosfato",
+  "fosfaat",
+  "fosfat",
+  "fosfaatti",
+  "fosforany",
+  "fosforecnany",
+];
 
 /**
  * A header naming orthophosphate: "orthophosphate", "phosphate", "PO4", "ortho-P". Total phosphorus is not
@@ -361,7 +478,7 @@ function phosphateAsP(tokens: readonly string[]): boolean {
   );
 }
 
-/** Bicarbonate in the languages matched: en, de, fr, es/pt, it, nl; and the formula HCO3. */
+/** Bicarbonate in the languages matched: en, de, fr, es/pt, it, nl, sv/da/no, fi, pl, cs; and the formula HCO3. */
 const BICARBONATE_WORDS = [
   "bicarbonate",
   "bicarbonates",
@@ -374,6 +491,12 @@ const BICARBONATE_WORDS = [
   "idrogenocarbonati",
   "bicarbonaat",
   "waterstofcarbonaat",
+  "bikarbonat",
+  "vatekarbonat",
+  "bikarbonaatti",
+  "vetykarbonaatti",
+  "wodoroweglany",
+  "hydrogenuhlicitany",
 ];
 
 /** A header naming bicarbonate (HCO3−, a laboratory's report of the carbonate instead of alkalinity). */

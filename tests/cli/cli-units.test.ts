@@ -179,8 +179,8 @@ describe("a blank temperature is a missing measurement", () => {
 
 describe("the summary says which water every row was answered in", () => {
   const known = "id,pH,ORP_mV_AgCl_sat,temp_C,Alkalinity (mg/L CaCO3),Chloride (mg/L)\nA,7.2,215,12.5,120,25\n";
-  // a Polish lab's headers: the program does not know them, so the rows are pure water, and the summary must say so
-  const unknown = "Próbka,pH,ORP_mV_AgCl_sat,temp_C,Zasadowość (mg/L CaCO3),Chlorki (mg/L)\nA,7.2,215,12.5,120,25\n";
+  // a Hungarian lab's headers: the program does not know them, so the rows are pure water, and the summary must say so
+  const unknown = "Minta,pH,ORP_mV_AgCl_sat,temp_C,Lúgosság (mg/L CaCO3),Kloridion (mg/L)\nA,7.2,215,12.5,120,25\n";
 
   it("names the columns feeding each ligand, and says pure water when none was found or --pure-water is given", async () => {
     const water = async (name: string, text: string, args: string[] = []) =>
@@ -193,7 +193,7 @@ describe("the summary says which water every row was answered in", () => {
       /^water: pure water on every row; no alkalinity, DIC, chloride/,
     );
     expect(await water("named.csv", unknown, ["--alkalinity-column", "5"])).toMatch(
-      /^water: carbonate from "Zasadowość \(mg\/L CaCO3\)"/,
+      /^water: carbonate from "Lúgosság \(mg\/L CaCO3\)"/,
     );
     expect(await water("pure.csv", known, ["--pure-water"])).toBe(
       "water: pure water on every row (--pure-water; the water columns are ignored)",
@@ -220,6 +220,25 @@ describe("European lab exports: headers in their own language", () => {
     expect(de.rows.map(columns)).toEqual(en.rows.map(columns));
     expect(de.rows[0].DIC_mol_kg).not.toBe(""); // the carbonate column was found (not pure water)
     expect(de.r.summary?.notes?.find((n) => n.startsWith("water:"))).toMatch(/carbonate from "KS 4,3 \(mmol\/l\)"/);
+  });
+
+  it("Polish and Swedish exports are read as the English one (mval/l and mmol/l alkalinity, mS/m conductivity)", async () => {
+    const polish =
+      "Próbka;pH;Potencjał redoks (mV, Ag/AgCl 3 M);Temperatura (°C);Zasadowość (mval/l);Chlorki (mg/l);Siarczany (mg/l);Przewodność (µS/cm)\n" +
+      "A;7,2;215;12,5;2,4;25;40;450\nB;8,1;-120;18,0;1,1;60;12;820\n";
+    // 450 µS/cm is 45 mS/m (1 mS/m = 10 µS/cm, SI prefixes)
+    const swedish =
+      "Prov;pH;Redoxpotential (mV, Ag/AgCl 3 M);Temperatur;Alkalinitet (mmol/l);Klorid (mg/l);Sulfat (mg/l);Konduktivitet (mS/m)\n" +
+      "A;7,2;215;12,5;2,4;25;40;45\nB;8,1;-120;18,0;1,1;60;12;82\n";
+    const en = await results("en-nordic.csv", english, ["--metal", "Fe"]);
+    for (const [name, text] of [
+      ["pl.csv", polish],
+      ["sv.csv", swedish],
+    ]) {
+      const export_ = await results(name, text, ["--metal", "Fe"], ";");
+      expect(export_.r.code, name).toBe(0);
+      expect(export_.rows.map(columns), name).toEqual(en.rows.map(columns));
+    }
   });
 
   it("French degrees: TAC 12 °f is 120 mg/L as CaCO3, the potential against ECS (SCE), not a °F temperature", async () => {

@@ -11,6 +11,7 @@ import {
   guessDelimiter,
   headerTokens,
   matchHeaders,
+  matchIonicColumns,
   matchWaterColumns,
   molalFactor,
   alkalinityFactor,
@@ -94,6 +95,92 @@ describe("header matching", () => {
       chloride: { index: 1 },
       sulfate: { index: 2 },
     });
+  });
+
+  it("reads Swedish, Danish, Finnish, Polish and Czech lab headers (invented header rows, in the words of each language)", () => {
+    const exports: Record<string, string[]> = {
+      sv: [
+        "Prov",
+        "Provplats",
+        "pH",
+        "Redoxpotential (mV)",
+        "Temperatur",
+        "Konduktivitet (mS/m)",
+        "Alkalinitet (mmol/l)",
+        "Klorid (mg/l)",
+        "Sulfat (mg/l)",
+      ],
+      da: [
+        "Prøve",
+        "Prøvested",
+        "pH",
+        "Redoxpotential (mV Ag/AgCl mættet)",
+        "Temperatur",
+        "Ledningsevne (mS/m)",
+        "Alkalinitet (mmol/l)",
+        "Klorid (mg/l)",
+        "Sulfat (mg/l)",
+      ],
+      fi: [
+        "Näyte",
+        "Näytteenottopaikka",
+        "pH",
+        "Redox-potentiaali (mV)",
+        "Lämpötila (°C)",
+        "Sähkönjohtavuus (mS/m)",
+        "Alkaliniteetti (mmol/l)",
+        "Kloridi (mg/l)",
+        "Sulfaatti (mg/l)",
+      ],
+      pl: [
+        "Próbka",
+        "Punkt poboru",
+        "pH",
+        "Potencjał redoks (mV)",
+        "Temperatura",
+        "Przewodność (µS/cm)",
+        "Zasadowość (mval/l)",
+        "Chlorki (mg/l)",
+        "Siarczany (mg/l)",
+      ],
+      cs: [
+        "Vzorek",
+        "Místo odběru",
+        "pH",
+        "Redox potenciál (mV)",
+        "Teplota",
+        "Vodivost (mS/m)",
+        "KNK 4,5 (mmol/l)",
+        "Chloridy (mg/l)",
+        "Sírany (mg/l)",
+      ],
+    };
+    for (const [language, headers] of Object.entries(exports)) {
+      const { mapping, hints } = matchHeaders(headers);
+      expect(mapping, language).toMatchObject({ id: 0, site: 1, pH: 2, potential: 3, temperature: 4 });
+      expect(hints, language).toMatchObject({ potentialUnit: "mV", temperatureScale: "C" });
+      expect(matchWaterColumns(headers, mapping), language).toMatchObject({
+        alkalinity: { index: 6, unit: "meq/L" },
+        chloride: { index: 7, unit: "mg/L" },
+        sulfate: { index: 8, unit: "mg/L SO4" },
+      });
+      const conductivity = matchIonicColumns(headers, Object.values(mapping));
+      expect(conductivity[0], language).toMatchObject({ role: "conductivity", index: 5 });
+    }
+    // "mættet": saturated KCl, named (a bare Ag/AgCl header is only offered saturated KCl in the pane)
+    expect(electrodeNamed(headerTokens(exports.da[3]))).toBe("AgCl-sat");
+    expect(electrodeNamed(headerTokens("E vs Ag/AgCl (KCl nasycony)"))).toBe("AgCl-sat");
+    expect(matchHeaders(["pH", "Potencjał (mV)"]).mapping.potential).toBe(1); // ł spelt out
+    expect(matchIonicColumns(exports.fi)[0].unit).toBe("mS/m");
+    expect(matchIonicColumns(exports.pl)[0].unit).toBe("uS/cm");
+    // a sample word before a date names the sampling date, not the sample
+    expect(matchHeaders(["Prøve dato", "pH", "ORP"]).mapping.id).toBe(-1);
+    expect(matchHeaders(["Näyte pvm", "pH", "ORP"]).mapping.id).toBe(-1);
+    // phosphate and bicarbonate in those languages
+    expect(matchWaterColumns(["Fosfat-P (mg/l)"]).phosphate).toEqual({ index: 0, unit: "mg/L P" });
+    expect(matchWaterColumns(["Fosforany (mg/l)"]).phosphate).toEqual({ index: 0, unit: "mg/L PO4" });
+    expect(matchWaterColumns(["Vätekarbonat (mg/l)"]).alkalinity).toEqual({ index: 0, unit: "mg/L HCO3" });
+    expect(matchWaterColumns(["Wodorowęglany (mg/l)"]).alkalinity).toEqual({ index: 0, unit: "mg/L HCO3" });
   });
 
   it("a bicarbonate column gives the carbonate when no alkalinity column does (mg/L as HCO3, or mmol/L)", () => {
