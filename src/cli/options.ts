@@ -109,9 +109,11 @@ correction (ideal solution) and reported. Above 0.5 mol/kg the row's results are
 Columns are found by their headers (case, accents and punctuation ignored): pH ("pH"), the potential reading ("ORP",
 "Eh", "redox", "potential", …), temperature ("temp", "temperature", …), the metal of each row ("metal",
 "element", "pipe metal"), and the water: alkalinity ("alkalinity", "alk", "TA"; or bicarbonate, "HCO3"), DIC
-("DIC", "TIC"), chloride ("chloride", "Cl"), sulfate ("sulfate", "SO4"); German, French, Spanish, Italian, Dutch
-and Portuguese lab headers too ("Temperatur", "Redoxpotential", "KS 4,3", "TAC (°f)", "Chlorures", …). The unit and electrode are read from the potential header when it names them
-("ORP_mV_AgCl_sat", "Eh (V)"); otherwise give --unit and --electrode. A silver chloride header must name its
+("DIC", "TIC"), chloride ("chloride", "Cl"), sulfate ("sulfate", "SO4"); lab headers in German, French,
+Spanish, Italian, Dutch, Portuguese, Swedish, Danish, Norwegian, Finnish, Polish and Czech too ("Temperatur",
+"Redoxpotential", "KS 4,3", "TAC (°f)", "Chlorures", "Lämpötila", "Zasadowość", "KNK 4,5", …). The unit and
+electrode are read from the potential header when it names them ("ORP_mV_AgCl_sat", "Eh (V)"); otherwise give
+--unit and --electrode. A silver chloride header must name its
 filling ("AgCl sat", "Ag/AgCl 3M"), or give --electrode. A temperature header naming °F or K ("Temp (°F)",
 "T_K") is converted to °C. Blank lines and lines starting with # before the header are skipped; after it every
 record is a row (a sample id may begin with #), and the results have one row per input record.

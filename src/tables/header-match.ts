@@ -84,7 +84,7 @@ function isPH(tokens: readonly string[]): boolean {
   return !namesAlkalinity(tokens); // "Alkalinity to pH 4.5", "Säurekapazität bis pH 4,3"
 }
 
-/** "potential" and "redox potential" in the languages of European lab exports (one word in German and Dutch). */
+/** "potential" and "redox potential" in the languages of European lab exports (one word in some of them). */
 const POTENTIAL_WORDS = [
   "potentiel",
   "potencial", // es, pt, cs
