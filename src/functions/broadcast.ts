@@ -211,8 +211,32 @@ export function mapCells<A extends unknown[]>(
   const { shapes, rows, cols } = shape;
 
   // Arguments given as one cell are parsed once, before the loop; only ranges are read cell by cell.
-  const { args, varying, constantError, constantBlank } = constantArguments(specs, inputs, shapes);
-  const columns = varying.map((i) => varyingColumn(i, specs[i], inputs[i] as CellScalar[][], shapes[i]));
+  const constants = constantArguments(specs, inputs, shapes);
+  const columns = constants.varying.map((i) => varyingColumn(i, specs[i], inputs[i] as CellScalar[][], shapes[i]));
+  const unguarded = cellReader(specs, constants, columns, compute, false);
+  // Computations almost never throw: run unguarded, and only if one does, run again guarding every cell.
+  try {
+    return fillCells(rows, cols, unguarded);
+  } catch {
+    return fillCells(rows, cols, cellReader(specs, constants, columns, compute, true));
+  }
+}
+
+/** How one result cell at (r, c) is worked out. */
+type CellAt = (r: number, c: number) => CellOutput;
+
+/**
+ * One result cell: the row's varying arguments read into the constants' `args`, then the computation (`guarded`:
+ * a throw becomes that cell's #VALUE!).
+ */
+function cellReader<A extends unknown[]>(
+  specs: SpecsOf<A>,
+  constants: ReturnType<typeof constantArguments>,
+  columns: readonly VaryingColumn[],
+  compute: (...args: A) => CellOutput,
+  guarded: boolean,
+): CellAt {
+  const { args, constantError, constantBlank } = constants;
   // columns of plain numbers (a lab export) are read from parallel arrays, the rest cell by cell
   const plainColumns = columns.filter((column) => column.plain !== null);
   const readColumns = columns.filter((column) => column.plain === null);
@@ -223,9 +247,7 @@ export function mapCells<A extends unknown[]>(
   const plainValues = plainColumns.map((column) => column.plain as Float64Array);
   const readCount = readColumns.length;
   const wide = args.length > FIXED_ARITY;
-
-  // One result cell: the row's varying arguments read into `args`, then the computation.
-  const cell = (r: number, c: number, guarded: boolean): CellOutput => {
+  return (r, c) => {
     let blank = constantBlank;
     let errorIndex = constantError;
     for (let k = 0; k < plainCount; k++)
@@ -258,34 +280,33 @@ export function mapCells<A extends unknown[]>(
     const call = compute as (...x: unknown[]) => CellOutput;
     return finish(call(a[0], a[1], a[2], a[3], a[4], a[5], a[6], a[7], a[8], a[9], a[10], a[11]));
   };
-  // Computations almost never throw: run unguarded, and only if one does, run again guarding every cell.
-  const fill = (guarded: boolean): CellOutput[][] => {
-    const result: CellOutput[][] = new Array(rows);
-    if (rows > 1 && rows < cols) return fillByColumns(result, guarded);
-    for (let r = 0; r < rows; r++) {
-      // a one-cell literal for a column (the usual lab export): an empty literal grown by one cell reserves room for
-      // many, and those rows stay alive until the host takes the result, so every collection copies them
-      if (cols === 1) result[r] = [cell(r, 0, guarded)];
-      else {
-        const row: CellOutput[] = []; // a literal: in a sandboxed host the global Array is a slow lookup
-        for (let c = 0; c < cols; c++) row[c] = cell(r, c, guarded);
-        result[r] = row;
-      }
+}
+
+/** The rows × cols result, cell by cell. */
+function fillCells(rows: number, cols: number, cell: CellAt): CellOutput[][] {
+  const result: CellOutput[][] = new Array(rows);
+  if (rows > 1 && rows < cols) return fillByColumns(result, rows, cols, cell);
+  for (let r = 0; r < rows; r++) {
+    // a one-cell literal for a column (the usual lab export): an empty literal grown by one cell reserves room for
+    // many, and those rows stay alive until the host takes the result, so every collection copies them
+    if (cols === 1) result[r] = [cell(r, 0)];
+    else {
+      const row: CellOutput[] = []; // a literal: in a sandboxed host the global Array is a slow lookup
+      for (let c = 0; c < cols; c++) row[c] = cell(r, c);
+      result[r] = row;
     }
-    return result;
-  };
-  // A few rows over many columns (a row of samples against a column of choices, as BOUNDARY's directions): column by
-  // column, so that the answers for one sample are worked out one after the other (the engine keeps its lines).
-  const fillByColumns = (result: CellOutput[][], guarded: boolean): CellOutput[][] => {
-    for (let r = 0; r < rows; r++) result[r] = [];
-    for (let c = 0; c < cols; c++) for (let r = 0; r < rows; r++) result[r][c] = cell(r, c, guarded);
-    return result;
-  };
-  try {
-    return fill(false);
-  } catch {
-    return fill(true);
   }
+  return result;
+}
+
+/**
+ * A few rows over many columns (a row of samples against a column of choices, as BOUNDARY's directions): column by
+ * column, so that the answers for one sample are worked out one after the other (the engine keeps its lines).
+ */
+function fillByColumns(result: CellOutput[][], rows: number, cols: number, cell: CellAt): CellOutput[][] {
+  for (let r = 0; r < rows; r++) result[r] = [];
+  for (let c = 0; c < cols; c++) for (let r = 0; r < rows; r++) result[r][c] = cell(r, c);
+  return result;
 }
 
 /** A range argument as the row loop reads it. */
