@@ -13,6 +13,7 @@
  * of the total is taken as the solid. Ligand bound in complexes of the trace metal is neglected (metal totals are
  * far below ligand totals in waters).
  */
+import { DOUBLE_ZERO } from "./double-zero";
 import { FARADAY, T0 } from "./constants";
 import { correspondenceBasis, NO_CORRESPONDENCE } from "./criss-cobble";
 import { LigandTable, rowGibbs } from "./species-tables";
@@ -31,7 +32,7 @@ const NEGLIGIBLE_GAP = -40;
 
 export class LigandAtPoint {
   private celsius = NOT_A_NUMBER;
-  private f = 0;
+  private f = DOUBLE_ZERO;
   /** Per species at the current temperature: g_j = g[j] + b[j]·pH + e[j]·E, volts. */
   private readonly g: Float64Array;
   private readonly b: Float64Array;
@@ -40,21 +41,21 @@ export class LigandAtPoint {
   private readonly u: Float64Array;
   /** The last point's weights exp(u_j − max u) and their sum. */
   private readonly w: Float64Array;
-  private sum = 1;
+  private sum = NOT_A_NUMBER;
   /** Whether the solid was saturated at the last point. */
   saturated = false;
   /** The largest u_j at the last point, and the pH and E it was taken at. */
-  private top = 0;
-  private lastPH = 0;
-  private lastE = 0;
+  private top = DOUBLE_ZERO;
+  private lastPH = DOUBLE_ZERO;
+  private lastE = DOUBLE_ZERO;
   /** d ln a_P/dE at the last point, once asked for (slopeKnown). A flag, not NaN: minifiers turn 0/0 into the global. */
-  private slope = 0;
+  private slope = DOUBLE_ZERO;
   private slopeKnown = false;
   /** The last call's other inputs and answer (lastLn), and whether any form differs in electrons (E matters). */
-  private lastLnTotal = 0;
-  private lastLnGamma1 = 0;
+  private lastLnTotal = DOUBLE_ZERO;
+  private lastLnGamma1 = DOUBLE_ZERO;
   private lastCelsius = NOT_A_NUMBER;
-  private lastLn = 0;
+  private lastLn = DOUBLE_ZERO;
   private readonly redox: boolean;
   /** ΔG°r(25 °C), ΔS°r and ΔCp°r per faraday (V, V/K), and −ν_H+, per species. */
   private readonly g0PerF: Float64Array;
@@ -62,7 +63,7 @@ export class LigandAtPoint {
   private readonly cpPerF: Float64Array;
   private readonly minusProton: Float64Array;
   /** ln a_P before the saturation cap. */
-  private lnUnsaturated = 0;
+  private lnUnsaturated = DOUBLE_ZERO;
 
   constructor(private readonly table: LigandTable) {
     const n = table.species.length;

@@ -10,6 +10,7 @@
  * species (1 for solids) and k = RT ln10/F. The metal has g = 0; the dominant species is the argmin of g (ties go
  * to the lower index). γ from the Davies equation (activity-coefficients.ts), 1 without an ionic strength.
  */
+import { DOUBLE_ZERO } from "./double-zero";
 import { FARADAY, GAS_CONSTANT, kelvin, nernstFactor, T0 } from "./constants";
 import { Database } from "./database";
 import { debyeHuckelA, lnGammaWithA } from "./activity-coefficients";
@@ -87,9 +88,9 @@ export class PointEngine {
   private readonly candidates: Int32Array;
   private readonly bounds: Float64Array;
   /** ln of the largest activity each pivot can have: ln total, plus ln γ where γ would exceed 1 (I beyond Davies). */
-  private boundLnC = 0;
-  private boundLnS = 0;
-  private boundLnP = 0;
+  private boundLnC = DOUBLE_ZERO;
+  private boundLnS = DOUBLE_ZERO;
+  private boundLnP = DOUBLE_ZERO;
   /** Where lnC, lnS and lnP were last worked out, and which of them are of that point (SPECIATED bits). */
   private ligandPH = NOT_A_NUMBER;
   private ligandE = NOT_A_NUMBER;
@@ -106,7 +107,7 @@ export class PointEngine {
   /** The ligands (present bits) lineSpecies was made for; −1 before the first lines. */
   private linesPresent = -1;
   lineLowest = -1;
-  lineGap = 0;
+  lineGap = DOUBLE_ZERO;
   /** Where the lines were last drawn (NaN: not reusable), at unit activity or not, and in which water. */
   private linesPH = NOT_A_NUMBER;
   private linesE = NOT_A_NUMBER;
@@ -123,29 +124,29 @@ export class PointEngine {
   private activity = NOT_A_NUMBER;
   /** Debye–Hückel A at the current temperature, found when an ionic strength first needs it. */
   private debyeHuckel = NOT_A_NUMBER;
-  private f = 0;
-  private dT = 0;
-  private shape = 0;
-  private k = 0;
+  private f = DOUBLE_ZERO;
+  private dT = DOUBLE_ZERO;
+  private shape = DOUBLE_ZERO;
+  private k = DOUBLE_ZERO;
   // per water: the totals as given, and a count of the waters set (linesAt's reuse)
   private carbonate = NOT_A_NUMBER;
   private chloride = NOT_A_NUMBER;
   private sulfur = NOT_A_NUMBER;
   private phosphate = NOT_A_NUMBER;
   private waterStamp = 0;
-  private lnActivity = 0;
-  private lnGamma1 = 0;
-  private ionicStrength = 0;
+  private lnActivity = DOUBLE_ZERO;
+  private lnGamma1 = DOUBLE_ZERO;
+  private ionicStrength = DOUBLE_ZERO;
   private present = 0;
-  private lnCarbonate = 0;
-  private lnChloride = 0;
-  private lnSulfur = 0;
-  private lnPhosphate = 0;
+  private lnCarbonate = DOUBLE_ZERO;
+  private lnChloride = DOUBLE_ZERO;
+  private lnSulfur = DOUBLE_ZERO;
+  private lnPhosphate = DOUBLE_ZERO;
   // per point
-  lnC = 0;
-  lnS = 0;
-  lnCl = 0;
-  lnP = 0;
+  lnC = DOUBLE_ZERO;
+  lnS = DOUBLE_ZERO;
+  lnCl = DOUBLE_ZERO;
+  lnP = DOUBLE_ZERO;
 
   constructor(db: Database, element: string) {
     this.table = speciesTable(db, element);
