@@ -95,7 +95,7 @@ Real waters: when the file has alkalinity or DIC, chloride or sulfate columns, e
 [carbonate], [chloride] and [sulfur] arguments of those functions (mol/kg; mass units are converted with the
 atomic weights of the element records, 1 L taken as 1 kg). Each ligand is speciated exactly at the row's pH and
 potential from its total. A blank cell there means the ligand is absent in that row, as in the worksheet. A water
-of its own per row costs no system build (85 000–135 000 rows/s against 172 000–257 000 for pure water, both
+of its own per row costs no system build (68 000–135 000 rows/s against 127 000–257 000 for pure water, both
 without diagrams, in npm run bench, 2 cores, Node 20); --pure-water ignores these columns.
 
 Ionic strength: a conductivity column ("conductivity", "specific conductance", "EC", "SC"; µS/cm, or mS/cm
