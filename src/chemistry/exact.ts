@@ -6,11 +6,14 @@ import { create, fractionDependencies } from "mathjs";
 import type { Fraction } from "mathjs";
 
 const math = create({ fractionDependencies });
+/** The fraction type's class, which the instance carries (fractionDependencies creates it; mathjs's types omit it). */
+const FractionType = (math as unknown as { Fraction: new (n: number, d: number) => Fraction }).Fraction;
 
 export type Rational = Fraction;
 
+/** numerator/denominator exactly: what math.fraction(number, number) returns, without its run-time type dispatch. */
 export function rational(numerator: number, denominator = 1): Rational {
-  return math.fraction(numerator, denominator);
+  return new FractionType(numerator, denominator);
 }
 
 /**
