@@ -167,7 +167,7 @@ export class LigandAtPoint {
     const { e, w } = this;
     let slope = 0;
     for (let j = 0; j < w.length; j++) slope += w[j] * e[j];
-    return (this.f * slope) / this.sum;
+    return this.sum > 0 ? (this.f * slope) / this.sum : 0; // before any point (sum unset): no slope
   }
 
   /**
